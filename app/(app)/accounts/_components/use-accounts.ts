@@ -1,0 +1,40 @@
+"use client";
+
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { callApi } from "@/lib/api-client";
+import type { AccountDto } from "@/lib/dto";
+import type { CreateAccountInput } from "@/lib/validation/accounts";
+
+// Every read and write of accounts from the browser goes through these hooks, under one key.
+export const accountsKey = ["accounts"] as const;
+
+export function useAccounts(initialData: AccountDto[]) {
+  return useQuery({
+    queryKey: accountsKey,
+    queryFn: async () => (await callApi<{ users: AccountDto[] }>("GET", "/api/users")).users,
+    initialData,
+  });
+}
+
+export function useCreateAccount() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: CreateAccountInput) => (await callApi<{ user: AccountDto }>("POST", "/api/users", input)).user,
+    onSuccess: () => client.invalidateQueries({ queryKey: accountsKey }),
+  });
+}
+
+export function useUpdateAccount() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ id, ...changes }: { id: string; role?: AccountDto["role"]; status?: "active" | "deactivated" }) =>
+      (await callApi<{ user: AccountDto }>("PATCH", `/api/users/${id}`, changes)).user,
+    onSuccess: () => client.invalidateQueries({ queryKey: accountsKey }),
+  });
+}
+
+export function useResendInvitation() {
+  return useMutation({
+    mutationFn: async (id: string) => (await callApi<{ user: AccountDto }>("POST", `/api/users/${id}/invitation`)).user,
+  });
+}

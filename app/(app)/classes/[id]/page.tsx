@@ -1,0 +1,70 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { listUsers } from "@/lib/accounts";
+import { can, roleLabels } from "@/lib/auth/permissions";
+import { requirePageUser } from "@/lib/auth/session";
+import { getClassById } from "@/lib/classes";
+import { AppError } from "@/lib/errors";
+import { AddMembersForm, RemoveMemberButton } from "./_components/member-controls";
+
+export const metadata: Metadata = { title: "Class" };
+
+const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export default async function ClassPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const user = await requirePageUser("classes:view", `/classes/${id}`);
+  if (!uuid.test(id)) notFound();
+  const found = await getClassById({ actor: user, id }).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  });
+  const manages = can(user, "classes:manage");
+  const memberIds = new Set(found.members.map((m) => m.id));
+  const candidates = manages
+    ? (await listUsers()).filter((u) => !memberIds.has(u.id) && u.status !== "deactivated").map((u) => ({ id: u.id, label: `${u.name} (${roleLabels[u.role].toLowerCase()}, ${u.email})` }))
+    : [];
+  return (
+    <div className="flex flex-col gap-6">
+      <Link href="/classes" className="self-start py-2">
+        ← All classes
+      </Link>
+      <div>
+        <h1>{found.name}</h1>
+        {found.description ? <p className="text-ink-soft">{found.description}</p> : null}
+        {found.startsOn && found.endsOn ? <p>{found.startsOn} to {found.endsOn}</p> : null}
+      </div>
+      <section aria-labelledby="members" className="panel flex flex-col gap-3">
+        <h2 id="members">Members ({found.members.length})</h2>
+        {found.members.length ? (
+          <table className="data-table">
+            <thead>
+              <tr>
+                <th scope="col">Name</th>
+                <th scope="col">Role</th>
+                <th scope="col">E-mail</th>
+                {manages ? <th scope="col">Actions</th> : null}
+              </tr>
+            </thead>
+            <tbody>
+              {found.members.map((m) => (
+                <tr key={m.id}>
+                  <td><strong>{m.name}</strong></td>
+                  <td>{roleLabels[m.role]}</td>
+                  <td>{m.email}</td>
+                  {manages ? (
+                    <td><RemoveMemberButton classId={found.id} userId={m.id} name={m.name} /></td>
+                  ) : null}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        ) : (
+          <p>Nobody is in this class yet.</p>
+        )}
+      </section>
+      {manages ? <AddMembersForm classId={found.id} candidates={candidates} /> : null}
+    </div>
+  );
+}

@@ -1,0 +1,51 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { can } from "@/lib/auth/permissions";
+import { requirePageUser } from "@/lib/auth/session";
+import { listClasses } from "@/lib/classes";
+import { CreateClassForm } from "./_components/create-class-form";
+
+export const metadata: Metadata = { title: "Classes" };
+
+export default async function ClassesPage() {
+  const user = await requirePageUser("classes:view", "/classes");
+  const rows = await listClasses({ actor: user });
+  const manages = can(user, "classes:manage");
+  return (
+    <div className="flex flex-col gap-6">
+      <h1>Classes</h1>
+      <section aria-labelledby="class-list" className="panel flex flex-col gap-3">
+        <h2 id="class-list">{manages ? "All classes" : "Your classes"}</h2>
+        {rows.length ? (
+          <table className="data-table">
+            <thead>
+              <tr>
+                <th scope="col">Class</th>
+                <th scope="col">Dates</th>
+                <th scope="col">Students</th>
+                <th scope="col">Staff</th>
+              </tr>
+            </thead>
+            <tbody>
+              {rows.map((c) => (
+                <tr key={c.id}>
+                  <td>
+                    <Link href={`/classes/${c.id}`} className="inline-flex min-h-11 items-center font-semibold">
+                      {c.name}
+                    </Link>
+                  </td>
+                  <td>{c.startsOn && c.endsOn ? `${c.startsOn} to ${c.endsOn}` : "—"}</td>
+                  <td>{c.students}</td>
+                  <td>{c.staff}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        ) : (
+          <p>{manages ? "No class yet. Add the first one below." : "You are not in any class yet. An admin adds you."}</p>
+        )}
+      </section>
+      {manages ? <CreateClassForm /> : null}
+    </div>
+  );
+}

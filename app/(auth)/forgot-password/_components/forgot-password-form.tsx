@@ -1,0 +1,41 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import type { z } from "zod";
+import { FormField } from "@/components/form-field";
+import { ApiError, callApi } from "@/lib/api-client";
+import { passwordResetRequestSchema } from "@/lib/validation/accounts";
+
+export function ForgotPasswordForm() {
+  const [result, setResult] = useState<{ ok: boolean; message: string } | null>(null);
+  const form = useForm<z.input<typeof passwordResetRequestSchema>>({
+    resolver: zodResolver(passwordResetRequestSchema),
+    defaultValues: { email: "" },
+  });
+  const { errors, isSubmitting } = form.formState;
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    try {
+      const { message } = await callApi<{ message: string }>("POST", "/api/password-resets", values);
+      setResult({ ok: true, message });
+    } catch (error) {
+      setResult({ ok: false, message: error instanceof ApiError ? error.message : "That did not work. Try again." });
+    }
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="panel flex flex-col gap-4" aria-label="Ask for a password link">
+      <div aria-live="polite">
+        {result ? <p className={result.ok ? "notice-ok" : "notice-error"} role="status">{result.message}</p> : null}
+      </div>
+      <FormField id="email" label="E-mail" error={errors.email?.message}>
+        {(props) => <input {...props} {...form.register("email")} type="email" autoComplete="email" className="input" />}
+      </FormField>
+      <button type="submit" className="btn btn-primary w-full" disabled={isSubmitting}>
+        Send the link
+      </button>
+    </form>
+  );
+}

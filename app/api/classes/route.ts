@@ -1,0 +1,15 @@
+import { requireApiUser } from "@/lib/auth/session";
+import { createClass, listClasses } from "@/lib/classes";
+import { readJson, route } from "@/lib/http";
+import { createClassSchema } from "@/lib/validation/classes";
+
+export const GET = route(async () => {
+  const actor = await requireApiUser("classes:view");
+  return Response.json({ classes: await listClasses({ actor }) });
+});
+
+export const POST = route(async (request) => {
+  const actor = await requireApiUser("classes:manage");
+  const input = await readJson(request, createClassSchema);
+  return Response.json({ class: await createClass({ actor, input }) }, { status: 201 });
+});

@@ -1,0 +1,13 @@
+import { requestPasswordReset } from "@/lib/accounts";
+import { readJson, route } from "@/lib/http";
+import { passwordResetRequestSchema } from "@/lib/validation/accounts";
+
+/** Anyone may ask; the answer is the same whether or not the address has an account. */
+export const POST = route(async (request) => {
+  const { email } = await readJson(request, passwordResetRequestSchema);
+  await requestPasswordReset({ email });
+  return Response.json(
+    { message: "If that address has an account, a mail with a link to choose a new password is on its way." },
+    { status: 202 },
+  );
+});

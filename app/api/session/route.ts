@@ -1,0 +1,23 @@
+import { verifySignIn } from "@/lib/auth/sign-in";
+import { endSession, getCurrentUser, startSession } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { clientAddress, readJson, route } from "@/lib/http";
+import { signInSchema } from "@/lib/validation/accounts";
+
+export const GET = route(async () => {
+  const user = await getCurrentUser();
+  if (!user) throw new AppError("unauthorized", "Nobody is signed in.");
+  return Response.json({ user });
+});
+
+export const POST = route(async (request) => {
+  const input = await readJson(request, signInSchema);
+  const user = await verifySignIn({ ...input, address: clientAddress(request) });
+  await startSession(user);
+  return Response.json({ user: { id: user.id, email: user.email, name: user.name, role: user.role } });
+});
+
+export const DELETE = route(async () => {
+  await endSession();
+  return new Response(null, { status: 204 });
+});

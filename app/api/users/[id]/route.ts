@@ -1,0 +1,20 @@
+import { getUserById, updateUser } from "@/lib/accounts";
+import { requireApiUser } from "@/lib/auth/session";
+import { toAccountDto } from "@/lib/dto";
+import { idParam, readJson, route } from "@/lib/http";
+import { updateAccountSchema } from "@/lib/validation/accounts";
+
+type Context = { params: Promise<{ id: string }> };
+
+export const GET = route<Context>(async (_request, { params }) => {
+  await requireApiUser("accounts:manage");
+  const id = idParam((await params).id, "That account");
+  return Response.json({ user: toAccountDto(await getUserById({ id })) });
+});
+
+export const PATCH = route<Context>(async (request, { params }) => {
+  const actor = await requireApiUser("accounts:manage");
+  const id = idParam((await params).id, "That account");
+  const changes = await readJson(request, updateAccountSchema);
+  return Response.json({ user: toAccountDto(await updateUser({ actor, id, changes })) });
+});

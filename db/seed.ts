@@ -1,0 +1,73 @@
+// The demo school: an invented college with invented people. Idempotent: what exists is left as it
+// is, so a second `npm start` adds nothing and keeps any change made through the app.
+import { eq, inArray } from "drizzle-orm";
+import { hashPassword } from "../lib/auth/password";
+import type { Role } from "../lib/auth/permissions";
+import { getEnv } from "../lib/env";
+import { closeDb, getDb } from "./index";
+import { classes, classMembers, users } from "./schema";
+
+const demoClasses = [
+  {
+    name: "AMT Day Cohort 2027",
+    description: "Fernhollow Technical College, airframe and powerplant programme, day section (demo data).",
+    startsOn: "2025-08-25",
+    endsOn: "2027-05-14",
+  },
+  {
+    name: "AMT Evening Cohort 2027",
+    description: "Fernhollow Technical College, airframe and powerplant programme, evening section (demo data).",
+    startsOn: "2025-09-08",
+    endsOn: "2027-06-25",
+  },
+];
+
+const demoUsers: { email: string; name: string; role: Role; classes: string[] }[] = [
+  { email: "admin@hangarleaf.test", name: "Morgan Vale", role: "admin", classes: [] },
+  { email: "instructor@hangarleaf.test", name: "Elena Brandt", role: "instructor", classes: ["AMT Day Cohort 2027"] },
+  { email: "instructor2@hangarleaf.test", name: "Tomas Reyna", role: "instructor", classes: ["AMT Evening Cohort 2027"] },
+  { email: "librarian@hangarleaf.test", name: "Ines Okoro", role: "librarian", classes: [] },
+  { email: "student@hangarleaf.test", name: "Sam Whitlock", role: "student", classes: ["AMT Day Cohort 2027"] },
+  { email: "student2@hangarleaf.test", name: "Jordan Pike", role: "student", classes: ["AMT Day Cohort 2027"] },
+  { email: "student3@hangarleaf.test", name: "Riley Amsel", role: "student", classes: ["AMT Day Cohort 2027"] },
+  { email: "student4@hangarleaf.test", name: "Noor Halvorsen", role: "student", classes: ["AMT Evening Cohort 2027"] },
+  { email: "student5@hangarleaf.test", name: "Avery Lund", role: "student", classes: ["AMT Evening Cohort 2027"] },
+];
+
+async function main() {
+  const db = getDb();
+  const password = getEnv().HL_DEMO_PASSWORD;
+
+  await db.insert(classes).values(demoClasses).onConflictDoNothing({ target: classes.name });
+
+  const existing = await db
+    .select({ email: users.email })
+    .from(users)
+    .where(inArray(users.email, demoUsers.map((u) => u.email)));
+  const known = new Set(existing.map((u) => u.email));
+  const missing = demoUsers.filter((u) => !known.has(u.email));
+  if (missing.length) {
+    const hash = await hashPassword(password); // one hash for all: demo accounts only
+    await db
+      .insert(users)
+      .values(missing.map((u) => ({ email: u.email, name: u.name, role: u.role, status: "active" as const, passwordHash: hash })))
+      .onConflictDoNothing();
+  }
+
+  const classRows = await db.select({ id: classes.id, name: classes.name }).from(classes);
+  const classId = new Map(classRows.map((c) => [c.name, c.id]));
+  for (const u of missing) {
+    const [row] = await db.select({ id: users.id }).from(users).where(eq(users.email, u.email));
+    const memberships = u.classes.map((name) => classId.get(name)).filter((id): id is string => !!id);
+    if (row && memberships.length) {
+      await db.insert(classMembers).values(memberships.map((id) => ({ classId: id, userId: row.id }))).onConflictDoNothing();
+    }
+  }
+  console.log(missing.length ? `seeded ${missing.length} demo accounts` : "demo school already present");
+  await closeDb();
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});

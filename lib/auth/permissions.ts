@@ -1,0 +1,71 @@
+// Who may do what. Pure: no database, no Next, so it is unit-tested on its own. Every page, action
+// and route handler asks here; nothing else in the code compares role names.
+import { AppError } from "../errors";
+
+export const roles = ["student", "instructor", "librarian", "admin"] as const;
+export type Role = (typeof roles)[number];
+
+export const roleLabels: Record<Role, string> = {
+  student: "Student",
+  instructor: "Instructor",
+  librarian: "Librarian",
+  admin: "Admin",
+};
+
+const rules = {
+  /** Create, invite, change role of and deactivate accounts. */
+  "accounts:manage": ["admin"],
+  /** Create classes and change who is in them. */
+  "classes:manage": ["admin"],
+  /** See classes and their members (instructors see the classes they belong to). */
+  "classes:view": ["instructor", "admin"],
+  "classes:view-all": ["admin"],
+  "audit:view": ["admin"],
+  /** The link to the local outbox (the page itself is open while the fake SMTP server runs). */
+  "outbox:view": ["admin"],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Permission = keyof typeof rules;
+export const permissionNames = Object.keys(rules) as Permission[];
+
+export interface Actor {
+  id: string;
+  role: Role;
+}
+
+export function rolesWith(permission: Permission): readonly Role[] {
+  return rules[permission];
+}
+
+export function can(actor: Actor | null | undefined, permission: Permission): boolean {
+  return !!actor && (rules[permission] as readonly Role[]).includes(actor.role);
+}
+
+/** Throws 401 for nobody signed in and 403 for a role without the permission. */
+export function assertCan(actor: Actor | null | undefined, permission: Permission): asserts actor is Actor {
+  if (!actor) throw new AppError("unauthorized");
+  if (!can(actor, permission)) throw new AppError("forbidden");
+}
+
+export function assertSignedIn(actor: Actor | null | undefined): asserts actor is Actor {
+  if (!actor) throw new AppError("unauthorized");
+}
+
+export interface NavItem {
+  href: string;
+  label: string;
+}
+
+const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boolean }[] = [
+  { item: { href: "/", label: "Home" } },
+  { item: { href: "/classes", label: "Classes" }, permission: "classes:view" },
+  { item: { href: "/accounts", label: "Accounts" }, permission: "accounts:manage" },
+  { item: { href: "/audit", label: "Audit log" }, permission: "audit:view" },
+  { item: { href: "/outbox", label: "Outbox" }, permission: "outbox:view", onlyWithOutbox: true },
+];
+
+export function navigationFor(actor: Actor, { outbox = false }: { outbox?: boolean } = {}): NavItem[] {
+  return navigation
+    .filter((n) => (!n.permission || can(actor, n.permission)) && (!n.onlyWithOutbox || outbox))
+    .map((n) => n.item);
+}

@@ -1,0 +1,75 @@
+// Helpers for route handlers: one wrapper that turns any error into the JSON error body, and
+// body parsing with zod. Route handlers stay thin: session → permission → parse → lib → respond.
+import type { z } from "zod";
+import { AppError, toAppError, type FieldErrors } from "./errors";
+
+type Handler<C> = (request: Request, context: C) => Promise<Response>;
+
+export function route<C = unknown>(fn: Handler<C>): Handler<C> {
+  return async (request, context) => {
+    try {
+      return await fn(request, context);
+    } catch (error) {
+      return toAppError(error).toResponse();
+    }
+  };
+}
+
+export function fieldErrors(error: z.ZodError): FieldErrors {
+  const fields: FieldErrors = {};
+  for (const issue of error.issues) {
+    const key = issue.path.length ? issue.path.join(".") : "_";
+    fields[key] ??= issue.message;
+  }
+  return fields;
+}
+
+export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {
+  const result = schema.safeParse(value);
+  if (!result.success) {
+    const fields = fieldErrors(result.error);
+    const first = Object.entries(fields)[0];
+    const message = first ? (first[0] === "_" ? first[1] : `${first[0]}: ${first[1]}`) : undefined;
+    throw new AppError("invalid", message, { fields });
+  }
+  return result.data;
+}
+
+const maxJsonBytes = 64 * 1024;
+
+/** Reads a JSON body (at most 64 KiB) and validates it. */
+export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.output<S>> {
+  const type = request.headers.get("content-type") ?? "";
+  if (!type.toLowerCase().startsWith("application/json")) {
+    throw new AppError("unsupported_media_type", "Send the body as application/json.");
+  }
+  const declared = Number(request.headers.get("content-length") ?? 0);
+  if (declared > maxJsonBytes) throw new AppError("payload_too_large", "The request body is larger than 64 KiB.");
+  const text = await request.text();
+  if (Buffer.byteLength(text) > maxJsonBytes) throw new AppError("payload_too_large", "The request body is larger than 64 KiB.");
+  let value: unknown;
+  try {
+    value = JSON.parse(text);
+  } catch {
+    throw new AppError("bad_request", "The body is not valid JSON.");
+  }
+  return parseWith(schema, value);
+}
+
+const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** A path id that is not a UUID cannot name anything: 404, not a database error. */
+export function idParam(value: string | undefined, what = "That record"): string {
+  if (!value || !uuidPattern.test(value)) throw new AppError("not_found", `${what} was not found.`);
+  return value.toLowerCase();
+}
+
+/**
+ * The client's address for throttling: the first x-forwarded-for entry. `next start` fills it in
+ * from the socket when absent; behind a reverse proxy, the proxy must set it.
+ */
+export function clientAddress(request: Request): string {
+  const forwarded = request.headers.get("x-forwarded-for");
+  const first = forwarded?.split(",")[0]?.trim();
+  return first || request.headers.get("x-real-ip") || "unknown";
+}

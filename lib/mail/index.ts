@@ -1,0 +1,19 @@
+import nodemailer, { type Transporter } from "nodemailer";
+import { getEnv } from "../env";
+import { getQueue, queues } from "../jobs";
+import type { MailMessage } from "./messages";
+
+/** Mail goes through the job queue: a slow or absent SMTP server never holds up a request. */
+export async function queueMail(message: MailMessage): Promise<void> {
+  const boss = await getQueue();
+  await boss.send(queues.sendMail.name, message);
+}
+
+let transport: Transporter | undefined;
+
+/** Called by the worker for each queued mail. */
+export async function deliverMail(message: MailMessage): Promise<void> {
+  const env = getEnv();
+  transport ??= nodemailer.createTransport(env.SMTP_URL);
+  await transport.sendMail({ from: env.MAIL_FROM, ...message });
+}

@@ -1,0 +1,20 @@
+import { NextResponse, type NextRequest } from "next/server";
+
+// A convenience only: visitors without a session cookie are sent to sign-in before a page renders.
+// Whether a cookie is valid, and what its user may do, every page and handler checks itself.
+const publicPaths = [/^\/sign-in$/, /^\/forgot-password$/, /^\/set-password\/[^/]+$/, /^\/outbox$/];
+
+export function proxy(request: NextRequest) {
+  const { pathname, search } = request.nextUrl;
+  if (publicPaths.some((p) => p.test(pathname))) return NextResponse.next();
+  if (request.cookies.has("hangarleaf_session")) return NextResponse.next();
+  const url = request.nextUrl.clone();
+  url.pathname = "/sign-in";
+  url.search = pathname === "/" ? "" : `?next=${encodeURIComponent(pathname + search)}`;
+  return NextResponse.redirect(url);
+}
+
+export const config = {
+  // API routes answer 401 themselves; static files and Next internals pass untouched.
+  matcher: ["/((?!api/|_next/|icon.svg|favicon.ico).*)"],
+};

@@ -1,0 +1,98 @@
+// `npm start` (production build) and `npm run dev`: everything Hangarleaf needs on one machine.
+//   --dev           next dev instead of a production build
+//   --only-migrate  prepare the database and migrate, then stop (npm run db:migrate)
+//   --only-seed     prepare, migrate and seed, then stop (npm run db:seed)
+import path from "node:path";
+import {
+  bin, buildIsStale, dataDir, ensureDatabase, ensureNodeModules, ensurePostgres, localSecret, log,
+  run, service, startCluster, stopAll, tsx, tsxArgs, waitForHttp,
+} from "./lib.mjs";
+
+const args = new Set(process.argv.slice(2));
+const dev = args.has("--dev");
+const onlyMigrate = args.has("--only-migrate");
+const onlySeed = args.has("--only-seed");
+
+const port = Number(process.env.PORT ?? 3000);
+const pgPort = Number(process.env.HL_PG_PORT ?? 54329);
+const smtpPort = Number(process.env.HL_SMTP_PORT ?? 2525);
+const outboxPort = Number(process.env.HL_OUTBOX_PORT ?? 2526);
+
+let cluster = null;
+let stopping = false;
+
+async function shutdown(code) {
+  if (stopping) return;
+  stopping = true;
+  log("stopping everything that was started");
+  await stopAll();
+  cluster?.stop();
+  process.exit(code);
+}
+process.on("SIGINT", () => void shutdown(0));
+process.on("SIGTERM", () => void shutdown(0));
+
+try {
+  ensureNodeModules();
+
+  let databaseUrl = process.env.DATABASE_URL;
+  if (!databaseUrl) {
+    const pgBin = ensurePostgres();
+    cluster = await startCluster({ bin: pgBin, home: path.join(dataDir, "postgres"), port: pgPort });
+    databaseUrl = await ensureDatabase(cluster.url, "hangarleaf");
+  } else {
+    log("DATABASE_URL is set: using that database, no local cluster");
+  }
+
+  const useFakeMail = !process.env.SMTP_URL;
+  const env = {
+    ...process.env,
+    NEXT_TELEMETRY_DISABLED: "1",
+    NODE_ENV: dev ? "development" : "production",
+    DATABASE_URL: databaseUrl,
+    HL_SESSION_SECRET: process.env.HL_SESSION_SECRET ?? localSecret("session-secret"),
+    APP_URL: process.env.APP_URL ?? `http://localhost:${port}`,
+    SMTP_URL: process.env.SMTP_URL ?? `smtp://127.0.0.1:${smtpPort}`,
+    ...(useFakeMail ? { HL_OUTBOX_URL: `http://127.0.0.1:${outboxPort}` } : {}),
+    PORT: String(port),
+  };
+
+  log("migrating the database");
+  tsx("scripts/migrate.ts", env);
+  if (onlyMigrate) await shutdown(0);
+
+  log("seeding the demo school (skipped where it exists)");
+  tsx("db/seed.ts", env);
+  if (onlySeed) await shutdown(0);
+
+  if (!dev) {
+    if (buildIsStale()) {
+      log("building the app (next build)");
+      run(bin("next"), ["build"], { env });
+    } else {
+      log("the production build is current");
+    }
+  }
+
+  const onExit = (name, code, signal) => {
+    if (stopping) return;
+    log(`${name} stopped unexpectedly (${code ?? signal}); stopping the rest`);
+    void shutdown(1);
+  };
+  if (useFakeMail) {
+    service("mail", bin("tsx"), tsxArgs("fakes/smtp.ts"), {
+      ...env, HL_SMTP_PORT: String(smtpPort), HL_OUTBOX_PORT: String(outboxPort),
+      HL_OUTBOX_FILE: path.join(dataDir, "outbox.jsonl"),
+    }, onExit);
+  }
+  service("worker", bin("tsx"), tsxArgs("worker/index.ts"), env, onExit);
+  service("web", bin("next"), [dev ? "dev" : "start", "-p", String(port)], env, onExit);
+
+  await waitForHttp(`http://127.0.0.1:${port}/api/health`, dev ? 180 : 90);
+  log(`Hangarleaf is ready at ${env.APP_URL}`);
+  if (useFakeMail) log(`mail goes to the local fake SMTP server; read it at ${env.APP_URL}/outbox`);
+  log("demo accounts are in the README; Ctrl-C stops everything");
+} catch (error) {
+  console.error(`[hangarleaf] ${error instanceof Error ? error.message : error}`);
+  await shutdown(1);
+}

@@ -1,0 +1,117 @@
+// `npm test`: the preparation of `npm start` on a throwaway cluster and ports, then typecheck, lint,
+// unit and integration tests (vitest, real PostgreSQL and a real server), and end-to-end tests
+// (Playwright driving Debian's Chromium). Every stage runs even when an earlier one failed, except
+// those that need the build; the exit code is non-zero when any stage failed.
+import { existsSync, readFileSync, rmSync } from "node:fs";
+import path from "node:path";
+import {
+  bin, ensureChromium, ensureDatabase, ensureNodeModules, ensurePostgres, freePort, log,
+  makeTempHome, run, service, startCluster, stopAll, tsx, tsxArgs, waitForHttp,
+} from "./lib.mjs";
+
+const results = [];
+let cluster = null;
+let home = null;
+
+function stage(name, fn) {
+  log(`── ${name}`);
+  const started = Date.now();
+  try {
+    fn();
+    results.push({ name, ok: true, seconds: (Date.now() - started) / 1000 });
+    return true;
+  } catch (error) {
+    console.error(`[hangarleaf] ${name} failed: ${error instanceof Error ? error.message : error}`);
+    results.push({ name, ok: false, seconds: (Date.now() - started) / 1000 });
+    return false;
+  }
+}
+
+function readJson(file) {
+  try {
+    return existsSync(file) ? JSON.parse(readFileSync(file, "utf8")) : null;
+  } catch {
+    return null;
+  }
+}
+
+async function cleanup() {
+  await stopAll();
+  cluster?.stop();
+  if (home) rmSync(home, { recursive: true, force: true });
+}
+process.on("SIGINT", () => void cleanup().then(() => process.exit(130)));
+
+let exitCode = 1;
+try {
+  ensureNodeModules();
+  const pgBin = ensurePostgres();
+  const chromium = ensureChromium();
+
+  home = makeTempHome("hangarleaf-test");
+  const [pgPort, webPort, smtpPort, outboxPort] = [await freePort(), await freePort(), await freePort(), await freePort()];
+  cluster = await startCluster({ bin: pgBin, home: path.join(home, "postgres"), port: pgPort });
+  const databaseUrl = await ensureDatabase(cluster.url, "hangarleaf_test");
+  const reports = path.join(home, "reports");
+
+  const env = {
+    ...process.env,
+    NEXT_TELEMETRY_DISABLED: "1",
+    NODE_ENV: "production",
+    DATABASE_URL: databaseUrl,
+    HL_SESSION_SECRET: "test-secret-that-is-long-enough-for-iron-session",
+    APP_URL: `http://localhost:${webPort}`,
+    SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+    HL_OUTBOX_URL: `http://127.0.0.1:${outboxPort}`,
+    HL_SMTP_PORT: String(smtpPort),
+    HL_OUTBOX_PORT: String(outboxPort),
+    HL_BASE_URL: `http://localhost:${webPort}`,
+    HL_CHROMIUM: chromium,
+    PORT: String(webPort),
+  };
+  // vitest and Playwright are tools, not the app: they run in the test environment.
+  const testEnv = { ...env, NODE_ENV: "test" };
+
+  stage("migrate and seed", () => {
+    tsx("scripts/migrate.ts", env);
+    tsx("db/seed.ts", env);
+    tsx("db/seed.ts", env); // twice: the seed must be idempotent (tests/integration/seed.test.ts checks)
+  });
+  stage("typecheck", () => run(bin("tsc"), ["--noEmit"], { env }));
+  stage("lint", () => run(bin("eslint"), ["--max-warnings", "0", "."], { env }));
+  const built = stage("build", () => run(bin("next"), ["build"], { env }));
+
+  let vitest = null;
+  let playwright = null;
+  if (built) {
+    service("mail", bin("tsx"), tsxArgs("fakes/smtp.ts"), env);
+    service("worker", bin("tsx"), tsxArgs("worker/index.ts"), env);
+    service("web", bin("next"), ["start", "-p", String(webPort)], env);
+    await waitForHttp(`http://127.0.0.1:${webPort}/api/health`);
+    await waitForHttp(`${env.HL_OUTBOX_URL}/messages`);
+
+    const vitestReport = path.join(reports, "vitest.json");
+    stage("unit and integration tests (vitest)", () =>
+      run(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${vitestReport}`], { env: testEnv }));
+    vitest = readJson(vitestReport);
+
+    const playwrightReport = path.join(reports, "playwright.json");
+    stage("end-to-end tests (Playwright, Chromium)", () =>
+      run(bin("playwright"), ["test"], { env: { ...testEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport } }));
+    playwright = readJson(playwrightReport);
+  }
+
+  log("── summary");
+  for (const r of results) log(`${r.ok ? "ok  " : "FAIL"} ${r.name} (${r.seconds.toFixed(1)} s)`);
+  const passed = (vitest?.numPassedTests ?? 0) + (playwright?.stats?.expected ?? 0);
+  const failed = (vitest?.numFailedTests ?? 0) + (playwright?.stats?.unexpected ?? 0) + (playwright?.stats?.flaky ?? 0);
+  const skipped = (vitest?.numPendingTests ?? 0) + (vitest?.numTodoTests ?? 0) + (playwright?.stats?.skipped ?? 0);
+  const allOk = results.every((r) => r.ok) && built;
+  console.log(`tests: ${passed} passed, ${failed} failed, ${skipped} skipped`);
+  exitCode = allOk && failed === 0 && passed > 0 ? 0 : 1;
+} catch (error) {
+  console.error(`[hangarleaf] ${error instanceof Error ? error.stack : error}`);
+} finally {
+  await cleanup();
+}
+process.exit(exitCode);
