@@ -7,6 +7,8 @@ const nextConfig: NextConfig = {
   // `npm test` runs tsc and eslint itself; doing it again inside the build only costs time.
   typescript: { ignoreBuildErrors: true },
   poweredByHeader: false,
+  // forbidden() renders app/forbidden.tsx with status 403 for a role without access.
+  experimental: { authInterrupts: true },
   async headers() {
     return [
       {

@@ -165,7 +165,6 @@ export function AccountsManager({ initialAccounts, currentUserId }: { initialAcc
 
   return (
     <div className="flex flex-col gap-6">
-      <CreateAccountForm />
       <section aria-labelledby="accounts-title" className="panel flex flex-col gap-4">
         <h2 id="accounts-title">Everyone</h2>
         <div aria-live="polite">
@@ -261,6 +260,7 @@ export function AccountsManager({ initialAccounts, currentUserId }: { initialAcc
           </span>
         </div>
       </section>
+      <CreateAccountForm />
     </div>
   );
 }

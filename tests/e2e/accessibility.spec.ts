@@ -1,0 +1,45 @@
+import { createRequire } from "node:module";
+import { expect, test, type Page } from "@playwright/test";
+import { SignInPage } from "./support/pages";
+
+const axePath = createRequire(import.meta.url).resolve("axe-core/axe.min.js");
+
+async function seriousViolations(page: Page) {
+  await page.addScriptTag({ path: axePath });
+  const results = await page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run: (context: Document, options: object) => Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }> } }).axe;
+    return axe.run(document, { resultTypes: ["violations"] });
+  });
+  return results.violations
+    .filter((v) => v.impact === "serious" || v.impact === "critical")
+    .map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+}
+
+test("the sign-in page has no serious accessibility violation", async ({ page }) => {
+  await new SignInPage(page).open();
+  expect(await seriousViolations(page)).toEqual([]);
+});
+
+test("the admin pages have no serious accessibility violation", async ({ page }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.signIn("admin@hangarleaf.test");
+  await expect(page.getByRole("heading", { level: 1 })).toContainText("Hello");
+  for (const path of ["/", "/accounts", "/classes", "/audit"]) {
+    await page.goto(path);
+    await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
+    expect(await seriousViolations(page), path).toEqual([]);
+  }
+  await page.goto("/classes");
+  await page.getByRole("link", { name: "AMT Day Cohort 2027" }).click();
+  await expect(page.getByRole("heading", { name: "AMT Day Cohort 2027" })).toBeVisible();
+  expect(await seriousViolations(page), "class page").toEqual([]);
+});
+
+test("buttons and fields are large enough for gloved hands", async ({ page }) => {
+  await new SignInPage(page).open();
+  for (const target of [page.getByRole("button", { name: "Sign in" }), page.getByLabel("E-mail"), page.getByLabel("Password")]) {
+    const box = await target.boundingBox();
+    expect(box?.height ?? 0).toBeGreaterThanOrEqual(44); // WCAG 2.2 SC 2.5.5 target size (enhanced): 44 × 44 CSS px
+  }
+});

@@ -1,0 +1,115 @@
+// Every route handler, every role: the status each gets. A new route must be added here, or the
+// coverage test at the bottom fails. Bodies are chosen so an allowed role is stopped by validation
+// or a missing record rather than changing data: the table checks who gets in, not what happens.
+import { readdirSync, readFileSync } from "node:fs";
+import path from "node:path";
+import { eq } from "drizzle-orm";
+import { beforeAll, describe, expect, it } from "vitest";
+import { getDb } from "@/db";
+import { classes, users } from "@/db/schema";
+import type { Role } from "@/lib/auth/permissions";
+import { call, demo, signIn } from "../support/http";
+
+type Who = "anonymous" | Role;
+const everyone: Who[] = ["anonymous", "student", "instructor", "librarian", "admin"];
+
+interface Row {
+  method: string;
+  route: string; // as in app/api, e.g. /api/users/[id]
+  path: (ids: Ids) => string;
+  json?: unknown;
+  expect: Record<Who, number>;
+}
+interface Ids {
+  adminId: string;
+  dayClassId: string;
+  nobody: string;
+}
+
+const only = (allowed: Partial<Record<Who, number>>, denied = 403): Record<Who, number> => ({
+  anonymous: 401,
+  student: denied,
+  instructor: denied,
+  librarian: denied,
+  admin: denied,
+  ...allowed,
+});
+const all = (status: number): Record<Who, number> =>
+  Object.fromEntries(everyone.map((w) => [w, status])) as Record<Who, number>;
+
+export const accessMatrix: Row[] = [
+  { method: "GET", route: "/api/health", path: () => "/api/health", expect: all(200) },
+  { method: "GET", route: "/api/session", path: () => "/api/session", expect: { ...all(200), anonymous: 401 } },
+  { method: "POST", route: "/api/session", path: () => "/api/session", json: {}, expect: all(422) },
+  { method: "DELETE", route: "/api/session", path: () => "/api/session", expect: all(204) },
+  { method: "GET", route: "/api/users", path: () => "/api/users", expect: only({ admin: 200 }) },
+  { method: "POST", route: "/api/users", path: () => "/api/users", json: {}, expect: only({ admin: 422 }) },
+  { method: "GET", route: "/api/users/[id]", path: (i) => `/api/users/${i.adminId}`, expect: only({ admin: 200 }) },
+  { method: "PATCH", route: "/api/users/[id]", path: (i) => `/api/users/${i.nobody}`, json: { name: "X" }, expect: only({ admin: 404 }) },
+  { method: "POST", route: "/api/users/[id]/invitation", path: (i) => `/api/users/${i.nobody}/invitation`, expect: only({ admin: 404 }) },
+  { method: "POST", route: "/api/password-resets", path: () => "/api/password-resets", json: {}, expect: all(422) },
+  { method: "POST", route: "/api/password", path: () => "/api/password", json: {}, expect: all(422) },
+  { method: "GET", route: "/api/classes", path: () => "/api/classes", expect: only({ instructor: 200, admin: 200 }) },
+  { method: "POST", route: "/api/classes", path: () => "/api/classes", json: {}, expect: only({ admin: 422 }) },
+  { method: "GET", route: "/api/classes/[id]", path: (i) => `/api/classes/${i.dayClassId}`, expect: only({ instructor: 200, admin: 200 }) },
+  { method: "PATCH", route: "/api/classes/[id]", path: (i) => `/api/classes/${i.dayClassId}`, json: { name: "" }, expect: only({ admin: 422 }) },
+  { method: "POST", route: "/api/classes/[id]/members", path: (i) => `/api/classes/${i.dayClassId}/members`, json: { userIds: [] }, expect: only({ admin: 422 }) },
+  {
+    method: "DELETE",
+    route: "/api/classes/[id]/members/[userId]",
+    path: (i) => `/api/classes/${i.dayClassId}/members/${i.nobody}`,
+    expect: only({ admin: 404 }),
+  },
+  { method: "GET", route: "/api/audit", path: () => "/api/audit", expect: only({ admin: 200 }) },
+];
+
+const cookies: Partial<Record<Who, string>> = {};
+let ids: Ids;
+
+beforeAll(async () => {
+  for (const role of ["student", "instructor", "librarian", "admin"] as const) cookies[role] = await signIn(demo[role]);
+  const [admin] = await getDb().select({ id: users.id }).from(users).where(eq(users.email, demo.admin));
+  const [day] = await getDb().select({ id: classes.id }).from(classes).where(eq(classes.name, "AMT Day Cohort 2027"));
+  ids = { adminId: admin!.id, dayClassId: day!.id, nobody: "00000000-0000-4000-8000-00000000abcd" };
+});
+
+describe("access matrix", () => {
+  for (const row of accessMatrix) {
+    for (const who of everyone) {
+      it(`${row.method} ${row.route} as ${who} → ${row.expect[who]}`, async () => {
+        const response = await call(row.method, row.path(ids), { cookie: cookies[who], json: row.json });
+        expect(response.status).toBe(row.expect[who]);
+        if (response.status >= 400) {
+          const body = (await response.json()) as { error?: { code?: string; message?: string } };
+          expect(body.error?.code).toBeTypeOf("string");
+          expect(body.error?.message).toBeTypeOf("string");
+        }
+      });
+    }
+  }
+});
+
+describe("the matrix covers every route handler", () => {
+  const apiDir = path.resolve(import.meta.dirname, "../../app/api");
+  const found: string[] = [];
+  const walk = (dir: string) => {
+    for (const entry of readdirSync(dir, { withFileTypes: true })) {
+      const full = path.join(dir, entry.name);
+      if (entry.isDirectory()) walk(full);
+      else if (entry.name === "route.ts") {
+        const route = `/api/${path.relative(apiDir, dir).split(path.sep).join("/")}`.replace(/\/$/, "");
+        const source = readFileSync(full, "utf8");
+        for (const match of source.matchAll(/export (?:const|async function) (GET|POST|PUT|PATCH|DELETE)\b/g)) {
+          found.push(`${match[1]} ${route}`);
+        }
+      }
+    }
+  };
+  walk(apiDir);
+
+  it("has a row for each exported method", () => {
+    const listed = new Set(accessMatrix.map((r) => `${r.method} ${r.route}`));
+    expect(found.filter((f) => !listed.has(f))).toEqual([]);
+    expect([...listed].filter((l) => !found.includes(l))).toEqual([]);
+  });
+});

@@ -1,0 +1,60 @@
+import { describe, expect, it } from "vitest";
+import { assertCan, can, navigationFor, permissionNames, roles, rolesWith, type Role } from "@/lib/auth/permissions";
+import { AppError } from "@/lib/errors";
+
+const actor = (role: Role) => ({ id: "00000000-0000-4000-8000-000000000000", role });
+
+// The whole matrix, written out: a change to a rule must change this table too.
+const expected: Record<string, Role[]> = {
+  "accounts:manage": ["admin"],
+  "classes:manage": ["admin"],
+  "classes:view": ["instructor", "admin"],
+  "classes:view-all": ["admin"],
+  "audit:view": ["admin"],
+  "outbox:view": ["admin"],
+};
+
+describe("permissions", () => {
+  it("lists exactly the permissions of the table", () => {
+    expect([...permissionNames].sort()).toEqual(Object.keys(expected).sort());
+  });
+
+  for (const permission of permissionNames) {
+    for (const role of roles) {
+      const allowed = expected[permission]!.includes(role);
+      it(`${role} ${allowed ? "may" : "may not"} ${permission}`, () => {
+        expect(can(actor(role), permission)).toBe(allowed);
+        expect(rolesWith(permission).includes(role)).toBe(allowed);
+      });
+    }
+  }
+
+  it("allows nothing to nobody", () => {
+    for (const permission of permissionNames) expect(can(null, permission)).toBe(false);
+  });
+
+  it("answers 401 for nobody and 403 for a role without the permission", () => {
+    const status = (fn: () => void) => {
+      try {
+        fn();
+        return 200;
+      } catch (error) {
+        return error instanceof AppError ? error.status : 500;
+      }
+    };
+    expect(status(() => assertCan(null, "accounts:manage"))).toBe(401);
+    expect(status(() => assertCan(actor("student"), "accounts:manage"))).toBe(403);
+    expect(status(() => assertCan(actor("instructor"), "accounts:manage"))).toBe(403);
+    expect(status(() => assertCan(actor("admin"), "accounts:manage"))).toBe(200);
+  });
+
+  it("gives each role its own navigation", () => {
+    const labels = (role: Role, outbox = false) => navigationFor(actor(role), { outbox }).map((n) => n.label);
+    expect(labels("student")).toEqual(["Home"]);
+    expect(labels("librarian")).toEqual(["Home"]);
+    expect(labels("instructor")).toEqual(["Home", "Classes"]);
+    expect(labels("admin")).toEqual(["Home", "Classes", "Accounts", "Audit log"]);
+    expect(labels("admin", true)).toContain("Outbox");
+    expect(labels("student", true)).not.toContain("Outbox");
+  });
+});
