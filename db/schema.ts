@@ -1,6 +1,7 @@
 import { sql } from "drizzle-orm";
 import {
-  index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid, date,
+  bigint, boolean, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid,
+  type AnyPgColumn,
 } from "drizzle-orm/pg-core";
 
 export const userRole = pgEnum("user_role", ["student", "instructor", "librarian", "admin"]);
@@ -91,6 +92,85 @@ export const auditEvents = pgTable(
   },
   (t) => [index("audit_events_created_idx").on(t.createdAt)],
 );
+
+export const documentTypes = [
+  "maintenance_manual",
+  "overhaul_manual",
+  "parts_catalog",
+  "service_bulletin",
+  "airworthiness_directive",
+  "handbook",
+  "school_procedure",
+] as const;
+export const documentType = pgEnum("document_type", documentTypes);
+export const revisionStatus = pgEnum("revision_status", ["queued", "processing", "ready", "failed"]);
+
+export const manuals = pgTable(
+  "manuals",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    title: text("title").notNull(),
+    documentType: documentType("document_type").notNull(),
+    // Models the document applies to (aircraft, engine, propeller or component), as written on it.
+    applicability: text("applicability").array().notNull().default(sql`'{}'::text[]`),
+    // ATA chapters the document covers, two digits ("05", "32", "74").
+    ataChapters: text("ata_chapters").array().notNull().default(sql`'{}'::text[]`),
+    // Set only when a revision is ready; never points at a queued, processing or failed one.
+    currentRevisionId: uuid("current_revision_id").references((): AnyPgColumn => revisions.id, { onDelete: "set null" }),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    ...timestamps,
+  },
+  (t) => [uniqueIndex("manuals_title_key").on(t.title)],
+);
+
+export const revisions = pgTable(
+  "revisions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    manualId: uuid("manual_id").notNull().references(() => manuals.id, { onDelete: "cascade" }),
+    label: text("label").notNull(),
+    revisionDate: date("revision_date").notNull(),
+    status: revisionStatus("status").notNull().default("queued"),
+    pageCount: integer("page_count"),
+    pagesDone: integer("pages_done").notNull().default(0),
+    error: text("error"),
+    fileKey: text("file_key").notNull(),
+    sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
+    sha256: text("sha256").notNull(),
+    uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
+    // How often ingest has started on it, and when the worker last said it is still at it: a
+    // revision whose worker died is picked up again by the sweeper in worker/index.ts.
+    attempts: integer("attempts").notNull().default(0),
+    heartbeatAt: timestamp("heartbeat_at", { withTimezone: true }),
+    readyAt: timestamp("ready_at", { withTimezone: true }),
+    supersededAt: timestamp("superseded_at", { withTimezone: true }),
+    ...timestamps,
+  },
+  (t) => [
+    uniqueIndex("revisions_manual_label_key").on(t.manualId, t.label),
+    index("revisions_status_idx").on(t.status),
+  ],
+);
+
+export const pages = pgTable(
+  "pages",
+  {
+    revisionId: uuid("revision_id").notNull().references(() => revisions.id, { onDelete: "cascade" }),
+    pageNumber: integer("page_number").notNull(),
+    text: text("text").notNull(),
+    // The first line of text on the page: running headings and titles, weighed higher by search.
+    heading: text("heading").notNull().default(""),
+    ocr: boolean("ocr").notNull().default(false),
+    thumbnailKey: text("thumbnail_key"),
+    ...timestamps,
+  },
+  (t) => [primaryKey({ columns: [t.revisionId, t.pageNumber] })],
+);
+
+export type Manual = typeof manuals.$inferSelect;
+export type Revision = typeof revisions.$inferSelect;
+export type Page = typeof pages.$inferSelect;
+export type DocumentType = (typeof documentTypes)[number];
 
 export type User = typeof users.$inferSelect;
 export type NewUser = typeof users.$inferInsert;

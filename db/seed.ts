@@ -4,6 +4,8 @@ import { eq, inArray } from "drizzle-orm";
 import { hashPassword } from "../lib/auth/password";
 import type { Role } from "../lib/auth/permissions";
 import { getEnv } from "../lib/env";
+import { getQueue } from "../lib/jobs";
+import { seedLibrary } from "./demo/seed-library";
 import { closeDb, getDb } from "./index";
 import { classes, classMembers, users } from "./schema";
 
@@ -63,7 +65,10 @@ async function main() {
       await db.insert(classMembers).values(memberships.map((id) => ({ classId: id, userId: row.id }))).onConflictDoNothing();
     }
   }
-  console.log(missing.length ? `seeded ${missing.length} demo accounts` : "demo school already present");
+  console.log(missing.length ? `seeded ${missing.length} demo accounts` : "demo accounts already present");
+  const revisionsAdded = await seedLibrary(db);
+  console.log(revisionsAdded ? `queued ${revisionsAdded} demo manual revisions for ingest` : "demo manuals already present");
+  await (await getQueue()).stop({ graceful: false, wait: true });
   await closeDb();
 }
 

@@ -12,6 +12,16 @@ const envSchema = z.object({
   // Set only while the local fake SMTP server runs: enables the /outbox page.
   HL_OUTBOX_URL: z.url().optional(),
   HL_DEMO_PASSWORD: z.string().min(8).default("hangarleaf-demo"),
+  // Where manuals, pages and thumbnails are kept: a folder on disk, or an S3-compatible store.
+  HL_STORAGE: z.enum(["disk", "s3"]).default("disk"),
+  HL_STORAGE_DIR: z.string().default(".data/files"),
+  S3_BUCKET: z.string().default("hangarleaf"),
+  S3_ENDPOINT: z.url().optional(),
+  S3_REGION: z.string().default("us-east-1"),
+  S3_ACCESS_KEY_ID: z.string().optional(),
+  S3_SECRET_ACCESS_KEY: z.string().optional(),
+  S3_FORCE_PATH_STYLE: z.enum(["0", "1"]).default("1"),
+  HL_UPLOAD_LIMIT_BYTES: z.coerce.number().int().positive().default(1024 ** 3),
 });
 
 export type Env = z.infer<typeof envSchema>;

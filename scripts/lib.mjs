@@ -73,6 +73,14 @@ export function ensurePostgres() {
   return bin;
 }
 
+/** poppler (text, page images) and tesseract (OCR) read the manuals. */
+export function ensurePdfTools() {
+  const missing = ["pdfinfo", "pdftotext", "pdftoppm", "tesseract"].filter(
+    (tool) => !capture("sh", ["-c", `command -v ${tool}`]).ok,
+  );
+  if (missing.length) aptInstall(["poppler-utils", "tesseract-ocr", "tesseract-ocr-eng"], `${missing.join(", ")}`);
+}
+
 export function ensureChromium() {
   if (existsSync("/usr/bin/chromium")) return "/usr/bin/chromium";
   aptInstall(["chromium"], "Chromium (for the end-to-end tests)");

@@ -4,7 +4,7 @@
 //   --only-seed     prepare, migrate and seed, then stop (npm run db:seed)
 import path from "node:path";
 import {
-  bin, buildIsStale, dataDir, ensureDatabase, ensureNodeModules, ensurePostgres, localSecret, log,
+  bin, buildIsStale, dataDir, ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, localSecret, log,
   run, service, startCluster, stopAll, tsx, tsxArgs, waitForHttp,
 } from "./lib.mjs";
 
@@ -17,6 +17,7 @@ const port = Number(process.env.PORT ?? 3000);
 const pgPort = Number(process.env.HL_PG_PORT ?? 54329);
 const smtpPort = Number(process.env.HL_SMTP_PORT ?? 2525);
 const outboxPort = Number(process.env.HL_OUTBOX_PORT ?? 2526);
+const s3Port = Number(process.env.HL_S3_PORT ?? 4568);
 
 let cluster = null;
 let stopping = false;
@@ -34,6 +35,7 @@ process.on("SIGTERM", () => void shutdown(0));
 
 try {
   ensureNodeModules();
+  ensurePdfTools();
 
   let databaseUrl = process.env.DATABASE_URL;
   if (!databaseUrl) {
@@ -45,6 +47,8 @@ try {
   }
 
   const useFakeMail = !process.env.SMTP_URL;
+  // The fake S3 server runs unless a real store is configured; HL_STORAGE=s3 alone uses the fake.
+  const useFakeS3 = !process.env.S3_ENDPOINT;
   const env = {
     ...process.env,
     NEXT_TELEMETRY_DISABLED: "1",
@@ -54,6 +58,10 @@ try {
     APP_URL: process.env.APP_URL ?? `http://localhost:${port}`,
     SMTP_URL: process.env.SMTP_URL ?? `smtp://127.0.0.1:${smtpPort}`,
     ...(useFakeMail ? { HL_OUTBOX_URL: `http://127.0.0.1:${outboxPort}` } : {}),
+    HL_STORAGE_DIR: process.env.HL_STORAGE_DIR ?? path.join(dataDir, "files"),
+    ...(useFakeS3
+      ? { S3_ENDPOINT: `http://127.0.0.1:${s3Port}`, S3_ACCESS_KEY_ID: "S3RVER", S3_SECRET_ACCESS_KEY: "S3RVER" }
+      : {}),
     PORT: String(port),
   };
 
@@ -84,6 +92,9 @@ try {
       ...env, HL_SMTP_PORT: String(smtpPort), HL_OUTBOX_PORT: String(outboxPort),
       HL_OUTBOX_FILE: path.join(dataDir, "outbox.jsonl"),
     }, onExit);
+  }
+  if (useFakeS3) {
+    service("s3", bin("tsx"), tsxArgs("fakes/s3.ts"), { ...env, HL_S3_PORT: String(s3Port), HL_S3_DIR: path.join(dataDir, "s3") }, onExit);
   }
   service("worker", bin("tsx"), tsxArgs("worker/index.ts"), env, onExit);
   service("web", bin("next"), [dev ? "dev" : "start", "-p", String(port)], env, onExit);

@@ -5,7 +5,7 @@
 import { existsSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
 import {
-  bin, ensureChromium, ensureDatabase, ensureNodeModules, ensurePostgres, freePort, log,
+  bin, ensureChromium, ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log,
   makeTempHome, run, service, startCluster, stopAll, tsx, tsxArgs, waitForHttp,
 } from "./lib.mjs";
 
@@ -46,10 +46,11 @@ let exitCode = 1;
 try {
   ensureNodeModules();
   const pgBin = ensurePostgres();
+  ensurePdfTools();
   const chromium = ensureChromium();
 
   home = makeTempHome("hangarleaf-test");
-  const [pgPort, webPort, smtpPort, outboxPort] = [await freePort(), await freePort(), await freePort(), await freePort()];
+  const [pgPort, webPort, smtpPort, outboxPort, s3Port] = [await freePort(), await freePort(), await freePort(), await freePort(), await freePort()];
   cluster = await startCluster({ bin: pgBin, home: path.join(home, "postgres"), port: pgPort });
   const databaseUrl = await ensureDatabase(cluster.url, "hangarleaf_test");
   const reports = path.join(home, "reports");
@@ -67,6 +68,11 @@ try {
     HL_OUTBOX_PORT: String(outboxPort),
     HL_BASE_URL: `http://localhost:${webPort}`,
     HL_CHROMIUM: chromium,
+    HL_STORAGE_DIR: path.join(home, "files"),
+    // The app stores on disk; tests/integration/storage.test.ts runs the S3 path against this fake.
+    HL_S3_PORT: String(s3Port),
+    HL_S3_DIR: path.join(home, "s3"),
+    HL_TEST_S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
     PORT: String(webPort),
   };
   // vitest and Playwright are tools, not the app: they run in the test environment.
@@ -85,6 +91,7 @@ try {
   let playwright = null;
   if (built) {
     service("mail", bin("tsx"), tsxArgs("fakes/smtp.ts"), env);
+    service("s3", bin("tsx"), tsxArgs("fakes/s3.ts"), env);
     service("worker", bin("tsx"), tsxArgs("worker/index.ts"), env);
     service("web", bin("next"), ["start", "-p", String(webPort)], env);
     await waitForHttp(`http://127.0.0.1:${webPort}/api/health`);

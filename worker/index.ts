@@ -1,11 +1,17 @@
 // The job worker: a separate process started by `npm start`, running the durable jobs queued in
 // PostgreSQL. More of these can run side by side; pg-boss hands each job to one of them.
 import PgBoss from "pg-boss";
+import { z } from "zod";
 import { closeDb } from "../db";
 import { getEnv } from "../lib/env";
+import { failRevision, findStaleRevisions, ingestRevision, maxAttempts } from "../lib/ingest/ingest-revision";
+import { queueIngest } from "../lib/ingest/queue";
+import { makeThumbnails } from "../lib/ingest/thumbnails";
 import { createQueues, queues } from "../lib/jobs";
 import { deliverMail } from "../lib/mail";
 import { mailMessageSchema } from "../lib/mail/messages";
+
+const revisionJob = z.object({ revisionId: z.uuid() });
 
 async function main() {
   const boss = new PgBoss({ connectionString: getEnv().DATABASE_URL, max: 4 });
@@ -25,9 +31,44 @@ async function main() {
       console.log(`sent "${parsed.data.subject}" to ${parsed.data.to}`);
     }
   });
+
+  await boss.work(queues.ingestRevision.name, { pollingIntervalSeconds: 1 }, async (jobs) => {
+    for (const job of jobs) {
+      const parsed = revisionJob.safeParse(job.data);
+      if (!parsed.success) {
+        console.error(`ingest job ${job.id} is malformed and was dropped`);
+        continue;
+      }
+      await ingestRevision({ revisionId: parsed.data.revisionId });
+    }
+  });
+
+  await boss.work(queues.makeThumbnails.name, { pollingIntervalSeconds: 2 }, async (jobs) => {
+    for (const job of jobs) {
+      const parsed = revisionJob.safeParse(job.data);
+      if (parsed.success) console.log(`revision ${parsed.data.revisionId}: ${await makeThumbnails(parsed.data)} thumbnails`);
+    }
+  });
+
+  // A worker killed half way leaves its revision "processing" with a heartbeat that stops: queue
+  // it again (the next claim starts it clean), or fail it once it has used its attempts.
+  const sweep = async () => {
+    for (const stale of await findStaleRevisions()) {
+      if (stale.attempts >= maxAttempts) {
+        await failRevision({ id: stale.id, reason: `Reading this revision stopped ${stale.attempts} times without finishing. Try again, or upload the file again.` });
+        console.log(`revision ${stale.id}: failed after ${stale.attempts} interrupted attempts`);
+      } else {
+        await queueIngest({ revisionId: stale.id });
+        console.log(`revision ${stale.id}: its worker went quiet; queued again`);
+      }
+    }
+  };
+  const sweeper = setInterval(() => void sweep().catch((error: unknown) => console.error("sweep failed", error)), 30_000);
+  void sweep().catch((error: unknown) => console.error("sweep failed", error));
   console.log("worker ready: waiting for jobs");
 
   const stop = async () => {
+    clearInterval(sweeper);
     await boss.stop({ graceful: true, timeout: 10_000, wait: true });
     await closeDb();
     process.exit(0);

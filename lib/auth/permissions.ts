@@ -21,6 +21,10 @@ const rules = {
   "classes:view": ["instructor", "admin"],
   "classes:view-all": ["admin"],
   "audit:view": ["admin"],
+  /** Read the library: manuals, revisions that are ready, their pages and files. */
+  "library:view": ["student", "instructor", "librarian", "admin"],
+  /** Upload manuals and revisions, retry a failed ingest, see revisions that are not ready. */
+  "library:manage": ["librarian", "admin"],
   /** The link to the local outbox (the page itself is open while the fake SMTP server runs). */
   "outbox:view": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
@@ -58,6 +62,7 @@ export interface NavItem {
 
 const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boolean }[] = [
   { item: { href: "/", label: "Home" } },
+  { item: { href: "/library", label: "Library" }, permission: "library:view" },
   { item: { href: "/classes", label: "Classes" }, permission: "classes:view" },
   { item: { href: "/accounts", label: "Accounts" }, permission: "accounts:manage" },
   { item: { href: "/audit", label: "Audit log" }, permission: "audit:view" },

@@ -1,0 +1,115 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { can } from "@/lib/auth/permissions";
+import { requirePageUser } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { getManual } from "@/lib/library/manuals";
+import { documentTypeLabels } from "@/lib/validation/library";
+import { RetryButton } from "../_components/retry-button";
+import { UploadForm } from "../_components/upload-form";
+
+export const metadata: Metadata = { title: "Manual" };
+
+const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+const statusLabel = { queued: "Waiting to be read", processing: "Being read", ready: "Ready", failed: "Failed" } as const;
+
+export default async function ManualPage({ params }: { params: Promise<{ manualId: string }> }) {
+  const { manualId } = await params;
+  const user = await requirePageUser("library:view", `/library/${manualId}`);
+  if (!uuid.test(manualId)) notFound();
+  const manual = await getManual({ id: manualId }).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  });
+  const manages = can(user, "library:manage");
+  // Students and instructors see what is readable; the library staff see every upload.
+  const shown = manual.revisions.filter((r) => manages || r.status === "ready");
+  if (!manages && !manual.currentRevisionId) notFound();
+  const current = manual.revisions.find((r) => r.id === manual.currentRevisionId);
+
+  return (
+    <div className="flex flex-col gap-6">
+      <Link href="/library" className="self-start py-2">
+        ← Library
+      </Link>
+      <div className="flex flex-col gap-1">
+        <h1>{manual.title}</h1>
+        <p className="text-ink-soft">
+          {documentTypeLabels[manual.documentType]}
+          {manual.applicability.length ? ` · applies to ${manual.applicability.join(", ")}` : ""}
+          {manual.ataChapters.length ? ` · ATA ${manual.ataChapters.join(", ")}` : ""}
+        </p>
+        <p className="text-lg">
+          {current ? (
+            <>
+              Current revision: <strong>{current.label}</strong> of {current.revisionDate}, {current.pageCount} pages.{" "}
+              <a href={`/api/revisions/${current.id}/file`} target="_blank" rel="noreferrer">
+                Open the PDF
+              </a>
+            </>
+          ) : (
+            "No revision is ready yet."
+          )}
+        </p>
+      </div>
+
+      <section aria-labelledby="history" className="panel flex flex-col gap-3 overflow-x-auto">
+        <h2 id="history">Revisions</h2>
+        <table className="data-table">
+          <thead>
+            <tr>
+              <th scope="col">Revision</th>
+              <th scope="col">Date</th>
+              <th scope="col">State</th>
+              <th scope="col">Pages</th>
+              {manages ? <th scope="col">Uploaded by</th> : null}
+              <th scope="col">File</th>
+            </tr>
+          </thead>
+          <tbody>
+            {shown.map((r) => (
+              <tr key={r.id}>
+                <td>
+                  <strong>{r.label}</strong>{" "}
+                  {r.id === manual.currentRevisionId ? (
+                    <span className="badge bg-ok-pale text-ok">Current</span>
+                  ) : r.supersededAt ? (
+                    <span className="badge bg-amber-pale text-ink">Superseded</span>
+                  ) : null}
+                </td>
+                <td>{r.revisionDate}</td>
+                <td>
+                  {statusLabel[r.status]}
+                  {r.status === "processing" ? ` (${r.pagesDone} of ${r.pageCount ?? "?"})` : ""}
+                  {r.status === "failed" && r.error ? <span className="block text-sm text-danger">{r.error}</span> : null}
+                </td>
+                <td>{r.pageCount ?? "—"}</td>
+                {manages ? <td>{r.uploadedBy ?? "—"}</td> : null}
+                <td>
+                  {r.status === "ready" ? (
+                    <a href={`/api/revisions/${r.id}/file`} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center">
+                      Open PDF
+                    </a>
+                  ) : manages && r.status === "failed" ? (
+                    <RetryButton revisionId={r.id} label={r.label} />
+                  ) : (
+                    "—"
+                  )}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </section>
+
+      {manages ? (
+        <section aria-labelledby="new-revision" className="flex flex-col gap-3">
+          <h2 id="new-revision">Upload a new revision</h2>
+          <p className="text-ink-soft">It becomes the current revision once every page is read; the one before stays readable, marked superseded.</p>
+          <UploadForm mode={{ kind: "revision", manualId: manual.id }} />
+        </section>
+      ) : null}
+    </div>
+  );
+}

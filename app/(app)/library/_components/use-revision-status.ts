@@ -1,0 +1,28 @@
+"use client";
+
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { callApi } from "@/lib/api-client";
+import type { RevisionStatusDto } from "@/lib/dto-library";
+
+export const revisionKey = (id: string) => ["revision", id] as const;
+
+/** Polls a revision while it is being read; stops once it is ready or failed. */
+export function useRevisionStatus(id: string | null) {
+  return useQuery({
+    queryKey: revisionKey(id ?? "none"),
+    queryFn: () => callApi<RevisionStatusDto>("GET", `/api/revisions/${id}`),
+    enabled: !!id,
+    refetchInterval: (query) => {
+      const status = query.state.data?.status;
+      return status === "ready" || status === "failed" ? false : 1000;
+    },
+  });
+}
+
+export function useRetryRevision() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) => callApi<{ revisionId: string }>("POST", `/api/revisions/${id}/retry`),
+    onSuccess: (_data, id) => client.invalidateQueries({ queryKey: revisionKey(id) }),
+  });
+}

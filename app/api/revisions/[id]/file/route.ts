@@ -1,0 +1,42 @@
+import { Readable } from "node:stream";
+import { requireApiUser } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { idParam, route } from "@/lib/http";
+import { getReadableRevision } from "@/lib/library/manuals";
+import { parseRange } from "@/lib/library/range";
+import { getStore } from "@/lib/storage";
+
+type Context = { params: Promise<{ id: string }> };
+
+/** The PDF, with single-range requests so a viewer can fetch page 700 without the rest. */
+export const GET = route<Context>(async (request, { params }) => {
+  const actor = await requireApiUser("library:view");
+  const revision = await getReadableRevision({ actor, id: idParam((await params).id, "That revision") });
+  const store = getStore();
+  const size = revision.sizeBytes;
+  const name = `${revision.manualTitle} ${revision.label}`.replace(/[^\w .-]+/g, "").trim() || "manual";
+  const headers: Record<string, string> = {
+    "Content-Type": "application/pdf",
+    "Accept-Ranges": "bytes",
+    "Content-Disposition": `inline; filename="${name}.pdf"`,
+    "Cache-Control": "private, max-age=3600",
+    ETag: `"${revision.id}"`,
+  };
+  const range = parseRange(request.headers.get("range"), size);
+  if (range === "unsatisfiable") {
+    return new Response(null, { status: 416, headers: { ...headers, "Content-Range": `bytes */${size}` } });
+  }
+  try {
+    const { body } = await store.get(revision.fileKey, range ?? undefined);
+    const stream = Readable.toWeb(body) as ReadableStream;
+    if (range) {
+      return new Response(stream, {
+        status: 206,
+        headers: { ...headers, "Content-Range": `bytes ${range.start}-${range.end}/${size}`, "Content-Length": String(range.end - range.start + 1) },
+      });
+    }
+    return new Response(stream, { status: 200, headers: { ...headers, "Content-Length": String(size) } });
+  } catch (error) {
+    throw new AppError("not_found", "The file of this revision is missing from storage.", { cause: error });
+  }
+});

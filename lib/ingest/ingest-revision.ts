@@ -1,0 +1,143 @@
+// Ingest of one revision, run by the worker: pages out of the PDF (text layer, OCR where there is
+// none), stored in batches, then in one transaction the revision becomes ready and current.
+// Until that transaction, the revision's pages are visible to nobody (lib/library/manuals.ts).
+import { and, eq, lt, sql } from "drizzle-orm";
+import { getDb } from "@/db";
+import { manuals, pages, revisions } from "@/db/schema";
+import { recordAudit } from "../audit";
+import { extractPageTexts, ocrImage, PdfProblem, readPdfInfo, renderPage } from "../pdf/tools";
+import { headingOf, needsOcr, normalisePageText } from "../pdf/text";
+import { getStore } from "../storage";
+import { queueThumbnails } from "./queue";
+
+const batchSize = 200;
+export const heartbeatSeconds = 15;
+/** A processing revision whose worker said nothing for this long has lost its worker. */
+export const staleAfterSeconds = 120;
+export const maxAttempts = 3;
+
+type Outcome = "ready" | "failed" | "skipped";
+
+export async function ingestRevision({ revisionId, log = console.log }: { revisionId: string; log?: (m: string) => void }): Promise<Outcome> {
+  const db = getDb();
+  // Claim it: only a queued revision, or one whose worker went quiet, is taken.
+  const [claimed] = await db
+    .update(revisions)
+    .set({ status: "processing", attempts: sql`${revisions.attempts} + 1`, heartbeatAt: sql`now()`, error: null, pagesDone: 0 })
+    .where(
+      and(
+        eq(revisions.id, revisionId),
+        sql`(${revisions.status} = 'queued' or (${revisions.status} = 'processing' and ${revisions.heartbeatAt} < now() - make_interval(secs => ${staleAfterSeconds})))`,
+      ),
+    )
+    .returning({ id: revisions.id, manualId: revisions.manualId, fileKey: revisions.fileKey, attempts: revisions.attempts, label: revisions.label });
+  if (!claimed) return "skipped";
+
+  const started = Date.now();
+  const beat = setInterval(() => {
+    void db.update(revisions).set({ heartbeatAt: sql`now()` }).where(eq(revisions.id, revisionId)).catch(() => undefined);
+  }, heartbeatSeconds * 1000);
+
+  try {
+    // A retry starts clean: whatever a dead attempt wrote goes.
+    await db.delete(pages).where(eq(pages.revisionId, revisionId));
+    const pageCount = await getStore().withLocalFile(claimed.fileKey, async (file) => {
+      const { pages: expected } = await readPdfInfo(file);
+      await db.update(revisions).set({ pageCount: expected }).where(eq(revisions.id, revisionId));
+
+      let batch: (typeof pages.$inferInsert)[] = [];
+      const flush = async () => {
+        if (!batch.length) return;
+        const rows = batch;
+        batch = [];
+        await db.insert(pages).values(rows);
+        await db
+          .update(revisions)
+          .set({ pagesDone: sql`${revisions.pagesDone} + ${rows.length}`, heartbeatAt: sql`now()` })
+          .where(eq(revisions.id, revisionId));
+      };
+      const found = await extractPageTexts(file, async (pageNumber, raw) => {
+        let text = normalisePageText(raw);
+        let ocr = false;
+        if (needsOcr(text)) {
+          text = normalisePageText(await ocrImage(await renderPage(file, pageNumber)));
+          ocr = true;
+        }
+        batch.push({ revisionId, pageNumber, text, heading: headingOf(text), ocr });
+        if (batch.length >= batchSize) await flush();
+      });
+      await flush();
+      if (found !== expected) {
+        throw new PdfProblem(`The PDF says it has ${expected} pages but only ${found} could be read. The file may be damaged.`);
+      }
+      return found;
+    });
+
+    await db.transaction(async (tx) => {
+      const [manual] = await tx
+        .select({ currentRevisionId: manuals.currentRevisionId, currentDate: revisions.revisionDate })
+        .from(manuals)
+        .leftJoin(revisions, eq(revisions.id, manuals.currentRevisionId))
+        .where(eq(manuals.id, claimed.manualId))
+        .for("update", { of: manuals });
+      const [me] = await tx.select({ revisionDate: revisions.revisionDate }).from(revisions).where(eq(revisions.id, revisionId));
+      // A revision that finishes after a newer one stays readable but does not take over.
+      const becomesCurrent = !manual?.currentRevisionId || !manual.currentDate || (me && me.revisionDate >= manual.currentDate);
+      await tx
+        .update(revisions)
+        .set({
+          status: "ready",
+          pageCount,
+          pagesDone: pageCount,
+          readyAt: sql`now()`,
+          heartbeatAt: null,
+          supersededAt: becomesCurrent ? null : sql`now()`,
+        })
+        .where(eq(revisions.id, revisionId));
+      if (becomesCurrent) {
+        if (manual?.currentRevisionId) {
+          await tx.update(revisions).set({ supersededAt: sql`now()` }).where(eq(revisions.id, manual.currentRevisionId));
+        }
+        await tx.update(manuals).set({ currentRevisionId: revisionId }).where(eq(manuals.id, claimed.manualId));
+      }
+      await recordAudit(tx, {
+        actorId: null,
+        action: "revision.ready",
+        subjectType: "manual",
+        subjectId: claimed.manualId,
+        details: { revisionId, label: claimed.label, pages: pageCount, current: becomesCurrent },
+      });
+    });
+    log(`revision ${revisionId}: ${pageCount} pages ready in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+    await queueThumbnails({ revisionId }).catch((error: unknown) => log(`thumbnails not queued: ${String(error)}`));
+    return "ready";
+  } catch (error) {
+    const known = error instanceof PdfProblem;
+    const lastTry = known || claimed.attempts >= maxAttempts;
+    if (!lastTry) {
+      // Put it back for the job's retry; the error may be passing (database restart, full disk).
+      await db.update(revisions).set({ status: "queued", heartbeatAt: null }).where(eq(revisions.id, revisionId)).catch(() => undefined);
+      throw error;
+    }
+    const reason = known ? error.message : `Ingest failed ${claimed.attempts} times; the last error was: ${String(error instanceof Error ? error.message : error).slice(0, 300)}`;
+    await db.delete(pages).where(eq(pages.revisionId, revisionId));
+    await db.update(revisions).set({ status: "failed", error: reason, heartbeatAt: null }).where(eq(revisions.id, revisionId));
+    log(`revision ${revisionId} failed: ${reason}`);
+    return "failed";
+  } finally {
+    clearInterval(beat);
+  }
+}
+
+/** Revisions whose worker died: back to the queue, or failed once they used their attempts. */
+export async function findStaleRevisions(): Promise<{ id: string; attempts: number }[]> {
+  return getDb()
+    .select({ id: revisions.id, attempts: revisions.attempts })
+    .from(revisions)
+    .where(and(eq(revisions.status, "processing"), lt(revisions.heartbeatAt, sql`now() - make_interval(secs => ${staleAfterSeconds})`)));
+}
+
+export async function failRevision({ id, reason }: { id: string; reason: string }) {
+  await getDb().delete(pages).where(eq(pages.revisionId, id));
+  await getDb().update(revisions).set({ status: "failed", error: reason, heartbeatAt: null }).where(eq(revisions.id, id));
+}
