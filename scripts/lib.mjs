@@ -75,10 +75,11 @@ export function ensurePostgres() {
 
 /** poppler (text, page images) and tesseract (OCR) read the manuals. */
 export function ensurePdfTools() {
-  const missing = ["pdfinfo", "pdftotext", "pdftoppm", "tesseract"].filter(
+  const missing = ["pdfinfo", "pdftotext", "pdftoppm", "tesseract", "qpdf"].filter(
     (tool) => !capture("sh", ["-c", `command -v ${tool}`]).ok,
   );
-  if (missing.length) aptInstall(["poppler-utils", "tesseract-ocr", "tesseract-ocr-eng"], `${missing.join(", ")}`);
+  // qpdf makes the password-protected PDFs of the tests.
+  if (missing.length) aptInstall(["poppler-utils", "tesseract-ocr", "tesseract-ocr-eng", "qpdf"], `${missing.join(", ")}`);
 }
 
 export function ensureChromium() {

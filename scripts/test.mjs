@@ -69,6 +69,8 @@ try {
     HL_BASE_URL: `http://localhost:${webPort}`,
     HL_CHROMIUM: chromium,
     HL_STORAGE_DIR: path.join(home, "files"),
+    // Small, so the too-large case is tested without sending a gigabyte.
+    HL_UPLOAD_LIMIT_BYTES: String(8 * 1024 * 1024),
     // The app stores on disk; tests/integration/storage.test.ts runs the S3 path against this fake.
     HL_S3_PORT: String(s3Port),
     HL_S3_DIR: path.join(home, "s3"),

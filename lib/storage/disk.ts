@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
 import { createReadStream, createWriteStream } from "node:fs";
-import { mkdir, rename, rm, stat } from "node:fs/promises";
+import { mkdir, rename, rm, rmdir, stat } from "node:fs/promises";
 import path from "node:path";
 import type { Readable } from "node:stream";
 import { pipeline } from "node:stream/promises";
@@ -39,7 +39,10 @@ export function diskStore(root: string): ObjectStore {
       }
     },
     async delete(key) {
-      await rm(full(key), { force: true });
+      const file = full(key);
+      await rm(file, { force: true });
+      // Leave no empty folder behind; a folder that still holds files stays.
+      await rmdir(path.dirname(file)).catch(() => undefined);
     },
     async withLocalFile(key, fn) {
       return fn(full(key));

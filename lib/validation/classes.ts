@@ -1,9 +1,7 @@
 import { z } from "zod";
+import { calendarDay } from "./dates";
 
-const day = z
-  .string()
-  .regex(/^\d{4}-\d{2}-\d{2}$/, "Use the form YYYY-MM-DD.")
-  .refine((v) => !Number.isNaN(Date.parse(v)), "That is not a real date.");
+const day = calendarDay();
 
 const optionalDay = z.union([z.literal(""), day]).optional().transform((v) => (v ? v : null));
 

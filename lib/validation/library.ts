@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { documentTypes } from "@/db/schema";
+import { calendarDay } from "./dates";
 
 export const documentTypeLabels: Record<(typeof documentTypes)[number], string> = {
   maintenance_manual: "Maintenance manual",
@@ -25,10 +26,7 @@ export const revisionFieldsSchema = z.object({
     .trim()
     .min(1, "Give the revision label, as printed on the document (for example Rev 4).")
     .max(60, "Use at most 60 characters."),
-  revisionDate: z
-    .string({ error: "Give the revision date." })
-    .regex(/^\d{4}-\d{2}-\d{2}$/, "Use the form YYYY-MM-DD.")
-    .refine((v) => !Number.isNaN(Date.parse(v)), "That is not a real date."),
+  revisionDate: calendarDay("Give the revision date."),
 });
 
 export const manualFieldsSchema = z.object({

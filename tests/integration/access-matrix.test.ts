@@ -6,7 +6,7 @@ import path from "node:path";
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
-import { classes, users } from "@/db/schema";
+import { classes, manuals, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/permissions";
 import { call, demo, signIn } from "../support/http";
 
@@ -24,6 +24,8 @@ interface Ids {
   adminId: string;
   dayClassId: string;
   nobody: string;
+  manualId: string;
+  revisionId: string;
 }
 
 const only = (allowed: Partial<Record<Who, number>>, denied = 403): Record<Who, number> => ({
@@ -61,6 +63,21 @@ export const accessMatrix: Row[] = [
     expect: only({ admin: 404 }),
   },
   { method: "GET", route: "/api/audit", path: () => "/api/audit", expect: only({ admin: 200 }) },
+  { method: "GET", route: "/api/manuals", path: () => "/api/manuals", expect: { ...all(200), anonymous: 401 } },
+  // A JSON body where multipart is needed: the allowed roles get as far as the 415.
+  { method: "POST", route: "/api/manuals", path: () => "/api/manuals", json: {}, expect: only({ librarian: 415, admin: 415 }) },
+  { method: "GET", route: "/api/manuals/[id]", path: (i) => `/api/manuals/${i.manualId}`, expect: { ...all(200), anonymous: 401 } },
+  { method: "POST", route: "/api/manuals/[id]/revisions", path: (i) => `/api/manuals/${i.manualId}/revisions`, json: {}, expect: only({ librarian: 415, admin: 415 }) },
+  { method: "GET", route: "/api/revisions/[id]", path: (i) => `/api/revisions/${i.revisionId}`, expect: { ...all(200), anonymous: 401 } },
+  { method: "POST", route: "/api/revisions/[id]/retry", path: (i) => `/api/revisions/${i.nobody}/retry`, expect: only({ librarian: 404, admin: 404 }) },
+  { method: "GET", route: "/api/revisions/[id]/file", path: (i) => `/api/revisions/${i.revisionId}/file`, expect: { ...all(200), anonymous: 401 } },
+  { method: "GET", route: "/api/revisions/[id]/pages/[n]", path: (i) => `/api/revisions/${i.revisionId}/pages/1`, expect: { ...all(200), anonymous: 401 } },
+  {
+    method: "GET",
+    route: "/api/revisions/[id]/pages/[n]/thumbnail",
+    path: (i) => `/api/revisions/${i.nobody}/pages/1/thumbnail`,
+    expect: { ...all(404), anonymous: 401 },
+  },
 ];
 
 const cookies: Partial<Record<Who, string>> = {};
@@ -70,8 +87,20 @@ beforeAll(async () => {
   for (const role of ["student", "instructor", "librarian", "admin"] as const) cookies[role] = await signIn(demo[role]);
   const [admin] = await getDb().select({ id: users.id }).from(users).where(eq(users.email, demo.admin));
   const [day] = await getDb().select({ id: classes.id }).from(classes).where(eq(classes.name, "AMT Day Cohort 2027"));
-  ids = { adminId: admin!.id, dayClassId: day!.id, nobody: "00000000-0000-4000-8000-00000000abcd" };
-});
+  // A demo manual once the worker has read it (the seed queues it just before the tests).
+  let manual: { id: string; currentRevisionId: string | null } | undefined;
+  for (let i = 0; i < 240 && !manual?.currentRevisionId; i++) {
+    [manual] = await getDb().select({ id: manuals.id, currentRevisionId: manuals.currentRevisionId }).from(manuals).where(eq(manuals.title, "SM-4 Magneto Overhaul Manual"));
+    if (!manual?.currentRevisionId) await new Promise((r) => setTimeout(r, 500));
+  }
+  ids = {
+    adminId: admin!.id,
+    dayClassId: day!.id,
+    nobody: "00000000-0000-4000-8000-00000000abcd",
+    manualId: manual!.id,
+    revisionId: manual!.currentRevisionId!,
+  };
+}, 150_000);
 
 describe("access matrix", () => {
   for (const row of accessMatrix) {

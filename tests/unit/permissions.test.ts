@@ -12,6 +12,8 @@ const expected: Record<string, Role[]> = {
   "classes:view-all": ["admin"],
   "audit:view": ["admin"],
   "outbox:view": ["admin"],
+  "library:view": ["student", "instructor", "librarian", "admin"],
+  "library:manage": ["librarian", "admin"],
 };
 
 describe("permissions", () => {
@@ -50,10 +52,10 @@ describe("permissions", () => {
 
   it("gives each role its own navigation", () => {
     const labels = (role: Role, outbox = false) => navigationFor(actor(role), { outbox }).map((n) => n.label);
-    expect(labels("student")).toEqual(["Home"]);
-    expect(labels("librarian")).toEqual(["Home"]);
-    expect(labels("instructor")).toEqual(["Home", "Classes"]);
-    expect(labels("admin")).toEqual(["Home", "Classes", "Accounts", "Audit log"]);
+    expect(labels("student")).toEqual(["Home", "Library"]);
+    expect(labels("librarian")).toEqual(["Home", "Library"]);
+    expect(labels("instructor")).toEqual(["Home", "Library", "Classes"]);
+    expect(labels("admin")).toEqual(["Home", "Library", "Classes", "Accounts", "Audit log"]);
     expect(labels("admin", true)).toContain("Outbox");
     expect(labels("student", true)).not.toContain("Outbox");
   });

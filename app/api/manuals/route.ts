@@ -1,4 +1,5 @@
 import { randomUUID } from "node:crypto";
+import { can } from "@/lib/auth/permissions";
 import { requireApiUser } from "@/lib/auth/session";
 import { getEnv } from "@/lib/env";
 import { AppError } from "@/lib/errors";
@@ -9,8 +10,10 @@ import { getStore, storageKeys } from "@/lib/storage";
 import { manualUploadSchema } from "@/lib/validation/library";
 
 export const GET = route(async () => {
-  await requireApiUser("library:view");
-  return Response.json({ manuals: await listManuals() });
+  const actor = await requireApiUser("library:view");
+  // A manual with no ready revision yet is the library staff's business only.
+  const rows = (await listManuals()).filter((m) => m.currentRevisionId || can(actor, "library:manage"));
+  return Response.json({ manuals: rows });
 });
 
 /** A new manual with its first revision: multipart, the PDF streamed to storage. */

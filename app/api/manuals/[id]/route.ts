@@ -1,15 +1,19 @@
+import { can } from "@/lib/auth/permissions";
 import { requireApiUser } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
 import { idParam, route } from "@/lib/http";
 import { getManual } from "@/lib/library/manuals";
 
 type Context = { params: Promise<{ id: string }> };
 
 export const GET = route<Context>(async (_request, { params }) => {
-  await requireApiUser("library:view");
+  const actor = await requireApiUser("library:view");
   const manual = await getManual({ id: idParam((await params).id, "That manual") });
+  const staff = can(actor, "library:manage");
+  if (!staff && !manual.currentRevisionId) throw new AppError("not_found", "That manual was not found.");
   return Response.json({
     ...manual,
-    revisions: manual.revisions.map((r) => ({
+    revisions: manual.revisions.filter((r) => staff || r.status === "ready").map((r) => ({
       id: r.id,
       label: r.label,
       date: r.revisionDate,

@@ -1,0 +1,11 @@
+import { z } from "zod";
+
+/** A calendar day as YYYY-MM-DD that exists (no 31 February). */
+export const calendarDay = (message = "Give the date.") =>
+  z
+    .string({ error: message })
+    .regex(/^\d{4}-\d{2}-\d{2}$/, "Use the form YYYY-MM-DD.")
+    .refine((v) => {
+      const d = new Date(`${v}T00:00:00Z`);
+      return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === v;
+    }, "That day does not exist.");
