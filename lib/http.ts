@@ -18,7 +18,8 @@ export function route<C = unknown>(fn: Handler<C>): Handler<C> {
 export function fieldErrors(error: z.ZodError): FieldErrors {
   const fields: FieldErrors = {};
   for (const issue of error.issues) {
-    const key = issue.path.length ? issue.path.join(".") : "_";
+    // The top-level field: what a form shows the message beside ("ataChapters", not "ataChapters.0").
+    const key = issue.path.length ? String(issue.path[0]) : "_";
     fields[key] ??= issue.message;
   }
   return fields;

@@ -280,3 +280,11 @@ export function makeTempHome(prefix) {
   chmodSync(dir, 0o755);
   return dir;
 }
+
+/** A cluster and database that live for one run (tests, benchmarks), in a temporary folder. */
+export async function throwawayDatabase(prefix, bin) {
+  const home = makeTempHome(prefix);
+  const cluster = await startCluster({ bin, home: path.join(home, "postgres"), port: await freePort() });
+  const url = await ensureDatabase(cluster.url, prefix.replaceAll("-", "_"));
+  return { home, url, stop: cluster.stop };
+}

@@ -5,8 +5,8 @@
 import { existsSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
 import {
-  bin, ensureChromium, ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log,
-  makeTempHome, run, service, startCluster, stopAll, tsx, tsxArgs, waitForHttp,
+  bin, ensureChromium, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log,
+  run, service, stopAll, throwawayDatabase, tsx, tsxArgs, waitForHttp,
 } from "./lib.mjs";
 
 const results = [];
@@ -49,10 +49,11 @@ try {
   ensurePdfTools();
   const chromium = ensureChromium();
 
-  home = makeTempHome("hangarleaf-test");
-  const [pgPort, webPort, smtpPort, outboxPort, s3Port] = [await freePort(), await freePort(), await freePort(), await freePort(), await freePort()];
-  cluster = await startCluster({ bin: pgBin, home: path.join(home, "postgres"), port: pgPort });
-  const databaseUrl = await ensureDatabase(cluster.url, "hangarleaf_test");
+  const database = await throwawayDatabase("hangarleaf-test", pgBin);
+  home = database.home;
+  cluster = database;
+  const databaseUrl = database.url;
+  const [webPort, smtpPort, outboxPort, s3Port] = [await freePort(), await freePort(), await freePort(), await freePort()];
   const reports = path.join(home, "reports");
 
   const env = {

@@ -32,7 +32,8 @@ async function main() {
     }
   });
 
-  await boss.work(queues.ingestRevision.name, { pollingIntervalSeconds: 1 }, async (jobs) => {
+  // Polled often: a librarian is watching the progress bar.
+  await boss.work(queues.ingestRevision.name, { pollingIntervalSeconds: 0.5 }, async (jobs) => {
     for (const job of jobs) {
       const parsed = revisionJob.safeParse(job.data);
       if (!parsed.success) {

@@ -3,19 +3,9 @@ import { execFileSync } from "node:child_process";
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { PDFDocument, StandardFonts } from "pdf-lib";
 import { call } from "./http";
 
-/** A PDF with one page per entry, each page holding that text. */
-export async function makePdf(pageTexts: string[]): Promise<Uint8Array> {
-  const doc = await PDFDocument.create();
-  const font = await doc.embedFont(StandardFonts.Helvetica);
-  for (const text of pageTexts) {
-    const page = doc.addPage([612, 792]);
-    text.split("\n").forEach((line, i) => page.drawText(line, { x: 54, y: 720 - i * 16, size: 12, font }));
-  }
-  return doc.save();
-}
+export { makePdf } from "./pdf";
 
 /** The same PDF, locked with a user password by qpdf. */
 export function encrypt(pdf: Uint8Array): Uint8Array {

@@ -1,0 +1,58 @@
+import { expect, test } from "@playwright/test";
+import { makePdf } from "../support/pdf";
+import { SignInPage } from "./support/pages";
+
+test("a librarian uploads a manual and watches it become ready", async ({ page }) => {
+  const title = `Wheel Bearing Practice ${Date.now()}`;
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.signIn("librarian@hangarleaf.test");
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Library" }).click();
+  await page.getByRole("link", { name: "Upload a manual" }).click();
+
+  const form = page.getByRole("form", { name: "Upload a manual" });
+  await form.getByRole("button", { name: "Upload manual" }).click();
+  await expect(form.getByText("Give the title.")).toBeVisible(); // checked before anything is sent
+
+  await form.getByLabel("Title").fill(title);
+  await form.getByLabel("Document type").selectOption("school_procedure");
+  await form.getByLabel("Applies to (optional)").fill("HT-20");
+  await form.getByLabel("ATA chapters (optional)").fill("32");
+  await form.getByLabel("Revision label").fill("Rev 1");
+  await form.getByLabel("Revision date").fill("2026-11-20");
+  const pdf = Buffer.from(await makePdf(["32-40-00 WHEEL BEARINGS\nClean and repack", "Inspect the cups", "Install and torque"]));
+  await form.getByLabel("PDF file").setInputFiles({ name: "bearings.pdf", mimeType: "application/pdf", buffer: pdf });
+  await form.getByRole("button", { name: "Upload manual" }).click();
+
+  await expect(form.getByText(/Uploaded: .* of /)).toBeVisible();
+  await expect(form.getByRole("status").filter({ hasText: "is ready" })).toContainText("Rev 1 is ready: 3 pages, now the current revision", { timeout: 30_000 });
+  await form.getByRole("link", { name: "Open the manual" }).click();
+  await expect(page.getByRole("heading", { level: 1, name: title })).toBeVisible();
+  await expect(page.getByRole("row").filter({ hasText: "Rev 1" })).toContainText("Current");
+});
+
+test("an upload that is not a PDF is refused in plain words", async ({ page }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open("/sign-in?next=%2Flibrary%2Fupload");
+  await signIn.signIn("librarian@hangarleaf.test");
+  const form = page.getByRole("form", { name: "Upload a manual" });
+  await form.getByLabel("Title").fill(`Not a manual ${Date.now()}`);
+  await form.getByLabel("Revision label").fill("Rev 1");
+  await form.getByLabel("Revision date").fill("2026-11-20");
+  await form.getByLabel("PDF file").setInputFiles({ name: "notes.pdf", mimeType: "application/pdf", buffer: Buffer.from("shopping list\n".repeat(200)) });
+  await form.getByRole("button", { name: "Upload manual" }).click();
+  await expect(form.getByRole("alert").filter({ hasText: /./ })).toHaveText("That file is not a PDF. Upload the manual as a PDF file.");
+});
+
+test("a student browses the library but cannot upload", async ({ page }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open("/sign-in?next=%2Flibrary");
+  await signIn.signIn("student@hangarleaf.test");
+  await expect(page.getByRole("heading", { level: 1, name: "Library" })).toBeVisible();
+  await expect(page.getByRole("link", { name: "HT-20 Trainer Maintenance Manual" })).toBeVisible();
+  await expect(page.getByRole("link", { name: "Upload a manual" })).toHaveCount(0);
+  await page.getByRole("link", { name: "HT-20 Trainer Maintenance Manual" }).click();
+  await expect(page.getByRole("row").filter({ hasText: "Rev 4" })).toContainText("Current");
+  await expect(page.getByRole("row").filter({ hasText: "Rev 3" })).toContainText("Superseded");
+  expect((await page.goto("/library/upload"))?.status()).toBe(403);
+});
