@@ -4,6 +4,7 @@ import { z } from "zod";
 export const calendarDay = (message = "Give the date.") =>
   z
     .string({ error: message })
+    .min(1, message)
     .regex(/^\d{4}-\d{2}-\d{2}$/, "Use the form YYYY-MM-DD.")
     .refine((v) => {
       const d = new Date(`${v}T00:00:00Z`);
