@@ -36,6 +36,19 @@ async function queueOrFail(revisionId: string) {
   }
 }
 
+function newRevision(input: { revisionId: string; manualId: string; revision: RevisionFields; file: StoredFile; actor: Actor }) {
+  return {
+    id: input.revisionId,
+    manualId: input.manualId,
+    label: input.revision.revisionLabel,
+    revisionDate: input.revision.revisionDate,
+    fileKey: input.file.key,
+    sizeBytes: input.file.size,
+    sha256: input.file.sha256,
+    uploadedBy: input.actor.id,
+  };
+}
+
 const labelTaken = (label: string) =>
   new AppError("conflict", `This manual already has a revision labelled "${label}".`, { fields: { revisionLabel: "Already used on this manual." } });
 
@@ -61,16 +74,7 @@ export async function createManualWithRevision({
     }
     const [row] = await tx.insert(manuals).values({ ...manual, createdBy: actor.id }).returning({ id: manuals.id });
     if (!row) throw new AppError("internal");
-    await tx.insert(revisions).values({
-      id: revisionId,
-      manualId: row.id,
-      label: revision.revisionLabel,
-      revisionDate: revision.revisionDate,
-      fileKey: file.key,
-      sizeBytes: file.size,
-      sha256: file.sha256,
-      uploadedBy: actor.id,
-    });
+    await tx.insert(revisions).values(newRevision({ revisionId, manualId: row.id, revision, file, actor }));
     await recordAudit(tx, {
       actorId: actor.id,
       action: "manual.uploaded",
@@ -111,16 +115,7 @@ export async function addRevision({
       .where(and(eq(revisions.manualId, manualId), eq(revisions.label, revision.revisionLabel)))
       .limit(1);
     if (same) throw labelTaken(revision.revisionLabel);
-    await tx.insert(revisions).values({
-      id: revisionId,
-      manualId,
-      label: revision.revisionLabel,
-      revisionDate: revision.revisionDate,
-      fileKey: file.key,
-      sizeBytes: file.size,
-      sha256: file.sha256,
-      uploadedBy: actor.id,
-    });
+    await tx.insert(revisions).values(newRevision({ revisionId, manualId, revision, file, actor }));
     await recordAudit(tx, {
       actorId: actor.id,
       action: "revision.uploaded",

@@ -1,11 +1,11 @@
 import "server-only";
-import { createHash } from "node:crypto";
+import { createHash, randomUUID } from "node:crypto";
 import { Readable, Transform, type TransformCallback } from "node:stream";
 import type { ReadableStream as WebReadableStream } from "node:stream/web";
 import { pipeline } from "node:stream/promises";
 import busboy from "busboy";
 import { AppError } from "../errors";
-import type { ObjectStore } from "../storage";
+import { storageKeys, type ObjectStore } from "../storage";
 import { formatBytes } from "./format";
 
 const headerWindow = 1024; // the PDF header may stand anywhere in the first 1024 bytes (ISO 32000-1, 7.5.2)
@@ -121,5 +121,26 @@ export async function receivePdfUpload(
     await store.delete(key).catch(() => undefined);
     if (reason instanceof AppError) throw reason;
     throw new AppError("bad_request", "The upload was interrupted or its multipart body is malformed. Try again.", { cause: reason });
+  }
+}
+
+/**
+ * The shape of both upload handlers: stream the PDF to a fresh revision key, then check
+ * the fields and `record` it. Whatever fails after the bytes are stored removes them again.
+ */
+export async function withUploadedPdf<T>(
+  request: Request,
+  { store, limitBytes }: { store: ObjectStore; limitBytes: number },
+  record: (upload: { revisionId: string; fields: Record<string, string>; file: { key: string; size: number; sha256: string } }) => Promise<T>,
+): Promise<T> {
+  const revisionId = randomUUID();
+  const key = storageKeys.revisionFile(revisionId);
+  const { fields, file } = await receivePdfUpload(request, { store, key, limitBytes });
+  try {
+    if (!file) throw new AppError("invalid", "Choose a PDF file to upload.", { fields: { file: "Choose a PDF file." } });
+    return await record({ revisionId, fields, file: { key, ...file } });
+  } catch (error) {
+    await store.delete(key).catch(() => undefined);
+    throw error;
   }
 }

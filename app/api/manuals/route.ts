@@ -1,12 +1,10 @@
-import { randomUUID } from "node:crypto";
 import { can } from "@/lib/auth/permissions";
 import { requireApiUser } from "@/lib/auth/session";
 import { getEnv } from "@/lib/env";
-import { AppError } from "@/lib/errors";
 import { parseWith, route } from "@/lib/http";
 import { createManualWithRevision, listManuals } from "@/lib/library/manuals";
-import { receivePdfUpload } from "@/lib/library/upload";
-import { getStore, storageKeys } from "@/lib/storage";
+import { withUploadedPdf } from "@/lib/library/upload";
+import { getStore } from "@/lib/storage";
 import { manualUploadSchema } from "@/lib/validation/library";
 
 export const GET = route(async () => {
@@ -19,23 +17,15 @@ export const GET = route(async () => {
 /** A new manual with its first revision: multipart, the PDF streamed to storage. */
 export const POST = route(async (request) => {
   const actor = await requireApiUser("library:manage");
-  const revisionId = randomUUID();
-  const key = storageKeys.revisionFile(revisionId);
-  const store = getStore();
-  const { fields, file } = await receivePdfUpload(request, { store, key, limitBytes: getEnv().HL_UPLOAD_LIMIT_BYTES });
-  try {
-    if (!file) throw new AppError("invalid", "Choose a PDF file to upload.", { fields: { file: "Choose a PDF file." } });
+  const created = await withUploadedPdf(request, { store: getStore(), limitBytes: getEnv().HL_UPLOAD_LIMIT_BYTES }, ({ revisionId, fields, file }) => {
     const input = parseWith(manualUploadSchema, fields);
-    const created = await createManualWithRevision({
+    return createManualWithRevision({
       actor,
       revisionId,
       manual: { title: input.title, documentType: input.documentType, applicability: input.applicability, ataChapters: input.ataChapters },
       revision: { revisionLabel: input.revisionLabel, revisionDate: input.revisionDate },
-      file: { key, ...file },
+      file,
     });
-    return Response.json(created, { status: 202 });
-  } catch (error) {
-    await store.delete(key).catch(() => undefined);
-    throw error;
-  }
+  });
+  return Response.json(created, { status: 202 });
 });

@@ -4,6 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { FormField } from "@/components/form-field";
+import { FormResult } from "@/components/form-result";
 import { ApiError } from "@/lib/api-client";
 import { roleLabels, roles } from "@/lib/auth/permissions";
 import { createAccountSchema, type CreateAccountInput } from "@/lib/validation/accounts";
@@ -43,9 +44,7 @@ export function CreateAccountForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="panel flex flex-col gap-4" aria-labelledby="create-account-title">
       <h2 id="create-account-title">Add a person</h2>
-      <div aria-live="polite">
-        {result ? <p className={result.ok ? "notice-ok" : "notice-error"} role="status">{result.message}</p> : null}
-      </div>
+      <FormResult result={result} />
       <div className="grid gap-4 md:grid-cols-2">
         <FormField id="new-name" label="Name" error={errors.name?.message}>
           {(props) => <input {...props} {...form.register("name")} autoComplete="off" className="input" />}

@@ -6,6 +6,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { FormField } from "@/components/form-field";
+import { FormResult } from "@/components/form-result";
 import { ApiError, callApi } from "@/lib/api-client";
 import { createClassSchema, type CreateClassInput } from "@/lib/validation/classes";
 
@@ -34,9 +35,7 @@ export function CreateClassForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="panel flex flex-col gap-4" aria-labelledby="create-class-title">
       <h2 id="create-class-title">Add a class</h2>
-      <div aria-live="polite">
-        {result ? <p className={result.ok ? "notice-ok" : "notice-error"} role="status">{result.message}</p> : null}
-      </div>
+      <FormResult result={result} />
       <div className="grid gap-4 md:grid-cols-2">
         <FormField id="class-name" label="Name" error={errors.name?.message}>
           {(props) => <input {...props} {...form.register("name")} className="input" />}

@@ -5,6 +5,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { FormField } from "@/components/form-field";
+import { FormResult } from "@/components/form-result";
 import { ApiError, callApi } from "@/lib/api-client";
 import { passwordResetRequestSchema } from "@/lib/validation/accounts";
 
@@ -27,9 +28,7 @@ export function ForgotPasswordForm() {
 
   return (
     <form onSubmit={onSubmit} noValidate className="panel flex flex-col gap-4" aria-label="Ask for a password link">
-      <div aria-live="polite">
-        {result ? <p className={result.ok ? "notice-ok" : "notice-error"} role="status">{result.message}</p> : null}
-      </div>
+      <FormResult result={result} />
       <FormField id="email" label="E-mail" error={errors.email?.message}>
         {(props) => <input {...props} {...form.register("email")} type="email" autoComplete="email" className="input" />}
       </FormField>

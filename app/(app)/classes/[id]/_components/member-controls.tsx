@@ -2,6 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { FormResult } from "@/components/form-result";
 import { ApiError, callApi } from "@/lib/api-client";
 
 export function AddMembersForm({ classId, candidates }: { classId: string; candidates: { id: string; label: string }[] }) {
@@ -36,9 +37,7 @@ export function AddMembersForm({ classId, candidates }: { classId: string; candi
       }}
     >
       <h2 id="add-members-title">Add people</h2>
-      <div aria-live="polite">
-        {result ? <p className={result.ok ? "notice-ok" : "notice-error"} role="status">{result.message}</p> : null}
-      </div>
+      <FormResult result={result} />
       <fieldset className="flex max-h-80 flex-col gap-1 overflow-y-auto">
         <legend className="label mb-2">Choose one or more</legend>
         {candidates.map((c) => (
