@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
 import {
-  bigint, boolean, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid,
+  bigint, boolean, customType, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid,
   type AnyPgColumn,
 } from "drizzle-orm/pg-core";
 
@@ -152,6 +152,8 @@ export const revisions = pgTable(
   ],
 );
 
+const tsvector = customType<{ data: string }>({ dataType: () => "tsvector" });
+
 export const pages = pgTable(
   "pages",
   {
@@ -162,10 +164,21 @@ export const pages = pgTable(
     heading: text("heading").notNull().default(""),
     ocr: boolean("ocr").notNull().default(false),
     thumbnailKey: text("thumbnail_key"),
+    // Kept by PostgreSQL itself: the heading weighs A, the body B. Indexed with RUM in
+    // db/migrations/0002_search.sql (drizzle-kit has no words for a RUM index).
+    searchVector: tsvector("search_vector").generatedAlwaysAs(
+      sql`setweight(to_tsvector('english', coalesce(heading, '')), 'A') || setweight(to_tsvector('english', coalesce(text, '')), 'B')`,
+    ),
     ...timestamps,
   },
   (t) => [primaryKey({ columns: [t.revisionId, t.pageNumber] })],
 );
+
+/** Every word (as a search lexeme) found in the library, for correcting typos in queries. */
+export const searchWords = pgTable("search_words", {
+  word: text("word").primaryKey(),
+  ...timestamps,
+});
 
 export type Manual = typeof manuals.$inferSelect;
 export type Revision = typeof revisions.$inferSelect;

@@ -21,6 +21,10 @@ const envSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().optional(),
   S3_SECRET_ACCESS_KEY: z.string().optional(),
   S3_FORCE_PATH_STYLE: z.enum(["0", "1"]).default("1"),
+  // Search: PostgreSQL unless a Meilisearch server is named.
+  MEILI_URL: z.url().optional(),
+  MEILI_KEY: z.string().optional(),
+  MEILI_INDEX: z.string().regex(/^[\w-]+$/).default("hangarleaf-pages"),
   HL_UPLOAD_LIMIT_BYTES: z.coerce.number().int().positive().default(1024 ** 3),
 });
 

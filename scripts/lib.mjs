@@ -70,6 +70,12 @@ export function ensurePostgres() {
     bin = findPostgresBin();
   }
   if (!bin) throw new Error("PostgreSQL was installed but initdb was not found.");
+  // Search ranks through a RUM index (Debian's postgresql-NN-rum), so the best hits come first
+  // without scoring every match.
+  const version = /postgresql\/(\d+)\/bin/.exec(bin)?.[1];
+  if (version && !existsSync(`/usr/share/postgresql/${version}/extension/rum.control`)) {
+    aptInstall([`postgresql-${version}-rum`], "The RUM index extension for PostgreSQL");
+  }
   return bin;
 }
 

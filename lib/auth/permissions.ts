@@ -62,6 +62,7 @@ export interface NavItem {
 
 const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boolean }[] = [
   { item: { href: "/", label: "Home" } },
+  { item: { href: "/search", label: "Search" }, permission: "library:view" },
   { item: { href: "/library", label: "Library" }, permission: "library:view" },
   { item: { href: "/classes", label: "Classes" }, permission: "classes:view" },
   { item: { href: "/accounts", label: "Accounts" }, permission: "accounts:manage" },

@@ -7,6 +7,7 @@ import { manuals, pages, revisions } from "@/db/schema";
 import { recordAudit } from "../audit";
 import { extractPageTexts, ocrImage, PdfProblem, readPdfInfo, renderPage } from "../pdf/tools";
 import { headingOf, needsOcr, normalisePageText } from "../pdf/text";
+import { getSearchEngine } from "@/search";
 import { getStore } from "../storage";
 import { queueThumbnails } from "./queue";
 
@@ -73,7 +74,10 @@ export async function ingestRevision({ revisionId, log = console.log }: { revisi
       return found;
     });
 
-    await db.transaction(async (tx) => {
+    // Findable before it is visible: the search index is complete when the revision turns ready.
+    await getSearchEngine().indexRevision(revisionId);
+
+    const becameCurrent = await db.transaction(async (tx) => {
       const [manual] = await tx
         .select({ currentRevisionId: manuals.currentRevisionId, currentDate: revisions.revisionDate })
         .from(manuals)
@@ -107,7 +111,13 @@ export async function ingestRevision({ revisionId, log = console.log }: { revisi
         subjectId: claimed.manualId,
         details: { revisionId, label: claimed.label, pages: pageCount, current: becomesCurrent },
       });
+      return becomesCurrent;
     });
+    if (becameCurrent) {
+      await getSearchEngine()
+        .setCurrentRevision(claimed.manualId, revisionId)
+        .catch((error: unknown) => log(`search engine not told of the current revision: ${String(error)}`));
+    }
     log(`revision ${revisionId}: ${pageCount} pages ready in ${((Date.now() - started) / 1000).toFixed(1)} s`);
     await queueThumbnails({ revisionId }).catch((error: unknown) => log(`thumbnails not queued: ${String(error)}`));
     return "ready";

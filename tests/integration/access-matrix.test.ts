@@ -64,6 +64,7 @@ export const accessMatrix: Row[] = [
   },
   { method: "GET", route: "/api/audit", path: () => "/api/audit", expect: only({ admin: 200 }) },
   { method: "GET", route: "/api/manuals", path: () => "/api/manuals", expect: { ...all(200), anonymous: 401 } },
+  { method: "GET", route: "/api/search", path: () => "/api/search?q=magneto", expect: { ...all(200), anonymous: 401 } },
   // A JSON body where multipart is needed: the allowed roles get as far as the 415.
   { method: "POST", route: "/api/manuals", path: () => "/api/manuals", json: {}, expect: only({ librarian: 415, admin: 415 }) },
   { method: "GET", route: "/api/manuals/[id]", path: (i) => `/api/manuals/${i.manualId}`, expect: { ...all(200), anonymous: 401 } },

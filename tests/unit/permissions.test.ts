@@ -52,10 +52,10 @@ describe("permissions", () => {
 
   it("gives each role its own navigation", () => {
     const labels = (role: Role, outbox = false) => navigationFor(actor(role), { outbox }).map((n) => n.label);
-    expect(labels("student")).toEqual(["Home", "Library"]);
-    expect(labels("librarian")).toEqual(["Home", "Library"]);
-    expect(labels("instructor")).toEqual(["Home", "Library", "Classes"]);
-    expect(labels("admin")).toEqual(["Home", "Library", "Classes", "Accounts", "Audit log"]);
+    expect(labels("student")).toEqual(["Home", "Search", "Library"]);
+    expect(labels("librarian")).toEqual(["Home", "Search", "Library"]);
+    expect(labels("instructor")).toEqual(["Home", "Search", "Library", "Classes"]);
+    expect(labels("admin")).toEqual(["Home", "Search", "Library", "Classes", "Accounts", "Audit log"]);
     expect(labels("admin", true)).toContain("Outbox");
     expect(labels("student", true)).not.toContain("Outbox");
   });

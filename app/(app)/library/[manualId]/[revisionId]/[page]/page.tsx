@@ -1,0 +1,107 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { MarkedText } from "@/components/marked-text";
+import { requirePageUser } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { highlightWords } from "@/lib/library/highlight";
+import { getManual, getPage, getReadableRevision } from "@/lib/library/manuals";
+
+export const metadata: Metadata = { title: "Page" };
+
+const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * One page of a revision: its text (searched words marked), picture, and the way to the PDF at that
+ * page. The deep link every search hit and task-card reference points at.
+ */
+export default async function ManualPageView({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ manualId: string; revisionId: string; page: string }>;
+  searchParams: Promise<{ q?: string }>;
+}) {
+  const { manualId, revisionId, page: pageParam } = await params;
+  const { q = "" } = await searchParams;
+  const user = await requirePageUser("library:view", `/library/${manualId}/${revisionId}/${pageParam}`);
+  const pageNumber = Number(pageParam);
+  if (!uuid.test(manualId) || !uuid.test(revisionId) || !Number.isInteger(pageNumber) || pageNumber < 1) notFound();
+  const found = await Promise.all([
+    getReadableRevision({ actor: user, id: revisionId }),
+    getPage({ revisionId, pageNumber }),
+    getManual({ id: manualId }),
+  ]).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  });
+  const [revision, page, manual] = found;
+  if (revision.manualId !== manualId) notFound();
+  const current = manual.revisions.find((r) => r.id === manual.currentRevisionId);
+  const superseded = revision.id !== manual.currentRevisionId;
+  const count = revision.pageCount ?? pageNumber;
+  const query = q ? `?q=${encodeURIComponent(q)}` : "";
+  const at = (n: number) => `/library/${manualId}/${revisionId}/${n}${query}`;
+
+  return (
+    <div className="flex flex-col gap-4">
+      <nav aria-label="Breadcrumb" className="flex flex-wrap gap-x-3">
+        <Link href="/library" className="py-2">Library</Link>
+        <span aria-hidden="true" className="py-2">›</span>
+        <Link href={`/library/${manualId}`} className="py-2">{manual.title}</Link>
+        {q ? (
+          <>
+            <span aria-hidden="true" className="py-2">›</span>
+            <Link href={`/search?q=${encodeURIComponent(q)}`} className="py-2">Back to the results</Link>
+          </>
+        ) : null}
+      </nav>
+
+      {superseded ? (
+        <div role="alert" className="notice-error">
+          This is {revision.label}, a superseded revision. Do not work from it.{" "}
+          {current ? (
+            <Link href={`/library/${manualId}/${current.id}/${Math.min(pageNumber, current.pageCount ?? pageNumber)}${query}`}>
+              Open page {Math.min(pageNumber, current.pageCount ?? pageNumber)} of the current revision, {current.label}
+            </Link>
+          ) : null}
+        </div>
+      ) : null}
+
+      <div className="flex flex-wrap items-center gap-3">
+        <h1 className="mr-auto">
+          {manual.title} · {revision.label} · page {pageNumber} of {count}
+        </h1>
+        {pageNumber > 1 ? (
+          <Link href={at(pageNumber - 1)} className="btn btn-secondary" rel="prev">
+            ← Page {pageNumber - 1}
+          </Link>
+        ) : null}
+        {pageNumber < count ? (
+          <Link href={at(pageNumber + 1)} className="btn btn-secondary" rel="next">
+            Page {pageNumber + 1} →
+          </Link>
+        ) : null}
+        <a href={`/api/revisions/${revisionId}/file#page=${pageNumber}`} className="btn btn-primary" target="_blank" rel="noreferrer">
+          Open the PDF at this page
+        </a>
+      </div>
+
+      <div className="grid gap-4 md:grid-cols-[1fr_auto]">
+        <article className="panel whitespace-pre-line leading-relaxed" aria-label={`Text of page ${pageNumber}`}>
+          {page.ocr ? <p className="hint mb-2">This page is a scan; its text was read by OCR and may hold errors. Check against the PDF.</p> : null}
+          <MarkedText snippet={highlightWords(page.text, q)} />
+        </article>
+        {page.thumbnailKey ? (
+          // eslint-disable-next-line @next/next/no-img-element -- a private, already small PNG
+          <img
+            src={`/api/revisions/${revisionId}/pages/${pageNumber}/thumbnail`}
+            alt={`Picture of page ${pageNumber}`}
+            width={220}
+            className="h-auto self-start rounded border border-line bg-white"
+          />
+        ) : null}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,28 @@
+import { requireApiUser } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { parseWith, route } from "@/lib/http";
+import { searchParamsSchema } from "@/lib/validation/search";
+import { getSearchEngine, isEmptyQuery, parseQuery } from "@/search";
+
+export const GET = route(async (request) => {
+  await requireApiUser("library:view");
+  const started = performance.now();
+  const params = parseWith(searchParamsSchema, Object.fromEntries(new URL(request.url).searchParams));
+  const query = parseQuery(params.q);
+  if (isEmptyQuery(query)) {
+    throw new AppError("invalid", "Type a word to search for (not only excluded words or punctuation).", { fields: { q: "No word to search for." } });
+  }
+  const result = await getSearchEngine().search(
+    query,
+    {
+      manualId: params.manual,
+      revisionId: params.revision,
+      documentType: params.type,
+      model: params.model,
+      ata: params.ata,
+      includeSuperseded: params.includeSuperseded,
+    },
+    { limit: params.limit, offset: params.offset },
+  );
+  return Response.json({ ...result, tookMs: Math.round((performance.now() - started) * 10) / 10 });
+});

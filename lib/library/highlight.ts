@@ -1,0 +1,21 @@
+// Marks the searched words in a page's text, for the page view opened from a search hit. Pure.
+import { markEnd, markStart, parseQuery, snippetToHtml } from "@/search/query";
+
+function escapeRegExp(s: string) {
+  return s.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+}
+
+/** The text, HTML-escaped, with words that start like a query word (or its expansion) in <mark>. */
+export function highlightWords(text: string, q: string): string {
+  const query = parseQuery(q);
+  const stems = [
+    ...query.words.flatMap((w) => [w.text, ...w.expansions.flatMap((e) => e.split(" "))]),
+    ...query.phrases.flatMap((p) => p.split(" ")),
+  ]
+    .filter((w) => w.length >= 2)
+    // A word's first letters carry it through plurals and endings: "inspect" marks "inspection".
+    .map((w) => escapeRegExp(w.length > 5 ? w.slice(0, w.length - 2) : w));
+  if (!stems.length) return snippetToHtml(text);
+  const pattern = new RegExp(`\\b(${[...new Set(stems)].join("|")})[\\p{L}\\p{N}]*`, "giu");
+  return snippetToHtml(text.replace(pattern, (m) => `${markStart}${m}${markEnd}`));
+}

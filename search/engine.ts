@@ -1,0 +1,46 @@
+// The one search interface. The PostgreSQL engine (search/postgres.ts) is the default and needs
+// nothing extra; the Meilisearch engine (search/meilisearch.ts) is chosen with MEILI_URL.
+import type { ParsedQuery } from "./query";
+
+export interface SearchFilters {
+  manualId?: string;
+  documentType?: string;
+  model?: string;
+  ata?: string;
+  /** One revision, current or not. */
+  revisionId?: string;
+  /** Also pages of superseded (ready) revisions. */
+  includeSuperseded?: boolean;
+}
+
+export interface SearchHit {
+  manualId: string;
+  revisionId: string;
+  manualTitle: string;
+  revisionLabel: string;
+  current: boolean;
+  page: number;
+  /** HTML-escaped text with the matched words in <mark>. */
+  snippet: string;
+  score: number;
+}
+
+export interface SearchResult {
+  hits: SearchHit[];
+  /** Matches counted up to `totalLimit`; `totalCapped` when there are more. */
+  total: number;
+  totalCapped: boolean;
+}
+
+export interface SearchEngine {
+  readonly name: "postgres" | "meilisearch";
+  /** Makes a ready revision's pages findable (called once its ingest is done). */
+  indexRevision(revisionId: string): Promise<void>;
+  /** Forgets a revision's pages. */
+  removeRevision(revisionId: string): Promise<void>;
+  /** Tells the engine which revision of a manual is now current. */
+  setCurrentRevision(manualId: string, revisionId: string): Promise<void>;
+  search(query: ParsedQuery, filters: SearchFilters, page: { limit: number; offset: number }): Promise<SearchResult>;
+}
+
+export const totalLimit = 1000;

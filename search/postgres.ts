@@ -1,0 +1,140 @@
+// Search in PostgreSQL: pages.search_vector (heading weight A, body B) behind a RUM index, which
+// hands back matches already in rank order, so a word found on every page still costs only the
+// hits asked for. Typos are corrected against search_words with trigrams and edit distance.
+import { sql, type SQL } from "drizzle-orm";
+import { getDb } from "@/db";
+import type { SearchEngine, SearchFilters, SearchHit } from "./engine";
+import { totalLimit } from "./engine";
+import { markEnd, markStart, snippetToHtml, type ParsedQuery, type QueryWord } from "./query";
+
+/** A lexeme as a to_tsquery operand: quoted, so no character in it is read as an operator. */
+function quoted(lexeme: string): string {
+  return `'${lexeme.replaceAll("'", "''")}'`;
+}
+
+const plainWord = /^[\p{L}\p{N}]+$/u;
+
+function wordQuery(word: QueryWord, corrections: string[]): SQL {
+  const alternatives: SQL[] = [];
+  if (plainWord.test(word.text)) {
+    alternatives.push(sql`to_tsquery('english', ${quoted(word.text) + (word.prefix ? ":*" : "")})`);
+  } else {
+    // Codes such as 32-10-00 or 0.032: the parser splits them the same way on both sides.
+    alternatives.push(sql`phraseto_tsquery('english', ${word.text})`);
+  }
+  for (const expansion of word.expansions) alternatives.push(sql`phraseto_tsquery('english', ${expansion})`);
+  for (const correction of corrections) alternatives.push(sql`to_tsquery('simple', ${quoted(correction) + (word.prefix ? ":*" : "")})`);
+  return sql`(${sql.join(alternatives, sql` || `)})`;
+}
+
+/** Words that appear nowhere in the library, each with up to three near spellings that do. */
+async function findCorrections(words: QueryWord[]): Promise<Map<string, string[]>> {
+  const candidates = words.filter((w) => plainWord.test(w.text) && w.text.length >= 4).map((w) => w.text);
+  const found = new Map<string, string[]>();
+  if (!candidates.length) return found;
+  const result = await getDb().execute<{ word: string; corrections: string[] | null }>(sql`
+    select q.word,
+      (select array_agg(c.word order by levenshtein(c.word, q.stem), similarity(c.word, q.stem) desc)
+         from (select sw.word from search_words sw
+                where sw.word % q.stem and levenshtein(sw.word, q.stem) <= 2
+                order by levenshtein(sw.word, q.stem), similarity(sw.word, q.stem) desc
+                limit 3) c) as corrections
+    from (select w as word, coalesce((ts_lexize('english_stem', w))[1], w) as stem
+            from unnest(${sql.raw(`ARRAY[${candidates.map((c) => `'${c.replaceAll("'", "''")}'`).join(",")}]::text[]`)}) as w) q
+    where not exists (select 1 from search_words sw where sw.word = q.stem)
+  `);
+  for (const row of result.rows) if (row.corrections?.length) found.set(row.word, row.corrections);
+  return found;
+}
+
+export async function buildTsQuery(query: ParsedQuery): Promise<SQL | null> {
+  const corrections = await findCorrections(query.words.filter((w) => !w.prefix || w.text.length >= 5));
+  const required: SQL[] = [
+    ...query.words.map((w) => wordQuery(w, corrections.get(w.text) ?? [])),
+    ...query.phrases.map((p) => sql`phraseto_tsquery('english', ${p})`),
+  ];
+  if (!required.length) return null;
+  const excluded = query.excluded.map((e) => sql`!! phraseto_tsquery('english', ${e})`);
+  return sql`(${sql.join([...required, ...excluded], sql` && `)})`;
+}
+
+function filterConditions(filters: SearchFilters): SQL[] {
+  const where: SQL[] = [sql`r.status = 'ready'`];
+  if (filters.revisionId) where.push(sql`p.revision_id = ${filters.revisionId}`);
+  else if (!filters.includeSuperseded) where.push(sql`p.revision_id = m.current_revision_id`);
+  if (filters.manualId) where.push(sql`m.id = ${filters.manualId}`);
+  if (filters.documentType) where.push(sql`m.document_type = ${filters.documentType}`);
+  if (filters.model) where.push(sql`${filters.model} = any(m.applicability)`);
+  if (filters.ata) where.push(sql`${filters.ata} = any(m.ata_chapters)`);
+  return where;
+}
+
+export const postgresEngine: SearchEngine = {
+  name: "postgres",
+
+  async indexRevision(revisionId) {
+    // The page vectors are generated columns; what is left is the word list for typo correction.
+    const inner = `select search_vector from pages where revision_id = '${revisionId.replace(/[^0-9a-f-]/gi, "")}'`;
+    await getDb().execute(sql`
+      insert into search_words (word)
+      select word from ts_stat(${inner}) where length(word) between 3 and 40
+      on conflict do nothing`);
+  },
+
+  async removeRevision(revisionId) {
+    await getDb().execute(sql`delete from pages where revision_id = ${revisionId}`);
+  },
+
+  async setCurrentRevision() {
+    // manuals.current_revision_id is read at query time: nothing to do.
+  },
+
+  async search(query, filters, { limit, offset }) {
+    const tsquery = await buildTsQuery(query);
+    if (!tsquery) return { hits: [], total: 0, totalCapped: false };
+    const where = sql.join([sql`p.search_vector @@ ${tsquery}`, ...filterConditions(filters)], sql` and `);
+    const from = sql`pages p join revisions r on r.id = p.revision_id join manuals m on m.id = r.manual_id`;
+    const db = getDb();
+
+    const [rows, counted] = await Promise.all([
+      db.execute<{
+        manual_id: string;
+        revision_id: string;
+        manual_title: string;
+        revision_label: string;
+        current: boolean;
+        page: number;
+        distance: number;
+        snippet: string;
+      }>(sql`
+        with best as (
+          select p.revision_id, p.page_number, m.id as manual_id, m.title as manual_title, r.label as revision_label,
+                 (m.current_revision_id = p.revision_id) as current, p.search_vector <=> ${tsquery} as distance
+          from ${from}
+          where ${where}
+          order by p.search_vector <=> ${tsquery}, p.page_number
+          limit ${limit} offset ${offset}
+        )
+        select b.*, b.page_number as page,
+               ts_headline('english', p.text, ${tsquery},
+                 ${`StartSel=${markStart}, StopSel=${markEnd}, MaxWords=30, MinWords=12, MaxFragments=2, FragmentDelimiter=" … "`}) as snippet
+        from best b join pages p on p.revision_id = b.revision_id and p.page_number = b.page_number
+        order by b.distance, b.page_number`),
+      db.execute<{ n: number }>(sql`select count(*)::int as n from (select 1 from ${from} where ${where} limit ${totalLimit + 1}) t`),
+    ]);
+
+    const hits: SearchHit[] = rows.rows.map((row) => ({
+      manualId: row.manual_id,
+      revisionId: row.revision_id,
+      manualTitle: row.manual_title,
+      revisionLabel: row.revision_label,
+      current: row.current,
+      page: row.page,
+      snippet: snippetToHtml(row.snippet),
+      // RUM gives a distance; turned around so that a higher score is a better hit.
+      score: Number((1 / Math.max(Number(row.distance), 1e-6)).toFixed(4)),
+    }));
+    const total = counted.rows[0]?.n ?? 0;
+    return { hits, total: Math.min(total, totalLimit), totalCapped: total > totalLimit };
+  },
+};

@@ -1,0 +1,41 @@
+import { expect, test } from "@playwright/test";
+import { SignInPage } from "./support/pages";
+
+test("a student searches with a typo, opens the hit and sees the word marked on the page", async ({ page }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open("/sign-in?next=%2Fsearch");
+  await signIn.signIn("student@hangarleaf.test");
+  const box = page.getByRole("combobox", { name: "What are you looking for?" });
+  await expect(box).toBeFocused();
+  await box.fill("magento timing");
+  const results = page.getByRole("listbox", { name: "Search results" });
+  const first = results.getByRole("option").first();
+  await expect(first).toContainText("MAGNETO TIMING");
+  await expect(page).toHaveURL(/\?q=magento\+timing/); // the query can be shared
+
+  // Keyboard: down to the first hit, Enter opens it.
+  await box.press("ArrowDown");
+  await expect(first).toHaveAttribute("aria-selected", "true");
+  await box.press("Enter");
+
+  await expect(page).toHaveURL(/\/library\/[0-9a-f-]+\/[0-9a-f-]+\/\d+\?q=magento/);
+  await expect(page.getByRole("heading", { level: 1 })).toContainText("HT-20 Trainer Maintenance Manual · Rev 4 · page");
+  const text = page.getByRole("article");
+  await expect(text.locator("mark").first()).toHaveText(/magneto/i);
+  await expect(page.getByRole("complementary", { name: "Training use notice" })).toBeVisible();
+});
+
+test("a superseded page says so and links to the current revision", async ({ page }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open("/sign-in?next=%2Flibrary");
+  await signIn.signIn("student@hangarleaf.test");
+  await page.getByRole("link", { name: "HT-20 Trainer Maintenance Manual" }).click();
+  const old = page.getByRole("row").filter({ hasText: "Rev 3" });
+  const href = await old.getByRole("link", { name: "Open PDF" }).getAttribute("href");
+  const revisionId = /revisions\/([0-9a-f-]+)\/file/.exec(href ?? "")?.[1];
+  const manualId = /library\/([0-9a-f-]+)/.exec(page.url())?.[1];
+  await page.goto(`/library/${manualId}/${revisionId}/5`);
+  await expect(page.getByRole("alert").filter({ hasText: "superseded" })).toContainText("This is Rev 3, a superseded revision.");
+  await page.getByRole("link", { name: /of the current revision, Rev 4/ }).click();
+  await expect(page.getByRole("heading", { level: 1 })).toContainText("Rev 4 · page 5");
+});
