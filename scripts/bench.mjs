@@ -2,7 +2,13 @@
 // the same preparation as `npm test` (dependencies, PostgreSQL, PDF tools).
 import { rmSync } from "node:fs";
 import path from "node:path";
-import { ensureNodeModules, ensurePdfTools, ensurePostgres, log, throwawayDatabase, tsx } from "./lib.mjs";
+import {
+  bin, buildIsStale, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log, run, service, stopAll,
+  throwawayDatabase, tsx, waitForHttp,
+} from "./lib.mjs";
+
+// Benchmarks that measure the API need the real web server.
+const needsWeb = new Set(["search"]);
 
 const name = process.argv[2];
 if (!name) {
@@ -23,12 +29,20 @@ try {
     HL_STORAGE_DIR: path.join(database.home, "files"),
   };
   tsx("scripts/migrate.ts", env);
+  if (needsWeb.has(name)) {
+    if (buildIsStale()) run(bin("next"), ["build"], { env: { ...env, NEXT_TELEMETRY_DISABLED: "1" } });
+    const port = await freePort();
+    service("web", bin("next"), ["start", "-p", String(port)], { ...env, NEXT_TELEMETRY_DISABLED: "1" });
+    env.HL_BASE_URL = `http://127.0.0.1:${port}`;
+    await waitForHttp(`${env.HL_BASE_URL}/api/health`);
+  }
   log(`running bench:${name}`);
   tsx(`scripts/bench-${name}.ts`, env);
 } catch (error) {
   console.error(`[hangarleaf] ${error instanceof Error ? error.message : error}`);
   code = 1;
 } finally {
+  await stopAll();
   database.stop();
   rmSync(database.home, { recursive: true, force: true });
 }

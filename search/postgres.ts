@@ -28,7 +28,7 @@ function wordQuery(word: QueryWord, corrections: string[]): SQL {
 }
 
 /** Words that appear nowhere in the library, each with up to three near spellings that do. */
-async function findCorrections(words: QueryWord[]): Promise<Map<string, string[]>> {
+export async function findCorrections(words: QueryWord[]): Promise<Map<string, string[]>> {
   const candidates = words.filter((w) => plainWord.test(w.text) && w.text.length >= 4).map((w) => w.text);
   const found = new Map<string, string[]>();
   if (!candidates.length) return found;
@@ -69,6 +69,18 @@ function filterConditions(filters: SearchFilters): SQL[] {
   return where;
 }
 
+/** The ranked statement alone, for `npm run bench:search` to time against the API. */
+export function rankedSql(tsquery: SQL, filters: SearchFilters, { limit, offset }: { limit: number; offset: number }): SQL {
+  const where = sql.join([sql`p.search_vector @@ ${tsquery}`, ...filterConditions(filters)], sql` and `);
+  return sql`
+    select p.revision_id, p.page_number, m.id as manual_id, m.title as manual_title, r.label as revision_label,
+           (m.current_revision_id = p.revision_id) as current, p.search_vector <=> ${tsquery} as distance
+    from pages p join revisions r on r.id = p.revision_id join manuals m on m.id = r.manual_id
+    where ${where}
+    order by p.search_vector <=> ${tsquery}, p.page_number
+    limit ${limit} offset ${offset}`;
+}
+
 export const postgresEngine: SearchEngine = {
   name: "postgres",
 
@@ -107,14 +119,7 @@ export const postgresEngine: SearchEngine = {
         distance: number;
         snippet: string;
       }>(sql`
-        with best as (
-          select p.revision_id, p.page_number, m.id as manual_id, m.title as manual_title, r.label as revision_label,
-                 (m.current_revision_id = p.revision_id) as current, p.search_vector <=> ${tsquery} as distance
-          from ${from}
-          where ${where}
-          order by p.search_vector <=> ${tsquery}, p.page_number
-          limit ${limit} offset ${offset}
-        )
+        with best as (${rankedSql(tsquery, filters, { limit, offset })})
         select b.*, b.page_number as page,
                ts_headline('english', p.text, ${tsquery},
                  ${`StartSel=${markStart}, StopSel=${markEnd}, MaxWords=30, MinWords=12, MaxFragments=2, FragmentDelimiter=" … "`}) as snippet

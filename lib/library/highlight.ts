@@ -5,10 +5,14 @@ function escapeRegExp(s: string) {
   return s.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
 }
 
-/** The text, HTML-escaped, with words that start like a query word (or its expansion) in <mark>. */
-export function highlightWords(text: string, q: string): string {
+/**
+ * The text, HTML-escaped, with words that start like a query word, its expansion or one of `also`
+ * (the spellings a typo was corrected to) in <mark>.
+ */
+export function highlightWords(text: string, q: string, also: string[] = []): string {
   const query = parseQuery(q);
   const stems = [
+    ...also,
     ...query.words.flatMap((w) => [w.text, ...w.expansions.flatMap((e) => e.split(" "))]),
     ...query.phrases.flatMap((p) => p.split(" ")),
   ]

@@ -46,6 +46,10 @@ describe("snippets", () => {
     );
   });
 
+  it("mark the spellings a typo was corrected to", () => {
+    expect(highlightWords("Magneto timing", "magento", ["magneto"])).toBe("<mark>Magneto</mark> timing");
+  });
+
   it("mark the searched words on a page, endings included", () => {
     expect(highlightWords("Inspect the magneto. Inspection record.", "inspect mag")).toBe(
       "<mark>Inspect</mark> the <mark>magneto</mark>. <mark>Inspection</mark> record.",

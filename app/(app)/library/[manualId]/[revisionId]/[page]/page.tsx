@@ -6,6 +6,8 @@ import { requirePageUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
 import { highlightWords } from "@/lib/library/highlight";
 import { getManual, getPage, getReadableRevision } from "@/lib/library/manuals";
+import { findCorrections } from "@/search/postgres";
+import { parseQuery } from "@/search/query";
 
 export const metadata: Metadata = { title: "Page" };
 
@@ -36,6 +38,8 @@ export default async function ManualPageView({
     throw error;
   });
   const [revision, page, manual] = found;
+  // The words a typo was read as ("magento" → magneto) are marked too.
+  const corrections = q ? [...(await findCorrections(parseQuery(q).words)).values()].flat() : [];
   if (revision.manualId !== manualId) notFound();
   const current = manual.revisions.find((r) => r.id === manual.currentRevisionId);
   const superseded = revision.id !== manual.currentRevisionId;
@@ -90,7 +94,7 @@ export default async function ManualPageView({
       <div className="grid gap-4 md:grid-cols-[1fr_auto]">
         <article className="panel whitespace-pre-line leading-relaxed" aria-label={`Text of page ${pageNumber}`}>
           {page.ocr ? <p className="hint mb-2">This page is a scan; its text was read by OCR and may hold errors. Check against the PDF.</p> : null}
-          <MarkedText snippet={highlightWords(page.text, q)} />
+          <MarkedText snippet={highlightWords(page.text, q, corrections)} />
         </article>
         {page.thumbnailKey ? (
           // eslint-disable-next-line @next/next/no-img-element -- a private, already small PNG

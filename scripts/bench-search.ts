@@ -1,0 +1,138 @@
+// `npm run bench:search`: 50,000 synthetic pages of 150–450 words in ten current revisions, then a
+// realistic query mix from 8 concurrent clients for 30 s against the real API (HTTP, signed in),
+// and the bare ranked SQL of the same queries in the same run, plus a word found on every page.
+// Goals: API p95 ≤ 50 ms, API p95 ≤ 2 × bare SQL p95, every-page query ≤ 150 ms. Prints, asserts nothing.
+import { randomUUID } from "node:crypto";
+import { sql } from "drizzle-orm";
+import { closeDb, getDb } from "../db";
+import { hashPassword } from "../lib/auth/password";
+import { buildTsQuery, postgresEngine, rankedSql } from "../search/postgres";
+import { parseQuery } from "../search/query";
+
+const baseUrl = process.env.HL_BASE_URL!;
+const pagesTotal = Number(process.env.BENCH_PAGES ?? 50_000);
+const seconds = Number(process.env.BENCH_SECONDS ?? 30);
+const clients = 8;
+
+const trade = "inspect torque safety wire cotter pin bearing race grease seal gasket cylinder magneto lead harness bracket rivet doubler skin stringer rib spar fitting bushing shim clamp hose fuel oil filter screen valve actuator cable pulley turnbuckle propeller blade spinner governor carburetor mixture throttle landing gear strut axle wheel brake disc caliper tire tube nitrogen pressure tension tensiometer rigging aileron elevator rudder flap trim tab hinge corrosion primer penetrant developer dwell ultraviolet crack indication".split(" ");
+
+async function loadPages() {
+  const db = getDb();
+  const perManual = Math.ceil(pagesTotal / 10);
+  // A vocabulary with a long tail: trade words plus made-up ones, picked with a skew so some words
+  // are common and most are rare, as in real manuals.
+  await db.execute(sql`create temporary table vocab as
+    select row_number() over () as i, w from (
+      select unnest(${sql.raw(`ARRAY[${trade.map((w) => `'${w}'`).join(",")}]`)}::text[]) as w
+      union all
+      select 'term' || to_hex(n * 7919) from generate_series(1, 6000) n) v`);
+  const [{ n: vocab } = { n: 0 }] = (await db.execute<{ n: number }>(sql`select count(*)::int as n from vocab`)).rows;
+  for (let m = 0; m < 10; m++) {
+    const manualId = randomUUID();
+    const revisionId = randomUUID();
+    await db.execute(sql`insert into manuals (id, title, document_type, applicability, ata_chapters)
+      values (${manualId}, ${`Bench manual ${m + 1}`}, ${m % 2 ? "maintenance_manual" : "overhaul_manual"},
+              ${sql.raw(`ARRAY['BX-${m % 3}']`)}, ${sql.raw(`ARRAY['${String(20 + m).padStart(2, "0")}']`)})`);
+    await db.execute(sql`insert into revisions (id, manual_id, label, revision_date, status, page_count, pages_done, file_key, size_bytes, sha256, ready_at)
+      values (${revisionId}, ${manualId}, 'Rev 1', '2026-01-01', 'ready', ${perManual}, ${perManual}, ${`revisions/${revisionId}/document.pdf`}, 0, '', now())`);
+    await db.execute(sql`update manuals set current_revision_id = ${revisionId} where id = ${manualId}`);
+    for (let from = 1; from <= perManual; from += 1000) {
+      const to = Math.min(from + 999, perManual);
+      await db.execute(sql`
+        insert into pages (revision_id, page_number, heading, text)
+        select ${revisionId}, n,
+               'SECTION ' || n || ' ' || (select w from vocab where i = 1 + (n * 13) % ${vocab}) || ' ' || (select w from vocab where i = 1 + (n * 29) % ${vocab}),
+               'hangar ' || (select string_agg(v.w, ' ') from generate_series(1, 150 + (n * 37 + ${m}) % 301) k
+                             join vocab v on v.i = 1 + floor(${vocab} * power(((k * 7907 + n * 104729 + ${m} * 31) % 10007) / 10007.0, 2))::int)
+        from generate_series(${from}::int, ${to}::int) n`);
+      process.stdout.write(`\r  loaded ${m * perManual + to} of ${pagesTotal} pages`);
+    }
+    await postgresEngine.indexRevision(revisionId);
+  }
+  process.stdout.write("\n");
+  await db.execute(sql`analyze pages`);
+}
+
+const mix = [
+  "magneto", "torque wrench", "cable tension", '"safety wire"', "tensiom", "carburetr", "prop governor",
+  "landing gear strut", "corrosion -primer", "bearing race grease", "penetrant dwell", "rivet doubler skin",
+  "brake disc caliper", "aileron rigging", "term1f0f", "term3ab1 term5d3", "fuel filter screen", "blade crack",
+];
+
+function percentile(values: number[], p: number): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? 0;
+}
+
+async function signIn(): Promise<string> {
+  const email = `bench-${randomUUID().slice(0, 8)}@test.hangarleaf.test`;
+  const password = "bench-password-long";
+  await getDb().execute(sql`insert into users (email, name, role, status, password_hash) values (${email}, 'Bench', 'student', 'active', ${await hashPassword(password)})`);
+  const response = await fetch(`${baseUrl}/api/session`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ email, password }) });
+  return response.headers.getSetCookie().find((c) => c.startsWith("hangarleaf_session="))!.split(";")[0]!;
+}
+
+async function timeApi(cookie: string, q: string): Promise<number> {
+  const start = performance.now();
+  const response = await fetch(`${baseUrl}/api/search?q=${encodeURIComponent(q)}&limit=10`, { headers: { cookie } });
+  await response.arrayBuffer();
+  if (!response.ok) throw new Error(`search answered ${response.status}`);
+  return performance.now() - start;
+}
+
+async function timeSql(q: string): Promise<number> {
+  const tsquery = await buildTsQuery(parseQuery(q));
+  const start = performance.now();
+  await getDb().execute(rankedSql(tsquery!, {}, { limit: 10, offset: 0 }));
+  return performance.now() - start;
+}
+
+async function load(fn: (q: string) => Promise<number>): Promise<number[]> {
+  const times: number[] = [];
+  const until = Date.now() + seconds * 1000;
+  await Promise.all(
+    Array.from({ length: clients }, async (_, c) => {
+      for (let i = c; Date.now() < until; i++) times.push(await fn(mix[i % mix.length]!));
+    }),
+  );
+  return times;
+}
+
+async function main() {
+  console.log(`loading ${pagesTotal} synthetic pages…`);
+  const started = performance.now();
+  await loadPages();
+  console.log(`  loaded and indexed in ${((performance.now() - started) / 1000).toFixed(0)} s`);
+  const cookie = await signIn();
+  for (const q of mix) await timeApi(cookie, q); // warm up
+
+  const api = await load((q) => timeApi(cookie, q));
+  const bare = await load(timeSql);
+  const everyApi: number[] = [];
+  const everySql: number[] = [];
+  for (let i = 0; i < 20; i++) {
+    everyApi.push(await timeApi(cookie, "hangar"));
+    everySql.push(await timeSql("hangar"));
+  }
+  const line = (label: string, t: number[]) =>
+    `  ${label.padEnd(34)} p50 ${percentile(t, 50).toFixed(1).padStart(6)} ms   p95 ${percentile(t, 95).toFixed(1).padStart(6)} ms   (${t.length} queries)`;
+  console.log(
+    [
+      "",
+      `bench:search, ${pagesTotal} pages, ${clients} clients, ${seconds} s per run`,
+      line("API (HTTP, signed in)", api),
+      line("bare ranked SQL, same queries", bare),
+      `  API p95 / SQL p95: ${(percentile(api, 95) / percentile(bare, 95)).toFixed(2)}   (goals: API p95 ≤ 50 ms, ratio ≤ 2)`,
+      line("every-page word, API", everyApi),
+      line("every-page word, bare SQL", everySql),
+      "  (goal: every-page query ≤ 150 ms)",
+      "",
+    ].join("\n"),
+  );
+  await closeDb();
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});
