@@ -13,7 +13,7 @@ export function getPool(): pg.Pool {
   if (!cache.hangarleafPool) {
     cache.hangarleafPool = new pg.Pool({
       connectionString: getEnv().DATABASE_URL,
-      max: 10,
+      max: 20,
       idleTimeoutMillis: 30_000,
       connectionTimeoutMillis: 5_000,
     });

@@ -43,4 +43,5 @@ export interface SearchEngine {
   search(query: ParsedQuery, filters: SearchFilters, page: { limit: number; offset: number }): Promise<SearchResult>;
 }
 
-export const totalLimit = 1000;
+/** Matches are counted up to this many; past it the answer is "more than". */
+export const totalLimit = 200;
