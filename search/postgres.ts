@@ -115,8 +115,7 @@ export const postgresEngine: SearchEngine = {
     const [tsquery, revisionIds] = await Promise.all([buildTsQuery(query), revisionsInScope(filters)]);
     if (!tsquery || !revisionIds.length) return { hits: [], total: 0, totalCapped: false };
     const db = getDb();
-    const [rows, counted] = await Promise.all([
-      db.execute<{
+    const rows = await db.execute<{
         manual_id: string;
         revision_id: string;
         manual_title: string;
@@ -135,15 +134,7 @@ export const postgresEngine: SearchEngine = {
         join pages p on p.revision_id = b.revision_id and p.page_number = b.page_number
         join revisions r on r.id = b.revision_id
         join manuals m on m.id = r.manual_id
-        order by b.distance, b.page_number`),
-      // Counting every match of a common word means reading every page that has it: count far
-      // enough to say "more than N".
-      db.execute<{ n: number }>(sql`
-        select count(*)::int as n from (
-          select 1 from pages p
-          where p.search_vector @@ ${tsquery} and p.revision_id = any(${uuidList(revisionIds)})
-          limit ${totalLimit + 1}) t`),
-    ]);
+        order by b.distance, b.page_number`);
 
     const hits: SearchHit[] = rows.rows.map((row) => ({
       manualId: row.manual_id,
@@ -156,7 +147,18 @@ export const postgresEngine: SearchEngine = {
       // RUM gives a distance; turned around so that a higher score is a better hit.
       score: Number((1 / Math.max(Number(row.distance), 1e-6)).toFixed(4)),
     }));
-    const total = counted.rows[0]?.n ?? 0;
+    // A short page of hits is the whole answer; only a full one needs counting. Counting every match
+    // of a common word means reading every page that has it, so the count stops past totalLimit.
+    const total =
+      hits.length < limit
+        ? offset + hits.length
+        : ((
+            await db.execute<{ n: number }>(sql`
+              select count(*)::int as n from (
+                select 1 from pages p
+                where p.search_vector @@ ${tsquery} and p.revision_id = any(${uuidList(revisionIds)})
+                limit ${totalLimit + 1}) t`)
+          ).rows[0]?.n ?? 0);
     return { hits, total: Math.min(total, totalLimit), totalCapped: total > totalLimit };
   },
 };
