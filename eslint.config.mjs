@@ -4,7 +4,7 @@ import reactHooks from "eslint-plugin-react-hooks";
 import tseslint from "typescript-eslint";
 
 export default tseslint.config(
-  { ignores: [".next/**", "node_modules/**", ".data/**", "db/migrations/**", "test-results/**", "next-env.d.ts"] },
+  { ignores: [".next/**", "node_modules/**", ".data/**", "db/migrations/**", "test-results/**", "next-env.d.ts", "public/pdf.worker.min.mjs", "public/standard_fonts/**"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -5,6 +5,7 @@ import path from "node:path";
 import {
   bin, buildIsStale, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log, run, service, stopAll,
   throwawayDatabase, tsx, waitForHttp,
+  copyPdfAssets,
 } from "./lib.mjs";
 
 // Benchmarks that measure the API need the real web server.
@@ -29,6 +30,7 @@ try {
     HL_STORAGE_DIR: path.join(database.home, "files"),
   };
   tsx("scripts/migrate.ts", env);
+  copyPdfAssets();
   if (needsWeb.has(name)) {
     if (buildIsStale()) run(bin("next"), ["build"], { env: { ...env, NEXT_TELEMETRY_DISABLED: "1" } });
     const port = await freePort();

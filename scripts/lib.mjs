@@ -2,7 +2,7 @@
 // step is installing the dependencies.
 import { spawn, spawnSync } from "node:child_process";
 import { randomBytes } from "node:crypto";
-import { chmodSync, existsSync, mkdirSync, readdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
+import { chmodSync, copyFileSync, existsSync, mkdirSync, readdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
 import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import path from "node:path";
@@ -293,4 +293,22 @@ export async function throwawayDatabase(prefix, bin) {
   const cluster = await startCluster({ bin, home: path.join(home, "postgres"), port: await freePort() });
   const url = await ensureDatabase(cluster.url, prefix.replaceAll("-", "_"));
   return { home, url, stop: cluster.stop };
+}
+
+/**
+ * The browser's PDF reader needs pdf.js's worker and standard fonts as files of the same version
+ * as the library: copied from node_modules into public/ (git-ignored) before each build. Only what
+ * differs is copied, so an unchanged copy does not make the build look stale.
+ */
+export function copyPdfAssets() {
+  const from = path.join(root, "node_modules", "pdfjs-dist");
+  const copy = (source, target) => {
+    if (existsSync(target) && statSync(target).size === statSync(source).size) return;
+    mkdirSync(path.dirname(target), { recursive: true });
+    copyFileSync(source, target);
+  };
+  copy(path.join(from, "build", "pdf.worker.min.mjs"), path.join(root, "public", "pdf.worker.min.mjs"));
+  for (const name of readdirSync(path.join(from, "standard_fonts"))) {
+    copy(path.join(from, "standard_fonts", name), path.join(root, "public", "standard_fonts", name));
+  }
 }

@@ -6,6 +6,7 @@ import path from "node:path";
 import {
   bin, buildIsStale, dataDir, ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, localSecret, log,
   run, service, startCluster, stopAll, tsx, tsxArgs, waitForHttp,
+  copyPdfAssets,
 } from "./lib.mjs";
 
 const args = new Set(process.argv.slice(2));
@@ -73,6 +74,7 @@ try {
   tsx("db/seed.ts", env);
   if (onlySeed) await shutdown(0);
 
+  copyPdfAssets();
   if (!dev) {
     if (buildIsStale()) {
       log("building the app (next build)");

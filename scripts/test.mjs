@@ -7,6 +7,7 @@ import path from "node:path";
 import {
   bin, ensureChromium, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log,
   run, service, stopAll, throwawayDatabase, tsx, tsxArgs, waitForHttp,
+  copyPdfAssets,
 } from "./lib.mjs";
 
 const results = [];
@@ -88,6 +89,7 @@ try {
   });
   stage("typecheck", () => run(bin("tsc"), ["--noEmit"], { env }));
   stage("lint", () => run(bin("eslint"), ["--max-warnings", "0", "."], { env }));
+  copyPdfAssets();
   const built = stage("build", () => run(bin("next"), ["build"], { env }));
 
   let vitest = null;

@@ -19,9 +19,16 @@ test("a student searches with a typo, opens the hit and sees the word marked on 
   await box.press("Enter");
 
   await expect(page).toHaveURL(/\/library\/[0-9a-f-]+\/[0-9a-f-]+\/\d+\?q=magento/);
-  await expect(page.getByRole("heading", { level: 1 })).toContainText("HT-20 Trainer Maintenance Manual · Rev 4 · page");
-  const text = page.getByRole("article");
-  await expect(text.locator("mark").first()).toHaveText(/magneto/i);
+  await expect(page.getByRole("heading", { level: 1 })).toContainText("HT-20 Trainer Maintenance Manual · Rev 4");
+  const page76 = Number(/\/(\d+)\?q=/.exec(page.url())?.[1]);
+  // The reader draws that page and marks the word in its text layer.
+  const drawn = page.locator(`[data-page="${page76}"]`);
+  await expect(drawn.locator("canvas")).toBeVisible();
+  await expect(drawn.locator(".textLayer mark").first()).toHaveText(/magneto/i);
+  await expect(page.getByRole("textbox", { name: "Page" })).toHaveValue(String(page76));
+  // The same page as text, for reading aloud or a slow connection.
+  await page.getByText(/^Text of page/).click();
+  await expect(page.getByRole("article").locator("mark").first()).toHaveText(/magneto/i);
   await expect(page.getByRole("complementary", { name: "Training use notice" })).toBeVisible();
 });
 
@@ -37,5 +44,6 @@ test("a superseded page says so and links to the current revision", async ({ pag
   await page.goto(`/library/${manualId}/${revisionId}/5`);
   await expect(page.getByRole("alert").filter({ hasText: "superseded" })).toContainText("This is Rev 3, a superseded revision.");
   await page.getByRole("link", { name: /of the current revision, Rev 4/ }).click();
-  await expect(page.getByRole("heading", { level: 1 })).toContainText("Rev 4 · page 5");
+  await expect(page.getByRole("heading", { level: 1 })).toContainText("Rev 4");
+  await expect(page).toHaveURL(new RegExp(`/library/${manualId}/[0-9a-f-]+/5`));
 });

@@ -4,7 +4,8 @@ import { notFound } from "next/navigation";
 import { MarkedText } from "@/components/marked-text";
 import { requirePageUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
-import { highlightWords } from "@/lib/library/highlight";
+import { PdfReaderLoader } from "@/components/pdf-reader-loader";
+import { highlightWords, markStems } from "@/lib/library/highlight";
 import { getManual, getPage, getReadableRevision } from "@/lib/library/manuals";
 import { findCorrections } from "@/search/postgres";
 import { parseQuery } from "@/search/query";
@@ -45,7 +46,6 @@ export default async function ManualPageView({
   const superseded = revision.id !== manual.currentRevisionId;
   const count = revision.pageCount ?? pageNumber;
   const query = q ? `?q=${encodeURIComponent(q)}` : "";
-  const at = (n: number) => `/library/${manualId}/${revisionId}/${n}${query}`;
 
   return (
     <div className="flex flex-col gap-4">
@@ -74,38 +74,30 @@ export default async function ManualPageView({
 
       <div className="flex flex-wrap items-center gap-3">
         <h1 className="mr-auto">
-          {manual.title} · {revision.label} · page {pageNumber} of {count}
+          {manual.title} · {revision.label}
         </h1>
-        {pageNumber > 1 ? (
-          <Link href={at(pageNumber - 1)} className="btn btn-secondary" rel="prev">
-            ← Page {pageNumber - 1}
-          </Link>
-        ) : null}
-        {pageNumber < count ? (
-          <Link href={at(pageNumber + 1)} className="btn btn-secondary" rel="next">
-            Page {pageNumber + 1} →
-          </Link>
-        ) : null}
-        <a href={`/api/revisions/${revisionId}/file#page=${pageNumber}`} className="btn btn-primary" target="_blank" rel="noreferrer">
-          Open the PDF at this page
+        <a href={`/api/revisions/${revisionId}/file#page=${pageNumber}`} className="btn btn-secondary" target="_blank" rel="noreferrer">
+          Open the whole PDF
         </a>
       </div>
 
-      <div className="grid gap-4 md:grid-cols-[1fr_auto]">
-        <article className="panel whitespace-pre-line leading-relaxed" aria-label={`Text of page ${pageNumber}`}>
+      <PdfReaderLoader
+        fileUrl={`/api/revisions/${revisionId}/file`}
+        fileSize={revision.sizeBytes}
+        pageCount={count}
+        initialPage={pageNumber}
+        marks={markStems(q, corrections)}
+        baseHref={`/library/${manualId}/${revisionId}`}
+        query={query}
+      />
+
+      <details className="panel">
+        <summary className="cursor-pointer py-2 font-semibold">Text of page {pageNumber} (for reading aloud, copying, or a slow connection)</summary>
+        <article className="mt-2 whitespace-pre-line leading-relaxed" aria-label={`Text of page ${pageNumber}`}>
           {page.ocr ? <p className="hint mb-2">This page is a scan; its text was read by OCR and may hold errors. Check against the PDF.</p> : null}
           <MarkedText snippet={highlightWords(page.text, q, corrections)} />
         </article>
-        {page.thumbnailKey ? (
-          // eslint-disable-next-line @next/next/no-img-element -- a private, already small PNG
-          <img
-            src={`/api/revisions/${revisionId}/pages/${pageNumber}/thumbnail`}
-            alt={`Picture of page ${pageNumber}`}
-            width={220}
-            className="h-auto self-start rounded border border-line bg-white"
-          />
-        ) : null}
-      </div>
+      </details>
     </div>
   );
 }

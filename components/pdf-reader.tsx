@@ -1,0 +1,219 @@
+"use client";
+
+// The reader: react-pdf (pdf.js) over the revision's file, loaded by HTTP range so a page deep in
+// a large manual opens without the rest. Only pages near the viewport are drawn.
+import { useRouter } from "next/navigation";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { Document, Page, pdfjs } from "react-pdf";
+import "react-pdf/dist/Page/TextLayer.css";
+
+// Copied from pdfjs-dist by scripts/lib.mjs (copyPdfWorker) before every build.
+pdfjs.GlobalWorkerOptions.workerSrc = "/pdf.worker.min.mjs";
+
+const gap = 16;
+const nearby = 2; // pages drawn above and below the visible ones
+
+function escapeHtml(s: string) {
+  return s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c);
+}
+
+function escapeRegExp(s: string) {
+  return s.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+}
+
+export interface PdfReaderProps {
+  fileUrl: string;
+  /** Bytes of the file: with it, every read is an HTTP range request of our own. */
+  fileSize: number;
+  pageCount: number;
+  initialPage: number;
+  /** Stems of the words to mark on the page (search terms and their corrections). */
+  marks: string[];
+  /** Address of page n, for the URL as the reader moves. */
+  pageHref: (page: number) => string;
+}
+
+/**
+ * pdf.js fetches only the byte ranges it needs through this transport. (Its own range detection
+ * needs a Content-Length on the first full response, which a streamed Next.js response lacks.)
+ */
+function rangeSource(fileUrl: string, fileSize: number, onError: () => void) {
+  const transport = new pdfjs.PDFDataRangeTransport(fileSize, null);
+  transport.requestDataRange = (begin: number, end: number) => {
+    fetch(fileUrl, { headers: { Range: `bytes=${begin}-${end - 1}` }, credentials: "same-origin" })
+      .then(async (response) => {
+        if (response.status !== 206 && response.status !== 200) throw new Error(`status ${response.status}`);
+        const bytes = new Uint8Array(await response.arrayBuffer());
+        // A server that ignores Range sends the whole file: hand pdf.js the part it asked for.
+        transport.onDataRange(begin, response.status === 200 ? bytes.subarray(begin, end) : bytes);
+      })
+      .catch(onError);
+  };
+  return { range: transport };
+}
+
+export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pageHref }: PdfReaderProps) {
+  const router = useRouter();
+  const scroller = useRef<HTMLDivElement>(null);
+  const [width, setWidth] = useState(800);
+  const [zoom, setZoom] = useState(1);
+  const [fitWidth, setFitWidth] = useState(true);
+  const [aspect, setAspect] = useState(11 / 8.5);
+  const [current, setCurrent] = useState(initialPage);
+  const [visible, setVisible] = useState<Set<number>>(new Set([initialPage]));
+  const [goTo, setGoTo] = useState(String(initialPage));
+  const [error, setError] = useState<string | null>(null);
+  const jumped = useRef(false);
+
+  const pageWidth = fitWidth ? width : Math.round(612 * zoom * 1.3);
+  const pageHeight = Math.round(pageWidth * aspect);
+  const file = useMemo(
+    () => rangeSource(fileUrl, fileSize, () => setError("Part of the PDF did not arrive. Check the connection and reload.")),
+    [fileUrl, fileSize],
+  );
+  const options = useMemo(
+    () => ({ disableAutoFetch: true, disableStream: true, rangeChunkSize: 65536, standardFontDataUrl: "/standard_fonts/" }),
+    [],
+  );
+  const pattern = useMemo(
+    () => (marks.length ? new RegExp(`(${marks.map(escapeRegExp).join("|")})[\\p{L}\\p{N}]*`, "giu") : null),
+    [marks],
+  );
+
+  useEffect(() => {
+    const element = scroller.current;
+    if (!element) return;
+    const observer = new ResizeObserver(() => setWidth(Math.max(320, element.clientWidth - 32)));
+    observer.observe(element);
+    return () => observer.disconnect();
+  }, []);
+
+  const scrollToPage = useCallback(
+    (page: number) => {
+      const target = Math.min(Math.max(1, page), pageCount);
+      scroller.current?.scrollTo({ top: (target - 1) * (pageHeight + gap), behavior: "instant" as ScrollBehavior });
+      setCurrent(target);
+      setGoTo(String(target));
+    },
+    [pageCount, pageHeight],
+  );
+
+  // Which pages are on screen, from the scroll position (every page slot has the same height).
+  const onScroll = useCallback(() => {
+    const element = scroller.current;
+    if (!element) return;
+    const first = Math.floor(element.scrollTop / (pageHeight + gap)) + 1;
+    const last = Math.floor((element.scrollTop + element.clientHeight) / (pageHeight + gap)) + 1;
+    const shown = new Set<number>();
+    for (let p = Math.max(1, first - nearby); p <= Math.min(pageCount, last + nearby); p++) shown.add(p);
+    setVisible(shown);
+    const now = Math.min(pageCount, Math.max(1, Math.round(element.scrollTop / (pageHeight + gap)) + 1));
+    setCurrent((before) => {
+      if (before !== now) setGoTo(String(now));
+      return now;
+    });
+  }, [pageCount, pageHeight]);
+
+  useEffect(() => {
+    // Keep the address on the page being read, so it can be shared or cited.
+    const timer = setTimeout(() => router.replace(pageHref(current), { scroll: false }), 400);
+    return () => clearTimeout(timer);
+  }, [current, pageHref, router]);
+
+  const onKeyDown = (event: React.KeyboardEvent) => {
+    if ((event.target as HTMLElement).tagName === "INPUT") return;
+    if (event.key === "PageDown") {
+      event.preventDefault();
+      scrollToPage(current + 1);
+    } else if (event.key === "PageUp") {
+      event.preventDefault();
+      scrollToPage(current - 1);
+    } else if (event.key === "+" || event.key === "=") {
+      setFitWidth(false);
+      setZoom((z) => Math.min(3, z + 0.25));
+    } else if (event.key === "-") {
+      setFitWidth(false);
+      setZoom((z) => Math.max(0.5, z - 0.25));
+    }
+  };
+
+  return (
+    <div className="flex flex-col gap-3" onKeyDown={onKeyDown}>
+      <div role="toolbar" aria-label="Reader" className="panel flex flex-wrap items-center gap-2 py-2">
+        <button type="button" className="btn btn-secondary btn-small" onClick={() => scrollToPage(current - 1)} disabled={current <= 1}>
+          ← Previous page
+        </button>
+        <button type="button" className="btn btn-secondary btn-small" onClick={() => scrollToPage(current + 1)} disabled={current >= pageCount}>
+          Next page →
+        </button>
+        <form
+          className="flex items-center gap-2"
+          onSubmit={(e) => {
+            e.preventDefault();
+            const n = Number(goTo);
+            if (Number.isInteger(n)) scrollToPage(n);
+          }}
+        >
+          <label htmlFor="reader-go" className="label">Page</label>
+          <input id="reader-go" className="input w-24" inputMode="numeric" value={goTo} onChange={(e) => setGoTo(e.target.value)} />
+          <span>of {pageCount}</span>
+          <button type="submit" className="btn btn-secondary btn-small">Go</button>
+        </form>
+        <span className="ml-auto flex items-center gap-2">
+          <button type="button" className="btn btn-secondary btn-small" aria-label="Zoom out" onClick={() => { setFitWidth(false); setZoom((z) => Math.max(0.5, z - 0.25)); }}>−</button>
+          <span aria-live="polite" className="min-w-16 text-center">{fitWidth ? "Fit" : `${Math.round(zoom * 100)} %`}</span>
+          <button type="button" className="btn btn-secondary btn-small" aria-label="Zoom in" onClick={() => { setFitWidth(false); setZoom((z) => Math.min(3, z + 0.25)); }}>+</button>
+          <button type="button" className="btn btn-secondary btn-small" aria-pressed={fitWidth} onClick={() => setFitWidth(true)}>Fit width</button>
+        </span>
+      </div>
+      {error ? <p className="notice-error" role="alert">{error}</p> : null}
+      <div
+        ref={scroller}
+        onScroll={onScroll}
+        tabIndex={0}
+        aria-label={`PDF pages, page ${current} of ${pageCount}`}
+        className="relative h-[75vh] overflow-auto rounded border border-line bg-[#d9dde2] p-4"
+      >
+        <Document
+          file={file}
+          options={options}
+          loading={<p role="status">Opening the PDF…</p>}
+          onLoadError={() => setError("The PDF could not be opened. Check the connection and reload.")}
+          onLoadSuccess={async (doc) => {
+            const first = await doc.getPage(Math.min(initialPage, doc.numPages));
+            const viewport = first.getViewport({ scale: 1 });
+            setAspect(viewport.height / viewport.width);
+            if (!jumped.current) {
+              jumped.current = true;
+              requestAnimationFrame(() => scrollToPage(initialPage));
+            }
+          }}
+        >
+          <div style={{ height: pageCount * (pageHeight + gap) }} className="relative">
+            {[...visible].map((n) => (
+              <div
+                key={n}
+                data-page={n}
+                className="absolute left-1/2 -translate-x-1/2 bg-white shadow"
+                style={{ top: (n - 1) * (pageHeight + gap), width: pageWidth, height: pageHeight }}
+              >
+                <Page
+                  pageNumber={n}
+                  width={pageWidth}
+                  renderAnnotationLayer={false}
+                  renderTextLayer
+                  // react-pdf puts this into the text layer as HTML: the PDF's text is escaped first.
+                  customTextRenderer={({ str }) => {
+                    const safe = escapeHtml(str);
+                    return pattern ? safe.replace(pattern, (m) => `<mark>${m}</mark>`) : safe;
+                  }}
+                  loading={<span className="sr-only">Drawing page {n}…</span>}
+                />
+              </div>
+            ))}
+          </div>
+        </Document>
+      </div>
+    </div>
+  );
+}
