@@ -3,13 +3,15 @@
 import { rmSync } from "node:fs";
 import path from "node:path";
 import {
-  bin, buildIsStale, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log, run, service, stopAll,
-  throwawayDatabase, tsx, waitForHttp,
+  bin, buildIsStale, ensureChromium, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log, run, service, stopAll,
+  throwawayDatabase, tsx, tsxArgs, waitForHttp,
   copyPdfAssets,
 } from "./lib.mjs";
 
 // Benchmarks that measure the API need the real web server.
-const needsWeb = new Set(["search"]);
+const needsWeb = new Set(["search", "reader"]);
+// …and the reader's file must first be read by the worker, in Chromium.
+const needsWorker = new Set(["reader"]);
 
 const name = process.argv[2];
 if (!name) {
@@ -37,6 +39,10 @@ try {
     service("web", bin("next"), ["start", "-p", String(port)], { ...env, NEXT_TELEMETRY_DISABLED: "1" });
     env.HL_BASE_URL = `http://127.0.0.1:${port}`;
     await waitForHttp(`${env.HL_BASE_URL}/api/health`);
+    if (needsWorker.has(name)) {
+      env.HL_CHROMIUM = ensureChromium();
+      service("worker", bin("tsx"), tsxArgs("worker/index.ts"), env);
+    }
   }
   log(`running bench:${name}`);
   tsx(`scripts/bench-${name}.ts`, env);

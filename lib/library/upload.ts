@@ -107,8 +107,9 @@ export async function receivePdfUpload(
       size: inspector.size,
       sha256: inspector.hash.digest("hex"),
     }));
-    // Handled below; this keeps an early failure from being reported as unhandled.
-    stored.catch(() => undefined);
+    // A refused file (not a PDF, too large) stops the whole body at once: busboy would otherwise
+    // wait on the file stream it can no longer feed, and the request would hang.
+    stored.catch((error: unknown) => parser.destroy(error instanceof Error ? error : new Error(String(error))));
   });
 
   try {

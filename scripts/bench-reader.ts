@@ -1,0 +1,119 @@
+// `npm run bench:reader`: a ~100 MB generated manual (900 pages, each with a page of incompressible
+// image data and a line of text), ingested through the real worker; then Chromium opens page 700
+// in the reader and the run prints the bytes of the PDF it transferred (goal ≤ 5 % of the file)
+// and the time until that page is painted (goal ≤ 1.5 s on loopback). Prints, asserts nothing.
+import { createHash, randomBytes, randomUUID } from "node:crypto";
+import { Readable } from "node:stream";
+import { eq, sql } from "drizzle-orm";
+import { PDFDocument, StandardFonts, concatTransformationMatrix, drawObject, popGraphicsState, pushGraphicsState } from "pdf-lib";
+import { chromium } from "playwright-core";
+import { closeDb, getDb } from "../db";
+import { manuals, revisions } from "../db/schema";
+import { hashPassword } from "../lib/auth/password";
+import { queueIngest } from "../lib/ingest/queue";
+import { getQueue } from "../lib/jobs";
+import { getStore, storageKeys } from "../lib/storage";
+
+const baseUrl = process.env.HL_BASE_URL!;
+const pages = 900;
+const target = 700;
+
+async function makeLargePdf(): Promise<Uint8Array> {
+  const doc = await PDFDocument.create();
+  const font = await doc.embedFont(StandardFonts.Helvetica);
+  const side = 330; // 330 × 330 greyscale bytes ≈ 109 KB a page, random so nothing compresses it
+  for (let n = 1; n <= pages; n++) {
+    const page = doc.addPage([612, 792]);
+    page.drawText(`BENCH READER PAGE ${n} - a line of text so the page needs no OCR`, { x: 54, y: 740, size: 12, font });
+    const image = doc.context.stream(randomBytes(side * side), {
+      Type: "XObject",
+      Subtype: "Image",
+      Width: side,
+      Height: side,
+      ColorSpace: "DeviceGray",
+      BitsPerComponent: 8,
+    });
+    const name = page.node.newXObject("Im", doc.context.register(image));
+    page.pushOperators(pushGraphicsState(), concatTransformationMatrix(400, 0, 0, 400, 106, 200), drawObject(name), popGraphicsState());
+  }
+  return doc.save({ useObjectStreams: false });
+}
+
+async function main() {
+  const db = getDb();
+  const bytes = await makeLargePdf();
+  const revisionId = randomUUID();
+  const key = storageKeys.revisionFile(revisionId);
+  await getStore().put(key, Readable.from(Buffer.from(bytes)));
+  const [manual] = await db.insert(manuals).values({ title: `Bench reader ${revisionId.slice(0, 8)}`, documentType: "handbook" }).returning({ id: manuals.id });
+  await db.insert(revisions).values({
+    id: revisionId,
+    manualId: manual!.id,
+    label: "Bench",
+    revisionDate: "2026-01-01",
+    fileKey: key,
+    sizeBytes: bytes.length,
+    sha256: createHash("sha256").update(bytes).digest("hex"),
+  });
+  await queueIngest({ revisionId });
+  for (;;) {
+    const [row] = await db.select({ status: revisions.status, error: revisions.error }).from(revisions).where(eq(revisions.id, revisionId));
+    if (row?.status === "ready") break;
+    if (row?.status === "failed") throw new Error(`ingest failed: ${row.error}`);
+    await new Promise((r) => setTimeout(r, 250));
+  }
+
+  const email = `reader-${randomUUID().slice(0, 8)}@test.hangarleaf.test`;
+  await db.execute(sql`insert into users (email, name, role, status, password_hash) values (${email}, 'Bench', 'student', 'active', ${await hashPassword("bench-password-long")})`);
+  const browser = await chromium.launch({
+    executablePath: process.env.HL_CHROMIUM ?? "/usr/bin/chromium",
+    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+  });
+  try {
+    const context = await browser.newContext({ viewport: { width: 1366, height: 768 } });
+    const page = await context.newPage();
+    await page.goto(`${baseUrl}/sign-in`);
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill("bench-password-long");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL(`${baseUrl}/`);
+
+    let transferred = 0;
+    let requests = 0;
+    page.on("response", (response) => {
+      if (!response.url().includes(`/api/revisions/${revisionId}/file`)) return;
+      requests++;
+      void response.body().then((body) => (transferred += body.length)).catch(() => undefined);
+    });
+    const started = Date.now();
+    await page.goto(`${baseUrl}/library/${manual!.id}/${revisionId}/${target}`);
+    await page.locator(`[data-page="${target}"] canvas`).waitFor({ state: "visible", timeout: 60_000 });
+    // Painted: the canvas has pixels that are not all white.
+    await page.waitForFunction((n) => {
+      const canvas = document.querySelector<HTMLCanvasElement>(`[data-page="${n}"] canvas`);
+      const data = canvas?.getContext("2d")?.getImageData(0, 0, canvas.width, canvas.height).data;
+      return !!data && data.some((v, i) => i % 4 !== 3 && v < 200);
+    }, target);
+    const painted = Date.now() - started;
+    await page.waitForTimeout(1500); // let range requests in flight land, so they are counted
+    console.log(
+      [
+        "",
+        "bench:reader",
+        `  file: ${pages} pages, ${(bytes.length / 1024 / 1024).toFixed(1)} MB`,
+        `  opening page ${target}: ${(transferred / 1024).toFixed(0)} KB in ${requests} range requests = ${((100 * transferred) / bytes.length).toFixed(2)} % of the file   (goal ≤ 5 %)`,
+        `  page ${target} painted ${painted} ms after navigation   (goal ≤ 1500 ms, loopback)`,
+        "",
+      ].join("\n"),
+    );
+  } finally {
+    await browser.close();
+    await (await getQueue()).stop({ graceful: false, wait: true });
+    await closeDb();
+  }
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});
