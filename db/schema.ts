@@ -137,6 +137,11 @@ export const revisions = pgTable(
     fileKey: text("file_key").notNull(),
     sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
     sha256: text("sha256").notNull(),
+    // The same document rewritten by qpdf with its objects packed in object streams: the reader
+    // opens page 700 of a large manual with a few range requests instead of hundreds. Made after
+    // the revision is ready; until then (or if qpdf cannot) the reader uses the upload itself.
+    readerFileKey: text("reader_file_key"),
+    readerSizeBytes: bigint("reader_size_bytes", { mode: "number" }),
     uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
     // How often ingest has started on it, and when the worker last said it is still at it: a
     // revision whose worker died is picked up again by the sweeper in worker/index.ts.

@@ -63,6 +63,17 @@ async function main() {
     await new Promise((r) => setTimeout(r, 250));
   }
 
+  // The reader's packed copy and the thumbnails come after "ready"; wait for both so the
+  // measurement is of the reader alone, not of a busy worker beside it.
+  for (let i = 0; ; i++) {
+    const [row] = await db.execute<{ copy: string | null; thumbs: number }>(sql`
+      select r.reader_file_key as copy, (select count(*)::int from pages p where p.revision_id = r.id and p.thumbnail_key is not null) as thumbs
+      from revisions r where r.id = ${revisionId}`).then((r) => r.rows);
+    if (row?.copy && row.thumbs === pages) break;
+    if (i > 600) throw new Error("the reader copy or the thumbnails were not made");
+    await new Promise((r) => setTimeout(r, 500));
+  }
+
   const email = `reader-${randomUUID().slice(0, 8)}@test.hangarleaf.test`;
   await db.execute(sql`insert into users (email, name, role, status, password_hash) values (${email}, 'Bench', 'student', 'active', ${await hashPassword("bench-password-long")})`);
   const browser = await chromium.launch({
@@ -81,7 +92,7 @@ async function main() {
     let transferred = 0;
     let requests = 0;
     page.on("response", (response) => {
-      if (!response.url().includes(`/api/revisions/${revisionId}/file`)) return;
+      if (!response.url().includes(`/api/revisions/${revisionId}/file?copy=reader`)) return;
       requests++;
       void response.body().then((body) => (transferred += body.length)).catch(() => undefined);
     });

@@ -6,7 +6,7 @@ import { closeDb } from "../db";
 import { getEnv } from "../lib/env";
 import { failRevision, findStaleRevisions, ingestRevision, maxAttempts } from "../lib/ingest/ingest-revision";
 import { queueIngest } from "../lib/ingest/queue";
-import { makeThumbnails } from "../lib/ingest/thumbnails";
+import { makeReaderCopy, makeThumbnails } from "../lib/ingest/thumbnails";
 import { createQueues, queues } from "../lib/jobs";
 import { deliverMail } from "../lib/mail";
 import { mailMessageSchema } from "../lib/mail/messages";
@@ -47,7 +47,9 @@ async function main() {
   await boss.work(queues.makeThumbnails.name, { pollingIntervalSeconds: 2 }, async (jobs) => {
     for (const job of jobs) {
       const parsed = revisionJob.safeParse(job.data);
-      if (parsed.success) console.log(`revision ${parsed.data.revisionId}: ${await makeThumbnails(parsed.data)} thumbnails`);
+      if (!parsed.success) continue;
+      const packed = await makeReaderCopy(parsed.data);
+      console.log(`revision ${parsed.data.revisionId}: reader copy ${packed ? "made" : "not made"}, ${await makeThumbnails(parsed.data)} thumbnails`);
     }
   });
 

@@ -196,7 +196,14 @@ export async function getManual({ id }: { id: string }) {
 
 export async function getRevision({ id }: { id: string }) {
   const [row] = await getDb()
-    .select({ ...revisionColumns, fileKey: revisions.fileKey, manualTitle: manuals.title, currentRevisionId: manuals.currentRevisionId })
+    .select({
+      ...revisionColumns,
+      fileKey: revisions.fileKey,
+      readerFileKey: revisions.readerFileKey,
+      readerSizeBytes: revisions.readerSizeBytes,
+      manualTitle: manuals.title,
+      currentRevisionId: manuals.currentRevisionId,
+    })
     .from(revisions)
     .innerJoin(manuals, eq(manuals.id, revisions.manualId))
     .where(eq(revisions.id, id))

@@ -122,3 +122,14 @@ export async function ocrImage(png: Buffer): Promise<string> {
   if (result.code !== 0) throw new Error(`tesseract failed: ${result.stderr.slice(0, 300)}`);
   return result.stdout.toString("utf8");
 }
+
+/**
+ * Rewrites a PDF with its objects in object streams (qpdf). pdf.js then finds page n's dictionary
+ * in a few compressed chunks instead of one range request per earlier page (a flat page tree with
+ * objects spread over 100 MB cost 905 requests for page 700; packed, 5). qpdf exits 3 for "done,
+ * with warnings".
+ */
+export async function packForReading(file: string, out: string): Promise<boolean> {
+  const result = await runTool("qpdf", ["--object-streams=generate", "--warning-exit-0", file, out]);
+  return result.code === 0;
+}

@@ -32,5 +32,6 @@ export function assertKey(key: string): string {
 
 export const storageKeys = {
   revisionFile: (revisionId: string) => assertKey(`revisions/${revisionId}/document.pdf`),
+  readerCopy: (revisionId: string) => assertKey(`revisions/${revisionId}/reader.pdf`),
   thumbnail: (revisionId: string, page: number) => assertKey(`revisions/${revisionId}/thumbnails/${page}.png`),
 };

@@ -13,21 +13,24 @@ export const GET = route<Context>(async (request, { params }) => {
   const actor = await requireApiUser("library:view");
   const revision = await getReadableRevision({ actor, id: idParam((await params).id, "That revision") });
   const store = getStore();
-  const size = revision.sizeBytes;
+  // ?copy=reader: the packed copy made for the in-app reader, when there is one; else the upload.
+  const reader = new URL(request.url).searchParams.get("copy") === "reader" && revision.readerFileKey && revision.readerSizeBytes;
+  const fileKey = reader ? revision.readerFileKey! : revision.fileKey;
+  const size = reader ? revision.readerSizeBytes! : revision.sizeBytes;
   const name = `${revision.manualTitle} ${revision.label}`.replace(/[^\w .-]+/g, "").trim() || "manual";
   const headers: Record<string, string> = {
     "Content-Type": "application/pdf",
     "Accept-Ranges": "bytes",
     "Content-Disposition": `inline; filename="${name}.pdf"`,
     "Cache-Control": "private, max-age=3600",
-    ETag: `"${revision.id}"`,
+    ETag: `"${revision.id}${reader ? "-reader" : ""}"`,
   };
   const range = parseRange(request.headers.get("range"), size);
   if (range === "unsatisfiable") {
     return new Response(null, { status: 416, headers: { ...headers, "Content-Range": `bytes */${size}` } });
   }
   try {
-    const { body } = await store.get(revision.fileKey, range ?? undefined);
+    const { body } = await store.get(fileKey, range ?? undefined);
     const stream = Readable.toWeb(body) as ReadableStream;
     if (range) {
       return new Response(stream, {

@@ -82,8 +82,8 @@ export default async function ManualPageView({
       </div>
 
       <PdfReaderLoader
-        fileUrl={`/api/revisions/${revisionId}/file`}
-        fileSize={revision.sizeBytes}
+        fileUrl={revision.readerFileKey ? `/api/revisions/${revisionId}/file?copy=reader` : `/api/revisions/${revisionId}/file`}
+        fileSize={revision.readerFileKey && revision.readerSizeBytes ? revision.readerSizeBytes : revision.sizeBytes}
         pageCount={count}
         initialPage={pageNumber}
         marks={markStems(q, corrections)}
