@@ -39,6 +39,8 @@ export async function ingestRevision({ revisionId, log = console.log }: { revisi
     void db.update(revisions).set({ heartbeatAt: sql`now()` }).where(eq(revisions.id, revisionId)).catch(() => undefined);
   }, heartbeatSeconds * 1000);
 
+  // The page batch being written, if any (see flush below); awaited before a failure cleans up.
+  let writing: Promise<void> = Promise.resolve();
   try {
     // A retry starts clean: whatever a dead attempt wrote goes.
     await db.delete(pages).where(eq(pages.revisionId, revisionId));
@@ -47,15 +49,23 @@ export async function ingestRevision({ revisionId, log = console.log }: { revisi
       await db.update(revisions).set({ pageCount: expected }).where(eq(revisions.id, revisionId));
 
       let batch: (typeof pages.$inferInsert)[] = [];
-      const flush = async () => {
-        if (!batch.length) return;
-        const rows = batch;
-        batch = [];
+      // One batch is written while the next is read: pdftotext and PostgreSQL (which also builds
+      // each page's search vector) work on the two cores at once. Never more than one in flight,
+      // so memory stays at two batches.
+      const write = async (rows: (typeof pages.$inferInsert)[]) => {
         await db.insert(pages).values(rows);
         await db
           .update(revisions)
           .set({ pagesDone: sql`${revisions.pagesDone} + ${rows.length}`, heartbeatAt: sql`now()` })
           .where(eq(revisions.id, revisionId));
+      };
+      const flush = async () => {
+        await writing;
+        if (!batch.length) return;
+        const rows = batch;
+        batch = [];
+        writing = write(rows);
+        writing.catch(() => undefined); // awaited by the next flush or the last one
       };
       const found = await extractPageTexts(file, async (pageNumber, raw) => {
         let text = normalisePageText(raw);
@@ -68,6 +78,7 @@ export async function ingestRevision({ revisionId, log = console.log }: { revisi
         if (batch.length >= batchSize) await flush();
       });
       await flush();
+      await writing;
       if (found !== expected) {
         throw new PdfProblem(`The PDF says it has ${expected} pages but only ${found} could be read. The file may be damaged.`);
       }
@@ -129,6 +140,7 @@ export async function ingestRevision({ revisionId, log = console.log }: { revisi
       await db.update(revisions).set({ status: "queued", heartbeatAt: null }).where(eq(revisions.id, revisionId)).catch(() => undefined);
       throw error;
     }
+    await writing.catch(() => undefined);
     const reason = known ? error.message : `Ingest failed ${claimed.attempts} times; the last error was: ${String(error instanceof Error ? error.message : error).slice(0, 300)}`;
     await db.delete(pages).where(eq(pages.revisionId, revisionId));
     await db.update(revisions).set({ status: "failed", error: reason, heartbeatAt: null }).where(eq(revisions.id, revisionId));
