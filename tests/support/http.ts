@@ -70,7 +70,7 @@ export async function waitForMail(to: string, subject: RegExp, seconds = 20): Pr
   const deadline = Date.now() + seconds * 1000;
   while (Date.now() < deadline) {
     const { messages } = (await (await fetch(`${outboxUrl}/messages`)).json()) as { messages: OutboxMessage[] };
-    const found = messages.find((m) => m.to.includes(to) && subject.test(m.subject));
+    const found = messages.find((m) => m.to.includes(to) && subject.exec(m.subject) !== null);
     if (found) return found;
     await new Promise((r) => setTimeout(r, 300));
   }

@@ -40,7 +40,7 @@ export async function waitForMailTo(to: string, subject: RegExp): Promise<string
   while (Date.now() < deadline) {
     const response = await fetch(`${outboxUrl}/messages`);
     const { messages } = (await response.json()) as { messages: { to: string[]; subject: string; text: string }[] };
-    const found = messages.find((m) => m.to.includes(to) && subject.test(m.subject));
+    const found = messages.find((m) => m.to.includes(to) && subject.exec(m.subject) !== null);
     if (found) return found.text;
     await new Promise((r) => setTimeout(r, 300));
   }

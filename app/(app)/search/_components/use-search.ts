@@ -2,23 +2,10 @@
 
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { callApi } from "@/lib/api-client";
+import type { SearchHit, SearchResult } from "@/search/engine";
 
-export interface SearchHitDto {
-  manualId: string;
-  revisionId: string;
-  manualTitle: string;
-  revisionLabel: string;
-  current: boolean;
-  page: number;
-  snippet: string;
-  score: number;
-}
-export interface SearchResponseDto {
-  hits: SearchHitDto[];
-  total: number;
-  totalCapped: boolean;
-  tookMs: number;
-}
+export type SearchHitDto = SearchHit;
+export type SearchResponseDto = SearchResult & { tookMs: number };
 
 export type SearchInput = { q: string; manual?: string; type?: string; model?: string; ata?: string };
 
