@@ -26,6 +26,14 @@ test("a student searches with a typo, opens the hit and sees the word marked on 
   await expect(drawn.locator("canvas")).toBeVisible();
   await expect(drawn.locator(".textLayer mark").first()).toHaveText(/magneto/i);
   await expect(page.getByRole("textbox", { name: "Page" })).toHaveValue(String(page76));
+  // Keyboard: Page Down moves to the next page, and the address follows.
+  await page.getByLabel(/^PDF pages, page/).focus();
+  await page.keyboard.press("PageDown");
+  await expect(page.getByRole("textbox", { name: "Page" })).toHaveValue(String(page76 + 1));
+  await expect(page).toHaveURL(new RegExp(`/${page76 + 1}\\?q=`));
+  await page.keyboard.press("PageUp");
+  await expect(page.getByRole("textbox", { name: "Page" })).toHaveValue(String(page76));
+
   // The same page as text, for reading aloud or a slow connection.
   await page.getByText(/^Text of page/).click();
   await expect(page.getByRole("article").locator("mark").first()).toHaveText(/magneto/i);
