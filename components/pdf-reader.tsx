@@ -2,7 +2,6 @@
 
 // The reader: react-pdf (pdf.js) over the revision's file, loaded by HTTP range so a page deep in
 // a large manual opens without the rest. Only pages near the viewport are drawn.
-import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { Document, Page, pdfjs } from "react-pdf";
 import "react-pdf/dist/Page/TextLayer.css";
@@ -53,7 +52,6 @@ function rangeSource(fileUrl: string, fileSize: number, onError: () => void) {
 }
 
 export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pageHref }: PdfReaderProps) {
-  const router = useRouter();
   const scroller = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(800);
   const [zoom, setZoom] = useState(1);
@@ -115,10 +113,11 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
   }, [pageCount, pageHeight]);
 
   useEffect(() => {
-    // Keep the address on the page being read, so it can be shared or cited.
-    const timer = setTimeout(() => router.replace(pageHref(current), { scroll: false }), 400);
+    // Keep the address on the page being read, so it can be shared or cited. The history API, not
+    // a router navigation: that would render the page again on the server and take the focus away.
+    const timer = setTimeout(() => window.history.replaceState(null, "", pageHref(current)), 400);
     return () => clearTimeout(timer);
-  }, [current, pageHref, router]);
+  }, [current, pageHref]);
 
   const onKeyDown = (event: React.KeyboardEvent) => {
     if ((event.target as HTMLElement).tagName === "INPUT") return;
