@@ -30,6 +30,47 @@ export interface PdfReaderProps {
   marks: string[];
   /** Address of page n, for the URL as the reader moves. */
   pageHref: (page: number) => string;
+  /** Page pictures: `${thumbnailBase}/${n}/thumbnail` (made shortly after a revision is ready). */
+  thumbnailBase: string;
+}
+
+/** The strip of page pictures beside the pages; a picture not made yet shows the page number only. */
+function Thumbnails({ base, count, current, onPick }: { base: string; count: number; current: number; onPick: (n: number) => void }) {
+  const list = useRef<HTMLOListElement>(null);
+  useEffect(() => {
+    list.current?.querySelector(`[data-thumb="${current}"]`)?.scrollIntoView({ block: "nearest" });
+  }, [current]);
+  return (
+    <nav aria-label="Pages" className="hidden h-[75vh] w-36 shrink-0 overflow-y-auto rounded border border-line bg-white p-2 lg:block">
+      <ol ref={list} className="flex flex-col gap-2">
+        {Array.from({ length: count }, (_, i) => i + 1).map((n) => (
+          <li key={n} data-thumb={n}>
+            <button
+              type="button"
+              onClick={() => onPick(n)}
+              aria-current={n === current ? "page" : undefined}
+              aria-label={`Page ${n}`}
+              className={`flex w-full flex-col items-center gap-1 rounded p-1 ${n === current ? "bg-teal-pale outline outline-2 outline-teal" : "hover:bg-paper"}`}
+            >
+              {/* eslint-disable-next-line @next/next/no-img-element -- small private PNGs, loaded as they scroll into view */}
+              <img
+                src={`${base}/${n}/thumbnail`}
+                alt=""
+                loading="lazy"
+                width={110}
+                height={142}
+                className="h-auto w-[110px] border border-line bg-paper"
+                onError={(e) => {
+                  e.currentTarget.style.visibility = "hidden";
+                }}
+              />
+              <span className="text-sm font-semibold">{n}</span>
+            </button>
+          </li>
+        ))}
+      </ol>
+    </nav>
+  );
 }
 
 /**
@@ -51,7 +92,7 @@ function rangeSource(fileUrl: string, fileSize: number, onError: () => void) {
   return { range: transport };
 }
 
-export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pageHref }: PdfReaderProps) {
+export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pageHref, thumbnailBase }: PdfReaderProps) {
   const scroller = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(800);
   const [zoom, setZoom] = useState(1);
@@ -166,12 +207,14 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
         </span>
       </div>
       {error ? <p className="notice-error" role="alert">{error}</p> : null}
+      <div className="flex gap-3">
+      <Thumbnails base={thumbnailBase} count={pageCount} current={current} onPick={scrollToPage} />
       <div
         ref={scroller}
         onScroll={onScroll}
         tabIndex={0}
         aria-label={`PDF pages, page ${current} of ${pageCount}`}
-        className="relative h-[75vh] overflow-auto rounded border border-line bg-[#d9dde2] p-4"
+        className="relative h-[75vh] min-w-0 flex-1 overflow-auto rounded border border-line bg-[#d9dde2] p-4"
       >
         <Document
           file={file}
@@ -212,6 +255,7 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
             ))}
           </div>
         </Document>
+      </div>
       </div>
     </div>
   );

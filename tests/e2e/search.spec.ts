@@ -37,6 +37,18 @@ test("a student searches with a typo, opens the hit and sees the word marked on 
   // The same page as text, for reading aloud or a slow connection.
   await page.getByText(/^Text of page/).click();
   await expect(page.getByRole("article").locator("mark").first()).toHaveText(/magneto/i);
+
+  // The strip of pages beside the reader jumps to a page.
+  await page.getByRole("navigation", { name: "Pages" }).getByRole("button", { name: "Page 3", exact: true }).click();
+  await expect(page.getByRole("textbox", { name: "Page" })).toHaveValue("3");
+
+  // Search inside this manual only.
+  const inManual = page.getByRole("search", { name: "Search in this manual" });
+  await inManual.getByRole("textbox").fill("spark plug");
+  await inManual.getByRole("button", { name: "Search" }).click();
+  await expect(page).toHaveURL(/\/search\?manual=[0-9a-f-]+&q=spark\+plug/);
+  await expect(page.getByLabel("Manual")).toHaveValue(/[0-9a-f-]{36}/);
+  await expect(page.getByRole("listbox", { name: "Search results" }).getByRole("heading")).toHaveText(["HT-20 Trainer Maintenance Manual"]);
   await expect(page.getByRole("complementary", { name: "Training use notice" })).toBeVisible();
 });
 

@@ -76,6 +76,14 @@ export default async function ManualPageView({
         <h1 className="mr-auto">
           {manual.title} · {revision.label}
         </h1>
+        <form action="/search" className="flex items-end gap-2" role="search" aria-label="Search in this manual">
+          <input type="hidden" name="manual" value={manualId} />
+          <label className="field">
+            <span className="label">Search in this manual</span>
+            <input name="q" className="input w-64" defaultValue={q} />
+          </label>
+          <button type="submit" className="btn btn-primary">Search</button>
+        </form>
         <a href={`/api/revisions/${revisionId}/file#page=${pageNumber}`} className="btn btn-secondary" target="_blank" rel="noreferrer">
           Open the whole PDF
         </a>
@@ -88,6 +96,7 @@ export default async function ManualPageView({
         initialPage={pageNumber}
         marks={markStems(q, corrections)}
         baseHref={`/library/${manualId}/${revisionId}`}
+        thumbnailBase={`/api/revisions/${revisionId}/pages`}
         query={query}
       />
 
