@@ -37,8 +37,14 @@ export interface PdfReaderProps {
 /** The strip of page pictures beside the pages; a picture not made yet shows the page number only. */
 function Thumbnails({ base, count, current, onPick }: { base: string; count: number; current: number; onPick: (n: number) => void }) {
   const list = useRef<HTMLOListElement>(null);
+  // Keep the current page's picture in view, scrolling the strip only (scrollIntoView would move
+  // the whole window and push the toolbar away).
   useEffect(() => {
-    list.current?.querySelector(`[data-thumb="${current}"]`)?.scrollIntoView({ block: "nearest" });
+    const box = list.current?.parentElement;
+    const item = list.current?.querySelector<HTMLElement>(`[data-thumb="${current}"]`);
+    if (!box || !item) return;
+    const delta = item.getBoundingClientRect().top - box.getBoundingClientRect().top;
+    if (delta < 0 || delta + item.offsetHeight > box.clientHeight) box.scrollTop += delta - (box.clientHeight - item.offsetHeight) / 2;
   }, [current]);
   return (
     <nav aria-label="Pages" className="hidden h-[75vh] w-36 shrink-0 overflow-y-auto rounded border border-line bg-white p-2 lg:block">
