@@ -164,6 +164,23 @@ export async function ensureDatabase(serverUrl, name) {
   return `${serverUrl}/${name}`;
 }
 
+/** Fails early, in plain words, when another program (often a second `npm start`) holds a port. */
+export function assertPortFree(port, what) {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.once("error", (error) =>
+      reject(
+        new Error(
+          error.code === "EADDRINUSE"
+            ? `Port ${port} (${what}) is already in use, perhaps by another npm start. Stop it, or choose another port.`
+            : `Port ${port} (${what}): ${error.message}`,
+        ),
+      ),
+    );
+    server.listen(port, () => server.close(() => resolve()));
+  });
+}
+
 export function freePort() {
   return new Promise((resolve, reject) => {
     const server = createServer();

@@ -4,7 +4,7 @@
 //   --only-seed     prepare, migrate and seed, then stop (npm run db:seed)
 import path from "node:path";
 import {
-  bin, buildIsStale, dataDir, ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, localSecret, log,
+  assertPortFree, bin, buildIsStale, dataDir, ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, localSecret, log,
   run, service, startCluster, stopAll, tsx, tsxArgs, waitForHttp,
   copyPdfAssets,
 } from "./lib.mjs";
@@ -65,6 +65,17 @@ try {
       : {}),
     PORT: String(port),
   };
+
+  if (!onlyMigrate && !onlySeed) {
+    // Checked first: a server already on the port would answer the health check, and this start
+    // would look ready while another program served the requests.
+    await assertPortFree(port, "PORT, the web app");
+    if (useFakeMail) {
+      await assertPortFree(smtpPort, "HL_SMTP_PORT");
+      await assertPortFree(outboxPort, "HL_OUTBOX_PORT");
+    }
+    if (useFakeS3) await assertPortFree(s3Port, "HL_S3_PORT");
+  }
 
   log("migrating the database");
   tsx("scripts/migrate.ts", env);
