@@ -134,5 +134,11 @@ describe("ingest", () => {
     expect(part.headers.get("content-range")).toBe(`bytes 100-199/${bytes.length}`);
     expect(Buffer.from(await part.arrayBuffer())).toEqual(bytes.subarray(100, 200));
     expect((await call("GET", `/api/revisions/${rows[0]!.id}/file`, { cookie: student, headers: { range: `bytes=${bytes.length}-` } })).status).toBe(416);
+    // If-Range: the current tag gets the range, a stale one the whole file.
+    const etag = whole.headers.get("etag")!;
+    expect((await call("GET", `/api/revisions/${rows[0]!.id}/file`, { cookie: student, headers: { range: "bytes=0-9", "if-range": etag } })).status).toBe(206);
+    const stale = await call("GET", `/api/revisions/${rows[0]!.id}/file`, { cookie: student, headers: { range: "bytes=0-9", "if-range": '"other"' } });
+    expect(stale.status).toBe(200);
+    expect(Buffer.from(await stale.arrayBuffer()).length).toBe(bytes.length);
   });
 });

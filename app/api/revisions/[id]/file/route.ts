@@ -25,7 +25,10 @@ export const GET = route<Context>(async (request, { params }) => {
     "Cache-Control": "private, max-age=3600",
     ETag: `"${revision.id}${reader ? "-reader" : ""}"`,
   };
-  const range = parseRange(request.headers.get("range"), size);
+  // If-Range (RFC 9110, 13.1.5): a range of a file the client has under another tag would mix two
+  // files, so a stale tag gets the whole file instead.
+  const ifRange = request.headers.get("if-range");
+  const range = ifRange && ifRange !== headers.ETag ? null : parseRange(request.headers.get("range"), size);
   if (range === "unsatisfiable") {
     return new Response(null, { status: 416, headers: { ...headers, "Content-Range": `bytes */${size}` } });
   }
