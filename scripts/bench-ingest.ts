@@ -6,19 +6,14 @@
 //     the alternative extractor, for the record of why poppler was chosen.
 // Goals on the 2,000-page file: ratio ≥ 0.5, worker peak RSS ≤ 400 MB. Prints figures, asserts nothing.
 import { spawn, spawnSync } from "node:child_process";
-import { createHash, randomUUID } from "node:crypto";
 import { readFileSync, writeFileSync } from "node:fs";
 import { mkdtemp } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { Readable } from "node:stream";
-import { eq } from "drizzle-orm";
 import { PDFDocument, StandardFonts } from "pdf-lib";
-import { closeDb, getDb } from "../db";
-import { manuals, revisions } from "../db/schema";
-import { queueIngest } from "../lib/ingest/queue";
+import { closeDb } from "../db";
 import { getQueue } from "../lib/jobs";
-import { getStore, storageKeys } from "../lib/storage";
+import { ingestAndWait, storeManual } from "./bench-support";
 
 const words = "inspect torque safety wire cotter pin bearing race grease seal gasket cylinder magneto lead harness bracket rivet doubler skin stringer rib spar fitting bushing shim clamp hose fuel oil filter screen valve actuator cable pulley turnbuckle".split(" ");
 
@@ -75,7 +70,6 @@ async function main() {
     env: process.env,
     stdio: ["ignore", "ignore", "inherit"],
   });
-  const db = getDb();
   const rows: string[] = [];
   try {
     for (const pages of [1000, 2000]) {
@@ -86,31 +80,8 @@ async function main() {
       // Bare poppler on the same file: the baseline, best of three.
       const bare = Math.min(...[0, 1, 2].map(() => time(() => spawnSync("pdftotext", ["-enc", "UTF-8", file, "/dev/null"]))));
 
-      const revisionId = randomUUID();
-      const key = storageKeys.revisionFile(revisionId);
-      await getStore().put(key, Readable.from(Buffer.from(bytes)));
-      const [manual] = await db
-        .insert(manuals)
-        .values({ title: `Bench ${pages} pages ${revisionId.slice(0, 8)}`, documentType: "handbook" })
-        .returning({ id: manuals.id });
-      await db.insert(revisions).values({
-        id: revisionId,
-        manualId: manual!.id,
-        label: "Bench",
-        revisionDate: "2026-01-01",
-        fileKey: key,
-        sizeBytes: bytes.length,
-        sha256: createHash("sha256").update(bytes).digest("hex"),
-      });
-      const start = process.hrtime.bigint();
-      await queueIngest({ revisionId });
-      for (;;) {
-        const [row] = await db.select({ status: revisions.status, error: revisions.error }).from(revisions).where(eq(revisions.id, revisionId));
-        if (row?.status === "ready") break;
-        if (row?.status === "failed") throw new Error(`bench ingest failed: ${row.error}`);
-        await new Promise((r) => setTimeout(r, 50));
-      }
-      const seconds = Number(process.hrtime.bigint() - start) / 1e9;
+      const { revisionId } = await storeManual(`Bench ${pages} pages`, bytes);
+      const seconds = await ingestAndWait(revisionId);
       const workerPeak = peakRssMb(worker.pid!);
       const pdfjs = await pdfjsExtract(file, pages);
 

@@ -2,17 +2,14 @@
 // image data and a line of text), ingested through the real worker; then Chromium opens page 700
 // in the reader and the run prints the bytes of the PDF it transferred (goal ≤ 5 % of the file)
 // and the time until that page is painted (goal ≤ 1.5 s on loopback). Prints, asserts nothing.
-import { createHash, randomBytes, randomUUID } from "node:crypto";
-import { Readable } from "node:stream";
-import { eq, sql } from "drizzle-orm";
+import { randomBytes, randomUUID } from "node:crypto";
+import { sql } from "drizzle-orm";
 import { PDFDocument, StandardFonts, concatTransformationMatrix, drawObject, popGraphicsState, pushGraphicsState } from "pdf-lib";
 import { chromium } from "playwright-core";
 import { closeDb, getDb } from "../db";
-import { manuals, revisions } from "../db/schema";
 import { hashPassword } from "../lib/auth/password";
-import { queueIngest } from "../lib/ingest/queue";
 import { getQueue } from "../lib/jobs";
-import { getStore, storageKeys } from "../lib/storage";
+import { ingestAndWait, storeManual } from "./bench-support";
 
 const baseUrl = process.env.HL_BASE_URL!;
 const pages = 900;
@@ -42,26 +39,8 @@ async function makeLargePdf(): Promise<Uint8Array> {
 async function main() {
   const db = getDb();
   const bytes = await makeLargePdf();
-  const revisionId = randomUUID();
-  const key = storageKeys.revisionFile(revisionId);
-  await getStore().put(key, Readable.from(Buffer.from(bytes)));
-  const [manual] = await db.insert(manuals).values({ title: `Bench reader ${revisionId.slice(0, 8)}`, documentType: "handbook" }).returning({ id: manuals.id });
-  await db.insert(revisions).values({
-    id: revisionId,
-    manualId: manual!.id,
-    label: "Bench",
-    revisionDate: "2026-01-01",
-    fileKey: key,
-    sizeBytes: bytes.length,
-    sha256: createHash("sha256").update(bytes).digest("hex"),
-  });
-  await queueIngest({ revisionId });
-  for (;;) {
-    const [row] = await db.select({ status: revisions.status, error: revisions.error }).from(revisions).where(eq(revisions.id, revisionId));
-    if (row?.status === "ready") break;
-    if (row?.status === "failed") throw new Error(`ingest failed: ${row.error}`);
-    await new Promise((r) => setTimeout(r, 250));
-  }
+  const { manualId, revisionId } = await storeManual("Bench reader", bytes);
+  await ingestAndWait(revisionId);
 
   // The reader's packed copy and the thumbnails come after "ready"; wait for both so the
   // measurement is of the reader alone, not of a busy worker beside it.
@@ -97,7 +76,7 @@ async function main() {
       void response.body().then((body) => (transferred += body.length)).catch(() => undefined);
     });
     const started = Date.now();
-    await page.goto(`${baseUrl}/library/${manual!.id}/${revisionId}/${target}`);
+    await page.goto(`${baseUrl}/library/${manualId}/${revisionId}/${target}`);
     await page.locator(`[data-page="${target}"] canvas`).waitFor({ state: "visible", timeout: 60_000 });
     // Painted: the canvas has pixels that are not all white.
     await page.waitForFunction((n) => {

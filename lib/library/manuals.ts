@@ -143,6 +143,15 @@ const revisionColumns = {
   createdAt: revisions.createdAt,
 };
 
+const manualColumns = {
+  id: manuals.id,
+  title: manuals.title,
+  documentType: manuals.documentType,
+  applicability: manuals.applicability,
+  ataChapters: manuals.ataChapters,
+  currentRevisionId: manuals.currentRevisionId,
+};
+
 export async function listManuals() {
   const db = getDb();
   const current = db
@@ -151,12 +160,7 @@ export async function listManuals() {
     .as("current");
   const rows = await db
     .select({
-      id: manuals.id,
-      title: manuals.title,
-      documentType: manuals.documentType,
-      applicability: manuals.applicability,
-      ataChapters: manuals.ataChapters,
-      currentRevisionId: manuals.currentRevisionId,
+      ...manualColumns,
       currentLabel: current.label,
       currentDate: current.revisionDate,
       pageCount: current.pageCount,
@@ -173,12 +177,7 @@ export async function getManual({ id }: { id: string }) {
   const db = getDb();
   const [manual] = await db
     .select({
-      id: manuals.id,
-      title: manuals.title,
-      documentType: manuals.documentType,
-      applicability: manuals.applicability,
-      ataChapters: manuals.ataChapters,
-      currentRevisionId: manuals.currentRevisionId,
+      ...manualColumns,
       createdAt: manuals.createdAt,
     })
     .from(manuals)

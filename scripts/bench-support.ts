@@ -1,0 +1,39 @@
+// Shared by the benchmarks: a manual with one revision, stored and queued as an upload would be,
+// and waiting until the worker has read it.
+import { createHash, randomUUID } from "node:crypto";
+import { Readable } from "node:stream";
+import { eq } from "drizzle-orm";
+import { getDb } from "../db";
+import { manuals, revisions } from "../db/schema";
+import { queueIngest } from "../lib/ingest/queue";
+import { getStore, storageKeys } from "../lib/storage";
+
+export async function storeManual(title: string, bytes: Uint8Array): Promise<{ manualId: string; revisionId: string }> {
+  const db = getDb();
+  const revisionId = randomUUID();
+  const key = storageKeys.revisionFile(revisionId);
+  await getStore().put(key, Readable.from(Buffer.from(bytes)));
+  const [manual] = await db.insert(manuals).values({ title: `${title} ${revisionId.slice(0, 8)}`, documentType: "handbook" }).returning({ id: manuals.id });
+  await db.insert(revisions).values({
+    id: revisionId,
+    manualId: manual!.id,
+    label: "Bench",
+    revisionDate: "2026-01-01",
+    fileKey: key,
+    sizeBytes: bytes.length,
+    sha256: createHash("sha256").update(bytes).digest("hex"),
+  });
+  return { manualId: manual!.id, revisionId };
+}
+
+/** Queues the ingest and resolves once the revision is ready; seconds taken, queue to ready. */
+export async function ingestAndWait(revisionId: string): Promise<number> {
+  const start = process.hrtime.bigint();
+  await queueIngest({ revisionId });
+  for (;;) {
+    const [row] = await getDb().select({ status: revisions.status, error: revisions.error }).from(revisions).where(eq(revisions.id, revisionId));
+    if (row?.status === "ready") return Number(process.hrtime.bigint() - start) / 1e9;
+    if (row?.status === "failed") throw new Error(`bench ingest failed: ${row.error}`);
+    await new Promise((r) => setTimeout(r, 50));
+  }
+}
