@@ -185,6 +185,91 @@ export const searchWords = pgTable("search_words", {
   ...timestamps,
 });
 
+export const curriculumSubjects = pgTable(
+  "curriculum_subjects",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    name: text("name").notNull(),
+    ...timestamps,
+  },
+  (t) => [uniqueIndex("curriculum_subjects_name_key").on(t.name)],
+);
+
+export const cardVersionStatus = pgEnum("card_version_status", ["draft", "published"]);
+
+/** A task card: what stays the same across its versions. The content lives in its versions. */
+export const taskCards = pgTable("task_cards", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  // The instructor who owns the card: told when a new revision touches the pages it cites.
+  ownerId: uuid("owner_id").references(() => users.id, { onDelete: "set null" }),
+  duplicatedFrom: uuid("duplicated_from").references((): AnyPgColumn => taskCards.id, { onDelete: "set null" }),
+  archivedAt: timestamp("archived_at", { withTimezone: true }),
+  ...timestamps,
+});
+
+/**
+ * One version of a card. A draft changes freely; a published version is frozen: a trigger in
+ * db/migrations/0004_task_cards.sql refuses any update or delete of it and of its citations.
+ */
+export const taskCardVersions = pgTable(
+  "task_card_versions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    cardId: uuid("card_id").notNull().references(() => taskCards.id, { onDelete: "cascade" }),
+    number: integer("number").notNull(),
+    status: cardVersionStatus("status").notNull().default("draft"),
+    title: text("title").notNull(),
+    applicability: text("applicability").array().notNull().default(sql`'{}'::text[]`),
+    ataChapter: text("ata_chapter").notNull().default(""),
+    subjectId: uuid("subject_id").references(() => curriculumSubjects.id, { onDelete: "restrict" }),
+    estimatedMinutes: integer("estimated_minutes"),
+    tools: text("tools").array().notNull().default(sql`'{}'::text[]`),
+    consumables: text("consumables").array().notNull().default(sql`'{}'::text[]`),
+    protectiveEquipment: text("protective_equipment").array().notNull().default(sql`'{}'::text[]`),
+    // The ordered steps, as validated by lib/validation/cards.ts (stepSchema).
+    steps: jsonb("steps").notNull().default(sql`'[]'::jsonb`),
+    // Bumped on every save of a draft: a save made from an older copy is refused (409), so two
+    // editors never overwrite each other without knowing.
+    editCount: integer("edit_count").notNull().default(0),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    publishedAt: timestamp("published_at", { withTimezone: true }),
+    publishedBy: uuid("published_by").references(() => users.id, { onDelete: "set null" }),
+    ...timestamps,
+  },
+  (t) => [
+    uniqueIndex("task_card_versions_card_number_key").on(t.cardId, t.number),
+    // At most one draft per card.
+    uniqueIndex("task_card_versions_one_draft_key").on(t.cardId).where(sql`status = 'draft'`),
+    index("task_card_versions_subject_idx").on(t.subjectId),
+  ],
+);
+
+/**
+ * The manual pages a version's steps cite, one row each, kept in step with the steps JSON: the
+ * revision-impact check asks "which published cards cite page N of revision R" with an index.
+ */
+export const cardCitations = pgTable(
+  "card_citations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    versionId: uuid("version_id").notNull().references(() => taskCardVersions.id, { onDelete: "cascade" }),
+    stepId: uuid("step_id").notNull(),
+    stepNumber: integer("step_number").notNull(),
+    manualId: uuid("manual_id").notNull().references(() => manuals.id, { onDelete: "restrict" }),
+    revisionId: uuid("revision_id").notNull().references(() => revisions.id, { onDelete: "restrict" }),
+    pageNumber: integer("page_number").notNull(),
+    quote: text("quote").notNull().default(""),
+    ...timestamps,
+  },
+  (t) => [index("card_citations_revision_page_idx").on(t.revisionId, t.pageNumber), index("card_citations_version_idx").on(t.versionId)],
+);
+
+export type CurriculumSubject = typeof curriculumSubjects.$inferSelect;
+export type TaskCard = typeof taskCards.$inferSelect;
+export type TaskCardVersion = typeof taskCardVersions.$inferSelect;
+export type NewTaskCardVersion = typeof taskCardVersions.$inferInsert;
+export type CardCitation = typeof cardCitations.$inferSelect;
+
 export type Manual = typeof manuals.$inferSelect;
 export type Revision = typeof revisions.$inferSelect;
 export type Page = typeof pages.$inferSelect;

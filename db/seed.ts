@@ -5,6 +5,7 @@ import { hashPassword } from "../lib/auth/password";
 import type { Role } from "../lib/auth/permissions";
 import { getEnv } from "../lib/env";
 import { getQueue } from "../lib/jobs";
+import { seedCards } from "./demo/seed-cards";
 import { seedLibrary } from "./demo/seed-library";
 import { closeDb, getDb } from "./index";
 import { classes, classMembers, users } from "./schema";
@@ -68,6 +69,8 @@ async function main() {
   console.log(missing.length ? `seeded ${missing.length} demo accounts` : "demo accounts already present");
   const revisionsAdded = await seedLibrary(db);
   console.log(revisionsAdded ? `queued ${revisionsAdded} demo manual revisions for ingest` : "demo manuals already present");
+  const cardsAdded = await seedCards(db);
+  console.log(cardsAdded ? `seeded ${cardsAdded} demo task cards` : "demo task cards already present");
   await (await getQueue()).stop({ graceful: false, wait: true });
   await closeDb();
 }

@@ -4,12 +4,9 @@ import { getDb } from "@/db";
 import { classes, classMembers, users } from "@/db/schema";
 import { recordAudit } from "./audit";
 import { can, type Actor } from "./auth/permissions";
-import { AppError } from "./errors";
+import { AppError, databaseErrorCode } from "./errors";
 
-function isUniqueViolation(error: unknown): boolean {
-  const cause = (error as { cause?: { code?: string }; code?: string }) ?? {};
-  return cause.code === "23505" || cause.cause?.code === "23505";
-}
+const isUniqueViolation = (error: unknown) => databaseErrorCode(error) === "23505";
 
 const nameTaken = (name: string) =>
   new AppError("conflict", `A class named "${name}" already exists.`, { fields: { name: "Already in use." } });

@@ -69,6 +69,13 @@ export class AppError extends Error {
   }
 }
 
+/** The SQLSTATE of a PostgreSQL error, whether drizzle wrapped it or not ("23505" unique violation). */
+export function databaseErrorCode(error: unknown): string | undefined {
+  const e = (error ?? {}) as { code?: unknown; cause?: { code?: unknown } };
+  if (typeof e.code === "string") return e.code;
+  return typeof e.cause?.code === "string" ? e.cause.code : undefined;
+}
+
 /** Any thrown value as an AppError; unknown causes are logged and answered with a generic message. */
 export function toAppError(error: unknown): AppError {
   if (error instanceof AppError) return error;

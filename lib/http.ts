@@ -36,18 +36,23 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.out
   return result.data;
 }
 
-const maxJsonBytes = 64 * 1024;
+const defaultMaxJsonBytes = 64 * 1024;
 
-/** Reads a JSON body (at most 64 KiB) and validates it. */
-export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.output<S>> {
+/** Reads a JSON body (at most 64 KiB unless the route allows more) and validates it. */
+export async function readJson<S extends z.ZodType>(
+  request: Request,
+  schema: S,
+  { maxBytes = defaultMaxJsonBytes }: { maxBytes?: number } = {},
+): Promise<z.output<S>> {
   const type = request.headers.get("content-type") ?? "";
   if (!type.toLowerCase().startsWith("application/json")) {
     throw new AppError("unsupported_media_type", "Send the body as application/json.");
   }
   const declared = Number(request.headers.get("content-length") ?? 0);
-  if (declared > maxJsonBytes) throw new AppError("payload_too_large", "The request body is larger than 64 KiB.");
+  const tooLarge = () => new AppError("payload_too_large", `The request body is larger than ${Math.round(maxBytes / 1024)} KiB.`);
+  if (declared > maxBytes) throw tooLarge();
   const text = await request.text();
-  if (Buffer.byteLength(text) > maxJsonBytes) throw new AppError("payload_too_large", "The request body is larger than 64 KiB.");
+  if (Buffer.byteLength(text) > maxBytes) throw tooLarge();
   let value: unknown;
   try {
     value = JSON.parse(text);

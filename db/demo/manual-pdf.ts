@@ -188,3 +188,17 @@ export function expectedPageCount(manual: DemoManual): number {
   const sections = manual.chapters.reduce((n, c) => n + c.sections.length, 0);
   return sections * pagesPerSection + (manual.scannedPage ? 1 : 0);
 }
+
+const sectionParts = ["description", "procedure", "limits", "troubleshooting", "record"] as const;
+
+/** The page number of one part of a section ("74-10-00", "procedure"), as renderManualPdf lays it out. */
+export function sectionPage(manual: DemoManual, code: string, part: (typeof sectionParts)[number] = "procedure"): number {
+  let page = 1;
+  for (const chapter of manual.chapters) {
+    for (const section of chapter.sections) {
+      if (section.code === code) return page + sectionParts.indexOf(part);
+      page += pagesPerSection + (manual.scannedPage?.afterSection === section.code ? 1 : 0);
+    }
+  }
+  throw new Error(`No section ${code} in ${manual.title}`);
+}

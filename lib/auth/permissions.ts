@@ -25,6 +25,12 @@ const rules = {
   "library:view": ["student", "instructor", "librarian", "admin"],
   /** Upload manuals and revisions, retry a failed ingest, see revisions that are not ready. */
   "library:manage": ["librarian", "admin"],
+  /** Read task cards: students see published versions, authors drafts as well. */
+  "cards:view": ["student", "instructor", "librarian", "admin"],
+  /** Write, publish, duplicate and archive task cards. */
+  "cards:author": ["instructor", "admin"],
+  /** Keep the list of curriculum subjects cards are filed under. */
+  "subjects:manage": ["admin"],
   /** The link to the local outbox (the page itself is open while the fake SMTP server runs). */
   "outbox:view": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
@@ -64,6 +70,8 @@ const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boo
   { item: { href: "/", label: "Home" } },
   { item: { href: "/search", label: "Search" }, permission: "library:view" },
   { item: { href: "/library", label: "Library" }, permission: "library:view" },
+  { item: { href: "/cards", label: "Task cards" }, permission: "cards:view" },
+  { item: { href: "/calculators", label: "Calculators" } },
   { item: { href: "/classes", label: "Classes" }, permission: "classes:view" },
   { item: { href: "/accounts", label: "Accounts" }, permission: "accounts:manage" },
   { item: { href: "/audit", label: "Audit log" }, permission: "audit:view" },

@@ -14,6 +14,9 @@ const expected: Record<string, Role[]> = {
   "outbox:view": ["admin"],
   "library:view": ["student", "instructor", "librarian", "admin"],
   "library:manage": ["librarian", "admin"],
+  "cards:view": ["student", "instructor", "librarian", "admin"],
+  "cards:author": ["instructor", "admin"],
+  "subjects:manage": ["admin"],
 };
 
 describe("permissions", () => {
@@ -52,10 +55,10 @@ describe("permissions", () => {
 
   it("gives each role its own navigation", () => {
     const labels = (role: Role, outbox = false) => navigationFor(actor(role), { outbox }).map((n) => n.label);
-    expect(labels("student")).toEqual(["Home", "Search", "Library"]);
-    expect(labels("librarian")).toEqual(["Home", "Search", "Library"]);
-    expect(labels("instructor")).toEqual(["Home", "Search", "Library", "Classes"]);
-    expect(labels("admin")).toEqual(["Home", "Search", "Library", "Classes", "Accounts", "Audit log"]);
+    expect(labels("student")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators"]);
+    expect(labels("librarian")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators"]);
+    expect(labels("instructor")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators", "Classes"]);
+    expect(labels("admin")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators", "Classes", "Accounts", "Audit log"]);
     expect(labels("admin", true)).toContain("Outbox");
     expect(labels("student", true)).not.toContain("Outbox");
   });

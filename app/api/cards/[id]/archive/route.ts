@@ -1,0 +1,13 @@
+import { requireApiUser } from "@/lib/auth/session";
+import { setArchived } from "@/lib/cards";
+import { idParam, readJson, route } from "@/lib/http";
+import { archiveSchema } from "@/lib/validation/cards";
+
+type Context = { params: Promise<{ id: string }> };
+
+export const POST = route<Context>(async (request, { params }) => {
+  const actor = await requireApiUser("cards:author");
+  const cardId = idParam((await params).id, "That task card");
+  const { archived } = await readJson(request, archiveSchema);
+  return Response.json({ card: await setArchived({ actor, cardId, archived }) });
+});

@@ -1,0 +1,15 @@
+import { requireApiUser } from "@/lib/auth/session";
+import { citePage } from "@/lib/cards";
+import { idParam, readJson, route } from "@/lib/http";
+import { citePageSchema } from "@/lib/validation/cards";
+
+type Context = { params: Promise<{ id: string }> };
+
+/** "Cite while reading": the reader adds the page it shows to a step of the card's draft. */
+export const POST = route<Context>(async (request, { params }) => {
+  const actor = await requireApiUser("cards:author");
+  const cardId = idParam((await params).id, "That task card");
+  const input = await readJson(request, citePageSchema);
+  const result = await citePage({ actor, cardId, ...input });
+  return Response.json({ citation: result }, { status: result.added ? 201 : 200 });
+});

@@ -1,0 +1,11 @@
+import { requireApiUser } from "@/lib/auth/session";
+import { publishDraft } from "@/lib/cards";
+import { idParam, route } from "@/lib/http";
+
+type Context = { params: Promise<{ id: string }> };
+
+export const POST = route<Context>(async (_request, { params }) => {
+  const actor = await requireApiUser("cards:author");
+  const cardId = idParam((await params).id, "That task card");
+  return Response.json({ version: await publishDraft({ actor, cardId }) });
+});

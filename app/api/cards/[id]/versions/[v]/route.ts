@@ -1,0 +1,20 @@
+import { requireApiUser } from "@/lib/auth/session";
+import { cardBodyLimit, getCardVersion, updateVersion, versionParams } from "@/lib/cards";
+import { readJson, route } from "@/lib/http";
+import { saveDraftSchema } from "@/lib/validation/cards";
+
+type Context = { params: Promise<{ id: string; v: string }> };
+
+export const GET = route<Context>(async (_request, { params }) => {
+  const actor = await requireApiUser("cards:view");
+  const { cardId, number } = await versionParams(params);
+  return Response.json({ version: await getCardVersion({ actor, cardId, number }) });
+});
+
+/** Changes a draft version; a published one answers 409 and stays as it was. */
+export const PATCH = route<Context>(async (request, { params }) => {
+  const actor = await requireApiUser("cards:author");
+  const { cardId, number } = await versionParams(params);
+  const { content, editCount } = await readJson(request, saveDraftSchema, { maxBytes: cardBodyLimit });
+  return Response.json({ version: await updateVersion({ actor, cardId, number, content, editCount }) });
+});

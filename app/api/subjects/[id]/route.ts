@@ -1,0 +1,13 @@
+import { requireApiUser } from "@/lib/auth/session";
+import { renameSubject } from "@/lib/cards";
+import { idParam, readJson, route } from "@/lib/http";
+import { subjectSchema } from "@/lib/validation/cards";
+
+type Context = { params: Promise<{ id: string }> };
+
+export const PATCH = route<Context>(async (request, { params }) => {
+  const actor = await requireApiUser("subjects:manage");
+  const id = idParam((await params).id, "That subject");
+  const { name } = await readJson(request, subjectSchema);
+  return Response.json({ subject: await renameSubject({ actor, id, name }) });
+});

@@ -1,0 +1,313 @@
+// Demo curriculum subjects and published task cards built on the invented manuals. Invented content
+// only. The cards are written straight to the tables: at seed time the manuals are still queued for
+// ingest, so the library's "cite only ready revisions" check of lib/cards.ts cannot pass yet.
+import { randomUUID } from "node:crypto";
+import { and, eq, inArray } from "drizzle-orm";
+import type { Db } from "@/db";
+import { cardCitations, curriculumSubjects, manuals, revisions, taskCards, taskCardVersions, users } from "@/db/schema";
+import { parseWith } from "@/lib/http";
+import { cardContentSchema, type CardContentInput } from "@/lib/validation/cards";
+import { demoManuals, demoRevisions } from "./manual-content";
+import { sectionPage } from "./manual-pdf";
+
+export const demoSubjects = [
+  "Sheet metal structures",
+  "Nondestructive testing",
+  "Ignition systems",
+  "Engine removal and installation",
+  "Flight controls and rigging",
+  "Landing gear and brakes",
+  "Propellers",
+  "Servicing and ground handling",
+];
+
+const manualByPrefix = (prefix: string) => {
+  const m = demoManuals.find((d) => d.title.startsWith(prefix));
+  if (!m) throw new Error(`no demo manual ${prefix}`);
+  return m;
+};
+
+type Ref = { manual: string; label: string; code: string; part?: Parameters<typeof sectionPage>[2]; quote?: string };
+interface DemoStep {
+  text: string;
+  notices?: { kind: "warning" | "caution" | "note"; text: string }[];
+  refs?: Ref[];
+  measurement?: { label: string; unit: string; min?: number; max?: number; nominal?: number; tolerance?: number };
+  calculator?: "rivets" | "bend" | "torque" | "penetrant" | "coil-shot" | "units";
+  inspectionPoint?: boolean;
+  timerMinutes?: number;
+}
+interface DemoCard {
+  title: string;
+  owner: string;
+  subject: string;
+  ataChapter: string;
+  applicability: string[];
+  estimatedMinutes: number;
+  tools: string[];
+  consumables: string[];
+  protectiveEquipment: string[];
+  steps: DemoStep[];
+}
+
+const sheetMetal = "Fernhollow Sheet-Metal";
+const penetrant = "Penetrant Inspection";
+const trainer = "HT-20";
+const turbine = "TF-400";
+const rev1 = demoRevisions.others.label;
+const rev3 = demoRevisions.trainerFirst.label;
+
+export const demoCards: DemoCard[] = [
+  {
+    title: "Riveted splice patch on a practice skin panel",
+    owner: "instructor@hangarleaf.test",
+    subject: "Sheet metal structures",
+    ataChapter: "51",
+    applicability: ["Shop practice panel"],
+    estimatedMinutes: 240,
+    tools: ["Micrometer, 0-1 in", "Rivet gun and bucking bar", "No. 30 drill and reamer", "Cleco fasteners", "Rivet gauge", "Deburring tool"],
+    consumables: ["MS20470AD4 rivets", "2024-T3 sheet, 0.032 in", "Layout fluid"],
+    protectiveEquipment: ["Safety glasses", "Hearing protection"],
+    steps: [
+      {
+        text: "Measure the thickness of the **thickest sheet** of the joint with the micrometer. Record the reading.",
+        refs: [{ manual: sheetMetal, label: rev1, code: "51-10-00" }],
+        measurement: { label: "Thickest sheet", unit: "in", nominal: 0.032, tolerance: 0.002 },
+      },
+      {
+        text: "Choose the rivet diameter, length and part number with the rivet calculator, then have the choice checked against the repair drawing.",
+        refs: [{ manual: sheetMetal, label: rev1, code: "51-10-00", part: "limits", quote: "Minimum edge distance" }],
+        calculator: "rivets",
+      },
+      {
+        text: "Lay out two rows of rivets on the doubler. Measure the edge distance of the first rivet.",
+        measurement: { label: "Edge distance, first rivet", unit: "in", min: 0.25, max: 0.375 },
+        refs: [{ manual: sheetMetal, label: rev1, code: "51-50-00" }],
+      },
+      {
+        text: "Drill pilot holes, ream to size and deburr both sides.",
+        notices: [{ kind: "caution", text: "Hold the drill square to the work. An oval hole weakens the joint." }],
+        refs: [{ manual: sheetMetal, label: rev1, code: "51-20-00" }],
+      },
+      {
+        text: "Clamp with clecos every fourth hole and drive the rivets in short bursts.",
+        notices: [{ kind: "warning", text: "Wear hearing and eye protection when you use a rivet gun. Keep fingers clear of the set." }],
+        refs: [{ manual: sheetMetal, label: rev1, code: "51-30-00" }],
+      },
+      {
+        text: "Check each shop head with the rivet gauge and mark any rivet to be drilled out.",
+        measurement: { label: "Shop head diameter", unit: "in", min: 0.18, max: 0.2 },
+        refs: [{ manual: sheetMetal, label: rev1, code: "51-30-00", part: "limits" }],
+        inspectionPoint: true,
+      },
+    ],
+  },
+  {
+    title: "Fluorescent penetrant inspection of a landing gear fitting",
+    owner: "instructor@hangarleaf.test",
+    subject: "Nondestructive testing",
+    ataChapter: "51",
+    applicability: ["HT-20"],
+    estimatedMinutes: 90,
+    tools: ["UV-A lamp, 365 nm", "UV-A meter", "Thermometer", "Lint-free cloths"],
+    consumables: ["Fluorescent penetrant", "Solvent remover", "Nonaqueous developer"],
+    protectiveEquipment: ["Nitrile gloves", "UV-blocking safety glasses", "Respirator where the procedure asks for it"],
+    steps: [
+      {
+        text: "Remove paint from the area, clean with solvent and let the part dry. Measure the part temperature.",
+        notices: [{ kind: "warning", text: "Solvents and penetrants are flammable and harm skin and eyes. Work in the ventilated booth with gloves and glasses on." }],
+        refs: [{ manual: penetrant, label: rev1, code: "51-61-01" }],
+        measurement: { label: "Part temperature", unit: "°F", min: 40, max: 125 },
+      },
+      {
+        text: "Apply penetrant to cover the area and start the dwell timer. Keep the surface wet. Use the calculator if the part is colder than 60 °F.",
+        refs: [{ manual: penetrant, label: rev1, code: "51-61-02" }],
+        calculator: "penetrant",
+        timerMinutes: 10,
+        notices: [{ kind: "note", text: "Dwell times are those of the school procedure; the penetrant maker's data comes first." }],
+      },
+      {
+        text: "Wipe off the excess penetrant, then wipe with a cloth dampened with remover. Apply a thin coat of developer and start the development timer.",
+        notices: [{ kind: "caution", text: "Do not spray remover straight onto the part: it washes penetrant out of the flaws." }],
+        refs: [{ manual: penetrant, label: rev1, code: "51-61-03" }],
+        timerMinutes: 10,
+      },
+      {
+        text: "In the dark booth, check the lamp with the meter at the part surface, then inspect and mark every indication.",
+        notices: [{ kind: "warning", text: "UV-A light burns eyes and skin. Never look into the lamp; wear UV-blocking glasses." }],
+        refs: [{ manual: penetrant, label: rev1, code: "51-61-04" }],
+        measurement: { label: "UV-A intensity at the surface", unit: "µW/cm²", min: 1000 },
+        inspectionPoint: true,
+      },
+      {
+        text: "Fill in the process record and hand it to the instructor.",
+        refs: [{ manual: penetrant, label: rev1, code: "05-61-00" }],
+      },
+    ],
+  },
+  {
+    title: "Magneto-to-engine timing check",
+    owner: "instructor2@hangarleaf.test",
+    subject: "Ignition systems",
+    ataChapter: "74",
+    applicability: ["HT-20"],
+    estimatedMinutes: 60,
+    tools: ["Timing light", "Top dead centre indicator", "Timing disc and pointer"],
+    consumables: [],
+    protectiveEquipment: ["Safety glasses"],
+    steps: [
+      {
+        text: "Make sure the magnetos are grounded and the ignition switch is off. Remove one spark plug from each cylinder.",
+        notices: [
+          { kind: "warning", text: "Treat every propeller as live. A magneto with a broken ground lead fires when the propeller turns. Stand clear of the arc." },
+        ],
+        refs: [{ manual: trainer, label: rev3, code: "74-10-00" }],
+      },
+      {
+        text: "Turn the crankshaft to the number one compression stroke, then to the firing position on the timing marks.",
+        refs: [{ manual: trainer, label: rev3, code: "74-10-00" }],
+      },
+      {
+        text: "With the timing light on, turn the crankshaft back and forward and read where the points open.",
+        refs: [{ manual: trainer, label: rev3, code: "74-10-00", part: "limits", quote: "Ignition timing" }],
+        measurement: { label: "Ignition timing, left magneto", unit: "deg", nominal: 25, tolerance: 1 },
+        inspectionPoint: true,
+      },
+    ],
+  },
+  {
+    title: "Aileron control cable tension check",
+    owner: "instructor@hangarleaf.test",
+    subject: "Flight controls and rigging",
+    ataChapter: "27",
+    applicability: ["HT-20"],
+    estimatedMinutes: 45,
+    tools: ["Cable tensiometer with riser chart", "Rigging pin", "Thermometer"],
+    consumables: ["Turnbuckle safety clips"],
+    protectiveEquipment: ["Safety glasses"],
+    steps: [
+      {
+        text: "Put the control wheel in neutral and install the rigging pin.",
+        refs: [{ manual: trainer, label: rev3, code: "27-10-00" }],
+      },
+      {
+        text: "Measure the cable tension at the marked station. Correct the reading for the hangar temperature with the chart.",
+        refs: [{ manual: trainer, label: rev3, code: "27-10-00", part: "limits", quote: "Aileron cable tension" }],
+        measurement: { label: "Aileron cable tension", unit: "lb", min: 30, max: 40 },
+      },
+      {
+        text: "Adjust the turnbuckles equally, safety them with new clips and remove the rigging pin.",
+        notices: [{ kind: "caution", text: "Never reuse a turnbuckle safety clip." }],
+        refs: [{ manual: trainer, label: rev3, code: "27-10-00" }],
+        inspectionPoint: true,
+      },
+    ],
+  },
+  {
+    title: "Turbine engine removal and installation on the stand",
+    owner: "instructor2@hangarleaf.test",
+    subject: "Engine removal and installation",
+    ataChapter: "71",
+    applicability: ["TF-400"],
+    estimatedMinutes: 480,
+    tools: ["Engine hoist and sling", "Transport stand", "Torque wrench, 20-100 ft-lb", "Line caps and plugs"],
+    consumables: ["Approved fuel drain container", "Tags"],
+    protectiveEquipment: ["Safety shoes", "Gloves", "Safety glasses"],
+    steps: [
+      {
+        text: "Disconnect the battery, close the fuel shutoff valve and drain the lines. Tag and cap every line.",
+        notices: [{ kind: "warning", text: "Fuel vapour ignites. Drain into an approved container and keep extinguishers at the work area." }],
+        refs: [{ manual: turbine, label: rev1, code: "71-00-10" }],
+      },
+      {
+        text: "Attach the sling, take up the weight and remove the mount bolts in the order shown. Lower the engine onto the stand.",
+        notices: [
+          { kind: "warning", text: "Never stand under a raised engine." },
+          { kind: "caution", text: "Take up the weight before the last bolt comes out, or the mounts bend." },
+        ],
+        refs: [{ manual: turbine, label: rev1, code: "71-00-20" }],
+        inspectionPoint: true,
+      },
+      {
+        text: "Hoist the engine back onto the mounts and torque the bolts in sequence. Use the torque calculator if an adapter is on the wrench.",
+        refs: [{ manual: turbine, label: rev1, code: "71-00-30", part: "limits", quote: "Mount bolt torque" }],
+        measurement: { label: "Mount bolt torque", unit: "ft-lb", min: 40, max: 45 },
+        calculator: "torque",
+      },
+      {
+        text: "Connect the lines and connectors, removing each cap as you go, then do the leak check with the instructor.",
+        refs: [{ manual: turbine, label: rev1, code: "71-00-30" }],
+        inspectionPoint: true,
+      },
+    ],
+  },
+];
+
+export async function seedCards(db: Db): Promise<number> {
+  await db.insert(curriculumSubjects).values(demoSubjects.map((name) => ({ name }))).onConflictDoNothing();
+  const subjects = new Map((await db.select().from(curriculumSubjects)).map((s) => [s.name, s.id]));
+  const people = new Map(
+    (await db.select({ id: users.id, email: users.email }).from(users).where(inArray(users.email, [...new Set(demoCards.map((c) => c.owner))]))).map((u) => [u.email, u.id]),
+  );
+  const revisionRows = await db
+    .select({ id: revisions.id, manualId: revisions.manualId, label: revisions.label, title: manuals.title })
+    .from(revisions)
+    .innerJoin(manuals, eq(manuals.id, revisions.manualId));
+  const revisionOf = (ref: Ref) => {
+    const row = revisionRows.find((r) => r.title.startsWith(ref.manual) && r.label === ref.label);
+    if (!row) throw new Error(`demo revision ${ref.manual} ${ref.label} is missing`);
+    return row;
+  };
+
+  let added = 0;
+  for (const card of demoCards) {
+    const [exists] = await db.select({ id: taskCardVersions.id }).from(taskCardVersions).where(and(eq(taskCardVersions.title, card.title), eq(taskCardVersions.number, 1)));
+    if (exists) continue;
+    const steps = card.steps.map((s) => ({
+      id: randomUUID(),
+      text: s.text,
+      notices: s.notices ?? [],
+      references: (s.refs ?? []).map((r) => ({ revisionId: revisionOf(r).id, page: sectionPage(manualByPrefix(r.manual), r.code, r.part), quote: r.quote ?? "" })),
+      measurement: s.measurement ?? null,
+      calculator: s.calculator ?? null,
+      inspectionPoint: s.inspectionPoint ?? false,
+      timerMinutes: s.timerMinutes ?? null,
+    }));
+    const input: CardContentInput = {
+      title: card.title,
+      applicability: card.applicability,
+      ataChapter: card.ataChapter,
+      subjectId: subjects.get(card.subject) ?? null,
+      estimatedMinutes: card.estimatedMinutes,
+      tools: card.tools,
+      consumables: card.consumables,
+      protectiveEquipment: card.protectiveEquipment,
+      steps,
+    };
+    const content = parseWith(cardContentSchema, input); // the demo obeys the same rules as the editor
+    const ownerId = people.get(card.owner) ?? null;
+    await db.transaction(async (tx) => {
+      const [row] = await tx.insert(taskCards).values({ ownerId }).returning({ id: taskCards.id });
+      const [version] = await tx
+        .insert(taskCardVersions)
+        .values({ ...content, cardId: row!.id, number: 1, createdBy: ownerId, editCount: 1 })
+        .returning({ id: taskCardVersions.id });
+      const citations = content.steps.flatMap((step, i) =>
+        step.references.map((r) => ({
+          versionId: version!.id,
+          stepId: step.id,
+          stepNumber: i + 1,
+          manualId: revisionRows.find((x) => x.id === r.revisionId)!.manualId,
+          revisionId: r.revisionId,
+          pageNumber: r.page,
+          quote: r.quote,
+        })),
+      );
+      if (citations.length) await tx.insert(cardCitations).values(citations);
+      // Citations go in while the version is a draft: once published, the database freezes both.
+      await tx.update(taskCardVersions).set({ status: "published", publishedAt: new Date(), publishedBy: ownerId }).where(eq(taskCardVersions.id, version!.id));
+    });
+    added++;
+  }
+  return added;
+}
