@@ -19,7 +19,9 @@ export function fieldErrors(error: z.ZodError): FieldErrors {
   const fields: FieldErrors = {};
   for (const issue of error.issues) {
     // The top-level field: what a form shows the message beside ("ataChapters", not "ataChapters.0").
-    const key = issue.path.length ? String(issue.path[0]) : "_";
+    // A body that wraps the form in an envelope ({ content: {...} }) reports the form's own field.
+    const path = issue.path[0] === "content" && issue.path.length > 1 ? issue.path.slice(1) : issue.path;
+    const key = path.length ? String(path[0]) : "_";
     fields[key] ??= issue.message;
   }
   return fields;

@@ -3,10 +3,10 @@
 // or a missing record rather than changing data: the table checks who gets in, not what happens.
 import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
-import { classes, manuals, users } from "@/db/schema";
+import { classes, manuals, taskCardVersions, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/permissions";
 import { call, demo, signIn } from "../support/http";
 
@@ -26,6 +26,7 @@ interface Ids {
   nobody: string;
   manualId: string;
   revisionId: string;
+  cardId: string;
 }
 
 const only = (allowed: Partial<Record<Who, number>>, denied = 403): Record<Who, number> => ({
@@ -79,6 +80,21 @@ export const accessMatrix: Row[] = [
     path: (i) => `/api/revisions/${i.nobody}/pages/1/thumbnail`,
     expect: { ...all(404), anonymous: 401 },
   },
+  { method: "GET", route: "/api/subjects", path: () => "/api/subjects", expect: { ...all(200), anonymous: 401 } },
+  { method: "POST", route: "/api/subjects", path: () => "/api/subjects", json: {}, expect: only({ admin: 422 }) },
+  { method: "PATCH", route: "/api/subjects/[id]", path: (i) => `/api/subjects/${i.nobody}`, json: { name: "Nobody's subject" }, expect: only({ admin: 404 }) },
+  { method: "GET", route: "/api/cards", path: () => "/api/cards", expect: { ...all(200), anonymous: 401 } },
+  { method: "POST", route: "/api/cards", path: () => "/api/cards", json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  { method: "GET", route: "/api/cards/[id]", path: (i) => `/api/cards/${i.cardId}`, expect: { ...all(200), anonymous: 401 } },
+  { method: "PUT", route: "/api/cards/[id]/draft", path: (i) => `/api/cards/${i.cardId}/draft`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  { method: "DELETE", route: "/api/cards/[id]/draft", path: (i) => `/api/cards/${i.nobody}/draft`, expect: only({ instructor: 404, admin: 404 }) },
+  { method: "POST", route: "/api/cards/[id]/draft/citations", path: (i) => `/api/cards/${i.cardId}/draft/citations`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  { method: "POST", route: "/api/cards/[id]/publish", path: (i) => `/api/cards/${i.nobody}/publish`, expect: only({ instructor: 404, admin: 404 }) },
+  { method: "POST", route: "/api/cards/[id]/duplicate", path: (i) => `/api/cards/${i.nobody}/duplicate`, expect: only({ instructor: 404, admin: 404 }) },
+  { method: "POST", route: "/api/cards/[id]/archive", path: (i) => `/api/cards/${i.cardId}/archive`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  { method: "GET", route: "/api/cards/[id]/versions/[v]", path: (i) => `/api/cards/${i.cardId}/versions/1`, expect: { ...all(200), anonymous: 401 } },
+  { method: "PATCH", route: "/api/cards/[id]/versions/[v]", path: (i) => `/api/cards/${i.cardId}/versions/1`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  { method: "GET", route: "/api/cards/[id]/versions/[v]/pdf", path: (i) => `/api/cards/${i.cardId}/versions/1/pdf`, expect: { ...all(200), anonymous: 401 } },
 ];
 
 const cookies: Partial<Record<Who, string>> = {};
@@ -94,7 +110,12 @@ beforeAll(async () => {
     [manual] = await getDb().select({ id: manuals.id, currentRevisionId: manuals.currentRevisionId }).from(manuals).where(eq(manuals.title, "SM-4 Magneto Overhaul Manual"));
     if (!manual?.currentRevisionId) await new Promise((r) => setTimeout(r, 500));
   }
+  const [card] = await getDb()
+    .select({ id: taskCardVersions.cardId })
+    .from(taskCardVersions)
+    .where(and(eq(taskCardVersions.title, "Magneto-to-engine timing check"), eq(taskCardVersions.number, 1)));
   ids = {
+    cardId: card!.id,
     adminId: admin!.id,
     dayClassId: day!.id,
     nobody: "00000000-0000-4000-8000-00000000abcd",
