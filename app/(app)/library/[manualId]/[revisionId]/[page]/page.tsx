@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { MarkedText } from "@/components/marked-text";
+import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
 import { PdfReaderLoader } from "@/components/pdf-reader-loader";
@@ -9,6 +10,7 @@ import { highlightWords, markStems } from "@/lib/library/highlight";
 import { getManual, getPage, getReadableRevision } from "@/lib/library/manuals";
 import { findCorrections } from "@/search/postgres";
 import { parseQuery } from "@/search/query";
+import { CiteOnCard } from "./_components/cite-on-card";
 
 export const metadata: Metadata = { title: "Page" };
 
@@ -88,6 +90,10 @@ export default async function ManualPageView({
           Open the whole PDF
         </a>
       </div>
+
+      {can(user, "cards:author") ? (
+        <CiteOnCard userId={user.id} revisionId={revisionId} revisionLabel={revision.label} superseded={superseded} initialPage={pageNumber} />
+      ) : null}
 
       <PdfReaderLoader
         fileUrl={revision.readerFileKey ? `/api/revisions/${revisionId}/file?copy=reader` : `/api/revisions/${revisionId}/file`}

@@ -1,0 +1,43 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { requirePageUser } from "@/lib/auth/session";
+import { getCard, listSubjects } from "@/lib/cards";
+import { AppError } from "@/lib/errors";
+import { listManuals } from "@/lib/library/manuals";
+import { CardEditor } from "../../_components/card-editor";
+
+export const metadata: Metadata = { title: "Edit task card" };
+
+const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export default async function EditCardPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const user = await requirePageUser("cards:author", `/cards/${id}/edit`);
+  if (!uuid.test(id)) notFound();
+  const [card, subjects, manuals] = await Promise.all([
+    getCard({ actor: user, id }).catch((error: unknown) => {
+      if (error instanceof AppError && error.code === "not_found") notFound();
+      throw error;
+    }),
+    listSubjects(),
+    listManuals(),
+  ]);
+  const base = card.draft ?? card.published;
+  if (!base) notFound();
+  const options = manuals
+    .filter((m) => m.currentRevisionId)
+    .map((m) => ({ manualId: m.id, title: m.title, revisionId: m.currentRevisionId!, label: m.currentLabel ?? "", pageCount: m.pageCount ?? null }));
+  return (
+    <div className="flex flex-col gap-4">
+      <nav aria-label="Breadcrumb" className="flex gap-3">
+        <Link href="/cards" className="inline-flex min-h-11 items-center">Task cards</Link>
+        <span aria-hidden="true" className="py-2">›</span>
+        <Link href={`/cards/${id}`} className="inline-flex min-h-11 items-center">{base.title}</Link>
+      </nav>
+      <h1>{card.draft ? `Editing draft version ${card.draft.number}` : `Editing: the first change makes draft version ${base.number + 1}`}</h1>
+      {card.archivedAt ? <p className="notice-error">This card is archived. Bring it back from the archive before editing.</p> : null}
+      <CardEditor card={card} subjects={subjects} manuals={options} userId={user.id} />
+    </div>
+  );
+}

@@ -1,0 +1,74 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { CardView } from "@/components/card-view";
+import { can } from "@/lib/auth/permissions";
+import { requirePageUser } from "@/lib/auth/session";
+import { getCard, getCardVersion } from "@/lib/cards";
+import { AppError } from "@/lib/errors";
+import { CardActions } from "../_components/card-actions";
+
+export const metadata: Metadata = { title: "Task card" };
+
+const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export default async function CardPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ v?: string }> }) {
+  const { id } = await params;
+  const { v } = await searchParams;
+  const user = await requirePageUser("cards:view", `/cards/${id}`);
+  if (!uuid.test(id)) notFound();
+  const author = can(user, "cards:author");
+  const card = await getCard({ actor: user, id }).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  });
+  const wanted = v && /^\d+$/.test(v) ? Number(v) : null;
+  const shown = wanted
+    ? await getCardVersion({ actor: user, cardId: id, number: wanted }).catch(() => notFound())
+    : (card.published ?? card.draft);
+  if (!shown) notFound();
+
+  return (
+    <div className="flex flex-col gap-5">
+      <nav aria-label="Breadcrumb">
+        <Link href="/cards" className="inline-flex min-h-11 items-center">Task cards</Link>
+      </nav>
+      {card.archivedAt ? <p className="notice-error">This card is archived: it is not offered for new work.</p> : null}
+      {card.published && shown.number < card.published.number ? (
+        <p role="alert" className="notice-error">
+          This is version {shown.number}. Version {card.published.number} is the current one.{" "}
+          <Link href={`/cards/${id}`}>Open version {card.published.number}</Link>
+        </p>
+      ) : null}
+      <div className="flex flex-wrap items-center gap-3">
+        <h1 className="mr-auto">{shown.title}</h1>
+        <a href={`/api/cards/${id}/versions/${shown.number}/pdf`} className="btn btn-secondary" target="_blank" rel="noreferrer">
+          Print (PDF)
+        </a>
+      </div>
+      {author ? (
+        <section className="panel flex flex-col gap-3" aria-label="Card versions and actions">
+          <CardActions card={card} />
+          <div>
+            <h2 className="text-base font-bold">Versions</h2>
+            <ul className="flex flex-wrap gap-2">
+              {card.versions.map((ver) => (
+                <li key={ver.number}>
+                  <Link
+                    href={`/cards/${id}?v=${ver.number}`}
+                    aria-current={ver.number === shown.number ? "page" : undefined}
+                    className={`btn btn-small ${ver.number === shown.number ? "btn-primary" : "btn-secondary"}`}
+                  >
+                    v{ver.number} · {ver.status === "published" ? `published ${ver.publishedAt?.slice(0, 10)}` : "draft"}
+                  </Link>
+                </li>
+              ))}
+            </ul>
+            <p className="hint mt-1">Owner: {card.ownerName ?? "nobody"}{shown.publishedByName ? ` · published by ${shown.publishedByName}` : ""}</p>
+          </div>
+        </section>
+      ) : null}
+      <CardView version={shown} />
+    </div>
+  );
+}

@@ -1,0 +1,16 @@
+import type { Metadata } from "next";
+import { requirePageUser } from "@/lib/auth/session";
+import { listSubjects } from "@/lib/cards";
+import { NewCardForm } from "../_components/new-card-form";
+
+export const metadata: Metadata = { title: "New task card" };
+
+export default async function NewCardPage() {
+  await requirePageUser("cards:author", "/cards/new");
+  return (
+    <div className="flex flex-col gap-5">
+      <h1>New task card</h1>
+      <NewCardForm subjects={await listSubjects()} />
+    </div>
+  );
+}

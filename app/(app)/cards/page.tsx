@@ -1,0 +1,33 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { can } from "@/lib/auth/permissions";
+import { requirePageUser } from "@/lib/auth/session";
+import { listCards, listSubjects } from "@/lib/cards";
+import { CardsTable } from "./_components/cards-table";
+
+export const metadata: Metadata = { title: "Task cards" };
+
+export default async function CardsPage() {
+  const user = await requirePageUser("cards:view", "/cards");
+  const author = can(user, "cards:author");
+  const [cards, subjects] = await Promise.all([listCards({ actor: user }), listSubjects()]);
+  return (
+    <div className="flex flex-col gap-5">
+      <div className="flex flex-wrap items-center gap-3">
+        <h1 className="mr-auto">Task cards</h1>
+        {can(user, "subjects:manage") ? (
+          <Link href="/cards/subjects" className="btn btn-secondary">Curriculum subjects</Link>
+        ) : null}
+        {author ? (
+          <Link href="/cards/new" className="btn btn-primary">New task card</Link>
+        ) : null}
+      </div>
+      <p className="text-ink-soft">
+        {author
+          ? "Cards are built from manual pages. A published version never changes; editing makes a new draft version."
+          : "Published task cards. Each cites the manual pages it follows."}
+      </p>
+      <CardsTable initialCards={cards} subjects={subjects} author={author} />
+    </div>
+  );
+}

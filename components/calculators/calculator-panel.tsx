@@ -1,0 +1,42 @@
+"use client";
+
+import { calculators, trainingAidNotice, type CalculatorSlug } from "@/lib/calc";
+import { CardNotice } from "../card-notice";
+import { BendCalculator } from "./bend-calculator";
+import { CoilShotCalculator } from "./coil-shot-calculator";
+import { PenetrantCalculator } from "./penetrant-calculator";
+import { RivetCalculator } from "./rivet-calculator";
+import { TorqueCalculator } from "./torque-calculator";
+import { UnitConverter } from "./unit-converter";
+
+const bodies: Record<CalculatorSlug, () => React.ReactNode> = {
+  rivets: RivetCalculator,
+  bend: BendCalculator,
+  torque: TorqueCalculator,
+  penetrant: PenetrantCalculator,
+  "coil-shot": CoilShotCalculator,
+  units: UnitConverter,
+};
+
+/** One calculator with its caution, formula, sources and the training-aid notice, on its page or in a step. */
+export function CalculatorPanel({ slug, headingLevel = 2 }: { slug: CalculatorSlug; headingLevel?: 2 | 4 }) {
+  const info = calculators[slug];
+  const Body = bodies[slug];
+  const Heading = headingLevel === 2 ? "h2" : "h4";
+  return (
+    <section className="flex flex-col gap-4" aria-label={info.title}>
+      <p className="border-l-[6px] border-amber bg-amber-pale px-3 py-2 font-semibold">{trainingAidNotice}</p>
+      {info.caution ? <CardNotice kind="caution" text={info.caution} /> : null}
+      <Body />
+      <div>
+        <Heading className="font-bold">Formula</Heading>
+        <ul className="ml-5 list-disc font-mono text-[0.95rem]">
+          {info.formula.map((f) => (
+            <li key={f}>{f}</li>
+          ))}
+        </ul>
+        <p className="hint mt-1">Sources: {info.sources.join("; ")}.</p>
+      </div>
+    </section>
+  );
+}
