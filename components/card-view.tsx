@@ -6,7 +6,6 @@ import { sortNotices } from "@/lib/validation/cards";
 import { CalculatorPanel } from "./calculators/calculator-panel";
 import { CardNotice } from "./card-notice";
 import { LimitCheckField } from "./limit-check-field";
-import { SafetyNotice } from "./safety-notice";
 import { StepMarkdown } from "./step-markdown";
 
 function List({ title, items }: { title: string; items: string[] }) {
@@ -37,7 +36,6 @@ export function CardView({ version }: { version: CardVersionDto }) {
   ].filter(Boolean);
   return (
     <article className="flex flex-col gap-5" aria-label={`Task card ${version.title}`}>
-      <SafetyNotice />
       <header className="flex flex-col gap-1">
         <p className="text-sm font-bold uppercase tracking-wider text-ink-soft">
           Task card · version {version.number} · {version.status === "published" ? `published ${version.publishedAt?.slice(0, 10) ?? ""}` : "draft, not yet for use"}

@@ -2,7 +2,7 @@
 
 import { useId, useState } from "react";
 import { judgeValue, type Limit } from "@/lib/calc/limits";
-import { unitLabel } from "@/lib/calc/units";
+import { dimensionOf, unitLabel, unitsOf } from "@/lib/calc/units";
 
 /** A measured value judged against its limits as it is typed, in any unit of the same kind. */
 export function LimitCheckField({ id, label, limit, value, onChange }: { id?: string; label: string; limit: Limit; value?: string; onChange?: (v: string) => void }) {
@@ -10,6 +10,8 @@ export function LimitCheckField({ id, label, limit, value, onChange }: { id?: st
   const inputId = id ?? ownId;
   const [own, setOwn] = useState("");
   const text = value ?? own;
+  const dimension = dimensionOf(limit.unit);
+  const other = dimension ? unitsOf(dimension).find((u) => u !== limit.unit) : undefined;
   const judgement = text.trim() ? judgeValue(text, limit) : null;
   const tone =
     judgement?.status === "in" ? "notice-ok" : judgement?.status === "out" ? "notice-error" : judgement ? "notice-error" : "";
@@ -19,7 +21,8 @@ export function LimitCheckField({ id, label, limit, value, onChange }: { id?: st
         {label}
       </label>
       <span id={`${inputId}-hint`} className="hint">
-        Type the reading; a unit other than {unitLabel(limit.unit)} is converted (for example &quot;5.6 N·m&quot; or &quot;0.41 mm&quot;).
+        Type the reading in {unitLabel(limit.unit)}
+        {other ? <>, or with another unit, which is converted (for example &quot;12 {unitLabel(other)}&quot;)</> : null}.
       </span>
       <input
         id={inputId}

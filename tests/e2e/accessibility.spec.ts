@@ -43,3 +43,22 @@ test("buttons and fields are large enough for gloved hands", async ({ page }) =>
     expect(box?.height ?? 0).toBeGreaterThanOrEqual(44); // WCAG 2.2 SC 2.5.5 target size (enhanced): 44 × 44 CSS px
   }
 });
+
+test("the task card and calculator pages have no serious accessibility violation", async ({ page }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open("/sign-in?next=%2Fcards");
+  await signIn.signIn("instructor@hangarleaf.test");
+  await expect(page.getByRole("heading", { level: 1, name: "Task cards" })).toBeVisible();
+  expect(await seriousViolations(page), "/cards").toEqual([]);
+  await page.getByRole("link", { name: "Aileron control cable tension check" }).click();
+  await expect(page.getByRole("heading", { level: 1, name: "Aileron control cable tension check" })).toBeVisible();
+  expect(await seriousViolations(page), "card page").toEqual([]);
+  await page.getByRole("link", { name: /^Edit/ }).click();
+  await expect(page.getByRole("heading", { level: 1, name: /Editing/ })).toBeVisible();
+  expect(await seriousViolations(page), "card editor").toEqual([]);
+  for (const path of ["/calculators", "/calculators/rivets", "/calculators/bend", "/calculators/torque", "/calculators/penetrant", "/calculators/coil-shot", "/calculators/units", "/cards/new"]) {
+    await page.goto(path);
+    await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
+    expect(await seriousViolations(page), path).toEqual([]);
+  }
+});

@@ -10,8 +10,6 @@ import { useCreateCard } from "./use-cards";
 export function NewCardForm({ subjects }: { subjects: SubjectDto[] }) {
   const router = useRouter();
   const create = useCreateCard();
-  const [title, setTitle] = useState("");
-  const [subjectId, setSubjectId] = useState("");
   const [error, setError] = useState<string | null>(null);
   return (
     <form
@@ -19,6 +17,10 @@ export function NewCardForm({ subjects }: { subjects: SubjectDto[] }) {
       onSubmit={(e) => {
         e.preventDefault();
         setError(null);
+        // Read from the form itself: typing before the page is interactive is not lost.
+        const data = new FormData(e.currentTarget);
+        const title = String(data.get("title") ?? "");
+        const subjectId = String(data.get("subjectId") ?? "");
         create
           .mutateAsync({ title, subjectId: subjectId || null, steps: [{ id: crypto.randomUUID(), text: "" }] })
           .then((card) => router.push(`/cards/${card.id}/edit`))
@@ -27,11 +29,11 @@ export function NewCardForm({ subjects }: { subjects: SubjectDto[] }) {
     >
       <label className="field">
         <span className="label">Title</span>
-        <input className="input text-lg" value={title} onChange={(e) => setTitle(e.target.value)} required maxLength={160} aria-describedby="new-card-error" />
+        <input name="title" className="input text-lg" required maxLength={160} aria-describedby="new-card-error" />
       </label>
       <label className="field">
         <span className="label">Curriculum subject</span>
-        <select className="input" value={subjectId} onChange={(e) => setSubjectId(e.target.value)}>
+        <select name="subjectId" className="input" defaultValue="">
           <option value="">Choose later</option>
           {subjects.map((s) => (
             <option key={s.id} value={s.id}>{s.name}</option>

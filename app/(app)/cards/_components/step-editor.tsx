@@ -33,7 +33,9 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
   const notices = useFieldArray({ control, name: `steps.${index}.notices` });
   const references = useFieldArray({ control, name: `steps.${index}.references` });
   const step = useWatch({ control, name: `steps.${index}` });
-  const [pick, setPick] = useState({ revisionId: manuals[0]?.revisionId ?? "", page: "", quote: "" });
+  // The picker starts at the manual this step already cites, if it is in the list.
+  const citedRevision = step.references.find((r) => manuals.some((m) => m.revisionId === r.revisionId))?.revisionId;
+  const [pick, setPick] = useState({ revisionId: citedRevision ?? manuals[0]?.revisionId ?? "", page: "", quote: "" });
   const [pickError, setPickError] = useState("");
 
   const addReference = () => {
@@ -79,7 +81,7 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
               </select>
             </label>
             <label className="field min-w-64 flex-1">
-              <span className="label">Text</span>
+              <span className="label">Notice text</span>
               <textarea className="input min-h-20" {...register(`steps.${index}.notices.${j}.text`)} />
             </label>
             <button type="button" className="btn btn-danger btn-small self-end" onClick={() => notices.remove(j)} aria-label={`Remove notice ${j + 1} of step ${n}`}>
@@ -96,11 +98,11 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
         </div>
       </section>
 
-      <label className="field">
-        <span className="label">Instruction</span>
+      <div className="field">
+        <label className="label" htmlFor={id("text")}>Instruction</label>
         <span className="hint" id={id("text-hint")}>Markdown: **bold**, lists with “- ”, links as [text](https://…). No HTML.</span>
-        <textarea className="input min-h-28" aria-describedby={id("text-hint")} {...register(`steps.${index}.text`)} />
-      </label>
+        <textarea id={id("text")} className="input min-h-28" aria-describedby={id("text-hint")} {...register(`steps.${index}.text`)} />
+      </div>
 
       <section className="flex flex-col gap-2" aria-label={`Manual pages of step ${n}`}>
         <h4 className="font-semibold">Manual pages</h4>

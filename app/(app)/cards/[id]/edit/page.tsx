@@ -37,7 +37,7 @@ export default async function EditCardPage({ params }: { params: Promise<{ id: s
       </nav>
       <h1>{card.draft ? `Editing draft version ${card.draft.number}` : `Editing: the first change makes draft version ${base.number + 1}`}</h1>
       {card.archivedAt ? <p className="notice-error">This card is archived. Bring it back from the archive before editing.</p> : null}
-      <CardEditor card={card} subjects={subjects} manuals={options} userId={user.id} />
+      <CardEditor key={`${base.number}-${base.editCount}`} card={card} subjects={subjects} manuals={options} userId={user.id} />
     </div>
   );
 }
