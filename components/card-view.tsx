@@ -56,6 +56,12 @@ export function CardView({ version }: { version: CardVersionDto }) {
               {step.inspectionPoint ? <span className="badge bg-deck text-white">Inspection point: instructor buy-off</span> : null}
               {step.timerMinutes ? <span className="badge bg-teal-pale text-teal-dark">Timer {step.timerMinutes} min</span> : null}
             </div>
+            {step.underRecheck ? (
+              <p role="note" aria-label="Recheck pending" className="rounded-md border-4 border-dashed border-deck bg-teal-pale px-4 py-3 font-semibold">
+                A newer revision of the manual changed a page this step cites. Your instructor is rechecking this step: work from the
+                current revision and ask your instructor before you go on.
+              </p>
+            ) : null}
             {sortNotices(step.notices).map((n, j) => (
               <CardNotice key={j} kind={n.kind} text={n.text} />
             ))}

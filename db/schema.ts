@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
 import {
-  bigint, boolean, customType, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid,
+  bigint, boolean, customType, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, real, text, timestamp, uniqueIndex, uuid,
   type AnyPgColumn,
 } from "drizzle-orm/pg-core";
 
@@ -263,6 +263,54 @@ export const cardCitations = pgTable(
   },
   (t) => [index("card_citations_revision_page_idx").on(t.revisionId, t.pageNumber), index("card_citations_version_idx").on(t.versionId)],
 );
+
+/** A ready revision compared page by page with the one before it (lib/revisions/compare.ts). */
+export const revisionComparisons = pgTable("revision_comparisons", {
+  revisionId: uuid("revision_id").primaryKey().references(() => revisions.id, { onDelete: "cascade" }),
+  previousRevisionId: uuid("previous_revision_id").references(() => revisions.id, { onDelete: "cascade" }),
+  // [{ status, oldPage, newPage, similarity }] in the order of the new revision's pages.
+  pages: jsonb("pages").notNull(),
+  summary: jsonb("summary").notNull(),
+  ...timestamps,
+});
+
+export const recheckStatus = pgEnum("recheck_status", ["changed", "moved", "removed"]);
+export const recheckOutcome = pgEnum("recheck_outcome", ["open", "accepted", "relinked", "dropped"]);
+
+/**
+ * One citation of a published card that a new revision touched: the page changed, moved or went.
+ * Open until the card's author accepts the suggested page, picks another, or drops the citation.
+ */
+export const citationRechecks = pgTable(
+  "citation_rechecks",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    revisionId: uuid("revision_id").notNull().references(() => revisions.id, { onDelete: "cascade" }),
+    previousRevisionId: uuid("previous_revision_id").notNull().references(() => revisions.id, { onDelete: "cascade" }),
+    cardId: uuid("card_id").notNull().references(() => taskCards.id, { onDelete: "cascade" }),
+    versionId: uuid("version_id").notNull().references(() => taskCardVersions.id, { onDelete: "cascade" }),
+    stepId: uuid("step_id").notNull(),
+    stepNumber: integer("step_number").notNull(),
+    oldPage: integer("old_page").notNull(),
+    status: recheckStatus("status").notNull(),
+    suggestedPage: integer("suggested_page"),
+    similarity: real("similarity").notNull().default(0),
+    outcome: recheckOutcome("outcome").notNull().default("open"),
+    chosenPage: integer("chosen_page"),
+    resolvedBy: uuid("resolved_by").references(() => users.id, { onDelete: "set null" }),
+    resolvedAt: timestamp("resolved_at", { withTimezone: true }),
+    // The draft version the decision went into.
+    resultVersionId: uuid("result_version_id").references(() => taskCardVersions.id, { onDelete: "set null" }),
+    ...timestamps,
+  },
+  (t) => [
+    uniqueIndex("citation_rechecks_once_key").on(t.revisionId, t.versionId, t.stepId, t.oldPage),
+    index("citation_rechecks_card_idx").on(t.cardId, t.outcome),
+  ],
+);
+
+export type RevisionComparison = typeof revisionComparisons.$inferSelect;
+export type CitationRecheck = typeof citationRechecks.$inferSelect;
 
 export type CurriculumSubject = typeof curriculumSubjects.$inferSelect;
 export type TaskCard = typeof taskCards.$inferSelect;

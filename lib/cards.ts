@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type Db } from "@/db";
-import { cardCitations, curriculumSubjects, manuals, revisions, taskCards, taskCardVersions, users } from "@/db/schema";
+import { cardCitations, citationRechecks, curriculumSubjects, manuals, revisions, taskCards, taskCardVersions, users } from "@/db/schema";
 import { recordAudit } from "./audit";
 import { can, type Actor } from "./auth/permissions";
 import type { CardDto, CardListStatus, CardSummaryDto, CardVersionDto, ReferenceDto, StepDto, SubjectDto } from "./dto-cards";
@@ -113,11 +113,13 @@ export async function listCards({
     step_count: number;
     updated_at: Date;
     published_number: number | null;
+    open_rechecks: number;
   }>(sql`
     select c.id, c.archived_at, u.name as owner_name,
            lv.number, lv.status, lv.title, lv.ata_chapter, lv.applicability, lv.subject_id, s.name as subject_name,
            jsonb_array_length(lv.steps) as step_count, greatest(c.updated_at, lv.updated_at) as updated_at,
-           pv.number as published_number
+           pv.number as published_number,
+           (select count(*) from citation_rechecks r where r.card_id = c.id and r.outcome = 'open') as open_rechecks
       from task_cards c
       join lateral (
         select * from task_card_versions v
@@ -146,6 +148,7 @@ export async function listCards({
     applicability: r.applicability,
     ownerName: r.owner_name,
     stepCount: Number(r.step_count),
+    openRechecks: Number(r.open_rechecks),
     updatedAt: new Date(r.updated_at).toISOString(),
   }));
 }
@@ -182,11 +185,21 @@ async function describeRevisions(db: Db | Tx, revisionIds: string[]) {
   return new Map(rows.map((r) => [r.id, { manualId: r.manualId, manualTitle: r.manualTitle, label: r.label, current: r.currentRevisionId === r.id, status: r.status, pageCount: r.pageCount }]));
 }
 
+async function openRecheckSteps(db: Db | Tx, cardId: string): Promise<Set<string>> {
+  const rows = await db
+    .select({ stepId: citationRechecks.stepId })
+    .from(citationRechecks)
+    .where(and(eq(citationRechecks.cardId, cardId), eq(citationRechecks.outcome, "open")));
+  return new Set(rows.map((r) => r.stepId));
+}
+
 async function toVersionDto(db: Db | Tx, row: VersionRow): Promise<CardVersionDto> {
   const steps = (row.steps as unknown[]).map((s) => stepSchema.parse(s));
+  const rechecking = await openRecheckSteps(db, row.cardId);
   const described = await describeRevisions(db, steps.flatMap((s) => s.references.map((r) => r.revisionId)));
   const stepDtos: StepDto[] = steps.map((s) => ({
     ...s,
+    underRecheck: rechecking.has(s.id),
     notices: sortNotices(s.notices),
     references: s.references.map((r): ReferenceDto => {
       const d = described.get(r.revisionId);
@@ -243,11 +256,16 @@ export async function getCard({ actor, id }: { actor: Actor; id: string }): Prom
   if (!author && (!versions.length || card.archivedAt)) throw notFound();
   const draftRow = versions.find((v) => v.status === "draft");
   const publishedRow = versions.filter((v) => v.status === "published").at(-1);
+  const [open] = await db
+    .select({ n: sql<number>`count(*)`.mapWith(Number) })
+    .from(citationRechecks)
+    .where(and(eq(citationRechecks.cardId, id), eq(citationRechecks.outcome, "open")));
   return {
     id: card.id,
     ownerId: card.ownerId,
     ownerName: card.ownerName,
     archivedAt: card.archivedAt?.toISOString() ?? null,
+    openRechecks: author ? (open?.n ?? 0) : 0,
     versions: versions.map((v) => ({ number: v.number, status: v.status, publishedAt: v.publishedAt?.toISOString() ?? null, updatedAt: v.updatedAt.toISOString() })),
     draft: draftRow ? await toVersionDto(db, draftRow) : null,
     published: publishedRow ? await toVersionDto(db, publishedRow) : null,
@@ -399,6 +417,38 @@ export async function updateVersion({ actor, cardId, number, content, editCount 
   if (!row) throw new AppError("not_found", "That version of the task card was not found.");
   if (row.status === "published") throw frozen();
   return saveDraft({ actor, cardId, content, editCount });
+}
+
+/**
+ * Runs a change on the card's draft (opened from the published version when there is none) inside
+ * one transaction: `change` edits the content in place and may return work to do after the save.
+ */
+export async function applyToDraft({
+  actor,
+  cardId,
+  change,
+}: {
+  actor: Actor;
+  cardId: string;
+  change: (tx: Tx, content: CardContent, draftId: string) => Promise<(() => Promise<void>) | void>;
+}): Promise<CardVersionDto> {
+  try {
+    const versionId = await getDb().transaction(async (tx) => {
+      const card = await lockCard(tx, cardId);
+      if (card.archivedAt) throw new AppError("conflict", "That card is archived. Bring it back from the archive first.");
+      const { draft } = await openDraft(tx, actor, cardId);
+      const content = versionToContent(draft);
+      const after = await change(tx, content, draft.id);
+      await writeContent(tx, draft.id, content, draft.editCount);
+      if (after) await after();
+      await tx.update(taskCards).set({ updatedAt: new Date() }).where(eq(taskCards.id, cardId));
+      return draft.id;
+    });
+    const [row] = await loadVersions(getDb(), eq(taskCardVersions.id, versionId));
+    return toVersionDto(getDb(), row!);
+  } catch (error) {
+    asConflict(error);
+  }
 }
 
 /** "Cite while reading": adds one page to a step of the card's draft. */

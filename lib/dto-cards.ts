@@ -22,6 +22,8 @@ export interface StepDto {
   calculator: CalculatorSlug | null;
   inspectionPoint: boolean;
   timerMinutes: number | null;
+  /** A newer revision changed, moved or removed a page this step cites, and nobody rechecked it yet. */
+  underRecheck: boolean;
 }
 
 export interface CardVersionDto {
@@ -50,6 +52,8 @@ export interface CardDto {
   ownerId: string | null;
   ownerName: string | null;
   archivedAt: string | null;
+  /** Citations a new revision touched that wait for the author's recheck. */
+  openRechecks: number;
   versions: { number: number; status: "draft" | "published"; publishedAt: string | null; updatedAt: string }[];
   /** The open draft (authors only), and the newest published version. */
   draft: CardVersionDto | null;
@@ -72,6 +76,7 @@ export interface CardSummaryDto {
   applicability: string[];
   ownerName: string | null;
   stepCount: number;
+  openRechecks: number;
   updatedAt: string;
 }
 

@@ -7,6 +7,7 @@ export const queues = {
   sendMail: { name: "send-mail", retryLimit: 6, retryDelay: 20, retryBackoff: true, expireInSeconds: 120 },
   // A lost worker is noticed by the heartbeat sweeper (worker/index.ts) long before this expiry.
   ingestRevision: { name: "ingest-revision", retryLimit: 2, retryDelay: 30, retryBackoff: true, expireInSeconds: 6 * 3600 },
+  compareRevision: { name: "compare-revision", retryLimit: 3, retryDelay: 30, retryBackoff: true, expireInSeconds: 1800 },
   makeThumbnails: { name: "make-thumbnails", retryLimit: 3, retryDelay: 60, retryBackoff: true, expireInSeconds: 3600 },
 } as const satisfies Record<string, PgBoss.Queue>;
 

@@ -10,6 +10,7 @@ import { makeReaderCopy, makeThumbnails } from "../lib/ingest/thumbnails";
 import { createQueues, queues } from "../lib/jobs";
 import { deliverMail } from "../lib/mail";
 import { mailMessageSchema } from "../lib/mail/messages";
+import { compareRevision } from "../lib/revisions/impact";
 
 const revisionJob = z.object({ revisionId: z.uuid() });
 
@@ -50,6 +51,15 @@ async function main() {
       if (!parsed.success) continue;
       const packed = await makeReaderCopy(parsed.data);
       console.log(`revision ${parsed.data.revisionId}: reader copy ${packed ? "made" : "not made"}, ${await makeThumbnails(parsed.data)} thumbnails`);
+    }
+  });
+
+  await boss.work(queues.compareRevision.name, { pollingIntervalSeconds: 1 }, async (jobs) => {
+    for (const job of jobs) {
+      const parsed = revisionJob.safeParse(job.data);
+      if (!parsed.success) continue;
+      const outcome = await compareRevision(parsed.data);
+      if (outcome.flagged) console.log(`revision ${parsed.data.revisionId}: ${outcome.flagged} citations to recheck, ${outcome.mailed} instructors told`);
     }
   });
 

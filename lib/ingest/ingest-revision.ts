@@ -9,6 +9,7 @@ import { extractPageTexts, ocrImage, PdfProblem, readPdfInfo, renderPage } from 
 import { headingOf, needsOcr, normalisePageText } from "../pdf/text";
 import { getSearchEngine } from "@/search";
 import { getStore } from "../storage";
+import { queueComparisonsAfterReady } from "../revisions/impact";
 import { queueThumbnails } from "./queue";
 
 const batchSize = 200;
@@ -131,6 +132,7 @@ export async function ingestRevision({ revisionId, log = console.log }: { revisi
     }
     log(`revision ${revisionId}: ${pageCount} pages ready in ${((Date.now() - started) / 1000).toFixed(1)} s`);
     await queueThumbnails({ revisionId }).catch((error: unknown) => log(`thumbnails not queued: ${String(error)}`));
+    await queueComparisonsAfterReady({ revisionId }).catch((error: unknown) => log(`comparison not queued: ${String(error)}`));
     return "ready";
   } catch (error) {
     const known = error instanceof PdfProblem;

@@ -174,7 +174,47 @@ function wordSet(text: string): Set<string> {
   return new Set(text.split(" ").filter((w) => w.length > 0));
 }
 
-/** Dice coefficient over the pages' word sets. */
+/**
+ * Similarity of two pages: the Dice coefficient over their word sets, each word weighed by how
+ * rare it is across both revisions (inverse document frequency). Words every page has (the
+ * manual's boilerplate, a template's fixed sentences) weigh almost nothing, so two pages made from
+ * one template do not look alike; the words that say what a page is about decide.
+ */
+export class PageSimilarity {
+  private readonly weight = new Map<string, number>();
+  private readonly sets: Set<string>[][];
+  private readonly totals: number[][];
+
+  constructor(sides: string[][]) {
+    this.sets = sides.map((texts) => texts.map(wordSet));
+    const pagesCount = this.sets.reduce((n, side) => n + side.length, 0);
+    const df = new Map<string, number>();
+    for (const side of this.sets) for (const set of side) for (const w of set) df.set(w, (df.get(w) ?? 0) + 1);
+    for (const [w, n] of df) this.weight.set(w, Math.log((pagesCount + 1) / n));
+    this.totals = this.sets.map((side) => side.map((set) => this.sum(set)));
+  }
+
+  private sum(set: Set<string>) {
+    let total = 0;
+    for (const w of set) total += this.weight.get(w) ?? 0;
+    return total;
+  }
+
+  /** Similarity of page i of side a and page j of side b, 0..1. */
+  between(a: number, i: number, b: number, j: number): number {
+    const x = this.sets[a]![i]!;
+    const y = this.sets[b]![j]!;
+    const tx = this.totals[a]![i]!;
+    const ty = this.totals[b]![j]!;
+    if (tx + ty === 0) return x.size === 0 && y.size === 0 ? 1 : 0;
+    let shared = 0;
+    const [small, large] = x.size < y.size ? [x, y] : [y, x];
+    for (const w of small) if (large.has(w)) shared += this.weight.get(w) ?? 0;
+    return (2 * shared) / (tx + ty);
+  }
+}
+
+/** Plain Dice coefficient over two word sets (unweighted). */
 export function similarity(a: Set<string>, b: Set<string>): number {
   if (a.size === 0 && b.size === 0) return 1;
   let shared = 0;
@@ -184,7 +224,7 @@ export function similarity(a: Set<string>, b: Set<string>): number {
 }
 
 export function comparePages(oldTexts: string[], newTexts: string[], options: CompareOptions = {}): Comparison {
-  const { labels = [], changedThreshold = 0.5, window = 40 } = options;
+  const { labels = [], changedThreshold = 0.5, window = 20 } = options;
   const oldNorm = normalisePages(oldTexts, labels);
   const newNorm = normalisePages(newTexts, labels);
   const [oldIds, newIds] = textIds(oldNorm, newNorm);
@@ -229,19 +269,13 @@ export function comparePages(oldTexts: string[], newTexts: string[], options: Co
   }
 
   // The rest: the most similar left-over old page near where it would be, if similar enough.
-  const oldWords = new Map<number, Set<string>>();
-  const words = (i: number) => {
-    let set = oldWords.get(i);
-    if (!set) oldWords.set(i, (set = wordSet(oldNorm[i]!)));
-    return set;
-  };
+  const sim = new PageSimilarity([oldNorm, newNorm]);
   const candidates: { i: number; j: number; s: number }[] = [];
   for (const j of pending) {
-    const mine = wordSet(newNorm[j]!);
     const centre = expectedOld[j]!;
     for (let i = Math.max(0, centre - window); i <= Math.min(oldTexts.length - 1, centre + window); i++) {
       if (oldUsed.has(i)) continue;
-      const s = similarity(words(i), mine);
+      const s = sim.between(0, i, 1, j);
       if (s >= changedThreshold) candidates.push({ i, j, s });
     }
   }
@@ -301,10 +335,10 @@ export function suggestPage(
   if (!texts) return { page: null, similarity: 0, status: "removed" };
   const oldNorm = normalisePages(texts.oldTexts, texts.labels);
   const newNorm = normalisePages(texts.newTexts, texts.labels);
-  const mine = wordSet(oldNorm[oldPage - 1] ?? "");
+  const sim = new PageSimilarity([oldNorm, newNorm]);
   let best = { page: null as number | null, similarity: 0 };
-  newNorm.forEach((t, j) => {
-    const s = similarity(mine, wordSet(t));
+  newNorm.forEach((_, j) => {
+    const s = sim.between(0, oldPage - 1, 1, j);
     if (s > best.similarity) best = { page: j + 1, similarity: round(s) };
   });
   return best.similarity >= 0.2 ? { ...best, status: "removed" } : { page: null, similarity: best.similarity, status: "removed" };

@@ -124,3 +124,16 @@ export const versionNumberSchema = z.coerce.number().int().min(1).max(100_000);
 export function sortNotices<T extends { kind: NoticeKind }>(notices: readonly T[]): T[] {
   return [...notices].sort((a, b) => noticeKinds.indexOf(a.kind) - noticeKinds.indexOf(b.kind));
 }
+
+export const recheckDecisionsSchema = z.object({
+  decisions: z
+    .array(
+      z.object({
+        id: z.uuid("Each decision names a recheck."),
+        action: z.enum(["accept", "relink", "drop"], { error: "Decide accept, relink or drop." }),
+        page: z.number().int().min(1).max(1_000_000).optional(),
+      }),
+    )
+    .min(1, "Decide at least one citation.")
+    .max(200),
+});

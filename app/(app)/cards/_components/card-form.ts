@@ -152,6 +152,7 @@ export function toPreview(form: CardForm, base: CardVersionDto, subjectName: str
         calculator: s.calculator || null,
         inspectionPoint: s.inspectionPoint,
         timerMinutes: numberOrNull(s.timerMinutes),
+        underRecheck: base.steps.find((b) => b.id === s.uid)?.underRecheck ?? false,
       };
     }),
   };
