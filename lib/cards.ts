@@ -185,11 +185,20 @@ async function describeRevisions(db: Db | Tx, revisionIds: string[]) {
   return new Map(rows.map((r) => [r.id, { manualId: r.manualId, manualTitle: r.manualTitle, label: r.label, current: r.currentRevisionId === r.id, status: r.status, pageCount: r.pageCount }]));
 }
 
+/**
+ * Steps whose citations a new revision touched and whose fix is not published yet: the recheck is
+ * open, or its decision sits in a draft nobody has published.
+ */
 async function openRecheckSteps(db: Db | Tx, cardId: string): Promise<Set<string>> {
   const rows = await db
     .select({ stepId: citationRechecks.stepId })
     .from(citationRechecks)
-    .where(and(eq(citationRechecks.cardId, cardId), eq(citationRechecks.outcome, "open")));
+    .where(
+      and(
+        eq(citationRechecks.cardId, cardId),
+        sql`(${citationRechecks.outcome} = 'open' or exists (select 1 from task_card_versions v where v.id = ${citationRechecks.resultVersionId} and v.status = 'draft'))`,
+      ),
+    );
   return new Set(rows.map((r) => r.stepId));
 }
 
@@ -504,6 +513,11 @@ export async function discardDraft({ actor, cardId }: { actor: Actor; cardId: st
     const draft = versions.find((v) => v.status === "draft");
     if (!draft) throw new AppError("conflict", "There is no draft to discard.");
     if (!versions.some((v) => v.status === "published")) throw new AppError("conflict", "This card has never been published: archive it instead.");
+    // Recheck decisions made in this draft are undone with it: those citations wait again.
+    await tx
+      .update(citationRechecks)
+      .set({ outcome: "open", chosenPage: null, resolvedBy: null, resolvedAt: null, resultVersionId: null })
+      .where(eq(citationRechecks.resultVersionId, draft.id));
     await tx.delete(taskCardVersions).where(eq(taskCardVersions.id, draft.id));
     await recordAudit(tx, { actorId: actor.id, action: "card.draft_discarded", subjectType: "task_card", subjectId: cardId });
   });

@@ -320,6 +320,9 @@ export function comparePages(oldTexts: string[], newTexts: string[], options: Co
 
 const round = (x: number) => Math.round(x * 1000) / 1000;
 
+/** The least similarity at which a page is suggested in place of a removed one. */
+export const minimumSuggestion = 0.5;
+
 /**
  * The page of the new revision to suggest for a citation of an old page: where it moved, or what
  * it became; for a removed page, the most similar new page (with its score), if any is similar.
@@ -341,5 +344,6 @@ export function suggestPage(
     const s = sim.between(0, oldPage - 1, 1, j);
     if (s > best.similarity) best = { page: j + 1, similarity: round(s) };
   });
-  return best.similarity >= 0.2 ? { ...best, status: "removed" } : { page: null, similarity: best.similarity, status: "removed" };
+  // A weak match would send a student to the wrong procedure: no suggestion is the honest answer.
+  return best.similarity >= minimumSuggestion ? { ...best, status: "removed" } : { page: null, similarity: best.similarity, status: "removed" };
 }

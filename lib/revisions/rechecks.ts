@@ -1,9 +1,9 @@
 import "server-only";
 // Reading a revision's comparison, and the author's side of a recheck: see each flagged citation
 // with its old page and the suggested new one, decide, and get a new draft version of the card.
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { getDb } from "@/db";
-import { citationRechecks, manuals, pages, revisionComparisons, revisions, taskCards, taskCardVersions } from "@/db/schema";
+import { citationRechecks, manuals, pages, revisionComparisons, revisions, taskCards, taskCardVersions, users } from "@/db/schema";
 import { recordAudit } from "../audit";
 import type { Actor } from "../auth/permissions";
 import { applyToDraft } from "../cards";
@@ -21,6 +21,25 @@ export async function getComparison({ revisionId }: { revisionId: string }): Pro
   const [row] = await getDb().select().from(revisionComparisons).where(eq(revisionComparisons.revisionId, revisionId));
   if (!row) throw new AppError("not_found", "That revision has not been compared yet. The comparison is made a moment after the revision is ready.");
   return { revisionId, previousRevisionId: row.previousRevisionId, pages: row.pages as PageChange[], summary: row.summary as Record<PageStatus, number> };
+}
+
+/** The cards a revision sent back to their authors, with how many citations are still open. */
+export async function listRechecksOfRevision({ revisionId }: { revisionId: string }) {
+  return getDb()
+    .select({
+      cardId: citationRechecks.cardId,
+      title: taskCardVersions.title,
+      ownerName: users.name,
+      total: sql<number>`count(*)`.mapWith(Number),
+      open: sql<number>`count(*) filter (where ${citationRechecks.outcome} = 'open')`.mapWith(Number),
+    })
+    .from(citationRechecks)
+    .innerJoin(taskCardVersions, eq(taskCardVersions.id, citationRechecks.versionId))
+    .innerJoin(taskCards, eq(taskCards.id, citationRechecks.cardId))
+    .leftJoin(users, eq(users.id, taskCards.ownerId))
+    .where(eq(citationRechecks.revisionId, revisionId))
+    .groupBy(citationRechecks.cardId, taskCardVersions.title, users.name)
+    .orderBy(asc(taskCardVersions.title));
 }
 
 export interface RecheckDto {

@@ -34,6 +34,12 @@ export default async function CardPage({ params, searchParams }: { params: Promi
         <Link href="/cards" className="inline-flex min-h-11 items-center">Task cards</Link>
       </nav>
       {card.archivedAt ? <p className="notice-error">This card is archived: it is not offered for new work.</p> : null}
+      {author && card.openRechecks > 0 ? (
+        <p role="alert" className="notice-error">
+          A new manual revision changed {card.openRechecks === 1 ? "a page" : `${card.openRechecks} pages`} this card cites.{" "}
+          <Link href={`/cards/${id}/recheck`}>Recheck the citations</Link>
+        </p>
+      ) : null}
       {card.published && shown.number < card.published.number ? (
         <p role="alert" className="notice-error">
           This is version {shown.number}. Version {card.published.number} is the current one.{" "}

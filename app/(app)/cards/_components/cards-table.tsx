@@ -46,6 +46,7 @@ export function CardsTable({ initialCards, subjects, author }: { initialCards: C
               {info.getValue() === "published" ? `Published v${info.row.original.publishedNumber}` : info.getValue() === "draft" ? "Draft" : "Archived"}
             </span>
             {info.row.original.hasDraft ? <span className="badge bg-amber-pale text-ink">Draft v{info.row.original.latestNumber} open</span> : null}
+            {info.row.original.openRechecks ? <span className="badge bg-danger-pale text-danger">Recheck {info.row.original.openRechecks}</span> : null}
           </span>
         ),
       }),

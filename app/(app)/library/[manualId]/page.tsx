@@ -88,9 +88,14 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
                 {manages ? <td>{r.uploadedBy ?? "—"}</td> : null}
                 <td>
                   {r.status === "ready" ? (
-                    <a href={`/api/revisions/${r.id}/file`} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center">
-                      Open PDF
-                    </a>
+                    <span className="flex flex-wrap gap-x-4">
+                      <a href={`/api/revisions/${r.id}/file`} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center">
+                        Open PDF
+                      </a>
+                      <Link href={`/library/${manual.id}/${r.id}/changes`} className="inline-flex min-h-11 items-center">
+                        What changed
+                      </Link>
+                    </span>
                   ) : manages && r.status === "failed" ? (
                     <RetryButton revisionId={r.id} label={r.label} />
                   ) : (

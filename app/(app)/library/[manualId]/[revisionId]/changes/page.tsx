@@ -1,0 +1,138 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { requirePageUser } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { getManual, getReadableRevision } from "@/lib/library/manuals";
+import type { PageStatus } from "@/lib/revisions/compare";
+import { getComparison, listRechecksOfRevision } from "@/lib/revisions/rechecks";
+
+export const metadata: Metadata = { title: "What changed" };
+
+const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+const statusText: Record<PageStatus, string> = {
+  unchanged: "Unchanged",
+  changed: "Changed",
+  moved: "Moved",
+  added: "Added",
+  removed: "Removed",
+};
+const statusStyle: Record<PageStatus, string> = {
+  unchanged: "bg-panel text-ink-soft",
+  changed: "bg-amber-pale text-ink",
+  moved: "bg-teal-pale text-teal-dark",
+  added: "bg-ok-pale text-ok",
+  removed: "bg-danger-pale text-danger",
+};
+
+/** The comparison of a revision with the one before it, as a list of the new revision's effective pages. */
+export default async function RevisionChangesPage({ params, searchParams }: { params: Promise<{ manualId: string; revisionId: string }>; searchParams: Promise<{ all?: string }> }) {
+  const { manualId, revisionId } = await params;
+  const { all } = await searchParams;
+  const user = await requirePageUser("library:view", `/library/${manualId}/${revisionId}/changes`);
+  if (!uuid.test(manualId) || !uuid.test(revisionId)) notFound();
+  const [manual, revision] = await Promise.all([getManual({ id: manualId }), getReadableRevision({ actor: user, id: revisionId })]).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  });
+  if (revision.manualId !== manualId) notFound();
+  const comparison = await getComparison({ revisionId }).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === "not_found") return null;
+    throw error;
+  });
+  const previous = manual.revisions.find((r) => r.id === comparison?.previousRevisionId);
+  const rechecks = await listRechecksOfRevision({ revisionId });
+  const shown = comparison ? (all ? comparison.pages : comparison.pages.filter((p) => p.status !== "unchanged")) : [];
+  const compareLink = (oldPage: number | null, newPage: number | null) =>
+    `/library/${manualId}/${revisionId}/changes/compare?${new URLSearchParams({ ...(oldPage ? { old: String(oldPage) } : {}), ...(newPage ? { new: String(newPage) } : {}) })}`;
+
+  return (
+    <div className="flex flex-col gap-5">
+      <nav aria-label="Breadcrumb" className="flex flex-wrap gap-x-3">
+        <Link href="/library" className="py-2">Library</Link>
+        <span aria-hidden="true" className="py-2">›</span>
+        <Link href={`/library/${manualId}`} className="py-2">{manual.title}</Link>
+      </nav>
+      <h1>
+        What changed in {revision.label}
+        {previous ? ` since ${previous.label}` : ""}
+      </h1>
+      {!comparison ? (
+        <p className="notice-error">This revision has not been compared yet. The comparison is made a moment after the revision is ready; reload in a little while.</p>
+      ) : !comparison.previousRevisionId ? (
+        <p className="panel">This is the first revision of the manual in the library: there is nothing to compare it with.</p>
+      ) : (
+        <>
+          <ul className="flex flex-wrap gap-2" aria-label="Summary">
+            {(Object.keys(statusText) as PageStatus[]).map((s) => (
+              <li key={s} className={`badge ${statusStyle[s]} text-base`}>
+                {statusText[s]}: {comparison.summary[s]}
+              </li>
+            ))}
+          </ul>
+          <p className="text-ink-soft">
+            Page numbers, revision labels, dates and running headers are left out of the comparison. A moved page has the same content at a new
+            page number.
+          </p>
+
+          <section className="panel flex flex-col gap-2" aria-labelledby="affected">
+            <h2 id="affected">Task cards to recheck</h2>
+            {rechecks.length === 0 ? (
+              <p>No published task card cites a page that changed, moved or went.</p>
+            ) : (
+              <ul className="flex flex-col gap-1">
+                {rechecks.map((r) => (
+                  <li key={r.cardId}>
+                    <Link href={`/cards/${r.cardId}`} className="font-semibold">{r.title}</Link>: {r.open} of {r.total} citations still to recheck
+                    {r.ownerName ? ` (owner ${r.ownerName})` : ""}
+                  </li>
+                ))}
+              </ul>
+            )}
+          </section>
+
+          <section className="panel flex flex-col gap-2 overflow-x-auto" aria-labelledby="pages">
+            <div className="flex flex-wrap items-center gap-3">
+              <h2 id="pages" className="mr-auto">Effective pages of {revision.label}</h2>
+              <Link href={all ? "?" : "?all=1"} className="btn btn-secondary btn-small">
+                {all ? "Show only what changed" : "Show every page"}
+              </Link>
+            </div>
+            <table className="data-table">
+              <thead>
+                <tr>
+                  <th scope="col">Page in {revision.label}</th>
+                  <th scope="col">State</th>
+                  <th scope="col">Page in {previous?.label ?? "the revision before"}</th>
+                  <th scope="col">Similarity</th>
+                  <th scope="col">Side by side</th>
+                </tr>
+              </thead>
+              <tbody>
+                {shown.map((p, i) => (
+                  <tr key={i}>
+                    <td>{p.newPage ?? "—"}</td>
+                    <td><span className={`badge ${statusStyle[p.status]}`}>{statusText[p.status]}</span></td>
+                    <td>{p.oldPage ?? "—"}</td>
+                    <td>{p.status === "changed" ? `${Math.round(p.similarity * 100)} %` : "—"}</td>
+                    <td>
+                      <Link href={compareLink(p.oldPage, p.newPage)} className="inline-flex min-h-11 items-center">
+                        Compare
+                      </Link>
+                    </td>
+                  </tr>
+                ))}
+                {shown.length === 0 ? (
+                  <tr>
+                    <td colSpan={5}>No page changed.</td>
+                  </tr>
+                ) : null}
+              </tbody>
+            </table>
+          </section>
+        </>
+      )}
+    </div>
+  );
+}
