@@ -169,14 +169,20 @@ export const pages = pgTable(
     heading: text("heading").notNull().default(""),
     ocr: boolean("ocr").notNull().default(false),
     thumbnailKey: text("thumbnail_key"),
-    // Kept by PostgreSQL itself: the heading weighs A, the body B. Indexed with RUM in
-    // db/migrations/0002_search.sql (drizzle-kit has no words for a RUM index).
+    // Kept by PostgreSQL itself: the heading weighs A, the body B. GIN-indexed (db/migrations/
+    // 0006_search_gin.sql); the heading alone has its own vector, so pages whose heading matches
+    // are found without reading every page that merely mentions the word.
     searchVector: tsvector("search_vector").generatedAlwaysAs(
       sql`setweight(to_tsvector('english', coalesce(heading, '')), 'A') || setweight(to_tsvector('english', coalesce(text, '')), 'B')`,
     ),
+    headingVector: tsvector("heading_vector").generatedAlwaysAs(sql`to_tsvector('english', coalesce(heading, ''))`),
     ...timestamps,
   },
-  (t) => [primaryKey({ columns: [t.revisionId, t.pageNumber] })],
+  (t) => [
+    primaryKey({ columns: [t.revisionId, t.pageNumber] }),
+    index("pages_search_gin").using("gin", t.searchVector),
+    index("pages_heading_gin").using("gin", t.headingVector),
+  ],
 );
 
 /** Every word (as a search lexeme) found in the library, for correcting typos in queries. */

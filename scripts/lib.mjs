@@ -70,8 +70,8 @@ export function ensurePostgres() {
     bin = findPostgresBin();
   }
   if (!bin) throw new Error("PostgreSQL was installed but initdb was not found.");
-  // Search ranks through a RUM index (Debian's postgresql-NN-rum), so the best hits come first
-  // without scoring every match.
+  // Migration 0002 once created a RUM index (Debian's postgresql-NN-rum); 0006 drops it again (it
+  // crashed the server under concurrent writes), but a fresh database still replays 0002.
   const version = /postgresql\/(\d+)\/bin/.exec(bin)?.[1];
   if (version && !existsSync(`/usr/share/postgresql/${version}/extension/rum.control`)) {
     aptInstall([`postgresql-${version}-rum`], "The RUM index extension for PostgreSQL");
