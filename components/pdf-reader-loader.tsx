@@ -1,7 +1,8 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { useCallback } from "react";
+import { useCallback, useEffect } from "react";
+import { prefetchFirstRanges } from "./pdf-prefetch";
 import type { PdfReaderProps } from "./pdf-reader";
 
 // pdf.js needs the browser (canvas, workers): the reader is never rendered on the server.
@@ -13,5 +14,7 @@ const PdfReader = dynamic(() => import("./pdf-reader").then((m) => m.PdfReader),
 export function PdfReaderLoader(props: Omit<PdfReaderProps, "pageHref"> & { baseHref: string; query: string }) {
   const { baseHref, query, ...rest } = props;
   const pageHref = useCallback((n: number) => `${baseHref}/${n}${query}`, [baseHref, query]);
+  // The file's first bytes are on their way while the reader's code still loads.
+  useEffect(() => prefetchFirstRanges(rest.fileUrl, rest.fileSize), [rest.fileUrl, rest.fileSize]);
   return <PdfReader {...rest} pageHref={pageHref} />;
 }

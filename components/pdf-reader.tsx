@@ -5,9 +5,20 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { Document, Page, pdfjs } from "react-pdf";
 import "react-pdf/dist/Page/TextLayer.css";
+import { chunkSize, getRange } from "./pdf-prefetch";
 
 // Copied from pdfjs-dist by scripts/lib.mjs (copyPdfWorker) before every build.
 pdfjs.GlobalWorkerOptions.workerSrc = "/pdf.worker.min.mjs";
+
+// One worker for the page's life, started as soon as this code arrives: fetching and starting
+// pdf.js's worker (a megabyte of script) then overlaps with React mounting the reader.
+let sharedWorker: InstanceType<typeof pdfjs.PDFWorker> | null = null;
+function readerWorker() {
+  // A worker ended with an earlier document (leaving the reader and coming back) is replaced.
+  if (!sharedWorker || sharedWorker.destroyed) sharedWorker = new pdfjs.PDFWorker();
+  return sharedWorker;
+}
+if (typeof window !== "undefined") readerWorker();
 
 const gap = 16;
 const nearby = 2; // pages drawn above and below the visible ones
@@ -86,13 +97,8 @@ function Thumbnails({ base, count, current, onPick }: { base: string; count: num
 function rangeSource(fileUrl: string, fileSize: number, onError: () => void) {
   const transport = new pdfjs.PDFDataRangeTransport(fileSize, null);
   transport.requestDataRange = (begin: number, end: number) => {
-    fetch(fileUrl, { headers: { Range: `bytes=${begin}-${end - 1}` }, credentials: "same-origin" })
-      .then(async (response) => {
-        if (response.status !== 206 && response.status !== 200) throw new Error(`status ${response.status}`);
-        const bytes = new Uint8Array(await response.arrayBuffer());
-        // A server that ignores Range sends the whole file: hand pdf.js the part it asked for.
-        transport.onDataRange(begin, response.status === 200 ? bytes.subarray(begin, end) : bytes);
-      })
+    getRange(fileUrl, begin, end)
+      .then((bytes) => transport.onDataRange(begin, bytes))
       .catch(onError);
   };
   return { range: transport };
@@ -117,7 +123,7 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
     [fileUrl, fileSize],
   );
   const options = useMemo(
-    () => ({ disableAutoFetch: true, disableStream: true, rangeChunkSize: 65536, standardFontDataUrl: "/standard_fonts/" }),
+    () => ({ disableAutoFetch: true, disableStream: true, rangeChunkSize: chunkSize, standardFontDataUrl: "/standard_fonts/", worker: readerWorker() }),
     [],
   );
   const pattern = useMemo(

@@ -82,7 +82,7 @@ const uuidTextList = (ids: string[]) => sql.raw(`array[${ids.map((id) => `'${id.
  * thousand pages, "mentions the word" tells a reader nothing more, and ranking every one would cost
  * half a second on 50,000 pages.
  */
-export const rankedCandidates = 1000;
+export const rankedCandidates = 400;
 
 /** Cover density with the heading (A) weighing most, damped by page length (normalisation 1). */
 const rank = (tsquery: SQL) => sql`ts_rank_cd('{0.1, 0.2, 0.4, 1.0}', p.search_vector, ${tsquery}, 1)`;
