@@ -1,0 +1,106 @@
+import { describe, expect, it } from "vitest";
+import { foldRun, orderEvents, type CardStepForRun, type RunEvent } from "@/lib/runs/fold";
+
+const steps: CardStepForRun[] = [
+  { id: "s1", inspectionPoint: false, measurement: { unit: "in-lb", min: 50, max: 70 }, timerMinutes: null },
+  { id: "s2", inspectionPoint: true, measurement: null, timerMinutes: 10 },
+  { id: "s3", inspectionPoint: false, measurement: null, timerMinutes: null },
+];
+const student = "student-1";
+const instructor = "instructor-1";
+const instructors = new Set([instructor]);
+let n = 0;
+const at = (minute: number) => `2026-12-01T10:${String(minute).padStart(2, "0")}:00.000Z`;
+const ev = (type: RunEvent["type"], minute: number, extra: Partial<RunEvent> = {}): RunEvent => ({ id: `e${String(++n).padStart(3, "0")}`, type, userId: student, clientTime: at(minute), ...extra });
+
+const story: RunEvent[] = [
+  ev("value.recorded", 1, { stepId: "s1", payload: { value: "80 in-lb" } }),
+  ev("value.recorded", 2, { stepId: "s1", payload: { value: "6.5 N·m" } }), // 57.5 in-lb: the later reading wins
+  ev("step.checked", 3, { stepId: "s1" }),
+  ev("note.added", 4, { stepId: "s1", payload: { text: "Re-torqued after the first reading." } }),
+  ev("timer.started", 5, { stepId: "s2", payload: { minutes: 10 } }),
+  ev("timer.stopped", 15, { stepId: "s2" }),
+  ev("step.checked", 16, { stepId: "s2" }),
+  ev("inspection.bought_off", 20, { stepId: "s2", userId: instructor }),
+  ev("step.checked", 21, { stepId: "s3" }),
+  ev("run.submitted", 22),
+];
+
+function shuffled<T>(list: T[], seed: number): T[] {
+  const out = [...list];
+  let x = seed;
+  for (let i = out.length - 1; i > 0; i--) {
+    x = (x * 1103515245 + 12345) % 2 ** 31;
+    const j = x % (i + 1);
+    [out[i], out[j]] = [out[j]!, out[i]!];
+  }
+  return out;
+}
+
+describe("run event fold", () => {
+  it("derives the run from its events", () => {
+    const state = foldRun(story, steps, instructors);
+    expect(state.status).toBe("submitted");
+    expect(state.steps.s1!.value?.judgement).toMatchObject({ status: "in" });
+    expect(state.steps.s1!.notes).toHaveLength(1);
+    expect(state.steps.s2!.timer).toEqual({ startedAt: at(5), minutes: 10, stoppedAt: at(15) });
+    expect(state.steps.s2!.boughtOff).toEqual({ by: instructor, at: at(20) });
+    expect(state.waitingAt).toBeNull();
+    expect(state.ignored).toEqual([]);
+  });
+
+  it("gives the same state whatever order the events arrive in", () => {
+    const expected = foldRun(story, steps, instructors);
+    for (let seed = 1; seed <= 50; seed++) expect(foldRun(shuffled(story, seed), steps, instructors)).toEqual(expected);
+  });
+
+  it("counts an event sent twice once", () => {
+    const twice = [...story, ...story.slice(3, 5), story[3]!];
+    expect(foldRun(twice, steps, instructors)).toEqual(foldRun(story, steps, instructors));
+    expect(orderEvents(twice)).toHaveLength(story.length);
+  });
+
+  it("sets aside every event after the sign-off", () => {
+    const signOff = ev("run.signed_off", 30, { userId: instructor });
+    const late = ev("step.unchecked", 31, { stepId: "s3" });
+    const state = foldRun([...story, late, signOff], steps, instructors);
+    expect(state.status).toBe("signed_off");
+    expect(state.steps.s3!.checked).toBe(true);
+    expect(state.ignored).toEqual([{ id: late.id, reason: "after sign-off" }]);
+  });
+
+  it("lets only an instructor buy off, return or sign off", () => {
+    const state = foldRun(
+      [ev("step.checked", 1, { stepId: "s2" }), ev("inspection.bought_off", 2, { stepId: "s2" }), ev("run.signed_off", 3)],
+      steps,
+      instructors,
+    );
+    expect(state.steps.s2!.boughtOff).toBeNull();
+    expect(state.signedOff).toBeNull();
+    expect(state.waitingAt).toBe("s2");
+    expect(state.ignored.map((i) => i.reason)).toEqual(["only an instructor may buy off", "only an instructor may do this"]);
+  });
+
+  it("judges an out-of-limits value, and a return sends the run back to work", () => {
+    const state = foldRun(
+      [
+        ev("value.recorded", 1, { stepId: "s1", payload: { value: "90" } }),
+        ev("run.submitted", 2),
+        ev("run.returned", 3, { userId: instructor, payload: { comment: "Torque is high: redo step 1." } }),
+      ],
+      steps,
+      instructors,
+    );
+    expect(state.steps.s1!.value?.judgement.status).toBe("out");
+    expect(state.status).toBe("returned");
+    expect(state.returnedComment).toBe("Torque is high: redo step 1.");
+    const resumed = foldRun([...story.slice(0, 1), ev("run.returned", 3, { userId: instructor }), ev("step.checked", 4, { stepId: "s1" })], steps, instructors);
+    expect(resumed.status).toBe("in_progress");
+  });
+
+  it("ignores events for steps the card version does not have", () => {
+    const state = foldRun([ev("step.checked", 1, { stepId: "nope" })], steps, instructors);
+    expect(state.ignored).toEqual([expect.objectContaining({ reason: "no such step on this card version" })]);
+    expect(state.status).toBe("not_started");
+  });
+});
