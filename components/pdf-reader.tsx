@@ -115,6 +115,9 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
   const [goTo, setGoTo] = useState(String(initialPage));
   const [error, setError] = useState<string | null>(null);
   const jumped = useRef(false);
+  // Until the page asked for is painted, nothing else competes with it for the network or the CPU:
+  // its neighbours and the strip of page pictures come after.
+  const [firstPainted, setFirstPainted] = useState(false);
 
   const pageWidth = fitWidth ? width : Math.round(612 * zoom * 1.3);
   const pageHeight = Math.round(pageWidth * aspect);
@@ -220,7 +223,7 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
       </div>
       {error ? <p className="notice-error" role="alert">{error}</p> : null}
       <div className="flex gap-3">
-      <Thumbnails base={thumbnailBase} count={pageCount} current={current} onPick={scrollToPage} />
+      {firstPainted ? <Thumbnails base={thumbnailBase} count={pageCount} current={current} onPick={scrollToPage} /> : <div aria-hidden="true" className="hidden w-36 shrink-0 lg:block" />}
       <div
         ref={scroller}
         onScroll={onScroll}
@@ -244,7 +247,7 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
           }}
         >
           <div style={{ height: pageCount * (pageHeight + gap) }} className="relative">
-            {[...visible].map((n) => (
+            {[...visible].filter((n) => firstPainted || n === current).map((n) => (
               <div
                 key={n}
                 data-page={n}
@@ -262,6 +265,8 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
                     return pattern ? safe.replace(pattern, (m) => `<mark>${m}</mark>`) : safe;
                   }}
                   loading={<span className="sr-only">Drawing page {n}…</span>}
+                  onRenderSuccess={() => setFirstPainted(true)}
+                  onRenderError={() => setFirstPainted(true)}
                 />
               </div>
             ))}
