@@ -171,7 +171,12 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
   useEffect(() => {
     // Keep the address on the page being read, so it can be shared or cited. The history API, not
     // a router navigation: that would render the page again on the server and take the focus away.
-    const timer = setTimeout(() => window.history.replaceState(null, "", pageHref(current)), 400);
+    // Only when the address differs: a needless replaceState during a link's navigation (the page
+    // strip or the neighbours appearing) can cancel that navigation in the app router.
+    const timer = setTimeout(() => {
+      const target = pageHref(current);
+      if (`${window.location.pathname}${window.location.search}` !== target) window.history.replaceState(null, "", target);
+    }, 400);
     return () => clearTimeout(timer);
   }, [current, pageHref]);
 

@@ -61,6 +61,7 @@ test("an instructor builds a two-step card citing a page from the reader, publis
   await panel.getByRole("button", { name: "Put this page on the step" }).click();
   await expect(panel.getByText(`Page ${cited} is on step 1 of draft version 1.`)).toBeVisible();
   await panel.getByRole("link", { name: "Back to the card" }).click();
+  await expect(page).toHaveURL(/\/cards\/[0-9a-f-]+\/edit$/);
 
   await expect(editor.step(1)).toContainText(`HT-20 Trainer Maintenance Manual, Rev 4, page ${cited}`);
   await page.getByRole("tab", { name: "Preview as a student" }).click();
