@@ -7,16 +7,16 @@ import { requirePageUser } from "@/lib/auth/session";
 import { getCard, getCardVersion } from "@/lib/cards";
 import { AppError } from "@/lib/errors";
 import { CardActions } from "../_components/card-actions";
+import { isUuid } from "@/lib/http";
 
 export const metadata: Metadata = { title: "Task card" };
 
-const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function CardPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ v?: string }> }) {
   const { id } = await params;
   const { v } = await searchParams;
   const user = await requirePageUser("cards:view", `/cards/${id}`);
-  if (!uuid.test(id)) notFound();
+  if (!isUuid(id)) notFound();
   const author = can(user, "cards:author");
   const card = await getCard({ actor: user, id }).catch((error: unknown) => {
     if (error instanceof AppError && error.code === "not_found") notFound();

@@ -7,15 +7,15 @@ import { requirePageUser } from "@/lib/auth/session";
 import { getClassById } from "@/lib/classes";
 import { AppError } from "@/lib/errors";
 import { AddMembersForm, RemoveMemberButton } from "./_components/member-controls";
+import { isUuid } from "@/lib/http";
 
 export const metadata: Metadata = { title: "Class" };
 
-const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function ClassPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requirePageUser("classes:view", `/classes/${id}`);
-  if (!uuid.test(id)) notFound();
+  if (!isUuid(id)) notFound();
   const found = await getClassById({ actor: user, id }).catch((error: unknown) => {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;

@@ -8,16 +8,16 @@ import { getManual } from "@/lib/library/manuals";
 import { documentTypeLabels } from "@/lib/validation/library";
 import { RetryButton } from "../_components/retry-button";
 import { UploadForm } from "../_components/upload-form";
+import { isUuid } from "@/lib/http";
 
 export const metadata: Metadata = { title: "Manual" };
 
-const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const statusLabel = { queued: "Waiting to be read", processing: "Being read", ready: "Ready", failed: "Failed" } as const;
 
 export default async function ManualPage({ params }: { params: Promise<{ manualId: string }> }) {
   const { manualId } = await params;
   const user = await requirePageUser("library:view", `/library/${manualId}`);
-  if (!uuid.test(manualId)) notFound();
+  if (!isUuid(manualId)) notFound();
   const manual = await getManual({ id: manualId }).catch((error: unknown) => {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;

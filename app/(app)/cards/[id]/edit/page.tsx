@@ -6,15 +6,15 @@ import { getCard, listSubjects } from "@/lib/cards";
 import { AppError } from "@/lib/errors";
 import { listManuals } from "@/lib/library/manuals";
 import { CardEditor } from "../../_components/card-editor";
+import { isUuid } from "@/lib/http";
 
 export const metadata: Metadata = { title: "Edit task card" };
 
-const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function EditCardPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requirePageUser("cards:author", `/cards/${id}/edit`);
-  if (!uuid.test(id)) notFound();
+  if (!isUuid(id)) notFound();
   const [card, subjects, manuals] = await Promise.all([
     getCard({ actor: user, id }).catch((error: unknown) => {
       if (error instanceof AppError && error.code === "not_found") notFound();

@@ -7,10 +7,10 @@ import { getCard } from "@/lib/cards";
 import { AppError } from "@/lib/errors";
 import { listOpenRechecks } from "@/lib/revisions/rechecks";
 import { RecheckForm } from "../../_components/recheck-form";
+import { isUuid } from "@/lib/http";
 
 export const metadata: Metadata = { title: "Recheck task card" };
 
-const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 const statusWords = { changed: "changed", moved: "moved to another page", removed: "is no longer in the manual" } as const;
 
@@ -18,7 +18,7 @@ const statusWords = { changed: "changed", moved: "moved to another page", remove
 export default async function RecheckPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requirePageUser("cards:author", `/cards/${id}/recheck`);
-  if (!uuid.test(id)) notFound();
+  if (!isUuid(id)) notFound();
   const [card, rechecks] = await Promise.all([getCard({ actor: user, id }), listOpenRechecks({ cardId: id })]).catch((error: unknown) => {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;

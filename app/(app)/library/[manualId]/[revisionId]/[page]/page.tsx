@@ -11,10 +11,10 @@ import { getManual, getPage, getReadableRevision } from "@/lib/library/manuals";
 import { findCorrections } from "@/search/postgres";
 import { parseQuery } from "@/search/query";
 import { CiteOnCard } from "./_components/cite-on-card";
+import { isUuid } from "@/lib/http";
 
 export const metadata: Metadata = { title: "Page" };
 
-const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /**
  * One page of a revision: its text (searched words marked), picture, and the way to the PDF at that
@@ -31,7 +31,7 @@ export default async function ManualPageView({
   const { q = "" } = await searchParams;
   const user = await requirePageUser("library:view", `/library/${manualId}/${revisionId}/${pageParam}`);
   const pageNumber = Number(pageParam);
-  if (!uuid.test(manualId) || !uuid.test(revisionId) || !Number.isInteger(pageNumber) || pageNumber < 1) notFound();
+  if (!isUuid(manualId) || !isUuid(revisionId) || !Number.isInteger(pageNumber) || pageNumber < 1) notFound();
   const found = await Promise.all([
     getReadableRevision({ actor: user, id: revisionId }),
     getPage({ revisionId, pageNumber }),

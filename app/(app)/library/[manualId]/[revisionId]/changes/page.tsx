@@ -6,10 +6,10 @@ import { AppError } from "@/lib/errors";
 import { getManual, getReadableRevision } from "@/lib/library/manuals";
 import type { PageStatus } from "@/lib/revisions/compare";
 import { getComparison, listRechecksOfRevision } from "@/lib/revisions/rechecks";
+import { isUuid } from "@/lib/http";
 
 export const metadata: Metadata = { title: "What changed" };
 
-const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 const statusText: Record<PageStatus, string> = {
   unchanged: "Unchanged",
@@ -31,7 +31,7 @@ export default async function RevisionChangesPage({ params, searchParams }: { pa
   const { manualId, revisionId } = await params;
   const { all } = await searchParams;
   const user = await requirePageUser("library:view", `/library/${manualId}/${revisionId}/changes`);
-  if (!uuid.test(manualId) || !uuid.test(revisionId)) notFound();
+  if (!isUuid(manualId) || !isUuid(revisionId)) notFound();
   const [manual, revision] = await Promise.all([getManual({ id: manualId }), getReadableRevision({ actor: user, id: revisionId })]).catch((error: unknown) => {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;

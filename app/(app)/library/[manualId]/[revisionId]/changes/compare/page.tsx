@@ -6,17 +6,17 @@ import { requirePageUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
 import { getManual, getPage, getReadableRevision } from "@/lib/library/manuals";
 import { getComparison } from "@/lib/revisions/rechecks";
+import { isUuid } from "@/lib/http";
 
 export const metadata: Metadata = { title: "Old and new page" };
 
-const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const pageOf = (v: string | undefined) => (v && /^\d{1,7}$/.test(v) ? Number(v) : null);
 
 export default async function ComparePagesPage({ params, searchParams }: { params: Promise<{ manualId: string; revisionId: string }>; searchParams: Promise<{ old?: string; new?: string }> }) {
   const { manualId, revisionId } = await params;
   const query = await searchParams;
   const user = await requirePageUser("library:view", `/library/${manualId}/${revisionId}/changes`);
-  if (!uuid.test(manualId) || !uuid.test(revisionId)) notFound();
+  if (!isUuid(manualId) || !isUuid(revisionId)) notFound();
   const oldPage = pageOf(query.old);
   const newPage = pageOf(query.new);
   const found = await Promise.all([getManual({ id: manualId }), getReadableRevision({ actor: user, id: revisionId }), getComparison({ revisionId })]).catch((error: unknown) => {
