@@ -1,10 +1,11 @@
 "use client";
 
 import {
-  createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getPaginationRowModel,
+  createColumnHelper, getCoreRowModel, getFilteredRowModel, getPaginationRowModel,
   getSortedRowModel, useReactTable, type ColumnFiltersState, type SortingState,
 } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
+import { DataTable } from "@/components/data-table";
 import { ApiError } from "@/lib/api-client";
 import { roleLabels, roles, type Role } from "@/lib/auth/permissions";
 import type { AccountDto } from "@/lib/dto";
@@ -202,47 +203,7 @@ export function AccountsManager({ initialAccounts, currentUserId }: { initialAcc
           </div>
         </div>
         <div className="overflow-x-auto">
-          <table className="data-table" aria-describedby="accounts-count">
-            <thead>
-              {table.getHeaderGroups().map((group) => (
-                <tr key={group.id}>
-                  {group.headers.map((header) => {
-                    const sorted = header.column.getIsSorted();
-                    return (
-                      <th key={header.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}>
-                        {header.column.getCanSort() ? (
-                          <button
-                            type="button"
-                            className="inline-flex min-h-11 items-center gap-1 font-bold uppercase"
-                            onClick={header.column.getToggleSortingHandler()}
-                          >
-                            {flexRender(header.column.columnDef.header, header.getContext())}
-                            <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
-                          </button>
-                        ) : (
-                          flexRender(header.column.columnDef.header, header.getContext())
-                        )}
-                      </th>
-                    );
-                  })}
-                </tr>
-              ))}
-            </thead>
-            <tbody>
-              {table.getRowModel().rows.map((row) => (
-                <tr key={row.id}>
-                  {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
-                  ))}
-                </tr>
-              ))}
-              {shown === 0 ? (
-                <tr>
-                  <td colSpan={columns.length}>No account matches.</td>
-                </tr>
-              ) : null}
-            </tbody>
-          </table>
+          <DataTable table={table} empty="No account matches." describedBy="accounts-count" />
         </div>
         <div className="flex flex-wrap items-center gap-3">
           <span id="accounts-count" aria-live="polite">

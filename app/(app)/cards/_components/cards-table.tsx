@@ -1,11 +1,12 @@
 "use client";
 
 import {
-  createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getPaginationRowModel, getSortedRowModel, useReactTable,
+  createColumnHelper, getCoreRowModel, getFilteredRowModel, getPaginationRowModel, getSortedRowModel, useReactTable,
   type ColumnFiltersState, type SortingState,
 } from "@tanstack/react-table";
 import Link from "next/link";
 import { useMemo, useState } from "react";
+import { DataTable } from "@/components/data-table";
 import type { CardListStatus, CardSummaryDto, SubjectDto } from "@/lib/dto-cards";
 import { useCardList } from "./use-cards";
 
@@ -118,40 +119,11 @@ export function CardsTable({ initialCards, subjects, author }: { initialCards: C
           </label>
         ) : null}
       </div>
-      <p aria-live="polite" className="hint">
+      <p id="cards-count" aria-live="polite" className="hint">
         {error ? "The list could not be loaded. Check the connection." : isFetching ? "Loading…" : `${table.getFilteredRowModel().rows.length} cards`}
       </p>
       <div className="panel overflow-x-auto">
-        <table className="data-table">
-          <thead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => (
-                  <th key={header.id} scope="col" aria-sort={header.column.getIsSorted() === "asc" ? "ascending" : header.column.getIsSorted() === "desc" ? "descending" : "none"}>
-                    <button type="button" className="min-h-11 font-bold uppercase" onClick={header.column.getToggleSortingHandler()}>
-                      {flexRender(header.column.columnDef.header, header.getContext())}
-                      {header.column.getIsSorted() === "asc" ? " ▲" : header.column.getIsSorted() === "desc" ? " ▼" : ""}
-                    </button>
-                  </th>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id}>
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
-                ))}
-              </tr>
-            ))}
-            {table.getRowModel().rows.length === 0 ? (
-              <tr>
-                <td colSpan={columns.length}>No task cards match.</td>
-              </tr>
-            ) : null}
-          </tbody>
-        </table>
+        <DataTable table={table} empty="No task cards match." describedBy="cards-count" />
       </div>
       {table.getPageCount() > 1 ? (
         <div className="flex items-center gap-3">
