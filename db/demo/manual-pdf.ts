@@ -7,6 +7,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf-lib";
 import { runTool } from "@/lib/pdf/tools";
+import { wrapLine } from "@/lib/pdf/wrap";
 import type { DemoManual, DemoSection } from "./manual-content";
 
 const pageSize: [number, number] = [612, 792]; // US letter, points
@@ -20,19 +21,7 @@ interface Fonts {
 }
 
 function wrap(text: string, font: PDFFont, size: number, maxWidth = width): string[] {
-  const lines: string[] = [];
-  let line = "";
-  for (const word of text.split(/\s+/)) {
-    const next = line ? `${line} ${word}` : word;
-    if (font.widthOfTextAtSize(next, size) > maxWidth && line) {
-      lines.push(line);
-      line = word;
-    } else {
-      line = next;
-    }
-  }
-  if (line) lines.push(line);
-  return lines;
+  return wrapLine(text, font, size, maxWidth);
 }
 
 class Writer {

@@ -5,6 +5,7 @@ import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf
 import { calculators } from "@/lib/calc";
 import { describeLimit } from "@/lib/calc/limits";
 import { unitLabel } from "@/lib/calc/units";
+import { wrapLine } from "./wrap";
 import type { CardVersionDto } from "@/lib/dto-cards";
 import { noticeLabels, sortNotices } from "@/lib/validation/cards";
 
@@ -75,22 +76,13 @@ class CardWriter {
   }
 
   wrap(text: string, font: PDFFont, size: number, maxWidth: number): string[] {
-    const lines: string[] = [];
-    for (const paragraph of printable(font, text).split("\n")) {
-      let line = "";
-      for (const word of paragraph.split(/\s+/)) {
-        const next = line ? `${line} ${word}` : word;
-        if (font.widthOfTextAtSize(next, size) > maxWidth && line) {
-          lines.push(line);
-          line = word;
-        } else {
-          line = next;
-        }
-      }
-      lines.push(line);
-    }
-    return lines;
+    // An empty paragraph stays as a blank line.
+    return printable(font, text).split("\n").flatMap((paragraph) => {
+      const lines = wrapLine(paragraph, font, size, maxWidth);
+      return lines.length ? lines : [""];
+    });
   }
+
 
   text(text: string, { size = 10.5, bold = false, indent = 0, color = black }: { size?: number; bold?: boolean; indent?: number; color?: ReturnType<typeof rgb> } = {}) {
     const font = bold ? this.bold : this.regular;
