@@ -214,15 +214,6 @@ export class PageSimilarity {
   }
 }
 
-/** Plain Dice coefficient over two word sets (unweighted). */
-export function similarity(a: Set<string>, b: Set<string>): number {
-  if (a.size === 0 && b.size === 0) return 1;
-  let shared = 0;
-  const [small, large] = a.size < b.size ? [a, b] : [b, a];
-  for (const w of small) if (large.has(w)) shared++;
-  return (2 * shared) / (a.size + b.size);
-}
-
 export function comparePages(oldTexts: string[], newTexts: string[], options: CompareOptions = {}): Comparison {
   const { labels = [], changedThreshold = 0.5, window = 20 } = options;
   const oldNorm = normalisePages(oldTexts, labels);

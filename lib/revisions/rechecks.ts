@@ -153,19 +153,15 @@ export async function applyRechecks({ actor, cardId, decisions }: { actor: Actor
         outcomes.push({ id: r.id, outcome: decision.action === "accept" ? "accepted" : decision.action === "relink" ? "relinked" : "dropped", page });
       }
 
-      // Unchanged pages of the old revision follow the card to the new revision.
+      // Unchanged pages of the old revision follow the card to the new revision. (No recheck is
+      // ever about an unchanged page, so these never collide with an open one.)
       for (const revisionId of new Set(rows.map((r) => r.revisionId))) {
         const previousRevisionId = rows.find((r) => r.revisionId === revisionId)!.previousRevisionId;
         const [comparison] = await tx.select({ pages: revisionComparisons.pages }).from(revisionComparisons).where(eq(revisionComparisons.revisionId, revisionId));
-        const stillOpen = new Set(
-          (await tx.select({ stepId: citationRechecks.stepId, oldPage: citationRechecks.oldPage }).from(citationRechecks).where(and(eq(citationRechecks.cardId, cardId), eq(citationRechecks.revisionId, revisionId), eq(citationRechecks.outcome, "open"))))
-            .map((o) => `${o.stepId}:${o.oldPage}`),
-        );
-        for (const d of rows) stillOpen.delete(`${d.stepId}:${d.oldPage}`);
         const unchanged = new Map(((comparison?.pages ?? []) as PageChange[]).filter((p) => p.status === "unchanged" && p.oldPage).map((p) => [p.oldPage!, p.newPage!]));
         for (const step of content.steps) {
           step.references = step.references.map((ref) =>
-            ref.revisionId === previousRevisionId && unchanged.has(ref.page) && !stillOpen.has(`${step.id}:${ref.page}`) ? { ...ref, revisionId, page: unchanged.get(ref.page)! } : ref,
+            ref.revisionId === previousRevisionId && unchanged.has(ref.page) ? { ...ref, revisionId, page: unchanged.get(ref.page)! } : ref,
           );
         }
       }
