@@ -22,7 +22,9 @@ export function fieldErrors(error: z.ZodError): FieldErrors {
     // A body that wraps the form in an envelope ({ content: {...} }) reports the form's own field.
     const path = issue.path[0] === "content" && issue.path.length > 1 ? issue.path.slice(1) : issue.path;
     const key = path.length ? String(path[0]) : "_";
-    fields[key] ??= issue.message;
+    // A card's steps are numbered for people: "Step 2: …" says where to look.
+    const message = key === "steps" && typeof path[1] === "number" ? `Step ${path[1] + 1}: ${issue.message}` : issue.message;
+    fields[key] ??= message;
   }
   return fields;
 }

@@ -132,6 +132,9 @@ describe("task cards", () => {
       const body = (await response.json()) as { error: { message: string; fields?: Record<string, string> } };
       expect(Object.keys(body.error.fields ?? {}).join(" ")).toMatch(field);
     }
+    // The step is named in people's numbering.
+    const inverted = await call("POST", "/api/cards", { cookie: instructor, json: { content: content({ steps: [step(), step({ measurement: { label: "Gap", unit: "in", min: 2, max: 1 } })] }) } });
+    expect(((await inverted.json()) as { error: { fields: Record<string, string> } }).error.fields.steps).toBe("Step 2: The minimum is above the maximum.");
     const unknownSubject = await call("POST", "/api/cards", { cookie: instructor, json: { content: content({ subjectId: randomUUID() }) } });
     expect(unknownSubject.status).toBe(422);
     const notJson = await call("POST", "/api/cards", { cookie: instructor, body: "title=x", headers: { "content-type": "application/x-www-form-urlencoded" } });

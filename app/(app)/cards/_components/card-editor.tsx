@@ -53,7 +53,9 @@ export function CardEditor({ card, subjects, manuals, userId }: { card: CardDto;
         setState({ kind: "saved", at: new Date() });
         return true;
       } catch (error) {
-        const message = error instanceof ApiError ? error.message : "The draft could not be saved.";
+        // The field's own words ("Step 1: The minimum is above the maximum."), not its key.
+        const reason = error instanceof ApiError ? (Object.values(error.fields)[0] ?? error.message) : "The draft could not be saved.";
+        const message = `Not saved: ${reason}`;
         setState({ kind: "error", message, conflict: error instanceof ApiError && error.status === 409 });
         return false;
       }
@@ -109,7 +111,9 @@ export function CardEditor({ card, subjects, manuals, userId }: { card: CardDto;
       router.push(`/cards/${card.id}`);
       router.refresh();
     } catch (error) {
-      setPublishError(error instanceof ApiError ? error.message : "The card could not be published.");
+      // Every problem at once, in its own words, so the author fixes them in one pass.
+      const reasons = error instanceof ApiError ? Object.values(error.fields) : [];
+      setPublishError(reasons.length ? reasons.join(" ") : error instanceof ApiError ? error.message : "The card could not be published.");
     } finally {
       setPublishing(false);
     }
