@@ -159,12 +159,13 @@ export function CardEditor({ card, subjects, manuals, userId }: { card: CardDto;
         <Link href={`/cards/${card.id}`} className="btn btn-secondary">
           Done
         </Link>
+        {/* In the bar that stays on screen: a reason nobody sees is no reason at all. */}
+        {publishError ? (
+          <p role="alert" className="notice-error w-full">
+            Not published: {publishError}
+          </p>
+        ) : null}
       </div>
-      {publishError ? (
-        <p role="alert" className="notice-error">
-          Not published: {publishError}
-        </p>
-      ) : null}
 
       {tab === "preview" ? (
         <CardView version={toPreview(getValues(), base, subjectName(getValues("subjectId")))} />
