@@ -117,6 +117,8 @@ export const manuals = pgTable(
     ataChapters: text("ata_chapters").array().notNull().default(sql`'{}'::text[]`),
     // Set only when a revision is ready; never points at a queued, processing or failed one.
     currentRevisionId: uuid("current_revision_id").references((): AnyPgColumn => revisions.id, { onDelete: "set null" }),
+    // A librarian's choice: carts store the whole current PDF, not only the pages cards cite.
+    keepOnCarts: boolean("keep_on_carts").notNull().default(false),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     ...timestamps,
   },
@@ -336,3 +338,96 @@ export type NewClass = typeof classes.$inferInsert;
 export type ClassMember = typeof classMembers.$inferSelect;
 export type AccountToken = typeof accountTokens.$inferSelect;
 export type AuditEvent = typeof auditEvents.$inferSelect;
+
+// ---------------------------------------------------------------- assignments, runs, sign-off
+
+/** An instructor gives a published card version to a class or to students, with a due date. */
+export const assignments = pgTable(
+  "assignments",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    cardId: uuid("card_id").notNull().references(() => taskCards.id, { onDelete: "restrict" }),
+    // Pinned: a run always follows the version it was assigned, even after a newer one is published.
+    versionId: uuid("version_id").notNull().references(() => taskCardVersions.id, { onDelete: "restrict" }),
+    classId: uuid("class_id").references(() => classes.id, { onDelete: "set null" }),
+    dueOn: date("due_on", { mode: "string" }),
+    note: text("note").notNull().default(""),
+    assignedBy: uuid("assigned_by").references(() => users.id, { onDelete: "set null" }),
+    ...timestamps,
+  },
+  (t) => [index("assignments_version_idx").on(t.versionId)],
+);
+
+export const runStatus = pgEnum("run_status", ["not_started", "in_progress", "submitted", "returned", "signed_off"]);
+
+/**
+ * One student's run of an assignment. Its state is folded from run_events (lib/runs/fold.ts);
+ * `status` and the times here are a copy of the fold kept for lists and queues.
+ */
+export const runs = pgTable(
+  "runs",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    assignmentId: uuid("assignment_id").notNull().references(() => assignments.id, { onDelete: "restrict" }),
+    studentId: uuid("student_id").notNull().references(() => users.id, { onDelete: "restrict" }),
+    versionId: uuid("version_id").notNull().references(() => taskCardVersions.id, { onDelete: "restrict" }),
+    status: runStatus("status").notNull().default("not_started"),
+    startedAt: timestamp("started_at", { withTimezone: true }),
+    submittedAt: timestamp("submitted_at", { withTimezone: true }),
+    lastEventAt: timestamp("last_event_at", { withTimezone: true }),
+    ...timestamps,
+  },
+  (t) => [
+    uniqueIndex("runs_assignment_student_key").on(t.assignmentId, t.studentId),
+    index("runs_student_idx").on(t.studentId, t.status),
+    index("runs_status_idx").on(t.status),
+  ],
+);
+
+/** What happened on a run, one row per event; the id is made on the cart, so a re-send is a no-op. */
+export const runEvents = pgTable(
+  "run_events",
+  {
+    id: uuid("id").primaryKey(),
+    runId: uuid("run_id").notNull().references(() => runs.id, { onDelete: "restrict" }),
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "restrict" }),
+    type: text("type").notNull(),
+    stepId: uuid("step_id"),
+    payload: jsonb("payload").notNull().default(sql`'{}'::jsonb`),
+    clientTime: timestamp("client_time", { withTimezone: true }).notNull(),
+    serverTime: timestamp("server_time", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("run_events_run_idx").on(t.runId, t.clientTime)],
+);
+
+/** A photo of the work, stored through the object store; the id is made on the cart (idempotent upload). */
+export const runPhotos = pgTable("run_photos", {
+  id: uuid("id").primaryKey(),
+  runId: uuid("run_id").notNull().references(() => runs.id, { onDelete: "restrict" }),
+  stepId: uuid("step_id"),
+  contentType: text("content_type").notNull(),
+  bytes: integer("bytes").notNull(),
+  uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
+  ...timestamps,
+});
+
+/**
+ * An instructor's sign-off of a run. Immutable: a trigger in db/migrations/0007_runs.sql refuses
+ * any update or delete, and any run event written after it.
+ */
+export const signOffs = pgTable("sign_offs", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  runId: uuid("run_id").notNull().unique().references(() => runs.id, { onDelete: "restrict" }),
+  instructorId: uuid("instructor_id").notNull().references(() => users.id, { onDelete: "restrict" }),
+  signedAt: timestamp("signed_at", { withTimezone: true }).notNull().defaultNow(),
+  versionId: uuid("version_id").notNull().references(() => taskCardVersions.id, { onDelete: "restrict" }),
+  // [{ revisionId, manualTitle, label, pages }] as cited by the version when it was signed off.
+  revisionsCited: jsonb("revisions_cited").notNull(),
+  actualMinutes: integer("actual_minutes").notNull().default(0),
+  comment: text("comment").notNull().default(""),
+});
+
+export type Assignment = typeof assignments.$inferSelect;
+export type Run = typeof runs.$inferSelect;
+export type RunEventRow = typeof runEvents.$inferSelect;
+export type SignOff = typeof signOffs.$inferSelect;

@@ -289,6 +289,13 @@ export async function getCardVersion({ actor, cardId, number }: { actor: Actor; 
   return toVersionDto(db, row);
 }
 
+/** A version by id, for runs and assignments: the caller has already checked who may see it. */
+export async function getVersionById(versionId: string, db: Db | Tx = getDb()): Promise<CardVersionDto> {
+  const [row] = await loadVersions(db, eq(taskCardVersions.id, versionId));
+  if (!row) throw new AppError("not_found", "That version of the task card was not found.");
+  return toVersionDto(db, row);
+}
+
 // ---------------------------------------------------------------- writing
 
 /**

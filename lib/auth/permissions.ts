@@ -31,6 +31,15 @@ const rules = {
   "cards:author": ["instructor", "admin"],
   /** Keep the list of curriculum subjects cards are filed under. */
   "subjects:manage": ["admin"],
+  /** Give published card versions to a class or to students. */
+  "assignments:manage": ["instructor", "admin"],
+  /** Run assigned cards at the aircraft (a run belongs to one student). */
+  "runs:do": ["student"],
+  /** See every run, buy off inspection points, return and sign off runs. */
+  "runs:review": ["instructor", "admin"],
+  /** Records: students see their own, reviewers everyone's. */
+  "records:view": ["student", "instructor", "admin"],
+  "records:view-all": ["instructor", "admin"],
   /** The link to the local outbox (the page itself is open while the fake SMTP server runs). */
   "outbox:view": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
@@ -71,8 +80,11 @@ const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boo
   { item: { href: "/search", label: "Search" }, permission: "library:view" },
   { item: { href: "/library", label: "Library" }, permission: "library:view" },
   { item: { href: "/cards", label: "Task cards" }, permission: "cards:view" },
+  { item: { href: "/work", label: "My work" }, permission: "runs:do" },
+  { item: { href: "/review", label: "Review" }, permission: "runs:review" },
   { item: { href: "/calculators", label: "Calculators" } },
   { item: { href: "/classes", label: "Classes" }, permission: "classes:view" },
+  { item: { href: "/records", label: "Records" }, permission: "records:view" },
   { item: { href: "/accounts", label: "Accounts" }, permission: "accounts:manage" },
   { item: { href: "/audit", label: "Audit log" }, permission: "audit:view" },
   { item: { href: "/outbox", label: "Outbox" }, permission: "outbox:view", onlyWithOutbox: true },

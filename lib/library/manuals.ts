@@ -150,6 +150,7 @@ const manualColumns = {
   applicability: manuals.applicability,
   ataChapters: manuals.ataChapters,
   currentRevisionId: manuals.currentRevisionId,
+  keepOnCarts: manuals.keepOnCarts,
 };
 
 export async function listManuals() {
@@ -253,4 +254,14 @@ export async function retryRevision({ actor, id }: { actor: Actor; id: string })
   });
   await queueOrFail(updated.id);
   return updated;
+}
+
+/** A librarian's "keep on carts": carts store the whole current PDF of the manual. */
+export async function setKeepOnCarts({ actor, id, keepOnCarts }: { actor: Actor; id: string; keepOnCarts: boolean }) {
+  return getDb().transaction(async (tx) => {
+    const [row] = await tx.update(manuals).set({ keepOnCarts }).where(eq(manuals.id, id)).returning({ id: manuals.id, title: manuals.title, keepOnCarts: manuals.keepOnCarts });
+    if (!row) throw new AppError("not_found", "That manual was not found.");
+    await recordAudit(tx, { actorId: actor.id, action: keepOnCarts ? "manual.kept_on_carts" : "manual.not_kept_on_carts", subjectType: "manual", subjectId: id, details: { title: row.title } });
+    return row;
+  });
 }

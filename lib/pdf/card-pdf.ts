@@ -13,7 +13,7 @@ const pageSize: [number, number] = [612, 792];
 const margin = 50;
 const width = pageSize[0] - 2 * margin;
 const black = rgb(0, 0, 0);
-const grey = rgb(0.35, 0.35, 0.35);
+export const grey = rgb(0.35, 0.35, 0.35);
 
 /** Markdown to the plain text a printed card shows: emphasis dropped, links as "text (address)". */
 export function markdownToPlain(markdown: string): string {
@@ -51,7 +51,7 @@ function printable(font: PDFFont, text: string): string {
   return out;
 }
 
-class CardWriter {
+export class CardWriter {
   page!: PDFPage;
   y = 0;
   pages: PDFPage[] = [];

@@ -34,4 +34,7 @@ export const storageKeys = {
   revisionFile: (revisionId: string) => assertKey(`revisions/${revisionId}/document.pdf`),
   readerCopy: (revisionId: string) => assertKey(`revisions/${revisionId}/reader.pdf`),
   thumbnail: (revisionId: string, page: number) => assertKey(`revisions/${revisionId}/thumbnails/${page}.png`),
+  /** The offline packet of a set of cited pages, named by the hash of that set. */
+  packet: (hash: string) => assertKey(`packets/${hash}.pdf`),
+  runPhoto: (runId: string, photoId: string) => assertKey(`runs/${runId}/photos/${photoId}`),
 };

@@ -16,6 +16,11 @@ const expected: Record<string, Role[]> = {
   "library:manage": ["librarian", "admin"],
   "cards:view": ["student", "instructor", "librarian", "admin"],
   "cards:author": ["instructor", "admin"],
+  "assignments:manage": ["instructor", "admin"],
+  "runs:do": ["student"],
+  "runs:review": ["instructor", "admin"],
+  "records:view": ["student", "instructor", "admin"],
+  "records:view-all": ["instructor", "admin"],
   "subjects:manage": ["admin"],
 };
 
@@ -55,10 +60,10 @@ describe("permissions", () => {
 
   it("gives each role its own navigation", () => {
     const labels = (role: Role, outbox = false) => navigationFor(actor(role), { outbox }).map((n) => n.label);
-    expect(labels("student")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators"]);
+    expect(labels("student")).toEqual(["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Records"]);
     expect(labels("librarian")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators"]);
-    expect(labels("instructor")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators", "Classes"]);
-    expect(labels("admin")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators", "Classes", "Accounts", "Audit log"]);
+    expect(labels("instructor")).toEqual(["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records"]);
+    expect(labels("admin")).toEqual(["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records", "Accounts", "Audit log"]);
     expect(labels("admin", true)).toContain("Outbox");
     expect(labels("student", true)).not.toContain("Outbox");
   });

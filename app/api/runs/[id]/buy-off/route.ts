@@ -1,0 +1,13 @@
+import { requireApiUser } from "@/lib/auth/session";
+import { idParam, readJson, route } from "@/lib/http";
+import { buyOff } from "@/lib/runs/runs";
+import { buyOffSchema } from "@/lib/validation/runs";
+
+type Context = { params: Promise<{ id: string }> };
+
+export const POST = route<Context>(async (request, { params }) => {
+  const actor = await requireApiUser("runs:review");
+  const runId = idParam((await params).id, "That run");
+  const { stepId } = await readJson(request, buyOffSchema);
+  return Response.json(await buyOff({ actor, runId, stepId }));
+});

@@ -1,0 +1,14 @@
+import { requireApiUser } from "@/lib/auth/session";
+import { idParam, readJson, route } from "@/lib/http";
+import { appendEvents } from "@/lib/runs/runs";
+import { eventBatchSchema } from "@/lib/validation/runs";
+
+type Context = { params: Promise<{ id: string }> };
+
+/** A batch from a cart. The same batch twice stores nothing the second time; after sign-off, 409. */
+export const POST = route<Context>(async (request, { params }) => {
+  const actor = await requireApiUser();
+  const runId = idParam((await params).id, "That run");
+  const { events } = await readJson(request, eventBatchSchema, { maxBytes: 2 * 1024 * 1024 });
+  return Response.json(await appendEvents({ actor, runId, events }));
+});

@@ -1,0 +1,24 @@
+import { Readable } from "node:stream";
+import { requireApiUser } from "@/lib/auth/session";
+import { idParam, isUuid, route } from "@/lib/http";
+import { readPhoto, storePhoto } from "@/lib/runs/photos";
+
+type Context = { params: Promise<{ id: string; photoId: string }> };
+
+/** The picture itself is the body (image/jpeg, image/png or image/webp, at most 8 MB); ?step= names the step. */
+export const PUT = route<Context>(async (request, { params }) => {
+  const actor = await requireApiUser();
+  const { id, photoId } = await params;
+  const step = new URL(request.url).searchParams.get("step") ?? "";
+  const photo = await storePhoto({ actor, runId: idParam(id, "That run"), photoId: idParam(photoId, "That photo"), stepId: isUuid(step) ? step : null, request });
+  return Response.json({ photo }, { status: 201 });
+});
+
+export const GET = route<Context>(async (_request, { params }) => {
+  const actor = await requireApiUser();
+  const { id, photoId } = await params;
+  const { body, size, contentType } = await readPhoto({ actor, runId: idParam(id, "That run"), photoId: idParam(photoId, "That photo") });
+  return new Response(Readable.toWeb(body) as ReadableStream, {
+    headers: { "Content-Type": contentType, "Content-Length": String(size), "Cache-Control": "private, max-age=86400", "X-Content-Type-Options": "nosniff" },
+  });
+});

@@ -1,0 +1,67 @@
+// What carts and review screens send about runs. One schema per body; the events API takes only
+// what happens at the aircraft (return and sign-off have their own routes, made on the server).
+import { z } from "zod";
+import { runEventTypes } from "@/lib/runs/fold";
+
+export const cartEventTypes = runEventTypes.filter((t) => t !== "run.returned" && t !== "run.signed_off");
+export const maxEventsPerBatch = 500;
+const maxPayloadChars = 4000;
+
+export const runEventInputSchema = z.object({
+  id: z.uuid("Each event has an id made on the cart (a UUID)."),
+  type: z.enum(cartEventTypes as [string, ...string[]], { error: "That kind of event is not known here. Return and sign-off go through the review screen." }),
+  stepId: z.uuid("A step id is a UUID.").nullable().optional().default(null),
+  payload: z
+    .record(z.string(), z.unknown())
+    .optional()
+    .default({})
+    .refine((p) => JSON.stringify(p).length <= maxPayloadChars, `An event carries at most ${maxPayloadChars} characters of detail.`),
+  clientTime: z.iso.datetime({ offset: true, error: "clientTime is an ISO date and time, such as 2026-12-02T09:30:00Z." }),
+});
+export type RunEventInput = z.output<typeof runEventInputSchema>;
+
+export const eventBatchSchema = z.object({
+  events: z
+    .array(runEventInputSchema, { error: "Send { events: [...] }." })
+    .min(1, "Send at least one event.")
+    .max(maxEventsPerBatch, `Send at most ${maxEventsPerBatch} events at a time.`),
+});
+
+const optionalDate = z
+  .union([z.literal(""), z.iso.date("A due date is a date, such as 2026-12-18.")])
+  .nullable()
+  .optional()
+  .transform((d) => d || null);
+
+export const createAssignmentSchema = z
+  .object({
+    cardId: z.uuid("Choose a task card."),
+    /** A published version; the newest one when left out. */
+    versionNumber: z.number().int().min(1).optional(),
+    classId: z.uuid("Choose a class.").nullable().optional().default(null),
+    studentIds: z.array(z.uuid()).max(500, "At most 500 students at a time.").optional().default([]),
+    dueOn: optionalDate,
+    note: z.string().trim().max(300, "Keep the note to 300 characters (an aircraft or a station).").optional().default(""),
+  })
+  .refine((a) => a.classId || a.studentIds.length, { message: "Choose a class or at least one student.", path: ["classId"] });
+
+export const reviewCommentSchema = z.object({
+  comment: z.string().trim().max(2000, "Keep the comment to 2000 characters.").optional().default(""),
+});
+export const returnRunSchema = z.object({
+  comment: z.string({ error: "Say what the student should fix." }).trim().min(1, "Say what the student should fix.").max(2000, "Keep the comment to 2000 characters."),
+});
+export const buyOffSchema = z.object({ stepId: z.uuid("Name the inspection point's step.") });
+
+export const keepOnCartsSchema = z.object({ keepOnCarts: z.boolean({ error: "Say keepOnCarts: true or false." }) });
+
+/** Photos of the work: pictures only, sniffed from their first bytes, not trusted from the header. */
+export const photoTypes = ["image/jpeg", "image/png", "image/webp"] as const;
+export const maxPhotoBytes = 8 * 1024 * 1024;
+export function sniffImage(head: Uint8Array): (typeof photoTypes)[number] | null {
+  if (head[0] === 0xff && head[1] === 0xd8 && head[2] === 0xff) return "image/jpeg";
+  if (head[0] === 0x89 && head[1] === 0x50 && head[2] === 0x4e && head[3] === 0x47) return "image/png";
+  const ascii = (from: number, to: number) => String.fromCharCode(...head.slice(from, to));
+  if (ascii(0, 4) === "RIFF" && ascii(8, 12) === "WEBP") return "image/webp";
+  return null;
+}
