@@ -6,6 +6,7 @@ import type { Role } from "../lib/auth/permissions";
 import { getEnv } from "../lib/env";
 import { getQueue } from "../lib/jobs";
 import { seedCards } from "./demo/seed-cards";
+import { seedRuns } from "./demo/seed-runs";
 import { seedLibrary } from "./demo/seed-library";
 import { closeDb, getDb } from "./index";
 import { classes, classMembers, users } from "./schema";
@@ -71,6 +72,8 @@ async function main() {
   console.log(revisionsAdded ? `queued ${revisionsAdded} demo manual revisions for ingest` : "demo manuals already present");
   const cardsAdded = await seedCards(db);
   console.log(cardsAdded ? `seeded ${cardsAdded} demo task cards` : "demo task cards already present");
+  const assignmentsAdded = await seedRuns(db);
+  console.log(assignmentsAdded ? `seeded ${assignmentsAdded} demo assignments and their runs` : "demo assignments already present");
   await (await getQueue()).stop({ graceful: false, wait: true });
   await closeDb();
 }

@@ -41,7 +41,7 @@ export async function packetFor(db: Db | Tx, version: CardVersionDto): Promise<P
   const texts = await db
     .select({ revisionId: pages.revisionId, page: pages.pageNumber, text: pages.text })
     .from(pages)
-    .where(and(inArray(pages.revisionId, revisionIds), sql`(${pages.revisionId}::text || ':' || ${pages.pageNumber}) = any(${[...seen]}::text[])`));
+    .where(and(inArray(pages.revisionId, revisionIds), sql`(${pages.revisionId}::text || ':' || ${pages.pageNumber}) = any(${`{${[...seen].join(",")}}`}::text[])`));
   const textOf = new Map(texts.map((t) => [`${t.revisionId}:${t.page}`, t.text]));
   const byId = new Map(described.map((d) => [d.id, d]));
   const planned = cited

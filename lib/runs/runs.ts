@@ -6,12 +6,13 @@ import { recordAudit, type Tx } from "@/lib/audit";
 import { can, type Actor } from "@/lib/auth/permissions";
 import { getVersionById } from "@/lib/cards";
 import type { CardVersionDto } from "@/lib/dto-cards";
-import type { AssignmentDto, EventBatchResultDto, RunDetailDto, SignOffDto, WorkItemDto, WorkStatus } from "@/lib/dto-runs";
+import type { AssignmentDto, EventBatchResultDto, RunDetailDto, SignOffDto, WorkItemDto } from "@/lib/dto-runs";
 import { AppError, databaseErrorCode } from "@/lib/errors";
 import type { RunEventInput } from "@/lib/validation/runs";
 import { foldRun, type CardStepForRun, type RunEvent, type RunState, type RunStatus } from "./fold";
 import { activeMinutes } from "./hours";
 import { packetFor } from "./packet";
+import { workStatusOf } from "./work-status";
 
 const runNotFound = () => new AppError("not_found", "That run was not found.");
 const signedOffConflict = () => new AppError("conflict", "This run is signed off. Its record cannot change; ask your instructor to assign the card again.");
@@ -114,13 +115,6 @@ export async function listAssignments({ cardId }: { cardId?: string } = {}): Pro
 }
 
 // ---------------------------------------------------------------- reading runs
-
-const today = () => new Date().toISOString().slice(0, 10);
-
-export function workStatusOf(status: RunStatus, dueOn: string | null, on = today()): WorkStatus {
-  const done = status === "submitted" || status === "signed_off";
-  return !done && dueOn && dueOn < on ? "overdue" : status;
-}
 
 function workItemQuery(db: Db | Tx) {
   const newest = sql<number | null>`(select max(v.number) from task_card_versions v where v.card_id = ${taskCardVersions.cardId} and v.status = 'published')`;

@@ -6,7 +6,7 @@ import path from "node:path";
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
-import { classes, manuals, taskCardVersions, users } from "@/db/schema";
+import { classes, manuals, runs, taskCardVersions, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/permissions";
 import { call, demo, signIn } from "../support/http";
 
@@ -27,6 +27,9 @@ interface Ids {
   manualId: string;
   revisionId: string;
   cardId: string;
+  studentId: string;
+  /** A run of the demo student's (tests/../db/demo/seed-runs.ts). */
+  runId: string;
 }
 
 const only = (allowed: Partial<Record<Who, number>>, denied = 403): Record<Who, number> => ({
@@ -98,6 +101,22 @@ export const accessMatrix: Row[] = [
   { method: "GET", route: "/api/cards/[id]/versions/[v]", path: (i) => `/api/cards/${i.cardId}/versions/1`, expect: { ...all(200), anonymous: 401 } },
   { method: "PATCH", route: "/api/cards/[id]/versions/[v]", path: (i) => `/api/cards/${i.cardId}/versions/1`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
   { method: "GET", route: "/api/cards/[id]/versions/[v]/pdf", path: (i) => `/api/cards/${i.cardId}/versions/1/pdf`, expect: { ...all(200), anonymous: 401 } },
+  { method: "GET", route: "/api/assignments", path: () => "/api/assignments", expect: only({ instructor: 200, admin: 200 }) },
+  { method: "POST", route: "/api/assignments", path: () => "/api/assignments", json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  { method: "GET", route: "/api/my-work", path: () => "/api/my-work", expect: only({ student: 200 }) },
+  { method: "GET", route: "/api/review", path: () => "/api/review", expect: only({ instructor: 200, admin: 200 }) },
+  // A run is seen by its student and by reviewers; anyone else is told it does not exist.
+  { method: "GET", route: "/api/runs/[id]", path: (i) => `/api/runs/${i.runId}`, expect: { anonymous: 401, student: 200, instructor: 200, librarian: 404, admin: 200 } },
+  { method: "POST", route: "/api/runs/[id]/events", path: (i) => `/api/runs/${i.runId}/events`, json: {}, expect: { ...all(422), anonymous: 401 } },
+  { method: "GET", route: "/api/runs/[id]/packet", path: (i) => `/api/runs/${i.runId}/packet`, expect: { anonymous: 401, student: 200, instructor: 200, librarian: 404, admin: 200 } },
+  { method: "PUT", route: "/api/runs/[id]/photos/[photoId]", path: (i) => `/api/runs/${i.nobody}/photos/${i.nobody}`, expect: { ...all(404), anonymous: 401 } },
+  { method: "GET", route: "/api/runs/[id]/photos/[photoId]", path: (i) => `/api/runs/${i.runId}/photos/${i.nobody}`, expect: { anonymous: 401, student: 404, instructor: 404, librarian: 404, admin: 404 } },
+  { method: "POST", route: "/api/runs/[id]/buy-off", path: (i) => `/api/runs/${i.runId}/buy-off`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  { method: "POST", route: "/api/runs/[id]/return", path: (i) => `/api/runs/${i.runId}/return`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  { method: "POST", route: "/api/runs/[id]/sign-off", path: (i) => `/api/runs/${i.nobody}/sign-off`, json: {}, expect: only({ instructor: 404, admin: 404 }) },
+  { method: "GET", route: "/api/records/students/[id]", path: (i) => `/api/records/students/${i.studentId}`, expect: only({ student: 200, instructor: 200, admin: 200 }) },
+  { method: "GET", route: "/api/records/classes/[id]", path: (i) => `/api/records/classes/${i.dayClassId}`, expect: only({ instructor: 200, admin: 200 }) },
+  { method: "PUT", route: "/api/manuals/[id]/carts", path: (i) => `/api/manuals/${i.manualId}/carts`, json: {}, expect: only({ librarian: 422, admin: 422 }) },
 ];
 
 const cookies: Partial<Record<Who, string>> = {};
@@ -117,7 +136,11 @@ beforeAll(async () => {
     .select({ id: taskCardVersions.cardId })
     .from(taskCardVersions)
     .where(and(eq(taskCardVersions.title, "Magneto-to-engine timing check"), eq(taskCardVersions.number, 1)));
+  const [student] = await getDb().select({ id: users.id }).from(users).where(eq(users.email, demo.student));
+  const [run] = await getDb().select({ id: runs.id }).from(runs).where(eq(runs.studentId, student!.id)).limit(1);
   ids = {
+    studentId: student!.id,
+    runId: run!.id,
     cardId: card!.id,
     adminId: admin!.id,
     dayClassId: day!.id,
