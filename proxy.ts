@@ -2,7 +2,9 @@ import { NextResponse, type NextRequest } from "next/server";
 
 // A convenience only: visitors without a session cookie are sent to sign-in before a page renders.
 // Whether a cookie is valid, and what its user may do, every page and handler checks itself.
-const publicPaths = [/^\/sign-in$/, /^\/forgot-password$/, /^\/set-password\/[^/]+$/, /^\/outbox$/];
+// The cart's shells (/work, /work/run) hold no data and must open offline and be precached by the
+// service worker before anyone signs in; they ask the API (or IndexedDB) who is signed in.
+const publicPaths = [/^\/sign-in$/, /^\/forgot-password$/, /^\/set-password\/[^/]+$/, /^\/outbox$/, /^\/work$/, /^\/work\/run$/];
 
 export function proxy(request: NextRequest) {
   const { pathname, search } = request.nextUrl;
@@ -16,5 +18,5 @@ export function proxy(request: NextRequest) {
 
 export const config = {
   // API routes answer 401 themselves; static files and Next internals pass untouched.
-  matcher: ["/((?!api/|_next/|icon.svg|favicon.ico).*)"],
+  matcher: ["/((?!api/|_next/|icon.svg|favicon.ico|sw.js|pdf.worker.min.mjs|standard_fonts/).*)"],
 };

@@ -3,6 +3,7 @@ import "@fontsource/noto-sans/600.css";
 import "@fontsource/noto-sans/700.css";
 import "./globals.css";
 import type { Metadata, Viewport } from "next";
+import { ServiceWorker } from "@/components/service-worker";
 
 export const metadata: Metadata = {
   title: { default: "Hangarleaf", template: "%s · Hangarleaf" },
@@ -15,7 +16,10 @@ export const viewport: Viewport = { themeColor: "#12243a" };
 export default function RootLayout({ children }: { children: React.ReactNode }) {
   return (
     <html lang="en">
-      <body>{children}</body>
+      <body>
+        {children}
+        <ServiceWorker />
+      </body>
     </html>
   );
 }

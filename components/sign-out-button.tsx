@@ -3,7 +3,13 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { callApi } from "@/lib/api-client";
+import { cartData, syncer } from "@/lib/cart/cart";
+import { forgetUser, lastUser } from "@/lib/cart/store";
 
+/**
+ * Signing out on a shared cart: waiting changes are sent first when possible, then this user's
+ * stored runs, notes and pages are deleted, so the next student sees none of them.
+ */
 export function SignOutButton() {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
@@ -14,6 +20,20 @@ export function SignOutButton() {
       disabled={busy}
       onClick={async () => {
         setBusy(true);
+        // The account signing out, as the server knows it (offline: the one the cart opened for).
+        const user = await callApi<{ user: { id: string } }>("GET", "/api/session")
+          .then((r) => r.user)
+          .catch(() => lastUser().catch(() => undefined));
+        if (user) {
+          const data = cartData(user.id);
+          await syncer(data).now().catch(() => null);
+          const waiting = (await data.pending()).length + (await data.pendingPhotos()).length;
+          if (waiting && !window.confirm(`${waiting} ${waiting === 1 ? "change has" : "changes have"} not reached the school yet. Signing out now deletes ${waiting === 1 ? "it" : "them"} from this laptop. Sign out anyway?`)) {
+            setBusy(false);
+            return;
+          }
+          await forgetUser(user.id);
+        }
         await callApi("DELETE", "/api/session").catch(() => undefined);
         router.replace("/sign-in");
         router.refresh();

@@ -329,3 +329,43 @@ export function copyPdfAssets() {
     copy(path.join(from, "standard_fonts", name), path.join(root, "public", "standard_fonts", name));
   }
 }
+
+/**
+ * The service worker, bundled after `next build` (it precaches the build's own files, so it can
+ * only be made once they exist): worker/service/sw.ts with the precache list written in, to
+ * .next/hangarleaf-sw.js, which app/sw.js/route.ts serves. Hashed files under /_next/static need
+ * no revision; the rest are named with a hash of their content or the build id.
+ */
+export async function buildServiceWorker() {
+  const { build } = await import("esbuild");
+  const { createHash } = await import("node:crypto");
+  const next = path.join(root, ".next");
+  const buildId = readFileSync(path.join(next, "BUILD_ID"), "utf8").trim();
+  const walk = (dir) =>
+    readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)]));
+  const hash = (file) => createHash("sha256").update(readFileSync(file)).digest("hex").slice(0, 16);
+  const entries = [
+    ...walk(path.join(next, "static"))
+      .filter((f) => !f.endsWith(".map"))
+      .map((f) => ({ url: `/_next/static/${path.relative(path.join(next, "static"), f).split(path.sep).join("/")}`, revision: null })),
+    ...[path.join(root, "public", "pdf.worker.min.mjs"), path.join(root, "public", "icon.svg"), ...walk(path.join(root, "public", "standard_fonts"))]
+      .filter(existsSync)
+      .map((f) => ({ url: `/${path.relative(path.join(root, "public"), f).split(path.sep).join("/")}`, revision: hash(f) })),
+    // The cart's pages: static shells that read everything from IndexedDB.
+    { url: "/work", revision: buildId },
+    { url: "/work/run", revision: buildId },
+  ];
+  await build({
+    entryPoints: [path.join(root, "worker", "service", "sw.ts")],
+    outfile: path.join(next, "hangarleaf-sw.js"),
+    bundle: true,
+    format: "iife",
+    target: "es2022",
+    minify: true,
+    tsconfig: path.join(root, "tsconfig.json"),
+    define: { __HL_PRECACHE__: JSON.stringify(entries), "process.env.NODE_ENV": '"production"' },
+    logLevel: "warning",
+  });
+  const bytes = entries.length;
+  log(`service worker built: ${bytes} files precached`);
+}

@@ -4,7 +4,7 @@
 //   --only-seed     prepare, migrate and seed, then stop (npm run db:seed)
 import path from "node:path";
 import {
-  assertPortFree, bin, buildIsStale, dataDir, ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, localSecret, log,
+  assertPortFree, bin, buildIsStale, buildServiceWorker, dataDir, ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, localSecret, log,
   run, service, startCluster, stopAll, tsx, tsxArgs, waitForHttp,
   copyPdfAssets,
 } from "./lib.mjs";
@@ -93,6 +93,7 @@ try {
     } else {
       log("the production build is current");
     }
+    await buildServiceWorker();
   }
 
   const onExit = (name, code, signal) => {

@@ -7,7 +7,7 @@ import path from "node:path";
 import {
   bin, ensureChromium, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log,
   run, service, stopAll, throwawayDatabase, tsx, tsxArgs, waitForHttp,
-  copyPdfAssets,
+  buildServiceWorker, copyPdfAssets,
 } from "./lib.mjs";
 
 const results = [];
@@ -90,7 +90,16 @@ try {
   stage("typecheck", () => run(bin("tsc"), ["--noEmit"], { env }));
   stage("lint", () => run(bin("eslint"), ["--max-warnings", "0", "."], { env }));
   copyPdfAssets();
-  const built = stage("build", () => run(bin("next"), ["build"], { env }));
+  let built = stage("build", () => run(bin("next"), ["build"], { env }));
+  if (built) {
+    try {
+      await buildServiceWorker();
+    } catch (error) {
+      console.error(`[hangarleaf] the service worker failed to build: ${error instanceof Error ? error.message : error}`);
+      results.push({ name: "service worker", ok: false, seconds: 0 });
+      built = false;
+    }
+  }
 
   let vitest = null;
   let playwright = null;

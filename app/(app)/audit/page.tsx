@@ -1,16 +1,51 @@
 import type { Metadata } from "next";
 import { listAuditEvents } from "@/lib/audit";
 import { requirePageUser } from "@/lib/auth/session";
+import { auditQuerySchema, type AuditKind } from "@/lib/validation/audit";
 
 export const metadata: Metadata = { title: "Audit log" };
 
-export default async function AuditPage() {
+const kindLabels: Record<AuditKind, string> = {
+  accounts: "Accounts",
+  classes: "Classes",
+  library: "Uploads and revisions",
+  cards: "Task cards and publications",
+  assignments: "Assignments",
+  runs: "Buy-offs, returns and sign-offs",
+};
+
+export default async function AuditPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   await requirePageUser("audit:view", "/audit");
-  const events = await listAuditEvents({ limit: 200 });
+  const filter = auditQuerySchema.parse(await searchParams);
+  const events = await listAuditEvents(filter);
   return (
     <div className="flex flex-col gap-6">
       <h1>Audit log</h1>
-      <p className="text-ink-soft">The latest 200 changes to accounts and classes, newest first. Entries cannot be edited.</p>
+      <form method="get" className="panel grid gap-3 sm:grid-cols-5 sm:items-end" aria-label="Filter the audit log">
+        <div className="field">
+          <label htmlFor="audit-kind" className="label">What</label>
+          <select id="audit-kind" name="kind" className="input" defaultValue={filter.kind ?? ""}>
+            <option value="">Everything</option>
+            {Object.entries(kindLabels).map(([value, label]) => (
+              <option key={value} value={value}>{label}</option>
+            ))}
+          </select>
+        </div>
+        <div className="field">
+          <label htmlFor="audit-actor" className="label">Who (name or e-mail)</label>
+          <input id="audit-actor" name="actor" className="input" defaultValue={filter.actor ?? ""} />
+        </div>
+        <div className="field">
+          <label htmlFor="audit-from" className="label">From</label>
+          <input id="audit-from" name="from" type="date" className="input" defaultValue={filter.from ?? ""} />
+        </div>
+        <div className="field">
+          <label htmlFor="audit-to" className="label">To</label>
+          <input id="audit-to" name="to" type="date" className="input" defaultValue={filter.to ?? ""} />
+        </div>
+        <button type="submit" className="btn btn-primary">Show</button>
+      </form>
+      <p className="text-ink-soft">The latest {filter.limit} entries that match, newest first. Entries cannot be edited.</p>
       <div className="panel overflow-x-auto">
         <table className="data-table">
           <thead>
@@ -31,7 +66,7 @@ export default async function AuditPage() {
               </tr>
             ))}
             {events.length === 0 ? (
-              <tr><td colSpan={4}>Nothing recorded yet.</td></tr>
+              <tr><td colSpan={4}>Nothing recorded that matches.</td></tr>
             ) : null}
           </tbody>
         </table>

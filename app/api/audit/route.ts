@@ -1,12 +1,11 @@
-import { z } from "zod";
 import { listAuditEvents } from "@/lib/audit";
 import { requireApiUser } from "@/lib/auth/session";
 import { parseWith, route } from "@/lib/http";
+import { auditQuerySchema } from "@/lib/validation/audit";
 
-const querySchema = z.object({ limit: z.coerce.number().int().min(1).max(1000).default(200) });
-
+/** ?kind=accounts|classes|library|cards|assignments|runs&actor=&from=&to=&limit= */
 export const GET = route(async (request) => {
   await requireApiUser("audit:view");
-  const { limit } = parseWith(querySchema, Object.fromEntries(new URL(request.url).searchParams));
-  return Response.json({ events: await listAuditEvents({ limit }) });
+  const filter = parseWith(auditQuerySchema, Object.fromEntries(new URL(request.url).searchParams));
+  return Response.json({ events: await listAuditEvents(filter) });
 });

@@ -48,6 +48,11 @@ export default async function CardPage({ params, searchParams }: { params: Promi
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
         <h1 className="mr-auto">{shown.title}</h1>
+        {can(user, "assignments:manage") && card.published && !card.archivedAt ? (
+          <Link href={`/cards/${id}/assign`} className="btn btn-primary">
+            Assign
+          </Link>
+        ) : null}
         <a href={`/api/cards/${id}/versions/${shown.number}/pdf`} className="btn btn-secondary" target="_blank" rel="noreferrer">
           Print (PDF)
         </a>

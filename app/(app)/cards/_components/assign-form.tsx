@@ -1,0 +1,127 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { ApiError, callApi } from "@/lib/api-client";
+
+interface Props {
+  cardId: string;
+  versions: number[];
+  classes: { id: string; name: string }[];
+  students: { id: string; name: string; className: string }[];
+}
+
+/** To a whole class, or to chosen students; a due date and a place (aircraft, station) are optional. */
+export function AssignForm({ cardId, versions, classes, students }: Props) {
+  const router = useRouter();
+  const [classId, setClassId] = useState(classes[0]?.id ?? "");
+  const [chosen, setChosen] = useState<Set<string>>(new Set());
+  const [to, setTo] = useState<"class" | "students">(classes.length ? "class" : "students");
+  const [versionNumber, setVersion] = useState(versions.at(-1)!);
+  const [dueOn, setDueOn] = useState("");
+  const [note, setNote] = useState("");
+  const [busy, setBusy] = useState(false);
+  const [result, setResult] = useState<{ ok: boolean; text: string; fields?: Record<string, string> } | null>(null);
+  return (
+    <form
+      className="panel flex flex-col gap-4"
+      onSubmit={async (e) => {
+        e.preventDefault();
+        setBusy(true);
+        setResult(null);
+        try {
+          const { assignment } = await callApi<{ assignment: { runs: number } }>("POST", "/api/assignments", {
+            cardId,
+            versionNumber,
+            classId: to === "class" ? classId || null : null,
+            studentIds: to === "students" ? [...chosen] : [],
+            dueOn,
+            note,
+          });
+          setResult({ ok: true, text: `Assigned: ${assignment.runs} ${assignment.runs === 1 ? "student has" : "students have"} it in their work.` });
+          router.refresh();
+        } catch (error) {
+          setResult(error instanceof ApiError ? { ok: false, text: error.message, fields: error.fields } : { ok: false, text: "That did not work." });
+        } finally {
+          setBusy(false);
+        }
+      }}
+    >
+      <fieldset className="flex flex-col gap-2">
+        <legend className="label">Give it to</legend>
+        <label className="flex min-h-11 items-center gap-2">
+          <input type="radio" name="to" checked={to === "class"} onChange={() => setTo("class")} disabled={!classes.length} className="size-5" /> A whole class
+        </label>
+        {to === "class" ? (
+          <select aria-label="Class" className="input max-w-md" value={classId} onChange={(e) => setClassId(e.target.value)}>
+            {classes.map((c) => (
+              <option key={c.id} value={c.id}>
+                {c.name}
+              </option>
+            ))}
+          </select>
+        ) : null}
+        <label className="flex min-h-11 items-center gap-2">
+          <input type="radio" name="to" checked={to === "students"} onChange={() => setTo("students")} className="size-5" /> Chosen students
+        </label>
+        {to === "students" ? (
+          <div className="grid gap-1 sm:grid-cols-2">
+            {students.map((s) => (
+              <label key={s.id} className="flex min-h-11 items-center gap-2">
+                <input
+                  type="checkbox"
+                  className="size-5"
+                  checked={chosen.has(s.id)}
+                  onChange={(e) => setChosen((old) => {
+                    const next = new Set(old);
+                    if (e.target.checked) next.add(s.id);
+                    else next.delete(s.id);
+                    return next;
+                  })}
+                />
+                {s.name} <span className="text-ink-soft">({s.className})</span>
+              </label>
+            ))}
+            {students.length === 0 ? <p className="hint">No students in your classes.</p> : null}
+          </div>
+        ) : null}
+        {result?.fields?.classId || result?.fields?.studentIds ? <p className="notice-error">{result.fields.classId ?? result.fields.studentIds}</p> : null}
+      </fieldset>
+      <div className="grid gap-4 sm:grid-cols-3">
+        <div className="field">
+          <label htmlFor="assign-version" className="label">
+            Version
+          </label>
+          <select id="assign-version" className="input" value={versionNumber} onChange={(e) => setVersion(Number(e.target.value))}>
+            {versions.map((v) => (
+              <option key={v} value={v}>
+                Version {v}
+              </option>
+            ))}
+          </select>
+        </div>
+        <div className="field">
+          <label htmlFor="assign-due" className="label">
+            Due date (optional)
+          </label>
+          <input id="assign-due" type="date" className="input" value={dueOn} onChange={(e) => setDueOn(e.target.value)} aria-invalid={!!result?.fields?.dueOn} />
+          {result?.fields?.dueOn ? <span className="field-error">{result.fields.dueOn}</span> : null}
+        </div>
+        <div className="field">
+          <label htmlFor="assign-note" className="label">
+            Aircraft or station (optional)
+          </label>
+          <input id="assign-note" className="input" value={note} maxLength={300} onChange={(e) => setNote(e.target.value)} />
+        </div>
+      </div>
+      <button type="submit" className="btn btn-primary self-start" disabled={busy}>
+        Assign
+      </button>
+      {result ? (
+        <p role={result.ok ? "status" : "alert"} className={result.ok ? "notice-ok" : "notice-error"}>
+          {result.text}
+        </p>
+      ) : null}
+    </form>
+  );
+}

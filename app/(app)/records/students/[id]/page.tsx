@@ -1,0 +1,100 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { can } from "@/lib/auth/permissions";
+import { requirePageUser } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { isUuid } from "@/lib/http";
+import { studentRecord } from "@/lib/runs/records";
+
+export const metadata: Metadata = { title: "Training record" };
+
+const hours = (minutes: number) => `${(minutes / 60).toFixed(1)} h`;
+
+export default async function StudentRecordPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const user = await requirePageUser("records:view", `/records/students/${id}`);
+  if (!isUuid(id)) notFound();
+  const record = await studentRecord({ actor: user, studentId: id }).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  });
+  const own = user.id === id;
+  return (
+    <div className="flex flex-col gap-5">
+      {can(user, "records:view-all") ? (
+        <nav aria-label="Breadcrumb">
+          <Link href="/records" className="inline-flex min-h-11 items-center">
+            Records
+          </Link>
+        </nav>
+      ) : null}
+      <div className="flex flex-wrap items-center gap-3">
+        <h1 className="mr-auto">{own ? "My training record" : `Training record: ${record.student.name}`}</h1>
+        <a className="btn btn-secondary" href={`/api/records/students/${id}?format=csv`}>
+          Export CSV
+        </a>
+        <a className="btn btn-secondary" href={`/api/records/students/${id}?format=pdf`} target="_blank" rel="noreferrer">
+          Export PDF
+        </a>
+      </div>
+      <dl className="grid gap-3 sm:grid-cols-3">
+        {[
+          ["Task cards signed off", String(record.totals.signedOff)],
+          ["Estimated hours", hours(record.totals.estimatedMinutes)],
+          ["Actual hours", hours(record.totals.actualMinutes)],
+        ].map(([term, value]) => (
+          <div key={term} className="panel">
+            <dt className="text-ink-soft">{term}</dt>
+            <dd className="text-3xl font-bold">{value}</dd>
+          </div>
+        ))}
+      </dl>
+      <section aria-label="Signed off by subject" className="flex flex-col gap-3">
+        <h2>Signed off, by curriculum subject</h2>
+        {record.subjects.map((s) => (
+          <div key={s.subjectName} className="panel overflow-x-auto">
+            <h3 className="text-lg font-bold">{s.subjectName}</h3>
+            <table className="data-table">
+              <thead>
+                <tr>
+                  <th scope="col">Task card</th>
+                  <th scope="col">Signed off</th>
+                  <th scope="col">By</th>
+                  <th scope="col">Estimated</th>
+                  <th scope="col">Actual</th>
+                </tr>
+              </thead>
+              <tbody>
+                {s.signedOff.map((c) => (
+                  <tr key={c.runId}>
+                    <td>
+                      {c.title} <span className="text-ink-soft">v{c.versionNumber}</span>
+                    </td>
+                    <td className="whitespace-nowrap">{c.signedAt.slice(0, 10)}</td>
+                    <td>{c.instructorName}</td>
+                    <td>{c.estimatedMinutes != null ? hours(c.estimatedMinutes) : "—"}</td>
+                    <td>{hours(c.actualMinutes)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        ))}
+        {record.subjects.length === 0 ? <p className="hint">No task card is signed off yet.</p> : null}
+      </section>
+      <section aria-label="Open and returned runs" className="panel">
+        <h2>Open and returned</h2>
+        <ul className="flex flex-col gap-1">
+          {[...record.returned, ...record.open].map((r) => (
+            <li key={r.runId}>
+              {own ? <a href={`/work/run?id=${r.runId}`}>{r.title}</a> : can(user, "runs:review") ? <Link href={`/review/${r.runId}`}>{r.title}</Link> : r.title} · {r.workStatus.replace("_", " ")}
+              {r.dueOn ? ` · due ${r.dueOn}` : ""}
+            </li>
+          ))}
+          {record.open.length + record.returned.length === 0 ? <li className="hint">Nothing open.</li> : null}
+        </ul>
+      </section>
+    </div>
+  );
+}

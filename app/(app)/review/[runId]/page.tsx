@@ -1,0 +1,146 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { CardNotice } from "@/components/card-notice";
+import { describeLimit } from "@/lib/calc/limits";
+import { requirePageUser } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { isUuid } from "@/lib/http";
+import { getRunDetail } from "@/lib/runs/runs";
+import { sortNotices } from "@/lib/validation/cards";
+import { ReviewActions } from "../_components/review-actions";
+
+export const metadata: Metadata = { title: "Review a run" };
+
+const eventLabel: Record<string, string> = {
+  "step.checked": "marked done",
+  "step.unchecked": "undid",
+  "value.recorded": "recorded a reading",
+  "note.added": "added a note",
+  "photo.added": "added a photo",
+  "timer.started": "started the timer",
+  "timer.stopped": "stopped the timer",
+  "inspection.bought_off": "bought off",
+  "run.submitted": "handed in",
+  "run.returned": "returned the run",
+  "run.signed_off": "signed off",
+};
+
+export default async function ReviewRunPage({ params }: { params: Promise<{ runId: string }> }) {
+  const { runId } = await params;
+  const user = await requirePageUser("runs:review", `/review/${runId}`);
+  if (!isUuid(runId)) notFound();
+  const detail = await getRunDetail({ actor: user, runId }).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  });
+  const { version, state, run } = detail;
+  const stepNumber = new Map(version.steps.map((s, i) => [s.id, i + 1]));
+  const revisions = [...new Map(version.steps.flatMap((s) => s.references).map((r) => [r.revisionId, r])).values()];
+  return (
+    <div className="flex flex-col gap-5">
+      <nav aria-label="Breadcrumb">
+        <Link href="/review" className="inline-flex min-h-11 items-center">
+          Review
+        </Link>
+      </nav>
+      <header className="flex flex-col gap-1">
+        <h1>
+          {run.studentName}: {version.title}
+        </h1>
+        <p className="text-ink-soft">
+          Version {version.number} · {run.subjectName ?? "no subject"} · {run.dueOn ? `due ${run.dueOn}` : "no due date"} {run.note ? `· ${run.note}` : ""}
+        </p>
+        <p>
+          Manual revisions cited:{" "}
+          {revisions.map((r) => `${r.manualTitle} ${r.revisionLabel}${r.current ? "" : " (superseded)"}`).join("; ") || "none"}
+        </p>
+      </header>
+      {detail.signOff ? (
+        <p role="note" className="rounded-md border-4 border-ok bg-ok-pale px-4 py-3 font-semibold">
+          Signed off by {detail.signOff.instructorName} on {detail.signOff.signedAt.slice(0, 16).replace("T", " ")} UTC (version {detail.signOff.versionNumber}). The record cannot change.
+        </p>
+      ) : null}
+
+      <ReviewActions
+        runId={runId}
+        status={state.status}
+        inspectionPoints={version.steps
+          .map((s, i) => ({ id: s.id, number: i + 1, checked: !!state.steps[s.id]?.checked, boughtOff: !!state.steps[s.id]?.boughtOff, inspectionPoint: s.inspectionPoint }))
+          .filter((s) => s.inspectionPoint)}
+      />
+
+      <section aria-label="Steps" className="flex flex-col gap-3">
+        <h2>Steps</h2>
+        <ol className="flex flex-col gap-3">
+          {version.steps.map((step, i) => {
+            const s = state.steps[step.id]!;
+            return (
+              <li key={step.id} className={`panel flex flex-col gap-2 border-l-8 ${s.checked ? "border-l-ok" : "border-l-line"}`}>
+                <div className="flex flex-wrap items-center gap-2">
+                  <h3 className="mr-auto text-lg font-bold">
+                    Step {i + 1} {s.checked ? "· done" : "· not done"}
+                  </h3>
+                  {step.inspectionPoint ? <span className="badge bg-deck text-white">{s.boughtOff ? "Bought off" : "Inspection point"}</span> : null}
+                </div>
+                {sortNotices(step.notices).map((n, j) => (
+                  <CardNotice key={j} kind={n.kind} text={n.text} />
+                ))}
+                <p className="whitespace-pre-line">{step.text}</p>
+                {step.measurement ? (
+                  <p className={s.value ? (s.value.judgement.status === "in" ? "notice-ok" : "notice-error") : "hint"}>
+                    {step.measurement.label} (limits {describeLimit(step.measurement)}):{" "}
+                    {s.value ? `${s.value.text}, ${s.value.judgement.status === "in" ? "within limits" : "OUT OF LIMITS"}. ${s.value.judgement.message}` : "no reading recorded"}
+                  </p>
+                ) : null}
+                {s.timer ? (
+                  <p>
+                    Timer {s.timer.minutes} min started {s.timer.startedAt.slice(11, 16)}
+                    {s.timer.stoppedAt ? `, stopped ${s.timer.stoppedAt.slice(11, 16)}` : ""}
+                  </p>
+                ) : null}
+                {s.notes.map((n, j) => (
+                  <p key={j} className="rounded border border-line bg-paper px-3 py-2">
+                    Note: {n.text}
+                  </p>
+                ))}
+                {s.photos.length ? (
+                  <div className="flex flex-wrap gap-2">
+                    {s.photos.map((p) =>
+                      detail.photos.some((x) => x.id === p.key) ? (
+                        <a key={p.key} href={`/api/runs/${runId}/photos/${p.key}`} target="_blank" rel="noreferrer">
+                          {/* eslint-disable-next-line @next/next/no-img-element -- a stored photo behind the API, not a static asset */}
+                          <img src={`/api/runs/${runId}/photos/${p.key}`} alt={`Photo of step ${i + 1}`} className="h-32 rounded border border-line object-cover" />
+                        </a>
+                      ) : (
+                        <span key={p.key} className="hint">
+                          A photo is still on the cart, not sent yet.
+                        </span>
+                      ),
+                    )}
+                  </div>
+                ) : null}
+              </li>
+            );
+          })}
+        </ol>
+      </section>
+
+      <section aria-label="Everything that happened" className="panel">
+        <h2>Everything that happened</h2>
+        <ol className="flex flex-col gap-1">
+          {detail.events.map((e) => (
+            <li key={e.id} className="text-sm">
+              <span className="font-mono">{e.clientTime.slice(0, 16).replace("T", " ")}</span> · {e.userName} {eventLabel[e.type] ?? e.type}
+              {e.stepId ? ` step ${stepNumber.get(e.stepId) ?? "?"}` : ""}
+              {typeof e.payload?.value === "string" ? `: ${e.payload.value}` : ""}
+              {typeof e.payload?.comment === "string" && e.payload.comment ? `: “${e.payload.comment}”` : ""}
+            </li>
+          ))}
+          {detail.events.length === 0 ? <li>Nothing yet.</li> : null}
+        </ol>
+        {state.ignored.length ? <p className="hint mt-2">{state.ignored.length} event(s) set aside (for example after sign-off).</p> : null}
+      </section>
+    </div>
+  );
+}

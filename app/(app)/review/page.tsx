@@ -1,0 +1,73 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { requirePageUser } from "@/lib/auth/session";
+import type { RunStatus } from "@/lib/runs/fold";
+import { listReviewQueue } from "@/lib/runs/runs";
+
+export const metadata: Metadata = { title: "Review" };
+
+const tabs: { status: RunStatus; label: string }[] = [
+  { status: "submitted", label: "Waiting for sign-off" },
+  { status: "in_progress", label: "In progress" },
+  { status: "returned", label: "Returned" },
+  { status: "signed_off", label: "Signed off" },
+];
+
+export default async function ReviewPage({ searchParams }: { searchParams: Promise<{ status?: string }> }) {
+  await requirePageUser("runs:review", "/review");
+  const wanted = (await searchParams).status;
+  const status = tabs.find((t) => t.status === wanted)?.status ?? "submitted";
+  const runs = await listReviewQueue({ status });
+  return (
+    <div className="flex flex-col gap-5">
+      <div className="flex flex-wrap items-center gap-3">
+        <h1 className="mr-auto">Review</h1>
+        <Link href="/cards" className="btn btn-secondary">
+          Assign a task card
+        </Link>
+      </div>
+      <nav aria-label="Runs by status" className="flex flex-wrap gap-2">
+        {tabs.map((t) => (
+          <Link key={t.status} href={`/review?status=${t.status}`} aria-current={t.status === status ? "page" : undefined} className={`btn ${t.status === status ? "btn-primary" : "btn-secondary"}`}>
+            {t.label}
+          </Link>
+        ))}
+      </nav>
+      <div className="panel overflow-x-auto">
+        <table className="data-table">
+          <thead>
+            <tr>
+              <th scope="col">Student</th>
+              <th scope="col">Task card</th>
+              <th scope="col">Subject</th>
+              <th scope="col">Due</th>
+              <th scope="col">Last change</th>
+            </tr>
+          </thead>
+          <tbody>
+            {runs.map((r) => (
+              <tr key={r.runId}>
+                <td>
+                  <Link href={`/review/${r.runId}`} className="inline-flex min-h-11 items-center font-semibold">
+                    {r.studentName}
+                  </Link>
+                </td>
+                <td>
+                  {r.title} <span className="text-ink-soft">v{r.versionNumber}</span>
+                </td>
+                <td>{r.subjectName ?? "—"}</td>
+                <td className={r.workStatus === "overdue" ? "font-bold text-danger" : ""}>{r.dueOn ?? "—"}</td>
+                <td className="whitespace-nowrap">{r.lastEventAt ? r.lastEventAt.slice(0, 16).replace("T", " ") : "—"}</td>
+              </tr>
+            ))}
+            {runs.length === 0 ? (
+              <tr>
+                <td colSpan={5}>No runs here.</td>
+              </tr>
+            ) : null}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,134 @@
+// The cart in the browser: who is signed in (or was, when offline), keeping "my work" and each
+// run's card, events and cited pages in IndexedDB, recording new events, and sending them when the
+// network is there (on start, on the online event, on focus, after each change, with backoff).
+import type { RunDetailDto, WorkItemDto } from "@/lib/dto-runs";
+import type { RunEventType } from "@/lib/runs/fold";
+import { cartData, lastUser, rememberUser, type CartData, type CartUser } from "./store";
+import { backoffDelay, syncOnce, type SyncResult } from "./sync";
+
+export type CartSession = { user: CartUser; online: boolean } | { user: null; online: boolean };
+
+/** The signed-in user from the server, or offline the one who signed in last on this cart. */
+export async function openSession(): Promise<CartSession> {
+  try {
+    const response = await fetch("/api/session", { cache: "no-store" });
+    if (response.status === 401) return { user: null, online: true };
+    if (!response.ok) throw new Error(String(response.status));
+    const { user } = (await response.json()) as { user: CartUser };
+    await rememberUser(user);
+    return { user, online: true };
+  } catch {
+    const user = await lastUser();
+    return user ? { user, online: false } : { user: null, online: false };
+  }
+}
+
+const activeStatuses = new Set(["not_started", "in_progress", "returned", "submitted"]);
+
+/**
+ * Fetches "my work" and stores it with every open run's card version, events and offline packet.
+ * Returns what was fetched; throws when offline (the caller shows what is stored).
+ */
+export async function refreshWork(data: CartData): Promise<WorkItemDto[]> {
+  const response = await fetch("/api/my-work", { cache: "no-store" });
+  if (!response.ok) throw new Error(`my work answered ${response.status}`);
+  const { work } = (await response.json()) as { work: WorkItemDto[] };
+  await data.saveWork(work);
+  for (const item of work.filter((w) => activeStatuses.has(w.status))) {
+    await refreshRun(data, item.runId).catch(() => undefined);
+  }
+  // Ask once that the browser keep this data under storage pressure (Chrome grants it to
+  // installed or much-used sites; elsewhere it may be refused, and the cart still works).
+  await navigator.storage?.persist?.().catch(() => false);
+  return work;
+}
+
+export async function refreshRun(data: CartData, runId: string): Promise<RunDetailDto> {
+  const response = await fetch(`/api/runs/${runId}`, { cache: "no-store" });
+  if (!response.ok) throw new Error(`run answered ${response.status}`);
+  const detail = (await response.json()) as RunDetailDto;
+  const serverDate = Date.parse(response.headers.get("date") ?? "");
+  if (Number.isFinite(serverDate)) {
+    const offset = serverDate - Date.now();
+    // The Date header has whole seconds: only a clock that is clearly off is corrected.
+    await data.saveClockOffset(Math.abs(offset) > 5_000 ? offset : 0);
+  }
+  await data.saveRun(detail);
+  if (detail.packet && !(await data.packet(runId))) {
+    const packet = await fetch(detail.packet.url, { cache: "no-store" });
+    if (packet.ok) await data.savePacket(runId, await packet.blob());
+  }
+  for (const file of detail.keepOnCarts) {
+    if (await data.wholeFile(file.revisionId)) continue;
+    const whole = await fetch(file.url, { cache: "no-store" });
+    if (whole.ok) await data.saveWholeFile(file.revisionId, await whole.blob());
+  }
+  return detail;
+}
+
+/**
+ * Records one thing done on the cart. Its time is the school's clock as last seen, and never
+ * earlier than the run's latest known event, so an instructor's return is never folded after the
+ * fix it asked for.
+ */
+export async function record(
+  data: CartData,
+  detail: RunDetailDto,
+  type: RunEventType,
+  { stepId = null, payload = {} }: { stepId?: string | null; payload?: Record<string, unknown> } = {},
+) {
+  const pending = (await data.pending()).filter((p) => p.runId === detail.run.runId);
+  const latest = Math.max(0, ...detail.events.map((e) => Date.parse(e.clientTime)), ...pending.map((p) => Date.parse(p.event.clientTime)));
+  const now = Date.now() + (await data.clockOffset());
+  const event = { id: crypto.randomUUID(), type, stepId, payload, clientTime: new Date(Math.max(now, latest + 1)).toISOString() };
+  await data.queue([{ runId: detail.run.runId, event }]);
+  void syncer(data).now();
+  return event;
+}
+
+interface Syncer {
+  now(): Promise<SyncResult | null>;
+  last: SyncResult | null;
+}
+const syncers = new Map<string, Syncer>();
+
+/** One sender per user and tab; several callers share its pass, and failed passes back off. */
+export function syncer(data: CartData): Syncer {
+  const known = syncers.get(data.userId);
+  if (known) return known;
+  let running: Promise<SyncResult | null> | null = null;
+  let failures = 0;
+  let retry: ReturnType<typeof setTimeout> | null = null;
+  const self: Syncer = {
+    last: null,
+    now() {
+      if (running) return running;
+      if (retry) clearTimeout(retry);
+      retry = null;
+      const pass = async () => {
+        const result = await syncOnce(data.syncPort());
+        self.last = result;
+        if (result.stop === "offline" || result.stop === "server") {
+          retry = setTimeout(() => void self.now(), backoffDelay(failures++));
+        } else {
+          failures = 0;
+        }
+        return result;
+      };
+      // The tab and the service worker may both try: the Web Locks API lets one send at a time.
+      const locked: Promise<SyncResult> =
+        typeof navigator !== "undefined" && navigator.locks ? (navigator.locks.request(`hangarleaf-sync-${data.userId}`, pass) as unknown as Promise<SyncResult>) : pass();
+      const current = locked.finally(() => (running = null));
+      running = current;
+      return current;
+    },
+  };
+  syncers.set(data.userId, self);
+  if (typeof window !== "undefined") {
+    window.addEventListener("online", () => void self.now());
+    window.addEventListener("focus", () => void self.now());
+  }
+  return self;
+}
+
+export { cartData };
