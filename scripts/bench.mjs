@@ -9,7 +9,7 @@ import {
 } from "./lib.mjs";
 
 // Benchmarks that measure the API need the real web server.
-const needsWeb = new Set(["search", "reader"]);
+const needsWeb = new Set(["search", "reader", "sync"]);
 // …and the reader's file must first be read by the worker, in Chromium.
 const needsWorker = new Set(["reader"]);
 

@@ -8,6 +8,10 @@ import "react-pdf/dist/Page/TextLayer.css";
 
 pdfjs.GlobalWorkerOptions.workerSrc = "/pdf.worker.min.mjs";
 
+// One object for the component's life: a new options object makes react-pdf load the document
+// again, from a buffer pdf.js has already handed to its worker.
+const options = { standardFontDataUrl: "/standard_fonts/" };
+
 export default function PacketPage({ file, page, label }: { file: Blob; page: number; label: string }) {
   const box = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(800);
@@ -33,7 +37,7 @@ export default function PacketPage({ file, page, label }: { file: Blob; page: nu
         </button>
       </div>
       <div ref={box} className="overflow-auto rounded-md border-2 border-line bg-white" aria-label={label}>
-        <Document file={file} loading={<p role="status">Opening the page…</p>} error={<p className="notice-error">This page could not be opened.</p>} options={{ standardFontDataUrl: "/standard_fonts/" }}>
+        <Document file={file} loading={<p role="status">Opening the page…</p>} error={<p className="notice-error">This page could not be opened.</p>} options={options}>
           <Page pageNumber={page} width={width * zoom} renderAnnotationLayer={false} />
         </Document>
       </div>

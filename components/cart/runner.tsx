@@ -53,7 +53,7 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
       Promise.all([data.run(runId), data.pending(), data.packet(runId)]).then(([stored, queued, blob]) => {
         setDetail(stored ?? null);
         setPending(queued.filter((p) => p.runId === runId).map((p) => ({ ...p.event, userId: data.userId, type: p.event.type as RunEventType })));
-        setPacket(blob ?? null);
+        setPacket((old) => old ?? blob ?? null); // a new Blob each read would reload the page view
       }),
     [data, runId],
   );

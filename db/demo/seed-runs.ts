@@ -67,7 +67,11 @@ function eventsFor(steps: Step[], progress: Progress, studentId: string, instruc
     made.push({ id: randomUUID(), type, userId, stepId, payload, clientTime: new Date(start + (minute += 4) * 60_000) });
   const upTo = progress === "started" ? Math.ceil(steps.length / 2) : steps.length;
   for (const step of steps.slice(0, upTo)) {
-    if (step.timerMinutes) add("timer.started", studentId, step.id, { minutes: step.timerMinutes });
+    if (step.timerMinutes) {
+      add("timer.started", studentId, step.id, { minutes: step.timerMinutes });
+      minute += step.timerMinutes;
+      add("timer.stopped", studentId, step.id);
+    }
     if (step.measurement) add("value.recorded", studentId, step.id, { value: goodValue(step) });
     add("step.checked", studentId, step.id);
     if (step.inspectionPoint && progress === "signed_off") add("inspection.bought_off", instructorId, step.id);

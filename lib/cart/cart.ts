@@ -109,7 +109,9 @@ export function syncer(data: CartData): Syncer {
         const result = await syncOnce(data.syncPort());
         self.last = result;
         if (result.stop === "offline" || result.stop === "server") {
-          retry = setTimeout(() => void self.now(), backoffDelay(failures++));
+          // The wait grows only while nothing gets through.
+          failures = result.sent + result.refused > 0 ? 0 : failures + 1;
+          retry = setTimeout(() => void self.now(), backoffDelay(failures));
         } else {
           failures = 0;
         }

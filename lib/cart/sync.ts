@@ -42,20 +42,23 @@ export interface SyncResult {
   stop: SyncStop;
 }
 
-export const batchSize = 100;
+/** Events per request: a 30 % loss rate costs one wait per lost request, so fewer, larger batches. */
+export const batchSize = 250;
 
 /** One pass over the queue. Stops at the first network failure or 5xx; the caller waits and retries. */
 export async function syncOnce(port: SyncPort, { size = batchSize }: { size?: number } = {}): Promise<SyncResult> {
   let sent = 0;
   let refused = 0;
-  const attempt = async (fn: () => Promise<Answer>): Promise<Answer | SyncStop> => {
+  // A request lost on a flaky link is tried once more at once (the server keeps each event once,
+  // so a second copy is harmless); a second loss ends the pass and the caller backs off.
+  const attempt = async (fn: () => Promise<Answer>, tries = 2): Promise<Answer | SyncStop> => {
     try {
       const answer = await fn();
       if (answer.status === 401) return "signed_out";
       if (answer.status >= 500 || answer.status === 429 || answer.status === 408) return "server";
       return answer;
     } catch {
-      return "offline";
+      return tries > 1 ? attempt(fn, tries - 1) : "offline";
     }
   };
 
@@ -91,23 +94,33 @@ export async function syncOnce(port: SyncPort, { size = batchSize }: { size?: nu
   return { sent, refused, stop: null };
 }
 
-/** Exponential backoff with jitter: 0.5 s, 1 s, 2 s … up to 30 s, each between half and all of it. */
+/**
+ * Exponential backoff with jitter: 0.2 s, 0.4 s, 0.8 s … up to 30 s, each between half and all of
+ * it. A lost answer on a flaky hangar network is retried almost at once; a server that stays
+ * down is asked less and less often.
+ */
 export function backoffDelay(attempt: number, random = Math.random): number {
-  const ceiling = Math.min(30_000, 500 * 2 ** attempt);
+  const ceiling = Math.min(30_000, 200 * 2 ** attempt);
   return Math.round(ceiling * (0.5 + random() / 2));
 }
 
-/** Passes until the queue is empty, waiting between failed passes; gives up when signed out. */
+/**
+ * Passes until the queue is empty, waiting between failed passes; gives up when signed out. The
+ * wait grows only while passes get nothing through: a flaky link that lets most requests pass
+ * keeps short waits.
+ */
 export async function syncUntilDone(
   port: SyncPort,
   { sleep = (ms: number) => new Promise<void>((r) => setTimeout(r, ms)), maxPasses = 50, size = batchSize, delay = backoffDelay }: { sleep?: (ms: number) => Promise<void>; maxPasses?: number; size?: number; delay?: (attempt: number) => number } = {},
 ): Promise<SyncResult & { passes: number }> {
   let total: SyncResult = { sent: 0, refused: 0, stop: null };
+  let fruitless = 0;
   for (let pass = 0; pass < maxPasses; pass++) {
     const result = await syncOnce(port, { size });
     total = { sent: total.sent + result.sent, refused: total.refused + result.refused, stop: result.stop };
     if (!result.stop || result.stop === "signed_out") return { ...total, passes: pass + 1 };
-    await sleep(delay(pass));
+    fruitless = result.sent + result.refused > 0 ? 0 : fruitless + 1;
+    await sleep(delay(fruitless));
   }
   return { ...total, passes: maxPasses };
 }

@@ -8,6 +8,7 @@ import { getVersionById } from "@/lib/cards";
 import type { CardVersionDto } from "@/lib/dto-cards";
 import type { AssignmentDto, EventBatchResultDto, RunDetailDto, SignOffDto, WorkItemDto } from "@/lib/dto-runs";
 import { AppError, databaseErrorCode } from "@/lib/errors";
+import { stepSchema } from "@/lib/validation/cards";
 import type { RunEventInput } from "@/lib/validation/runs";
 import { foldRun, type CardStepForRun, type RunEvent, type RunState, type RunStatus } from "./fold";
 import { activeMinutes } from "./hours";
@@ -182,8 +183,14 @@ async function loadRun(db: Db | Tx, actor: Actor, runId: string, { lock = false 
   return run;
 }
 
-function stepsForFold(version: CardVersionDto): CardStepForRun[] {
+function stepsForFold(version: Pick<CardVersionDto, "steps">): CardStepForRun[] {
   return version.steps.map((s) => ({ id: s.id, inspectionPoint: s.inspectionPoint, measurement: s.measurement, timerMinutes: s.timerMinutes }));
+}
+
+/** Only the steps, for folding: the full version (manual titles, rechecks) is not needed to store events. */
+async function stepsOnly(db: Db | Tx, versionId: string): Promise<Pick<CardVersionDto, "steps">> {
+  const [row] = await db.select({ steps: taskCardVersions.steps }).from(taskCardVersions).where(eq(taskCardVersions.id, versionId));
+  return { steps: ((row?.steps ?? []) as unknown[]).map((s) => stepSchema.parse(s)) as unknown as CardVersionDto["steps"] };
 }
 
 async function eventsOf(db: Db | Tx, runId: string) {
@@ -206,7 +213,7 @@ function toRunEvent(e: typeof runEvents.$inferSelect): RunEvent {
 }
 
 /** The fold of what is stored, with the reviewers' ids as the server knows them. */
-async function foldStored(db: Db | Tx, runId: string, version: CardVersionDto) {
+async function foldStored(db: Db | Tx, runId: string, version: Pick<CardVersionDto, "steps">) {
   const rows = await eventsOf(db, runId);
   const reviewers = new Set(rows.filter((r) => r.role === "instructor" || r.role === "admin").map((r) => r.event.userId));
   const events = rows.map((r) => toRunEvent(r.event));
@@ -309,9 +316,9 @@ export async function appendEvents({ actor, runId, events }: { actor: Actor; run
           fresh.map((e) => ({ id: e.id, runId, userId: actor.id, type: e.type, stepId: e.stepId, payload: e.payload, clientTime: new Date(e.clientTime) })),
         );
       }
-      const version = await getVersionById(run.versionId, tx);
-      const { events: all, state } = await foldStored(tx, runId, version);
-      if (fresh.length) await writeFold(tx, runId, state, all);
+      if (!fresh.length) return { stored: 0, duplicates: events.length, status: run.status };
+      const { events: all, state } = await foldStored(tx, runId, await stepsOnly(tx, run.versionId));
+      await writeFold(tx, runId, state, all);
       return { stored: fresh.length, duplicates: events.length - fresh.length, status: state.status };
     });
   } catch (error) {
