@@ -12,7 +12,7 @@ import { StepMarkdown } from "@/components/step-markdown";
 import { calculators } from "@/lib/calc";
 import { describeLimit } from "@/lib/calc/limits";
 import { record, refreshRun, syncer } from "@/lib/cart/cart";
-import type { CartData } from "@/lib/cart/store";
+import type { CartData, RefusedItem } from "@/lib/cart/store";
 import type { RunDetailDto } from "@/lib/dto-runs";
 import { foldRun, type RunEvent, type RunEventType } from "@/lib/runs/fold";
 import { sortNotices } from "@/lib/validation/cards";
@@ -47,10 +47,12 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
   // ?step=N (from the offline search) opens that step; the runner only renders in the browser.
   const [index, setIndex] = useState(() => Math.max(0, Number(new URLSearchParams(window.location.search).get("step")) - 1 || 0));
   const [problem, setProblem] = useState<string | null>(null);
+  const [refused, setRefused] = useState<RefusedItem[]>([]);
 
   const load = useCallback(
     () =>
-      Promise.all([data.run(runId), data.pending(), data.packet(runId)]).then(([stored, queued, blob]) => {
+      Promise.all([data.run(runId), data.pending(), data.packet(runId), data.refused()]).then(([stored, queued, blob, refused]) => {
+        setRefused(refused.filter((r) => r.runId === runId));
         setDetail(stored ?? null);
         setPending(queued.filter((p) => p.runId === runId).map((p) => ({ ...p.event, userId: data.userId, type: p.event.type as RunEventType })));
         setPacket((old) => old ?? blob ?? null); // a new Blob each read would reload the page view
@@ -173,6 +175,14 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
         </span>
       </div>
 
+      {refused.length ? (
+        <div role="alert" className="notice-error">
+          <p className="font-semibold">
+            The school&apos;s server refused {refused.length} {refused.length === 1 ? "change" : "changes"} made on this laptop: {refused.at(-1)!.reason}
+          </p>
+          <p>Tell your instructor; those changes are not part of the run.</p>
+        </div>
+      ) : null}
       {problem ? (
         <p role="alert" className="notice-error">
           {problem}

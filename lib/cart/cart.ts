@@ -98,11 +98,16 @@ export function syncer(data: CartData): Syncer {
   if (known) return known;
   let running: Promise<SyncResult | null> | null = null;
   let failures = 0;
+  let again = false;
   let retry: ReturnType<typeof setTimeout> | null = null;
   const self: Syncer = {
     last: null,
     now() {
-      if (running) return running;
+      // A change queued while a pass runs may have been read too late: one more pass follows.
+      if (running) {
+        again = true;
+        return running;
+      }
       if (retry) clearTimeout(retry);
       retry = null;
       const pass = async () => {
@@ -120,7 +125,13 @@ export function syncer(data: CartData): Syncer {
       // The tab and the service worker may both try: the Web Locks API lets one send at a time.
       const locked: Promise<SyncResult> =
         typeof navigator !== "undefined" && navigator.locks ? (navigator.locks.request(`hangarleaf-sync-${data.userId}`, pass) as unknown as Promise<SyncResult>) : pass();
-      const current = locked.finally(() => (running = null));
+      const current = locked.finally(() => {
+        running = null;
+        if (again) {
+          again = false;
+          void self.now();
+        }
+      });
       running = current;
       return current;
     },

@@ -2,7 +2,7 @@
 // a shared cart one student never reads another's runs, notes or waiting changes; signing out
 // deletes that user's database. A small shared database only says who signed in last, so the cart
 // opens offline. Runs in the page and in the service worker (no window, no React).
-import { createStore, del, get, set, update, type UseStore } from "idb-keyval";
+import { del, get, set, update, type UseStore } from "idb-keyval";
 import type { RunDetailDto, WorkItemDto } from "@/lib/dto-runs";
 import type { PendingEvent, PendingPhoto, SyncPort } from "./sync";
 
@@ -12,13 +12,41 @@ export interface CartUser {
   role: string;
 }
 
-const shared = () => createStore("hangarleaf-cart", "shared");
+/**
+ * idb-keyval's store, but one that lets go: when another tab or the service worker deletes the
+ * database (sign-out), every open connection closes at its versionchange event, so the deletion
+ * is not blocked by a connection this page or the worker still holds.
+ */
+function closableStore(name: string, storeName: string): UseStore {
+  let db: Promise<IDBDatabase> | null = null;
+  const open = () =>
+    (db ??= new Promise<IDBDatabase>((resolve, reject) => {
+      const request = indexedDB.open(name);
+      request.onupgradeneeded = () => request.result.createObjectStore(storeName);
+      request.onsuccess = () => {
+        const connection = request.result;
+        connection.onversionchange = () => {
+          connection.close();
+          db = null;
+        };
+        resolve(connection);
+      };
+      request.onerror = () => {
+        db = null;
+        reject(request.error);
+      };
+    }));
+  return (mode, callback) => open().then((connection) => callback(connection.transaction(storeName, mode).objectStore(storeName)));
+}
+
+const sharedStore = closableStore("hangarleaf-cart", "shared");
+const shared = () => sharedStore;
 const dbName = (userId: string) => `hangarleaf-user-${userId}`;
 const stores = new Map<string, UseStore>();
 function userStore(userId: string): UseStore {
   let store = stores.get(userId);
   if (!store) {
-    store = createStore(dbName(userId), "data");
+    store = closableStore(dbName(userId), "data");
     stores.set(userId, store);
   }
   return store;
@@ -31,9 +59,15 @@ export const rememberUser = (user: CartUser) => set("user", { id: user.id, name:
 export async function forgetUser(userId: string): Promise<void> {
   stores.delete(userId);
   await del("user", shared());
+  // Open connections close themselves (closableStore); a connection of an old page that does not
+  // is given a few seconds, then the deletion finishes when it closes.
   await new Promise<void>((resolve) => {
     const request = indexedDB.deleteDatabase(dbName(userId));
-    request.onsuccess = request.onerror = request.onblocked = () => resolve();
+    const timer = setTimeout(resolve, 3000);
+    request.onsuccess = request.onerror = () => {
+      clearTimeout(timer);
+      resolve();
+    };
   });
 }
 
@@ -53,10 +87,11 @@ export interface TimerEntry {
 export function cartData(userId: string) {
   const store = userStore(userId);
   const listeners = new Set<() => void>();
+  // Other tabs and the service worker learn of changes too (a channel never hears its own posts).
+  const channel = typeof BroadcastChannel !== "undefined" ? new BroadcastChannel(`hangarleaf-${userId}`) : null;
   const changed = () => {
     listeners.forEach((fn) => fn());
-    // Other tabs and the service worker learn of it too.
-    if (typeof BroadcastChannel !== "undefined") new BroadcastChannel(`hangarleaf-${userId}`).postMessage("changed");
+    channel?.postMessage("changed");
   };
   return {
     userId,
@@ -134,6 +169,7 @@ export function cartData(userId: string) {
         },
         refused: async (items) => {
           await update<RefusedItem[]>("refused", (old) => [...(old ?? []), ...items].slice(-200), store);
+          changed();
         },
         postEvents: async (runId, events) => answerOf(await fetcher(`/api/runs/${runId}/events`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ events }) })),
         putPhoto: async (p) =>
