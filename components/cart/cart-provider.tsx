@@ -54,7 +54,7 @@ export function useWaiting(data: CartData | null): number {
   const [count, setCount] = useState(0);
   useEffect(() => {
     if (!data) return;
-    const read = () => void Promise.all([data.pending(), data.pendingPhotos()]).then(([e, p]) => setCount(e.length + p.length));
+    const read = () => void Promise.all([data.pending(), data.pendingPhotos()]).then(([e, p]) => setCount(e.length + p.length), () => setCount(0));
     read();
     return data.onChange(read);
   }, [data]);

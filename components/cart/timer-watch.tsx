@@ -45,7 +45,7 @@ export function TimerWatch({ data }: { data: CartData | null }) {
         await data.setTimers((old) => old.filter((t) => t.endsAt > now));
       }
     };
-    const id = setInterval(() => void tick(), 1000);
+    const id = setInterval(() => void tick().catch(() => undefined), 1000);
     return () => clearInterval(id);
   }, [data]);
   if (!due.length) return null;

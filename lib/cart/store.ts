@@ -17,10 +17,17 @@ export interface CartUser {
  * database (sign-out), every open connection closes at its versionchange event, so the deletion
  * is not blocked by a connection this page or the worker still holds.
  */
+// Databases of users who signed out here: a timer or a late render must not create them again.
+const retired = new Set<string>();
+
 function closableStore(name: string, storeName: string): UseStore {
   let db: Promise<IDBDatabase> | null = null;
   const open = () =>
     (db ??= new Promise<IDBDatabase>((resolve, reject) => {
+      if (retired.has(name)) {
+        db = null;
+        return reject(new Error("signed out on this laptop"));
+      }
       const request = indexedDB.open(name);
       request.onupgradeneeded = () => request.result.createObjectStore(storeName);
       request.onsuccess = () => {
@@ -53,10 +60,14 @@ function userStore(userId: string): UseStore {
 }
 
 export const lastUser = () => get<CartUser>("user", shared());
-export const rememberUser = (user: CartUser) => set("user", { id: user.id, name: user.name, role: user.role }, shared());
+export const rememberUser = (user: CartUser) => {
+  retired.delete(dbName(user.id));
+  return set("user", { id: user.id, name: user.name, role: user.role }, shared());
+};
 
 /** Signing out: this user's database goes, and the cart no longer opens as them. */
 export async function forgetUser(userId: string): Promise<void> {
+  retired.add(dbName(userId));
   stores.delete(userId);
   await del("user", shared());
   // Open connections close themselves (closableStore); a connection of an old page that does not

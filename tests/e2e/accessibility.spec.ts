@@ -62,3 +62,33 @@ test("the task card and calculator pages have no serious accessibility violation
     expect(await seriousViolations(page), path).toEqual([]);
   }
 });
+
+test("the cart, review and records pages have no serious accessibility violation", async ({ page, browser }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open("/sign-in?next=%2Fwork");
+  await signIn.signIn("student@hangarleaf.test");
+  await expect(page.getByRole("heading", { level: 1, name: "My work" })).toBeVisible();
+  await expect(page.getByRole("link", { name: /Fluorescent penetrant/ })).toBeVisible();
+  expect(await seriousViolations(page), "/work").toEqual([]);
+  await page.getByRole("link", { name: /Fluorescent penetrant/ }).click();
+  await expect(page.getByRole("heading", { level: 1, name: /Fluorescent penetrant/ })).toBeVisible();
+  expect(await seriousViolations(page), "/work/run").toEqual([]);
+  await page.goto("/records");
+  await expect(page.getByRole("heading", { level: 1, name: "My training record" })).toBeVisible();
+  expect(await seriousViolations(page), "own record").toEqual([]);
+
+  const staff = await browser.newPage();
+  const staffSignIn = new SignInPage(staff);
+  await staffSignIn.open("/sign-in?next=%2Freview");
+  await staffSignIn.signIn("instructor@hangarleaf.test");
+  await expect(staff.getByRole("heading", { level: 1, name: "Review" })).toBeVisible();
+  expect(await seriousViolations(staff), "/review").toEqual([]);
+  await staff.getByRole("link", { name: "Jordan Pike" }).first().click();
+  await expect(staff.getByRole("heading", { level: 2, name: "Your decision" })).toBeVisible();
+  expect(await seriousViolations(staff), "review a run").toEqual([]);
+  await staff.goto("/records");
+  await staff.getByRole("link", { name: /AMT Day Cohort 2027/ }).click();
+  await expect(staff.getByRole("img", { name: /Bar chart/ })).toBeVisible();
+  expect(await seriousViolations(staff), "class record").toEqual([]);
+  await staff.close();
+});

@@ -2,10 +2,10 @@ import { expect, test } from "@playwright/test";
 import { AppShell, SignInPage } from "./support/pages";
 
 const roles = [
-  { email: "student@hangarleaf.test", role: "Student", nav: ["Home", "Search", "Library", "Task cards", "Calculators"] },
+  { email: "student@hangarleaf.test", role: "Student", nav: ["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Records"] },
   { email: "librarian@hangarleaf.test", role: "Librarian", nav: ["Home", "Search", "Library", "Task cards", "Calculators"] },
-  { email: "instructor@hangarleaf.test", role: "Instructor", nav: ["Home", "Search", "Library", "Task cards", "Calculators", "Classes"] },
-  { email: "admin@hangarleaf.test", role: "Admin", nav: ["Home", "Search", "Library", "Task cards", "Calculators", "Classes", "Accounts", "Audit log", "Outbox"] },
+  { email: "instructor@hangarleaf.test", role: "Instructor", nav: ["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records"] },
+  { email: "admin@hangarleaf.test", role: "Admin", nav: ["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records", "Accounts", "Audit log", "Outbox"] },
 ];
 
 for (const { email, role, nav } of roles) {

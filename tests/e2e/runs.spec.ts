@@ -142,6 +142,7 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   const databases = await page.evaluate(async () => (await indexedDB.databases()).map((d) => d.name));
   expect(databases).not.toContain(`hangarleaf-user-${me}`);
   await signIn.signIn("student2@hangarleaf.test");
+  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
   await page.goto("/work");
   await expect(page.getByRole("heading", { level: 1, name: "My work" })).toBeVisible();
   await expect(page.getByText("Jordan Pike")).toBeVisible();

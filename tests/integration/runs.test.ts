@@ -331,3 +331,37 @@ describe("the offline packet and photos", () => {
     expect((await runOf(cookie, runId)).photos).toHaveLength(1);
   });
 });
+
+describe("keep on carts and the audit log's filters", () => {
+  it("lists a kept manual's current file for the cart, and only while it is kept", async () => {
+    const runId = await newRun();
+    const [row] = await getDb().select({ manualId: revisions.manualId }).from(revisions).where(eq(revisions.id, revisionId));
+    expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: librarian, json: { keepOnCarts: "yes" } })).status).toBe(422);
+    expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: instructor, json: { keepOnCarts: true } })).status).toBe(403);
+    expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: librarian, json: { keepOnCarts: true } })).status).toBe(200);
+    try {
+      expect((await runOf(students[0]!.cookie, runId)).keepOnCarts).toEqual([expect.objectContaining({ revisionId, url: `/api/revisions/${revisionId}/file` })]);
+    } finally {
+      expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: librarian, json: { keepOnCarts: false } })).status).toBe(200);
+    }
+    expect((await runOf(students[0]!.cookie, runId)).keepOnCarts).toEqual([]);
+  });
+
+  it("filters the audit log by kind, person and date", async () => {
+    const get = async (query: string) => ((await (await call("GET", `/api/audit?${query}`, { cookie: admin })).json()) as { events: { action: string; actorName: string | null; createdAt: string }[] }).events;
+    const runsOnly = await get("kind=runs&limit=50");
+    expect(runsOnly.length).toBeGreaterThan(0);
+    expect(runsOnly.every((e) => e.action.startsWith("run."))).toBe(true);
+    const assignmentsOnly = await get("kind=assignments");
+    expect(assignmentsOnly.every((e) => e.action === "assignment.created")).toBe(true);
+    const byName = await get("actor=Test%20instructor&kind=runs");
+    expect(byName.length).toBeGreaterThan(0);
+    expect(byName.every((e) => e.actorName === "Test instructor")).toBe(true);
+    expect(await get("actor=%25")).toEqual([]); // a typed % is a character, not a wildcard
+    expect(await get("from=2000-01-01&to=2000-01-02")).toEqual([]);
+    const today = new Date().toISOString().slice(0, 10);
+    expect((await get(`from=${today}&to=${today}&kind=runs`)).length).toBeGreaterThan(0);
+    // Unreadable filters are ignored, not errors.
+    expect((await call("GET", "/api/audit?kind=everything&from=yesterday", { cookie: admin })).status).toBe(200);
+  });
+});

@@ -6,6 +6,7 @@ import { requirePageUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
 import { getManual } from "@/lib/library/manuals";
 import { documentTypeLabels } from "@/lib/validation/library";
+import { KeepOnCarts } from "../_components/keep-on-carts";
 import { RetryButton } from "../_components/retry-button";
 import { UploadForm } from "../_components/upload-form";
 import { isUuid } from "@/lib/http";
@@ -35,6 +36,7 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
       </Link>
       <div className="flex flex-col gap-1">
         <h1>{manual.title}</h1>
+        {manages ? <KeepOnCarts manualId={manual.id} kept={manual.keepOnCarts} /> : null}
         <p className="text-ink-soft">
           {documentTypeLabels[manual.documentType]}
           {manual.applicability.length ? ` · applies to ${manual.applicability.join(", ")}` : ""}
