@@ -56,7 +56,7 @@ const day = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISO
 function goodValue(step: Step): string {
   const m = step.measurement!;
   const value = m.nominal ?? (m.min != null && m.max != null ? (m.min + m.max) / 2 : m.min != null ? m.min * 1.2 : m.max! * 0.8);
-  return `${Math.round(value * 100) / 100} ${unitLabel(m.unit)}`;
+  return `${Math.round(value * 10000) / 10000} ${unitLabel(m.unit)}`;
 }
 
 function eventsFor(steps: Step[], progress: Progress, studentId: string, instructorId: string) {

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { CardNotice } from "@/components/card-notice";
+import { StepMarkdown } from "@/components/step-markdown";
 import { describeLimit } from "@/lib/calc/limits";
 import { requirePageUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
@@ -86,7 +87,7 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                 {sortNotices(step.notices).map((n, j) => (
                   <CardNotice key={j} kind={n.kind} text={n.text} />
                 ))}
-                <p className="whitespace-pre-line">{step.text}</p>
+                <StepMarkdown text={step.text} />
                 {step.measurement ? (
                   <p className={s.value ? (s.value.judgement.status === "in" ? "notice-ok" : "notice-error") : "hint"}>
                     {step.measurement.label} (limits {describeLimit(step.measurement)}):{" "}
