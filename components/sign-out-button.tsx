@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { callApi } from "@/lib/api-client";
 import { cartData, syncer } from "@/lib/cart/cart";
-import { forgetUser, lastUser } from "@/lib/cart/store";
+import { forgetUser, lastUser, markSignOutPending } from "@/lib/cart/store";
 
 /**
  * Signing out on a shared cart: waiting changes are sent first when possible, then this user's
@@ -34,7 +34,9 @@ export function SignOutButton() {
           }
           await forgetUser(user.id);
         }
-        await callApi("DELETE", "/api/session").catch(() => undefined);
+        // Offline the cookie cannot be ended now: the cart ends it before anything else next time
+        // it reaches the server, so the next person never continues in this account.
+        await callApi("DELETE", "/api/session").catch(() => markSignOutPending());
         router.replace("/sign-in");
         router.refresh();
       }}

@@ -285,6 +285,8 @@ function StepPanel({
   const [note, setNote] = useState("");
   const [openPage, setOpenPage] = useState<number | null>(null);
   const disabled = locked || blocked !== null;
+  // A bought-off step stays as the instructor saw it (the fold ignores changes); notes still go.
+  const frozen = disabled || !!state.boughtOff;
   const timerLeft = state.timer && !state.timer.stoppedAt ? Date.parse(state.timer.startedAt) + state.timer.minutes * 60_000 - now : null;
 
   return (
@@ -357,7 +359,7 @@ function StepPanel({
           }}
         >
           <LimitCheckField id={`value-${step.id}`} label={`${step.measurement.label} (limits ${describeLimit(step.measurement)})`} limit={step.measurement} value={value} onChange={setValue} />
-          <button type="submit" className="btn btn-secondary self-start" disabled={disabled || !value.trim()}>
+          <button type="submit" className="btn btn-secondary self-start" disabled={frozen || !value.trim()}>
             Record this reading
           </button>
           {state.value ? (
@@ -383,7 +385,7 @@ function StepPanel({
             <button
               type="button"
               className="btn btn-secondary"
-              disabled={disabled}
+              disabled={frozen}
               onClick={async () => {
                 await onAct("timer.started", { stepId: step.id, payload: { minutes: step.timerMinutes } });
                 await data.setTimers((t) => [...t.filter((x) => !(x.runId === runId && x.stepId === step.id)), { runId, stepId: step.id, label: `step ${number} (${step.timerMinutes} min)`, endsAt: Date.now() + step.timerMinutes! * 60_000 }]);
@@ -425,7 +427,7 @@ function StepPanel({
           accept={photoTypes.join(",")}
           capture="environment"
           className="input"
-          disabled={locked}
+          disabled={locked || !!state.boughtOff}
           onChange={async (e) => {
             const file = e.target.files?.[0];
             e.target.value = "";
@@ -449,7 +451,7 @@ function StepPanel({
         type="button"
         aria-pressed={state.checked}
         className={`btn min-h-16 text-xl ${state.checked ? "btn-secondary" : "btn-primary"}`}
-        disabled={disabled || (step.inspectionPoint && !!state.boughtOff)}
+        disabled={frozen}
         onClick={() => void onAct(state.checked ? "step.unchecked" : "step.checked", { stepId: step.id })}
       >
         {state.checked ? `✓ Step ${number} done (tap to undo)` : `Mark step ${number} done`}

@@ -3,13 +3,30 @@
 // network is there (on start, on the online event, on focus, after each change, with backoff).
 import type { RunDetailDto, WorkItemDto } from "@/lib/dto-runs";
 import type { RunEventType } from "@/lib/runs/fold";
-import { cartData, lastUser, rememberUser, type CartData, type CartUser } from "./store";
+import { cartData, clearSignOutPending, lastUser, rememberUser, signOutPending, type CartData, type CartUser } from "./store";
 import { backoffDelay, syncOnce, type SyncResult } from "./sync";
+
+async function sessionUserId(): Promise<string | null | "offline"> {
+  try {
+    const response = await fetch("/api/session", { cache: "no-store" });
+    if (!response.ok) return response.status === 401 ? null : "offline";
+    return ((await response.json()) as { user: CartUser }).user.id;
+  } catch {
+    return "offline";
+  }
+}
 
 export type CartSession = { user: CartUser; online: boolean } | { user: null; online: boolean };
 
 /** The signed-in user from the server, or offline the one who signed in last on this cart. */
 export async function openSession(): Promise<CartSession> {
+  // A sign-out made offline ends the session on the server first, before anyone uses it.
+  if (await signOutPending()) {
+    const ended = await fetch("/api/session", { method: "DELETE" }).then((r) => r.ok, () => false);
+    if (!ended) return { user: null, online: false };
+    await clearSignOutPending();
+    return { user: null, online: true };
+  }
   try {
     const response = await fetch("/api/session", { cache: "no-store" });
     if (response.status === 401) return { user: null, online: true };
@@ -110,7 +127,12 @@ export function syncer(data: CartData): Syncer {
       }
       if (retry) clearTimeout(retry);
       retry = null;
-      const pass = async () => {
+      const pass = async (): Promise<SyncResult> => {
+        // Only under this user's own session: with another student's cookie the server would refuse
+        // these changes as not theirs, and they would be set aside for good.
+        const session = await sessionUserId();
+        if (session === "offline") return { sent: 0, refused: 0, stop: "offline" };
+        if (session !== data.userId) return (self.last = { sent: 0, refused: 0, stop: "signed_out" });
         const result = await syncOnce(data.syncPort());
         self.last = result;
         if (result.stop === "offline" || result.stop === "server") {

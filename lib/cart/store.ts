@@ -65,6 +65,11 @@ export const rememberUser = (user: CartUser) => {
   return set("user", { id: user.id, name: user.name, role: user.role }, shared());
 };
 
+/** Signed out while offline: the server's session still has to be ended when the network is back. */
+export const signOutPending = async () => (await get<boolean>("sign-out-pending", shared())) === true;
+export const markSignOutPending = () => set("sign-out-pending", true, shared());
+export const clearSignOutPending = () => del("sign-out-pending", shared());
+
 /** Signing out: this user's database goes, and the cart no longer opens as them. */
 export async function forgetUser(userId: string): Promise<void> {
   retired.add(dbName(userId));

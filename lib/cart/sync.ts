@@ -72,23 +72,34 @@ export async function syncOnce(port: SyncPort, { size = batchSize }: { size?: nu
     await port.removePhoto(photo.photoId);
   }
 
+  /** Sends one batch; a batch refused as invalid is split, so one bad event does not sink the rest. */
+  const send = async (runId: string, batch: RunEventInput[]): Promise<SyncStop | "done"> => {
+    const answer = await attempt(() => port.postEvents(runId, batch));
+    if (typeof answer === "string" || answer === null) return answer;
+    if ((answer.status === 422 || answer.status === 413) && batch.length > 1) {
+      const half = Math.ceil(batch.length / 2);
+      const first = await send(runId, batch.slice(0, half));
+      return first === "done" ? send(runId, batch.slice(half)) : first;
+    }
+    if (answer.status >= 400) {
+      // 409 after sign-off, 404 for a run this account cannot see, 422 for an event the server
+      // will never take: re-sending would block the queue forever, so they are set aside.
+      refused += batch.length;
+      await port.refused(batch.map((e) => ({ id: e.id, runId, reason: answer.message ?? `refused (${answer.status})` })));
+      await port.removeEvents(batch.map((e) => e.id), false);
+    } else {
+      sent += batch.length;
+      await port.removeEvents(batch.map((e) => e.id), true);
+    }
+    return "done";
+  };
+
   const byRun = new Map<string, RunEventInput[]>();
   for (const p of await port.events()) byRun.set(p.runId, [...(byRun.get(p.runId) ?? []), p.event]);
   for (const [runId, events] of byRun) {
     for (let i = 0; i < events.length; i += size) {
-      const batch = events.slice(i, i + size);
-      const answer = await attempt(() => port.postEvents(runId, batch));
-      if (typeof answer === "string" || answer === null) return { sent, refused, stop: answer };
-      if (answer.status >= 400) {
-        // 409 after sign-off, 404 for a run this account cannot see, 422 for an event the server
-        // will never take: re-sending would block the queue forever, so they are set aside.
-        refused += batch.length;
-        await port.refused(batch.map((e) => ({ id: e.id, runId, reason: answer.message ?? `refused (${answer.status})` })));
-        await port.removeEvents(batch.map((e) => e.id), false);
-      } else {
-        sent += batch.length;
-        await port.removeEvents(batch.map((e) => e.id), true);
-      }
+      const outcome = await send(runId, events.slice(i, i + size));
+      if (outcome !== "done") return { sent, refused, stop: outcome };
     }
   }
   return { sent, refused, stop: null };

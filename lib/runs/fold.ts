@@ -120,6 +120,18 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
       state.ignored.push({ id: e.id, reason: "no such step on this card version" });
       continue;
     }
+    if (e.type !== "inspection.bought_off") {
+      // What the instructor saw is what stays: a handed-in run waits for the review, and a step
+      // bought off no longer changes (a note may still be added).
+      if (state.status === "submitted") {
+        state.ignored.push({ id: e.id, reason: "handed in: wait for the instructor" });
+        continue;
+      }
+      if (s.boughtOff && e.type !== "note.added") {
+        state.ignored.push({ id: e.id, reason: "this inspection point is bought off" });
+        continue;
+      }
+    }
     if (state.status === "not_started" || state.status === "returned") state.status = "in_progress";
     switch (e.type) {
       case "step.checked":

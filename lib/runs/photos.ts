@@ -51,7 +51,11 @@ export async function storePhoto({ actor, runId, photoId, stepId, request }: { a
     const [row] = await getDb().insert(runPhotos).values({ id: photoId, runId, stepId, contentType: type, bytes: bytes.byteLength, uploadedBy: actor.id }).returning();
     return { id: row!.id, contentType: row!.contentType, bytes: row!.bytes, stepId: row!.stepId };
   } catch (error) {
-    await getStore().delete(key).catch(() => undefined);
+    // The same upload sent twice at once (a retry on a flaky link): the other one stored it, and
+    // both wrote the same bytes under the same key, so nothing is removed.
+    const [stored] = await getDb().select().from(runPhotos).where(and(eq(runPhotos.id, photoId), eq(runPhotos.runId, runId)));
+    if (stored) return { id: stored.id, contentType: stored.contentType, bytes: stored.bytes, stepId: stored.stepId };
+    await getStore().delete(key).catch(() => undefined); // the id belongs to another run's photo
     throw new AppError("conflict", "That photo id is already used. Take the photo again.", { cause: error });
   }
 }

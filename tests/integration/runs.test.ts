@@ -182,8 +182,13 @@ describe("events from the cart", () => {
     expect(await status("nope")).toBe(422);
     const plain = await call("POST", `/api/runs/${runId}/events`, { cookie, body: "events", headers: { "content-type": "text/plain" } });
     expect(plain.status).toBe(415);
-    // A student cannot buy off their own inspection point.
-    expect(await status([event("inspection.bought_off", { stepId: stepIds[1] })])).toBe(403);
+    // Buy-offs come only from the review route, never from a cart (not even an instructor's).
+    expect(await status([event("inspection.bought_off", { stepId: stepIds[1] })])).toBe(422);
+    expect((await send(instructor, runId, [event("inspection.bought_off", { stepId: stepIds[1] })])).status).toBe(422);
+    // A clock far off would sort the run's events around the review; a NUL cannot be stored.
+    expect(await status([event("step.checked", { clientTime: "0001-01-01T00:00:00Z" })])).toBe(422);
+    expect(await status([event("step.checked", { clientTime: "9999-12-31T23:59:59-14:00" })])).toBe(422);
+    expect(await status([event("note.added", { payload: { text: "bad \u0000 byte" } })])).toBe(422);
     // An instructor cannot check a student's steps.
     expect((await send(instructor, runId, [event("step.checked", { stepId: stepIds[0] })])).status).toBe(403);
     const [{ n }] = (await getDb().execute(sql`select count(*)::int as n from run_events where run_id = ${runId}`)).rows as [{ n: number }];

@@ -73,3 +73,12 @@ describe("sending the cart's events", () => {
     expect(backoffDelay(20, () => 1)).toBe(30_000);
   });
 });
+
+describe("a bad event in a batch", () => {
+  it("is found by splitting the batch; the good events are stored", async () => {
+    const cart = fakeCart(8, (_runId, ids) => (ids.includes("e4") ? { status: 422, message: "bad event" } : { status: 200 }));
+    expect(await syncOnce(cart.port, { size: 8 })).toEqual({ sent: 7, refused: 1, stop: null });
+    expect(cart.refused).toEqual(["e4"]);
+    expect(cart.stored.size).toBe(7);
+  });
+});

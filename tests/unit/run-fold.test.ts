@@ -104,3 +104,32 @@ describe("run event fold", () => {
     expect(state.status).toBe("not_started");
   });
 });
+
+describe("what the instructor saw stays", () => {
+  it("ignores the student's changes to a bought-off step, except notes", () => {
+    const later = [
+      ...story.slice(0, 8),
+      ev("step.unchecked", 30, { stepId: "s2" }),
+      ev("timer.started", 31, { stepId: "s2" }),
+      ev("note.added", 32, { stepId: "s2", payload: { text: "Safety wire photo added." } }),
+    ];
+    const state = foldRun(later, steps, instructors);
+    expect(state.steps.s2!.checked).toBe(true);
+    expect(state.steps.s2!.timer!.stoppedAt).toBe(at(15));
+    expect(state.steps.s2!.notes.map((x) => x.text)).toEqual(["Safety wire photo added."]);
+    expect(state.ignored.map((i) => i.reason)).toEqual(["this inspection point is bought off", "this inspection point is bought off"]);
+  });
+
+  it("ignores step changes after handing in until the run is returned", () => {
+    const handedIn = [
+      ...story,
+      ev("value.recorded", 40, { stepId: "s1", payload: { value: "90 in-lb" } }),
+      ev("run.returned", 45, { userId: instructor, payload: { comment: "Check s1 again" } }),
+      ev("value.recorded", 50, { stepId: "s1", payload: { value: "60 in-lb" } }),
+    ];
+    const state = foldRun(handedIn, steps, instructors);
+    expect(state.ignored).toEqual([{ id: handedIn.at(-3)!.id, reason: "handed in: wait for the instructor" }]);
+    expect(state.steps.s1!.value!.text).toBe("60 in-lb");
+    expect(state.status).toBe("in_progress");
+  });
+});

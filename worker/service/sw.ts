@@ -21,7 +21,10 @@ const serwist = new Serwist({
   // /work/run?id=… is the precached /work/run shell; other parameters (such as Next's _rsc) are
   // different requests.
   precacheOptions: { cleanupOutdatedCaches: true, ignoreURLParametersMatching: [/^id$/, /^q$/] },
-  skipWaiting: true,
+  // A new version waits until the cart's pages are closed: taking over at once would remove the
+  // old build's files from the precache while an open page still needs its lazy chunks. The first
+  // install takes control at once (clientsClaim), so a cart works offline after its first visit.
+  skipWaiting: false,
   clientsClaim: true,
   runtimeCaching: [
     { matcher: ({ url }) => url.pathname.startsWith("/api/"), handler: new NetworkOnly() },
@@ -37,9 +40,18 @@ const serwist = new Serwist({
 });
 serwist.addEventListeners();
 
+/**
+ * Sends the waiting changes of the user the cart opened for, and only while that user's session is
+ * the one the browser holds: another student's cookie must never carry them (they would be refused
+ * and lost). One sender at a time with the page, through the same Web Lock.
+ */
 async function sendWaiting() {
   const user = await lastUser();
-  if (user) await syncOnce(cartData(user.id).syncPort((input, init) => fetch(input, init)));
+  if (!user) return;
+  const session = await fetch("/api/session", { cache: "no-store" });
+  if (!session.ok || ((await session.json()) as { user?: { id?: string } }).user?.id !== user.id) return;
+  const pass = () => syncOnce(cartData(user.id).syncPort((input, init) => fetch(input, init)));
+  await (navigator.locks ? navigator.locks.request(`hangarleaf-sync-${user.id}`, pass) : pass());
 }
 
 scope.addEventListener("activate", (event) => event.waitUntil?.(sendWaiting().catch(() => undefined)));

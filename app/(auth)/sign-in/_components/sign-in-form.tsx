@@ -8,6 +8,7 @@ import { useForm } from "react-hook-form";
 import { FormField } from "@/components/form-field";
 import { ApiError, callApi } from "@/lib/api-client";
 import { signInSchema, type SignInInput } from "@/lib/validation/accounts";
+import { clearSignOutPending } from "@/lib/cart/store";
 
 export function SignInForm({ next }: { next: string }) {
   const router = useRouter();
@@ -19,6 +20,8 @@ export function SignInForm({ next }: { next: string }) {
     setProblem(null);
     try {
       await callApi("POST", "/api/session", values);
+      // A new session replaces the one an offline sign-out could not end.
+      await clearSignOutPending().catch(() => undefined);
       router.replace(next);
       router.refresh();
     } catch (error) {

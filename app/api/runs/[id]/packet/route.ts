@@ -15,6 +15,6 @@ export const GET = route<Context>(async (_request, { params }) => {
   if (!plan.pages.length) throw new AppError("not_found", "This card cites no manual pages.");
   const bytes = await packetBytes(getDb(), plan);
   return new Response(Buffer.from(bytes), {
-    headers: { "Content-Type": "application/pdf", "Content-Disposition": 'inline; filename="cited-pages.pdf"', "Cache-Control": "private, max-age=86400", ETag: `"${plan.hash}"` },
+    headers: { "Content-Type": "application/pdf", "Content-Disposition": 'inline; filename="cited-pages.pdf"', "Cache-Control": "private, no-store", ETag: `"${plan.hash}"` },
   });
 });

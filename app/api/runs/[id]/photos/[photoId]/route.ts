@@ -19,6 +19,6 @@ export const GET = route<Context>(async (_request, { params }) => {
   const { id, photoId } = await params;
   const { body, size, contentType } = await readPhoto({ actor, runId: idParam(id, "That run"), photoId: idParam(photoId, "That photo") });
   return new Response(Readable.toWeb(body) as ReadableStream, {
-    headers: { "Content-Type": contentType, "Content-Length": String(size), "Cache-Control": "private, max-age=86400", "X-Content-Type-Options": "nosniff" },
+    headers: { "Content-Type": contentType, "Content-Length": String(size), "Cache-Control": "private, no-store", "X-Content-Type-Options": "nosniff" },
   });
 });
