@@ -50,9 +50,8 @@ async function loadPages() {
     await postgresEngine.indexRevision(revisionId);
   }
   process.stdout.write("\n");
-  // VACUUM merges the GIN pending list the inserts built up, as autovacuum would soon after an
-  // ingest: without it the first minutes of queries also scan that unsorted list.
-  await db.execute(sql`vacuum analyze pages`);
+  // indexRevision merged the GIN pending list of each manual's pages, as ingest does; only the
+  // planner statistics are left (autovacuum would gather them a moment later).
   await db.execute(sql`analyze`);
 }
 

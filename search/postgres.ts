@@ -124,6 +124,11 @@ export const postgresEngine: SearchEngine = {
       insert into search_words (word)
       select word from ts_stat(${inner}) where length(word) between 3 and 40
       on conflict do nothing`);
+    // GIN keeps fresh rows in a pending list that every search scans until it is merged (by
+    // autovacuum, some time later). A revision's thousands of new pages would slow every search
+    // in the meantime (bench:search p95 2.6 s against 0.3 s merged), so they are merged now,
+    // before the revision turns ready.
+    await getDb().execute(sql`select gin_clean_pending_list('pages_search_gin'::regclass), gin_clean_pending_list('pages_heading_gin'::regclass)`);
   },
 
   async removeRevision(revisionId) {
