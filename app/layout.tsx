@@ -3,7 +3,7 @@ import "@fontsource/noto-sans/600.css";
 import "@fontsource/noto-sans/700.css";
 import "./globals.css";
 import type { Metadata, Viewport } from "next";
-import { ServiceWorker } from "@/components/service-worker";
+import { PendingSignOut } from "@/components/service-worker";
 
 export const metadata: Metadata = {
   title: { default: "Hangarleaf", template: "%s · Hangarleaf" },
@@ -18,7 +18,7 @@ export default function RootLayout({ children }: { children: React.ReactNode }) 
     <html lang="en">
       <body>
         {children}
-        <ServiceWorker />
+        <PendingSignOut />
       </body>
     </html>
   );

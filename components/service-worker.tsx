@@ -4,13 +4,23 @@ import { useEffect } from "react";
 import { clearSignOutPending, signOutPending } from "@/lib/cart/store";
 
 /**
- * On every page: registers the service worker (under next dev /sw.js answers 404 and registration
- * quietly fails), and ends a session that a sign-out made offline could not end, so the next
- * person at the cart never continues in that account.
+ * Registered from the cart's pages only: a student opens "My work" online before working offline,
+ * and that visit installs it. Elsewhere (the reader above all) the first visit does not compete
+ * with 3.5 MB of precaching. Under next dev /sw.js answers 404 and registration quietly fails.
  */
 export function ServiceWorker() {
   useEffect(() => {
     if ("serviceWorker" in navigator) void navigator.serviceWorker.register("/sw.js", { scope: "/" }).catch(() => undefined);
+  }, []);
+  return null;
+}
+
+/**
+ * On every page: ends a session that a sign-out made offline could not end, so the next person at
+ * the cart never continues in that account.
+ */
+export function PendingSignOut() {
+  useEffect(() => {
     void signOutPending()
       .then(async (pending) => {
         if (!pending) return;

@@ -59,7 +59,8 @@ async function main() {
     executablePath: process.env.HL_CHROMIUM ?? "/usr/bin/chromium",
     args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
   });
-  try {
+  // Opens page `target` in a fresh browser context (empty cache) and prints what it cost.
+  const measure = async (label: string) => {
     const context = await browser.newContext({ viewport: { width: 1366, height: 768 } });
     const page = await context.newPage();
     await page.goto(`${baseUrl}/sign-in`);
@@ -101,17 +102,23 @@ async function main() {
       };
     })()`)) as { document: string; scripts: string; worker: string; ranges: string };
     await page.waitForTimeout(1500); // let range requests in flight land, so they are counted
+    await context.close();
     console.log(
       [
-        "",
-        "bench:reader",
-        `  file: ${pages} pages, ${(bytes.length / 1024 / 1024).toFixed(1)} MB`,
-        `  opening page ${target}: ${(transferred / 1024).toFixed(0)} KB in ${requests} range requests = ${((100 * transferred) / bytes.length).toFixed(2)} % of the file   (goal ≤ 5 %)`,
-        `  page ${target} painted ${painted} ms after navigation   (goal ≤ 1500 ms, loopback)`,
-        `  timeline (ms after navigation): document ${timeline.document}; scripts ${timeline.scripts}; pdf.js worker ${timeline.worker}; file ranges ${timeline.ranges}`,
-        "",
+        `  ${label}`,
+        `    opening page ${target}: ${(transferred / 1024).toFixed(0)} KB in ${requests} range requests = ${((100 * transferred) / bytes.length).toFixed(2)} % of the file   (goal ≤ 5 %)`,
+        `    page ${target} painted ${painted} ms after navigation   (goal ≤ 1500 ms, loopback)`,
+        `    timeline (ms after navigation): document ${timeline.document}; scripts ${timeline.scripts}; pdf.js worker ${timeline.worker}; file ranges ${timeline.ranges}`,
       ].join("\n"),
     );
+  };
+  try {
+    console.log(["", "bench:reader", `  file: ${pages} pages, ${(bytes.length / 1024 / 1024).toFixed(1)} MB`].join("\n"));
+    // The first visit after the server started also pays for loading the reader route's code on
+    // the server; the second, in a new browser with an empty cache, is what a student meets on a
+    // server that is already running.
+    await measure("server just started, browser cache empty:");
+    await measure("server warm, browser cache empty (the goal's case):");
   } finally {
     await browser.close();
     await (await getQueue()).stop({ graceful: false, wait: true });

@@ -3,6 +3,7 @@ import { CartProvider } from "@/components/cart/cart-provider";
 import { CartStatus } from "@/components/cart/cart-status";
 import { CartTimers } from "@/components/cart/cart-timers";
 import { SafetyNotice } from "@/components/safety-notice";
+import { ServiceWorker } from "@/components/service-worker";
 import { SignOutButton } from "@/components/sign-out-button";
 
 // The cart: pages that work without network. Static shells (precached by the service worker) that
@@ -39,6 +40,7 @@ export default function CartLayout({ children }: { children: React.ReactNode }) 
         {children}
       </main>
       <CartTimers />
+      <ServiceWorker />
     </CartProvider>
   );
 }

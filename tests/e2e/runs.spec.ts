@@ -88,6 +88,13 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   // The cited page opens from the offline packet.
   await step1.getByRole("button", { name: /Show page 2/ }).click();
   await expect(step1.locator("canvas")).toBeVisible({ timeout: 15_000 });
+  // "My work" opens offline too, and the search finds the card among what is stored.
+  await page.goto("/work");
+  await expect(page.getByRole("link", { name: new RegExp(title) })).toBeVisible();
+  await page.getByLabel(/Search my cards/).fill("turnbuckles");
+  await expect(page.getByRole("list", { name: "Search results" }).getByRole("link", { name: new RegExp(title) })).toBeVisible();
+  await page.goto(`/work/run?id=${runId}`);
+  await expect(page.getByTestId("cart-status")).toContainText("5 changes wait");
 
   await context.setOffline(false);
   await page.evaluate(() => window.dispatchEvent(new Event("online")));

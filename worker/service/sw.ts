@@ -26,10 +26,10 @@ const serwist = new Serwist({
   // install takes control at once (clientsClaim), so a cart works offline after its first visit.
   skipWaiting: false,
   clientsClaim: true,
-  runtimeCaching: [
-    { matcher: ({ url }) => url.pathname.startsWith("/api/"), handler: new NetworkOnly() },
-    { matcher: ({ request }) => isPage(request), handler: new NetworkOnly() },
-  ],
+  // Only page loads pass through a handler here (for the offline fallbacks below). API requests
+  // match no route, so the browser fetches them itself: no cache of per-user data, and the
+  // reader's range requests do not queue behind the worker.
+  runtimeCaching: [{ matcher: ({ request }) => isPage(request), handler: new NetworkOnly() }],
   // Offline, a page that is not part of the cart opens "my work", which works from what is stored.
   fallbacks: {
     entries: [
