@@ -91,7 +91,7 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   // "My work" opens offline too, and the search finds the card among what is stored.
   await page.goto("/work");
   await expect(page.getByRole("link", { name: new RegExp(title) })).toBeVisible();
-  await page.getByLabel(/Search my cards/).fill("turnbuckles");
+  await page.getByRole("searchbox", { name: /Search my cards/ }).fill("turnbuckles");
   await expect(page.getByRole("list", { name: "Search results" }).getByRole("link", { name: new RegExp(title) })).toBeVisible();
   await page.goto(`/work/run?id=${runId}`);
   await expect(page.getByTestId("cart-status")).toContainText("5 changes wait");
