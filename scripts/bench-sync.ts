@@ -51,7 +51,9 @@ async function flakyLink(target: string, share: number, seed: number) {
     return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
   };
   let drops = 0;
+  let seen = 0;
   const server = http.createServer((req, res) => {
+    seen++;
     const dropped = random() < share;
     const beforeServer = dropped && drops++ % 2 === 0;
     if (beforeServer) {
@@ -74,7 +76,7 @@ async function flakyLink(target: string, share: number, seed: number) {
     req.pipe(upstream);
   });
   await new Promise<void>((r) => server.listen(0, "127.0.0.1", r));
-  return { url: `http://127.0.0.1:${(server.address() as AddressInfo).port}`, stats: () => ({ lostRequests, lostAnswers }), close: () => new Promise<void>((r) => server.close(() => r())) };
+  return { url: `http://127.0.0.1:${(server.address() as AddressInfo).port}`, stats: () => ({ lostRequests, lostAnswers, seen }), close: () => new Promise<void>((r) => server.close(() => r())) };
 }
 
 function memoryCart(runId: string, stepIds: string[], linkUrl: string, cookie: string) {
@@ -121,7 +123,7 @@ async function trial(label: string, share: number, seed = 1) {
   const counts = await stored(runId, cart.ids);
   const duplicates = counts.n - counts.d;
   console.log(
-    `${label.padEnd(28)} ${seconds.toFixed(2).padStart(6)} s  stored ${counts.ours}/${eventCount}  duplicates ${duplicates}  passes ${result.passes}  left on the cart ${cart.left()}  lost requests ${link.stats().lostRequests}, lost answers ${link.stats().lostAnswers}`,
+    `${label.padEnd(28)} ${seconds.toFixed(2).padStart(6)} s  stored ${counts.ours}/${eventCount}  duplicates ${duplicates}  passes ${result.passes}  left on the cart ${cart.left()}  requests ${link.stats().seen}: lost before the server ${link.stats().lostRequests}, answers lost ${link.stats().lostAnswers}`,
   );
   return { seconds, lost: link.stats().lostRequests + link.stats().lostAnswers, ok: counts.ours === eventCount && duplicates === 0 && cart.left() === 0 };
 }
