@@ -1,11 +1,13 @@
 import Link from "next/link";
 import { navigationFor, roleLabels, type Role } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
+import { can } from "@/lib/auth/permissions";
 import { listClassesOfUser } from "@/lib/classes";
+import { listMyWork, listReviewQueue } from "@/lib/runs/runs";
 
 const roleIntro: Record<Role, string> = {
-  student: "Your classes are below. The task cards your instructors assign will be listed here too.",
-  instructor: "Your classes and their students are under Classes.",
+  student: "The task cards your instructors assign are under My work; it also opens on the cart without a network.",
+  instructor: "Runs handed in by your students wait under Review; assign cards from a card's page.",
   librarian: "You keep the school's manuals current; the library opens here as it is built.",
   admin: "You manage accounts, roles and classes, and can read the audit log.",
 };
@@ -14,6 +16,10 @@ export default async function HomePage() {
   const user = await requirePageUser();
   const myClasses = await listClassesOfUser({ userId: user.id });
   const shortcuts = navigationFor(user).filter((n) => n.href !== "/");
+  // What is waiting, at a glance: a student's open work, an instructor's queue.
+  const work = can(user, "runs:do") ? await listMyWork({ actor: user }) : null;
+  const waiting = can(user, "runs:review") ? (await listReviewQueue()).length : null;
+  const open = work?.filter((w) => w.status !== "signed_off" && w.status !== "submitted") ?? [];
   return (
     <div className="flex flex-col gap-6">
       <div>
@@ -22,6 +28,28 @@ export default async function HomePage() {
           Signed in as {roleLabels[user.role].toLowerCase()}. {roleIntro[user.role]}
         </p>
       </div>
+      {work ? (
+        <section aria-labelledby="my-work" className="panel flex flex-wrap items-center gap-4">
+          <h2 id="my-work" className="mr-auto">
+            My work: {open.length} to do
+            {open.some((w) => w.workStatus === "overdue") ? <span className="text-danger"> · {open.filter((w) => w.workStatus === "overdue").length} overdue</span> : null}
+            {open.some((w) => w.status === "returned") ? ` · ${open.filter((w) => w.status === "returned").length} returned to you` : null}
+          </h2>
+          <Link href="/work" className="btn btn-primary text-lg">
+            Open my work
+          </Link>
+        </section>
+      ) : null}
+      {waiting !== null ? (
+        <section aria-labelledby="review-waiting" className="panel flex flex-wrap items-center gap-4">
+          <h2 id="review-waiting" className="mr-auto">
+            {waiting === 0 ? "No run waits for sign-off" : `${waiting} ${waiting === 1 ? "run waits" : "runs wait"} for sign-off`}
+          </h2>
+          <Link href="/review" className="btn btn-primary text-lg">
+            Review
+          </Link>
+        </section>
+      ) : null}
       {shortcuts.length ? (
         <section aria-labelledby="shortcuts" className="flex flex-col gap-2">
           <h2 id="shortcuts">Go to</h2>
