@@ -43,3 +43,20 @@ export function getRange(url: string, begin: number, end: number): Promise<Uint8
   }
   return fetchRange(url, begin, end);
 }
+
+// pdf.js's worker (a megabyte of script to fetch and compile) is started here, from the small
+// loader, as soon as the reader's page is interactive, instead of after the reader's own chunk
+// (react-pdf and pdf.js, most of the page's script) has arrived. The reader hands it to pdf.js
+// as the port of its PDFWorker; messages sent before the worker's script runs wait in its queue.
+let early: Worker | null = null;
+
+export function startPdfWorker() {
+  if (!early && typeof Worker !== "undefined") early = new Worker("/pdf.worker.min.mjs", { type: "module" });
+}
+
+/** The worker started early, once; null when it was never started or already taken. */
+export function takePdfWorker(): Worker | null {
+  const worker = early;
+  early = null;
+  return worker;
+}

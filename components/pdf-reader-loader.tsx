@@ -2,8 +2,11 @@
 
 import dynamic from "next/dynamic";
 import { useCallback, useEffect } from "react";
-import { prefetchFirstRanges } from "./pdf-prefetch";
+import { prefetchFirstRanges, startPdfWorker } from "./pdf-prefetch";
 import type { PdfReaderProps } from "./pdf-reader";
+
+// pdf.js's worker starts while this small module is evaluated, long before the reader's chunk.
+if (typeof window !== "undefined") startPdfWorker();
 
 // pdf.js needs the browser (canvas, workers): the reader is never rendered on the server.
 const PdfReader = dynamic(() => import("./pdf-reader").then((m) => m.PdfReader), {

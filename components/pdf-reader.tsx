@@ -5,7 +5,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { Document, Page, pdfjs } from "react-pdf";
 import "react-pdf/dist/Page/TextLayer.css";
-import { chunkSize, getRange } from "./pdf-prefetch";
+import { chunkSize, getRange, takePdfWorker } from "./pdf-prefetch";
 
 // Copied from pdfjs-dist by scripts/lib.mjs (copyPdfWorker) before every build.
 pdfjs.GlobalWorkerOptions.workerSrc = "/pdf.worker.min.mjs";
@@ -13,9 +13,15 @@ pdfjs.GlobalWorkerOptions.workerSrc = "/pdf.worker.min.mjs";
 // One worker for the page's life, started as soon as this code arrives: fetching and starting
 // pdf.js's worker (a megabyte of script) then overlaps with React mounting the reader.
 let sharedWorker: InstanceType<typeof pdfjs.PDFWorker> | null = null;
+let earlyPort: Worker | null = null;
 function readerWorker() {
   // A worker ended with an earlier document (leaving the reader and coming back) is replaced.
-  if (!sharedWorker || sharedWorker.destroyed) sharedWorker = new pdfjs.PDFWorker();
+  if (!sharedWorker || sharedWorker.destroyed) {
+    // pdf.js does not end a worker it was handed; this one is ended here once it is replaced.
+    earlyPort?.terminate();
+    earlyPort = takePdfWorker();
+    sharedWorker = earlyPort ? pdfjs.PDFWorker.create({ port: earlyPort }) : new pdfjs.PDFWorker();
+  }
   return sharedWorker;
 }
 if (typeof window !== "undefined") readerWorker();
