@@ -107,6 +107,8 @@ test("a student reads a published card but finds no way to write one", async ({ 
   await signIn.open("/sign-in?next=%2Fcards");
   await signIn.signIn("student@hangarleaf.test");
   await expect(page.getByRole("link", { name: "New task card" })).toHaveCount(0);
+  // Filtered by title: the list pages at 25 cards, and other tests add cards.
+  await page.getByRole("search", { name: "Filter task cards" }).getByLabel("Title").fill("Fluorescent penetrant");
   await page.getByRole("link", { name: "Fluorescent penetrant inspection of a landing gear fitting" }).click();
   const step1 = page.getByRole("listitem", { name: "Step 1" });
   await expect(step1.getByRole("note", { name: /WARNING/ })).toBeVisible();
