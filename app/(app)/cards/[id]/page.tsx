@@ -5,9 +5,9 @@ import { CardView } from "@/components/card-view";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
 import { getCard, getCardVersion } from "@/lib/cards";
-import { AppError } from "@/lib/errors";
 import { CardActions } from "../_components/card-actions";
 import { isUuid } from "@/lib/http";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Task card" };
 
@@ -18,10 +18,7 @@ export default async function CardPage({ params, searchParams }: { params: Promi
   const user = await requirePageUser("cards:view", `/cards/${id}`);
   if (!isUuid(id)) notFound();
   const author = can(user, "cards:author");
-  const card = await getCard({ actor: user, id }).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const card = await getCard({ actor: user, id }).catch(notFoundOnMissing);
   const wanted = v && /^\d+$/.test(v) ? Number(v) : null;
   const shown = wanted
     ? await getCardVersion({ actor: user, cardId: id, number: wanted }).catch(() => notFound())

@@ -5,9 +5,9 @@ import { listUsers } from "@/lib/accounts";
 import { can, roleLabels } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
 import { getClassById } from "@/lib/classes";
-import { AppError } from "@/lib/errors";
 import { AddMembersForm, RemoveMemberButton } from "./_components/member-controls";
 import { isUuid } from "@/lib/http";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Class" };
 
@@ -16,10 +16,7 @@ export default async function ClassPage({ params }: { params: Promise<{ id: stri
   const { id } = await params;
   const user = await requirePageUser("classes:view", `/classes/${id}`);
   if (!isUuid(id)) notFound();
-  const found = await getClassById({ actor: user, id }).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const found = await getClassById({ actor: user, id }).catch(notFoundOnMissing);
   const manages = can(user, "classes:manage");
   const memberIds = new Set(found.members.map((m) => m.id));
   const candidates = manages

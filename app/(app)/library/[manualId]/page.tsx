@@ -3,13 +3,13 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
 import { getManual } from "@/lib/library/manuals";
 import { documentTypeLabels } from "@/lib/validation/library";
 import { KeepOnCarts } from "../_components/keep-on-carts";
 import { RetryButton } from "../_components/retry-button";
 import { UploadForm } from "../_components/upload-form";
 import { isUuid } from "@/lib/http";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Manual" };
 
@@ -19,10 +19,7 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
   const { manualId } = await params;
   const user = await requirePageUser("library:view", `/library/${manualId}`);
   if (!isUuid(manualId)) notFound();
-  const manual = await getManual({ id: manualId }).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const manual = await getManual({ id: manualId }).catch(notFoundOnMissing);
   const manages = can(user, "library:manage");
   // Students and instructors see what is readable; the library staff see every upload.
   const shown = manual.revisions.filter((r) => manages || r.status === "ready");

@@ -5,11 +5,11 @@ import { CardNotice } from "@/components/card-notice";
 import { StepMarkdown } from "@/components/step-markdown";
 import { describeLimit } from "@/lib/calc/limits";
 import { requirePageUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
 import { isUuid } from "@/lib/http";
 import { getRunDetail } from "@/lib/runs/runs";
 import { sortNotices } from "@/lib/validation/cards";
 import { ReviewActions } from "../_components/review-actions";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Review a run" };
 
@@ -31,10 +31,7 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
   const { runId } = await params;
   const user = await requirePageUser("runs:review", `/review/${runId}`);
   if (!isUuid(runId)) notFound();
-  const detail = await getRunDetail({ actor: user, runId }).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const detail = await getRunDetail({ actor: user, runId }).catch(notFoundOnMissing);
   const { version, state, run } = detail;
   const stepNumber = new Map(version.steps.map((s, i) => [s.id, i + 1]));
   const revisions = [...new Map(version.steps.flatMap((s) => s.references).map((r) => [r.revisionId, r])).values()];

@@ -4,10 +4,10 @@ import { notFound } from "next/navigation";
 import { requirePageUser } from "@/lib/auth/session";
 import { getCard } from "@/lib/cards";
 import { getClassById, listClasses } from "@/lib/classes";
-import { AppError } from "@/lib/errors";
 import { isUuid } from "@/lib/http";
 import { listAssignments } from "@/lib/runs/runs";
 import { AssignForm } from "../../_components/assign-form";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Assign a task card" };
 
@@ -15,10 +15,7 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
   const { id } = await params;
   const user = await requirePageUser("assignments:manage", `/cards/${id}/assign`);
   if (!isUuid(id)) notFound();
-  const card = await getCard({ actor: user, id }).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const card = await getCard({ actor: user, id }).catch(notFoundOnMissing);
   const classes = await listClasses({ actor: user });
   const members = await Promise.all(classes.map((c) => getClassById({ actor: user, id: c.id })));
   const students = [...new Map(members.flatMap((c) => c.members.filter((m) => m.role === "student" && m.status !== "deactivated").map((m) => [m.id, { id: m.id, name: m.name, className: c.name }]))).values()];

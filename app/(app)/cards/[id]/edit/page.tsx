@@ -3,10 +3,10 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requirePageUser } from "@/lib/auth/session";
 import { getCard, listSubjects } from "@/lib/cards";
-import { AppError } from "@/lib/errors";
 import { listManuals } from "@/lib/library/manuals";
 import { CardEditor } from "../../_components/card-editor";
 import { isUuid } from "@/lib/http";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Edit task card" };
 
@@ -16,10 +16,7 @@ export default async function EditCardPage({ params }: { params: Promise<{ id: s
   const user = await requirePageUser("cards:author", `/cards/${id}/edit`);
   if (!isUuid(id)) notFound();
   const [card, subjects, manuals] = await Promise.all([
-    getCard({ actor: user, id }).catch((error: unknown) => {
-      if (error instanceof AppError && error.code === "not_found") notFound();
-      throw error;
-    }),
+    getCard({ actor: user, id }).catch(notFoundOnMissing),
     listSubjects(),
     listManuals(),
   ]);

@@ -4,10 +4,10 @@ import { notFound } from "next/navigation";
 import { PageDiff } from "@/components/page-diff";
 import { requirePageUser } from "@/lib/auth/session";
 import { getCard } from "@/lib/cards";
-import { AppError } from "@/lib/errors";
 import { listOpenRechecks } from "@/lib/revisions/rechecks";
 import { RecheckForm } from "../../_components/recheck-form";
 import { isUuid } from "@/lib/http";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Recheck task card" };
 
@@ -19,10 +19,7 @@ export default async function RecheckPage({ params }: { params: Promise<{ id: st
   const { id } = await params;
   const user = await requirePageUser("cards:author", `/cards/${id}/recheck`);
   if (!isUuid(id)) notFound();
-  const [card, rechecks] = await Promise.all([getCard({ actor: user, id }), listOpenRechecks({ cardId: id })]).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const [card, rechecks] = await Promise.all([getCard({ actor: user, id }), listOpenRechecks({ cardId: id })]).catch(notFoundOnMissing);
   const title = (card.published ?? card.draft)?.title ?? "Task card";
   return (
     <div className="flex flex-col gap-5">

@@ -2,9 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requirePageUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
 import { isUuid } from "@/lib/http";
 import { classRecord } from "@/lib/runs/records";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Class progress" };
 
@@ -12,10 +12,7 @@ export default async function ClassRecordPage({ params }: { params: Promise<{ id
   const { id } = await params;
   const user = await requirePageUser("records:view-all", `/records/classes/${id}`);
   if (!isUuid(id)) notFound();
-  const record = await classRecord({ actor: user, classId: id }).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const record = await classRecord({ actor: user, classId: id }).catch(notFoundOnMissing);
   const totals = record.subjects.map((subject) => {
     const cells = record.students.map((s) => s.bySubject[subject] ?? { signedOff: 0, assigned: 0 });
     return { subject, signedOff: cells.reduce((n, c) => n + c.signedOff, 0), assigned: cells.reduce((n, c) => n + c.assigned, 0) };

@@ -3,9 +3,9 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
 import { isUuid } from "@/lib/http";
 import { studentRecord } from "@/lib/runs/records";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Training record" };
 
@@ -15,10 +15,7 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
   const { id } = await params;
   const user = await requirePageUser("records:view", `/records/students/${id}`);
   if (!isUuid(id)) notFound();
-  const record = await studentRecord({ actor: user, studentId: id }).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const record = await studentRecord({ actor: user, studentId: id }).catch(notFoundOnMissing);
   const own = user.id === id;
   return (
     <div className="flex flex-col gap-5">

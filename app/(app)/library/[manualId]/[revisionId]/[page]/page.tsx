@@ -4,7 +4,6 @@ import { notFound } from "next/navigation";
 import { MarkedText } from "@/components/marked-text";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
 import { PdfReaderLoader } from "@/components/pdf-reader-loader";
 import { highlightWords, markStems } from "@/lib/library/highlight";
 import { getManual, getPage, getReadableRevision } from "@/lib/library/manuals";
@@ -12,6 +11,7 @@ import { findCorrections } from "@/search/postgres";
 import { parseQuery } from "@/search/query";
 import { CiteOnCard } from "./_components/cite-on-card";
 import { isUuid } from "@/lib/http";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Page" };
 
@@ -36,10 +36,7 @@ export default async function ManualPageView({
     getReadableRevision({ actor: user, id: revisionId }),
     getPage({ revisionId, pageNumber }),
     getManual({ id: manualId }),
-  ]).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  ]).catch(notFoundOnMissing);
   const [revision, page, manual] = found;
   // The words a typo was read as ("magento" → magneto) are marked too.
   const corrections = q ? [...(await findCorrections(parseQuery(q).words)).values()].flat() : [];

@@ -7,6 +7,7 @@ import { getManual, getReadableRevision } from "@/lib/library/manuals";
 import type { PageStatus } from "@/lib/revisions/compare";
 import { getComparison, listRechecksOfRevision } from "@/lib/revisions/rechecks";
 import { isUuid } from "@/lib/http";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "What changed" };
 
@@ -32,10 +33,7 @@ export default async function RevisionChangesPage({ params, searchParams }: { pa
   const { all } = await searchParams;
   const user = await requirePageUser("library:view", `/library/${manualId}/${revisionId}/changes`);
   if (!isUuid(manualId) || !isUuid(revisionId)) notFound();
-  const [manual, revision] = await Promise.all([getManual({ id: manualId }), getReadableRevision({ actor: user, id: revisionId })]).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const [manual, revision] = await Promise.all([getManual({ id: manualId }), getReadableRevision({ actor: user, id: revisionId })]).catch(notFoundOnMissing);
   if (revision.manualId !== manualId) notFound();
   const comparison = await getComparison({ revisionId }).catch((error: unknown) => {
     if (error instanceof AppError && error.code === "not_found") return null;

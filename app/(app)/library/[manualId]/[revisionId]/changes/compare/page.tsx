@@ -3,10 +3,10 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PageDiff } from "@/components/page-diff";
 import { requirePageUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
 import { getManual, getPage, getReadableRevision } from "@/lib/library/manuals";
 import { getComparison } from "@/lib/revisions/rechecks";
 import { isUuid } from "@/lib/http";
+import { notFoundOnMissing } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Old and new page" };
 
@@ -19,10 +19,7 @@ export default async function ComparePagesPage({ params, searchParams }: { param
   if (!isUuid(manualId) || !isUuid(revisionId)) notFound();
   const oldPage = pageOf(query.old);
   const newPage = pageOf(query.new);
-  const found = await Promise.all([getManual({ id: manualId }), getReadableRevision({ actor: user, id: revisionId }), getComparison({ revisionId })]).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const found = await Promise.all([getManual({ id: manualId }), getReadableRevision({ actor: user, id: revisionId }), getComparison({ revisionId })]).catch(notFoundOnMissing);
   const [manual, revision, comparison] = found;
   if (revision.manualId !== manualId || !comparison.previousRevisionId || (!oldPage && !newPage)) notFound();
   const previous = manual.revisions.find((r) => r.id === comparison.previousRevisionId);
