@@ -59,6 +59,16 @@ export async function buildTsQuery(query: ParsedQuery): Promise<SQL | null> {
   return sql`(${sql.join([...required, ...excluded], sql` && `)})`;
 }
 
+/** Matches in scope, counted up to one past `totalLimit` (reading every page of a common word is not worth it). */
+async function countMatches(tsquery: SQL, revisionIds: string[]): Promise<number> {
+  const rows = await getDb().execute<{ n: number }>(sql`
+    select count(*)::int as n from (
+      select 1 from pages p
+      where p.search_vector @@ ${tsquery} and p.revision_id::text = any(${uuidTextList(revisionIds)})
+      limit ${totalLimit + 1}) t`);
+  return rows.rows[0]?.n ?? 0;
+}
+
 /** The revisions a search may look in: ready, current unless asked otherwise, and the filters. */
 async function revisionsInScope(filters: SearchFilters): Promise<string[]> {
   const where: SQL[] = [sql`r.status = 'ready'`];
@@ -143,6 +153,10 @@ export const postgresEngine: SearchEngine = {
     const [tsquery, revisionIds] = await Promise.all([buildTsQuery(query), revisionsInScope(filters)]);
     if (!tsquery || !revisionIds.length) return { hits: [], total: 0, totalCapped: false };
     const db = getDb();
+    // The count runs beside the ranked query rather than after it: a first page that comes back
+    // full needs it, and waiting for the hits first would add a round trip to every such search.
+    // (Past the first page, or for a short first page, it is not used and costs one GIN lookup.)
+    const counting = offset === 0 ? countMatches(tsquery, revisionIds) : null;
     const rows = await db.execute<{
         manual_id: string;
         revision_id: string;
@@ -177,16 +191,11 @@ export const postgresEngine: SearchEngine = {
     // A short page of hits is the whole answer; only a full one needs counting. Counting every match
     // of a common word means reading every page that has it, so the count stops past totalLimit.
     // (An empty page past the first says nothing about the total: that one is counted.)
+    const counted = counting ?? Promise.resolve(null);
     const total =
       hits.length < limit && (hits.length > 0 || offset === 0)
-        ? offset + hits.length
-        : ((
-            await db.execute<{ n: number }>(sql`
-              select count(*)::int as n from (
-                select 1 from pages p
-                where p.search_vector @@ ${tsquery} and p.revision_id::text = any(${uuidTextList(revisionIds)})
-                limit ${totalLimit + 1}) t`)
-          ).rows[0]?.n ?? 0);
+        ? (void counted.catch(() => undefined), offset + hits.length)
+        : ((await counted) ?? (await countMatches(tsquery, revisionIds)));
     return { hits, total: Math.min(total, totalLimit), totalCapped: total > totalLimit };
   },
 };
