@@ -2,9 +2,9 @@ import { NextResponse, type NextRequest } from "next/server";
 
 // A convenience only: visitors without a session cookie are sent to sign-in before a page renders.
 // Whether a cookie is valid, and what its user may do, every page and handler checks itself.
-// The cart's shells (/work, /work/run) hold no data and must open offline and be precached by the
+// The cart's shells (/cart, /cart/run) hold no data and must open offline and be precached by the
 // service worker before anyone signs in; they ask the API (or IndexedDB) who is signed in.
-const publicPaths = [/^\/sign-in$/, /^\/forgot-password$/, /^\/set-password\/[^/]+$/, /^\/outbox$/, /^\/work$/, /^\/work\/run$/];
+const publicPaths = [/^\/sign-in$/, /^\/forgot-password$/, /^\/set-password\/[^/]+$/, /^\/outbox$/, /^\/cart$/, /^\/cart\/run$/];
 
 export function proxy(request: NextRequest) {
   const { pathname, search } = request.nextUrl;

@@ -352,8 +352,8 @@ export async function buildServiceWorker() {
       .filter(existsSync)
       .map((f) => ({ url: `/${path.relative(path.join(root, "public"), f).split(path.sep).join("/")}`, revision: hash(f) })),
     // The cart's pages: static shells that read everything from IndexedDB.
-    { url: "/work", revision: buildId },
-    { url: "/work/run", revision: buildId },
+    { url: "/cart", revision: buildId },
+    { url: "/cart/run", revision: buildId },
   ];
   await build({
     entryPoints: [path.join(root, "worker", "service", "sw.ts")],

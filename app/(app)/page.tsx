@@ -35,7 +35,7 @@ export default async function HomePage() {
             {open.some((w) => w.workStatus === "overdue") ? <span className="text-danger"> · {open.filter((w) => w.workStatus === "overdue").length} overdue</span> : null}
             {open.some((w) => w.status === "returned") ? ` · ${open.filter((w) => w.status === "returned").length} returned to you` : null}
           </h2>
-          <Link href="/work" className="btn btn-primary text-lg">
+          <Link href="/cart" className="btn btn-primary text-lg">
             Open my work
           </Link>
         </section>

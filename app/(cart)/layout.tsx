@@ -23,7 +23,7 @@ export default function CartLayout({ children }: { children: React.ReactNode }) 
             <Brand inverted />
           </a>
           <nav aria-label="Cart">
-            <a href="/work" className="inline-flex min-h-11 items-center rounded px-3 text-lg font-semibold text-white">
+            <a href="/cart" className="inline-flex min-h-11 items-center rounded px-3 text-lg font-semibold text-white">
               My work
             </a>
           </nav>

@@ -102,7 +102,7 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
       <div className="notice-error">
         <p className="font-semibold">This run is not stored on this laptop.</p>
         <p>{online ? "It is not one of your runs." : "Connect to the network once with this run open, then it works offline."}</p>
-        <a href="/work" className="btn btn-secondary mt-2">
+        <a href="/cart" className="btn btn-secondary mt-2">
           Back to my work
         </a>
       </div>

@@ -53,7 +53,7 @@ export function TimerWatch({ data }: { data: CartData | null }) {
     <div role="alert" className="fixed inset-x-0 bottom-0 z-40 border-t-8 border-amber bg-deck p-4 text-white">
       <div className="mx-auto flex max-w-5xl flex-wrap items-center gap-3">
         <p className="mr-auto text-xl font-bold">Time is up: {due.map((t) => t.label).join("; ")}</p>
-        <a className="btn btn-primary" href={`/work/run?id=${due[0]!.runId}`}>
+        <a className="btn btn-primary" href={`/cart/run?id=${due[0]!.runId}`}>
           Go to the step
         </a>
         <button type="button" className="btn btn-secondary" onClick={() => setDue([])}>

@@ -50,7 +50,7 @@ export function WorkList({ data, items, savedAt }: { data: CartData; items: Work
           <ul className="flex flex-col gap-3">
             {g.items.map((w) => (
               <li key={w.runId}>
-                <a href={`/work/run?id=${w.runId}`} className="panel flex flex-wrap items-center gap-x-4 gap-y-1 no-underline hover:bg-teal-pale focus:bg-teal-pale">
+                <a href={`/cart/run?id=${w.runId}`} className="panel flex flex-wrap items-center gap-x-4 gap-y-1 no-underline hover:bg-teal-pale focus:bg-teal-pale">
                   <span className="mr-auto flex flex-col">
                     <span className="text-xl font-bold text-ink">{w.title}</span>
                     <span className="text-ink-soft">
@@ -107,7 +107,7 @@ function OfflineSearch({ data, items }: { data: CartData; items: WorkItemDto[] }
           <ul className="flex flex-col gap-2" aria-label="Search results">
             {hits.map((h) => (
               <li key={h.id}>
-                <a href={`/work/run?id=${h.runId}${h.step ? `&step=${h.step}` : ""}`} className="panel flex flex-col no-underline hover:bg-teal-pale">
+                <a href={`/cart/run?id=${h.runId}${h.step ? `&step=${h.step}` : ""}`} className="panel flex flex-col no-underline hover:bg-teal-pale">
                   <span className="font-bold text-ink">{h.title}</span>
                   <span className="text-ink-soft">{h.where}</span>
                 </a>

@@ -80,7 +80,7 @@ const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boo
   { item: { href: "/search", label: "Search" }, permission: "library:view" },
   { item: { href: "/library", label: "Library" }, permission: "library:view" },
   { item: { href: "/cards", label: "Task cards" }, permission: "cards:view" },
-  { item: { href: "/work", label: "My work" }, permission: "runs:do" },
+  { item: { href: "/cart", label: "My work" }, permission: "runs:do" },
   { item: { href: "/review", label: "Review" }, permission: "runs:review" },
   { item: { href: "/calculators", label: "Calculators" } },
   { item: { href: "/classes", label: "Classes" }, permission: "classes:view" },

@@ -65,14 +65,14 @@ test("the task card and calculator pages have no serious accessibility violation
 
 test("the cart, review and records pages have no serious accessibility violation", async ({ page, browser }) => {
   const signIn = new SignInPage(page);
-  await signIn.open("/sign-in?next=%2Fwork");
+  await signIn.open("/sign-in?next=%2Fcart");
   await signIn.signIn("student@hangarleaf.test");
   await expect(page.getByRole("heading", { level: 1, name: "My work" })).toBeVisible();
   await expect(page.getByRole("link", { name: /Fluorescent penetrant/ })).toBeVisible();
-  expect(await seriousViolations(page), "/work").toEqual([]);
+  expect(await seriousViolations(page), "/cart").toEqual([]);
   await page.getByRole("link", { name: /Fluorescent penetrant/ }).click();
   await expect(page.getByRole("heading", { level: 1, name: /Fluorescent penetrant/ })).toBeVisible();
-  expect(await seriousViolations(page), "/work/run").toEqual([]);
+  expect(await seriousViolations(page), "/cart/run").toEqual([]);
   await page.goto("/records");
   await expect(page.getByRole("heading", { level: 1, name: "My training record" })).toBeVisible();
   expect(await seriousViolations(page), "own record").toEqual([]);

@@ -55,7 +55,7 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   const context = await browser.newContext();
   const page = await context.newPage();
   const signIn = new SignInPage(page);
-  await signIn.open("/sign-in?next=%2Fwork");
+  await signIn.open("/sign-in?next=%2Fcart");
   await signIn.signIn("student@hangarleaf.test");
   await page.getByRole("link", { name: new RegExp(title) }).click();
   await expect(page.getByRole("heading", { level: 1, name: title })).toBeVisible();
@@ -89,11 +89,11 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   await step1.getByRole("button", { name: /Show page 2/ }).click();
   await expect(step1.locator("canvas")).toBeVisible({ timeout: 15_000 });
   // "My work" opens offline too, and the search finds the card among what is stored.
-  await page.goto("/work");
+  await page.goto("/cart");
   await expect(page.getByRole("link", { name: new RegExp(title) })).toBeVisible();
   await page.getByRole("searchbox", { name: /Search my cards/ }).fill("turnbuckles");
   await expect(page.getByRole("list", { name: "Search results" }).getByRole("link", { name: new RegExp(title) })).toBeVisible();
-  await page.goto(`/work/run?id=${runId}`);
+  await page.goto(`/cart/run?id=${runId}`);
   await expect(page.getByTestId("cart-status")).toContainText("5 changes wait");
 
   await context.setOffline(false);
@@ -143,18 +143,18 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   await review.close();
 
   // A second student on the same profile after sign-out sees nothing of the first one's.
-  await page.goto("/work");
+  await page.goto("/cart");
   await page.getByRole("button", { name: "Sign out" }).click();
   await expect(page.getByRole("heading", { name: "Sign in" })).toBeVisible();
   const databases = await page.evaluate(async () => (await indexedDB.databases()).map((d) => d.name));
   expect(databases).not.toContain(`hangarleaf-user-${me}`);
   await signIn.signIn("student2@hangarleaf.test");
   await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
-  await page.goto("/work");
+  await page.goto("/cart");
   await expect(page.getByRole("heading", { level: 1, name: "My work" })).toBeVisible();
   await expect(page.getByText("Jordan Pike")).toBeVisible();
   await expect(page.getByText(title)).toHaveCount(0);
-  await page.goto(`/work/run?id=${runId}`);
+  await page.goto(`/cart/run?id=${runId}`);
   await expect(page.getByText("This run is not stored on this laptop.")).toBeVisible();
   await expect(page.getByText("Turnbuckle at the aft pulley")).toHaveCount(0);
   await context.close();

@@ -18,7 +18,7 @@ const isPage = (request: Request) => request.mode === "navigate";
 
 const serwist = new Serwist({
   precacheEntries: __HL_PRECACHE__,
-  // /work/run?id=… is the precached /work/run shell; other parameters (such as Next's _rsc) are
+  // /cart/run?id=… is the precached /cart/run shell; other parameters (such as Next's _rsc) are
   // different requests.
   precacheOptions: { cleanupOutdatedCaches: true, ignoreURLParametersMatching: [/^id$/, /^q$/] },
   // A new version waits until the cart's pages are closed: taking over at once would remove the
@@ -33,8 +33,8 @@ const serwist = new Serwist({
   // Offline, a page that is not part of the cart opens "my work", which works from what is stored.
   fallbacks: {
     entries: [
-      { url: "/work/run", matcher: ({ request }) => isPage(request) && new URL(request.url).pathname === "/work/run" },
-      { url: "/work", matcher: ({ request }) => isPage(request) },
+      { url: "/cart/run", matcher: ({ request }) => isPage(request) && new URL(request.url).pathname === "/cart/run" },
+      { url: "/cart", matcher: ({ request }) => isPage(request) },
     ],
   },
 });

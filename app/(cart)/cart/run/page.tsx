@@ -4,7 +4,7 @@ import { useSyncExternalStore } from "react";
 import { useCart, useOnline } from "@/components/cart/cart-provider";
 import { Runner } from "@/components/cart/runner";
 
-// /work/run?id=… : the run is named in the query, so one precached page serves every run offline.
+// /cart/run?id=… : the run is named in the query, so one precached page serves every run offline.
 export default function RunPage() {
   const { ready, data } = useCart();
   const online = useOnline();
@@ -18,7 +18,7 @@ export default function RunPage() {
   if (!/^[0-9a-f-]{36}$/i.test(runId)) {
     return (
       <p className="notice-error">
-        No run named here. <a href="/work">Back to my work</a>
+        No run named here. <a href="/cart">Back to my work</a>
       </p>
     );
   }
