@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect } from "react";
-import { clearSignOutPending, signOutPending } from "@/lib/cart/store";
+import { endPendingSignOut } from "@/lib/cart/cart";
 
 /**
  * Registered from the cart's pages only: a student opens "My work" online before working offline,
@@ -21,13 +21,9 @@ export function ServiceWorker() {
  */
 export function PendingSignOut() {
   useEffect(() => {
-    void signOutPending()
-      .then(async (pending) => {
-        if (!pending) return;
-        const ended = await fetch("/api/session", { method: "DELETE" }).then((r) => r.ok, () => false);
-        if (!ended) return;
-        await clearSignOutPending();
-        if (!window.location.pathname.startsWith("/sign-in")) window.location.replace("/sign-in");
+    void endPendingSignOut()
+      .then((result) => {
+        if (result === "ended" && !window.location.pathname.startsWith("/sign-in")) window.location.replace("/sign-in");
       })
       .catch(() => undefined);
   }, []);

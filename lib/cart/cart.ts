@@ -6,7 +6,20 @@ import type { RunEventType } from "@/lib/runs/fold";
 import { cartData, clearSignOutPending, lastUser, rememberUser, signOutPending, type CartData, type CartUser } from "./store";
 import { backoffDelay, syncOnce, type SyncResult } from "./sync";
 
-async function sessionUserId(): Promise<string | null | "offline"> {
+/**
+ * Ends a session that a sign-out made offline could not end. "none": nothing was pending;
+ * "ended": the server ended it now; "failed": still pending (offline), try again later.
+ */
+export async function endPendingSignOut(): Promise<"none" | "ended" | "failed"> {
+  if (!(await signOutPending())) return "none";
+  const ended = await fetch("/api/session", { method: "DELETE" }).then((r) => r.ok, () => false);
+  if (!ended) return "failed";
+  await clearSignOutPending();
+  return "ended";
+}
+
+/** Whose session the browser holds: a user id, null when nobody is signed in, or "offline". */
+export async function sessionUserId(): Promise<string | null | "offline"> {
   try {
     const response = await fetch("/api/session", { cache: "no-store" });
     if (!response.ok) return response.status === 401 ? null : "offline";
@@ -21,12 +34,8 @@ export type CartSession = { user: CartUser; online: boolean } | { user: null; on
 /** The signed-in user from the server, or offline the one who signed in last on this cart. */
 export async function openSession(): Promise<CartSession> {
   // A sign-out made offline ends the session on the server first, before anyone uses it.
-  if (await signOutPending()) {
-    const ended = await fetch("/api/session", { method: "DELETE" }).then((r) => r.ok, () => false);
-    if (!ended) return { user: null, online: false };
-    await clearSignOutPending();
-    return { user: null, online: true };
-  }
+  const pending = await endPendingSignOut();
+  if (pending !== "none") return { user: null, online: pending === "ended" };
   try {
     const response = await fetch("/api/session", { cache: "no-store" });
     if (response.status === 401) return { user: null, online: true };

@@ -4,6 +4,7 @@
 // IndexedDB per user (lib/cart/store.ts). At start it sends waiting changes, as Safari has no
 // Background Sync.
 import { NetworkOnly, Serwist, type PrecacheEntry } from "serwist";
+import { sessionUserId } from "@/lib/cart/cart";
 import { cartData, lastUser } from "@/lib/cart/store";
 import { syncOnce } from "@/lib/cart/sync";
 
@@ -48,8 +49,7 @@ serwist.addEventListeners();
 async function sendWaiting() {
   const user = await lastUser();
   if (!user) return;
-  const session = await fetch("/api/session", { cache: "no-store" });
-  if (!session.ok || ((await session.json()) as { user?: { id?: string } }).user?.id !== user.id) return;
+  if ((await sessionUserId()) !== user.id) return;
   const pass = () => syncOnce(cartData(user.id).syncPort((input, init) => fetch(input, init)));
   await (navigator.locks ? navigator.locks.request(`hangarleaf-sync-${user.id}`, pass) : pass());
 }
