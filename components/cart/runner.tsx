@@ -46,7 +46,6 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
   const [mode, setMode] = useState<"one" | "all">("one");
   // ?step=N (from the offline search) opens that step; the runner only renders in the browser.
   const [index, setIndex] = useState(() => Math.max(0, Number(new URLSearchParams(window.location.search).get("step")) - 1 || 0));
-  const [problem, setProblem] = useState<string | null>(null);
   const [refused, setRefused] = useState<RefusedItem[]>([]);
 
   const load = useCallback(
@@ -78,7 +77,6 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
   const act = useCallback(
     async (type: RunEventType, options: { stepId?: string | null; payload?: Record<string, unknown> } = {}) => {
       if (!detail) return;
-      setProblem(null);
       await record(data, detail, type, options);
     },
     [data, detail],
@@ -183,11 +181,6 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
           <p>Tell your instructor; those changes are not part of the run.</p>
         </div>
       ) : null}
-      {problem ? (
-        <p role="alert" className="notice-error">
-          {problem}
-        </p>
-      ) : null}
 
       <ol className="flex flex-col gap-5" aria-label="Steps">
         {shown.map((step) => {
@@ -208,7 +201,6 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
               packetPages={detail.packet?.pages ?? []}
               online={online}
               onAct={act}
-              onProblem={setProblem}
               data={data}
               runId={runId}
             />
@@ -264,7 +256,7 @@ type StepDto = RunDetailDto["version"]["steps"][number];
 type StepState = ReturnType<typeof foldRun>["steps"][string];
 
 function StepPanel({
-  number, total, step, state, locked, blocked, now, packet, packetPages, online, onAct, onProblem, data, runId,
+  number, total, step, state, locked, blocked, now, packet, packetPages, online, onAct, data, runId,
 }: {
   number: number;
   total: number;
@@ -277,13 +269,14 @@ function StepPanel({
   packetPages: NonNullable<RunDetailDto["packet"]>["pages"];
   online: boolean;
   onAct: (type: RunEventType, options?: { stepId?: string | null; payload?: Record<string, unknown> }) => Promise<void>;
-  onProblem: (message: string | null) => void;
   data: CartData;
   runId: string;
 }) {
   const [value, setValue] = useState("");
   const [note, setNote] = useState("");
   const [openPage, setOpenPage] = useState<number | null>(null);
+  // Shown beside the photo field, where the student is looking, not at the top of the card.
+  const [photoProblem, setPhotoProblem] = useState<string | null>(null);
   const disabled = locked || blocked !== null;
   // A bought-off step stays as the instructor saw it (the fold ignores changes); notes still go.
   const frozen = disabled || !!state.boughtOff;
@@ -431,14 +424,20 @@ function StepPanel({
           onChange={async (e) => {
             const file = e.target.files?.[0];
             e.target.value = "";
+            setPhotoProblem(null);
             if (!file) return;
-            if (!(photoTypes as readonly string[]).includes(file.type)) return onProblem("Only JPEG, PNG or WebP pictures can be added.");
-            if (file.size > maxPhotoBytes) return onProblem(`That picture is ${(file.size / 1048576).toFixed(1)} MB; at most ${maxPhotoBytes / 1048576} MB. Take it at a lower resolution.`);
+            if (!(photoTypes as readonly string[]).includes(file.type)) return setPhotoProblem("Only JPEG, PNG or WebP pictures can be added.");
+            if (file.size > maxPhotoBytes) return setPhotoProblem(`That picture is ${(file.size / 1048576).toFixed(1)} MB; at most ${maxPhotoBytes / 1048576} MB. Take it at a lower resolution.`);
             const photoId = crypto.randomUUID();
             await data.queuePhoto({ photoId, runId, stepId: step.id, type: file.type, blob: file });
             await onAct("photo.added", { stepId: step.id, payload: { key: photoId } });
           }}
         />
+        {photoProblem ? (
+          <p role="alert" className="notice-error">
+            {photoProblem}
+          </p>
+        ) : null}
       </div>
 
       {step.inspectionPoint && state.checked ? (

@@ -41,7 +41,8 @@ export function AssignForm({ cardId, versions, classes, students }: Props) {
           setResult({ ok: true, text: `Assigned: ${assignment.runs} ${assignment.runs === 1 ? "student has" : "students have"} it in their work.` });
           router.refresh();
         } catch (error) {
-          setResult(error instanceof ApiError ? { ok: false, text: error.message, fields: error.fields } : { ok: false, text: "That did not work." });
+          // The field's own words ("Choose a class…"), not the API's "classId: …" form.
+          setResult(error instanceof ApiError ? { ok: false, text: Object.values(error.fields)[0] ?? error.message, fields: error.fields } : { ok: false, text: "That did not work." });
         } finally {
           setBusy(false);
         }
@@ -85,7 +86,6 @@ export function AssignForm({ cardId, versions, classes, students }: Props) {
             {students.length === 0 ? <p className="hint">No students in your classes.</p> : null}
           </div>
         ) : null}
-        {result?.fields?.classId || result?.fields?.studentIds ? <p className="notice-error">{result.fields.classId ?? result.fields.studentIds}</p> : null}
       </fieldset>
       <div className="grid gap-4 sm:grid-cols-3">
         <div className="field">
