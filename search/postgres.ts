@@ -90,27 +90,41 @@ const uuidTextList = (ids: string[]) => sql.raw(`array[${ids.map((id) => `'${id.
  * How many body matches are ranked at most. A word on more pages than this is ranked among the
  * pages whose heading has it (all of them) and the first this many that mention it: past a few
  * thousand pages, "mentions the word" tells a reader nothing more, and ranking every one would cost
- * half a second on 50,000 pages.
+ * half a second on 50,000 pages. It is above `totalLimit`, so the candidates also give the count.
  */
 export const rankedCandidates = 400;
+if (rankedCandidates <= totalLimit) throw new Error("rankedCandidates must exceed totalLimit: the count is taken from the candidates");
 
 /** Cover density with the heading (A) weighing most, damped by page length (normalisation 1). */
 const rank = (tsquery: SQL) => sql`ts_rank_cd('{0.1, 0.2, 0.4, 1.0}', p.search_vector, ${tsquery}, 1)`;
 
 /**
- * The ranked statement. The revisions in scope come in as a list (a join to manuals here made the
- * planner scan each revision's pages instead).
+ * The ranked statement: the page of hits, each row also carrying `matches`, the number of distinct
+ * candidates. The body branch reads every match in scope up to `rankedCandidates`, so below that
+ * `matches` is the exact count, and at it there are more than `totalLimit`: no second pass over the
+ * index is needed to count. The revisions in scope come in as a list (a join to manuals here made
+ * the planner scan each revision's pages instead).
  */
-export function rankedSql(tsquery: SQL, revisionIds: string[], { limit, offset }: { limit: number; offset: number }): SQL {
+export function rankedSql(
+  tsquery: SQL,
+  revisionIds: string[],
+  { limit, offset, hasExclusions = true }: { limit: number; offset: number; hasExclusions?: boolean },
+): SQL {
   // Compared as text so the planner filters the few matches by revision rather than reading the
   // primary key for every page of every revision in scope.
   const scope = sql`p.revision_id::text = any(${uuidTextList(revisionIds)})`;
+  // A heading match is a match of the whole page (the heading is part of search_vector), unless a
+  // word is excluded: then the body must be checked too. Skipping the check saves reading the
+  // page's vector twice.
+  const headingMatch = hasExclusions
+    ? sql`p.heading_vector @@ ${tsquery} and p.search_vector @@ ${tsquery}`
+    : sql`p.heading_vector @@ ${tsquery}`;
   // Ranked inside each branch, on the row already read: joining back to pages for the vector made
   // the planner scan the whole table.
   return sql`
-    select revision_id, page_number, max(score) as score from (
+    select revision_id, page_number, max(score) as score, count(*) over () as matches from (
       (select p.revision_id, p.page_number, ${rank(tsquery)} as score from pages p
-        where p.heading_vector @@ ${tsquery} and p.search_vector @@ ${tsquery} and ${scope}
+        where ${headingMatch} and ${scope}
         limit ${rankedCandidates})
       union all
       (select p.revision_id, p.page_number, ${rank(tsquery)} as score from pages p
@@ -153,10 +167,6 @@ export const postgresEngine: SearchEngine = {
     const [tsquery, revisionIds] = await Promise.all([buildTsQuery(query), revisionsInScope(filters)]);
     if (!tsquery || !revisionIds.length) return { hits: [], total: 0, totalCapped: false };
     const db = getDb();
-    // The count runs beside the ranked query rather than after it: a first page that comes back
-    // full needs it, and waiting for the hits first would add a round trip to every such search.
-    // (Past the first page, or for a short first page, it is not used and costs one GIN lookup.)
-    const counting = offset === 0 ? countMatches(tsquery, revisionIds) : null;
     const rows = await db.execute<{
         manual_id: string;
         revision_id: string;
@@ -165,10 +175,11 @@ export const postgresEngine: SearchEngine = {
         current: boolean;
         page: number;
         score: number;
+        matches: string;
         snippet: string;
       }>(sql`
-        with best as (${rankedSql(tsquery, revisionIds, { limit, offset })})
-        select b.revision_id, b.page_number as page, b.score, m.id as manual_id, m.title as manual_title,
+        with best as (${rankedSql(tsquery, revisionIds, { limit, offset, hasExclusions: query.excluded.length > 0 })})
+        select b.revision_id, b.page_number as page, b.score, b.matches, m.id as manual_id, m.title as manual_title,
                r.label as revision_label, (m.current_revision_id = b.revision_id) as current,
                ts_headline('english', p.text, ${tsquery},
                  ${`StartSel=${markStart}, StopSel=${markEnd}, MaxWords=30, MinWords=12, MaxFragments=2, FragmentDelimiter=" … "`}) as snippet
@@ -188,14 +199,9 @@ export const postgresEngine: SearchEngine = {
       snippet: snippetToHtml(row.snippet),
       score: Number(Number(row.score).toFixed(4)),
     }));
-    // A short page of hits is the whole answer; only a full one needs counting. Counting every match
-    // of a common word means reading every page that has it, so the count stops past totalLimit.
-    // (An empty page past the first says nothing about the total: that one is counted.)
-    const counted = counting ?? Promise.resolve(null);
-    const total =
-      hits.length < limit && (hits.length > 0 || offset === 0)
-        ? (void counted.catch(() => undefined), offset + hits.length)
-        : ((await counted) ?? (await countMatches(tsquery, revisionIds)));
+    // Every row carries the number of candidates, which is the count (see rankedSql). Only a page
+    // past the last hit has no row to carry it, and says nothing about the total: that one is counted.
+    const total = rows.rows.length ? Number(rows.rows[0]!.matches) : offset === 0 ? 0 : await countMatches(tsquery, revisionIds);
     return { hits, total: Math.min(total, totalLimit), totalCapped: total > totalLimit };
   },
 };

@@ -1,12 +1,13 @@
 import "server-only";
 import { eq } from "drizzle-orm";
-import { getIronSession, type SessionOptions } from "iron-session";
+import { getIronSession, unsealData, type SessionOptions } from "iron-session";
 import { cookies } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
 import { getDb } from "@/db";
 import { users } from "@/db/schema";
 import { getEnv } from "../env";
 import { assertCan, assertSignedIn, can, type Permission, type Role } from "./permissions";
+import { createSealCache } from "./seal-cache";
 
 export interface SessionData {
   userId?: string;
@@ -41,12 +42,26 @@ async function getSession() {
   return getIronSession<SessionData>(await cookies(), sessionOptions());
 }
 
+const sealed = createSealCache<SessionData>(
+  (seal) => {
+    const options = sessionOptions();
+    return unsealData<SessionData>(seal, { password: options.password, ttl: options.ttl });
+  },
+  { isEmpty: (data) => !data.userId },
+);
+
+/** The session cookie's data, unsealed at most once per cookie value (see seal-cache.ts). */
+async function readSession(): Promise<SessionData> {
+  const seal = (await cookies()).get(sessionCookieName)?.value;
+  return seal ? sealed.unseal(seal) : {};
+}
+
 /**
  * The signed-in user, read fresh from the database on every request: a deactivated account or a
  * changed password ends its sessions at once, which a cookie alone could not do.
  */
 export async function getCurrentUser(): Promise<SessionUser | null> {
-  const session = await getSession();
+  const session = await readSession();
   if (!session.userId) return null;
   const [row] = await getDb()
     .select({
