@@ -1,7 +1,7 @@
 // `npm run bench:reader`: a ~100 MB generated manual (900 pages, each with a page of incompressible
 // image data and a line of text), ingested through the real worker; then Chromium opens page 700
 // in the reader and the run prints the bytes of the PDF it transferred (goal ≤ 5 % of the file)
-// and the time until that page is painted (goal ≤ 1.5 s on loopback). Prints, asserts nothing.
+// and the time until that page is on screen (goal ≤ 1.5 s on loopback). Prints, asserts nothing.
 import { randomBytes, randomUUID } from "node:crypto";
 import { sql } from "drizzle-orm";
 import { PDFDocument, StandardFonts, concatTransformationMatrix, drawObject, popGraphicsState, pushGraphicsState } from "pdf-lib";
@@ -60,7 +60,7 @@ async function main() {
     args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
   });
   // Opens page `target` in a fresh browser context (empty cache) and prints what it cost.
-  const measure = async (label: string) => {
+  const measure = async (label: string): Promise<number> => {
     const context = await browser.newContext({ viewport: { width: 1366, height: 768 } });
     const page = await context.newPage();
     await page.goto(`${baseUrl}/sign-in`);
@@ -85,7 +85,14 @@ async function main() {
       const data = canvas?.getContext("2d")?.getImageData(0, 0, canvas.width, canvas.height).data;
       return !!data && data.some((v, i) => i % 4 !== 3 && v < 200);
     }, target);
-    const painted = Date.now() - started;
+    const seen = Date.now() - started;
+    // The reader's own mark (pagePaintedMark in components/pdf-reader.tsx), in ms after the
+    // navigation started, set in the first task after the frame that shows the page. The test's
+    // polling notices the pixels later: each of its checks reads the whole canvas back, and the
+    // neighbours and the page strip drawn after the first page hold the main thread meanwhile.
+    const painted = Math.round(
+      (await page.evaluate(`performance.getEntriesByName("hangarleaf:page-painted")[0]?.startTime ?? -1`)) as number,
+    );
     // Where the time went, from the page's own timeline: the document, scripts, the pdf.js worker,
     // the range requests, in milliseconds after the navigation started.
     // (A string, not a function: tsx would wrap named helpers in __name(), which the page lacks.)
@@ -107,18 +114,24 @@ async function main() {
       [
         `  ${label}`,
         `    opening page ${target}: ${(transferred / 1024).toFixed(0)} KB in ${requests} range requests = ${((100 * transferred) / bytes.length).toFixed(2)} % of the file   (goal ≤ 5 %)`,
-        `    page ${target} painted ${painted} ms after navigation   (goal ≤ 1500 ms, loopback)`,
+        `    page ${target} painted ${painted} ms after navigation   (goal ≤ 1500 ms, loopback; the test saw its pixels at ${seen} ms)`,
         `    timeline (ms after navigation): document ${timeline.document}; scripts ${timeline.scripts}; pdf.js worker ${timeline.worker}; file ranges ${timeline.ranges}`,
       ].join("\n"),
     );
+    return painted;
   };
   try {
     console.log(["", "bench:reader", `  file: ${pages} pages, ${(bytes.length / 1024 / 1024).toFixed(1)} MB`].join("\n"));
     // The first visit after the server started also pays for loading the reader route's code on
-    // the server; the second, in a new browser with an empty cache, is what a student meets on a
-    // server that is already running.
+    // the server; the later ones, each in a new browser context with an empty cache, are what a
+    // student meets on a server that is already running.
     await measure("server just started, browser cache empty:");
-    await measure("server warm, browser cache empty (the goal's case):");
+    // Two cores shared by Chromium, the server and the database: one run can be 0.3 s off the
+    // next, so the warm case is measured five times and judged by its median.
+    const warm: number[] = [];
+    for (let i = 1; i <= 5; i++) warm.push(await measure(`server warm, browser cache empty (the goal's case), run ${i} of 5:`));
+    warm.sort((a, b) => a - b);
+    console.log(`  warm runs: page ${target} on screen after median ${warm[2]} ms (fastest ${warm[0]}, slowest ${warm[4]})   (goal ≤ 1500 ms)`);
   } finally {
     await browser.close();
     await (await getQueue()).stop({ graceful: false, wait: true });

@@ -3,11 +3,13 @@
 // and the bare ranked SQL of the same queries in the same run, plus a word found on every page.
 // Goals: API p95 ≤ 50 ms, API p95 ≤ 2 × bare SQL p95, every-page query ≤ 150 ms. Prints, asserts nothing.
 import { randomUUID } from "node:crypto";
+import { availableParallelism } from "node:os";
 import { sql } from "drizzle-orm";
 import { closeDb, getDb } from "../db";
 import { hashPassword } from "../lib/auth/password";
 import { buildTsQuery, postgresEngine, rankedSql, revisionsInScope } from "../search/postgres";
 import { parseQuery } from "../search/query";
+import { cpuSnapshot } from "./bench-support";
 
 const baseUrl = process.env.HL_BASE_URL!;
 const pagesTotal = Number(process.env.BENCH_PAGES ?? 50_000);
@@ -89,15 +91,32 @@ async function timeSql(q: string): Promise<number> {
   return performance.now() - start;
 }
 
-async function load(fn: (q: string) => Promise<number>): Promise<number[]> {
+interface Run {
+  times: number[];
+  perSecond: number;
+  /** CPU milliseconds a query: web server, database backends, this process (the clients). */
+  cpu: { web: number; database: number; clients: number };
+}
+
+async function load(fn: (q: string) => Promise<number>, clientCount: number, runSeconds: number): Promise<Run> {
+  const database = new URL(process.env.DATABASE_URL!).pathname.slice(1);
   const times: number[] = [];
-  const until = Date.now() + seconds * 1000;
+  const before = { ...cpuSnapshot(database), clients: process.cpuUsage() };
+  const started = performance.now();
+  const until = Date.now() + runSeconds * 1000;
   await Promise.all(
-    Array.from({ length: clients }, async (_, c) => {
+    Array.from({ length: clientCount }, async (_, c) => {
       for (let i = c; Date.now() < until; i++) times.push(await fn(mix[i % mix.length]!));
     }),
   );
-  return times;
+  const after = cpuSnapshot(database);
+  const clients = process.cpuUsage(before.clients);
+  const per = (seconds: number) => (1000 * seconds) / times.length;
+  return {
+    times,
+    perSecond: times.length / ((performance.now() - started) / 1000),
+    cpu: { web: per(after.web - before.web), database: per(after.database - before.database), clients: per((clients.user + clients.system) / 1e6) },
+  };
 }
 
 async function main() {
@@ -109,8 +128,11 @@ async function main() {
   const cookie = await signIn();
   for (const q of mix) await timeApi(cookie, q); // warm up
 
-  const api = await load((q) => timeApi(cookie, q));
-  const bare = await load(timeSql);
+  const api = await load((q) => timeApi(cookie, q), clients, seconds);
+  const bare = await load(timeSql, clients, seconds);
+  // One client: what a query costs when nobody waits for anyone.
+  const apiAlone = await load((q) => timeApi(cookie, q), 1, seconds / 3);
+  const bareAlone = await load(timeSql, 1, seconds / 3);
   const everyApi: number[] = [];
   const everySql: number[] = [];
   for (let i = 0; i < 20; i++) {
@@ -119,13 +141,18 @@ async function main() {
   }
   const line = (label: string, t: number[]) =>
     `  ${label.padEnd(34)} p50 ${percentile(t, 50).toFixed(1).padStart(6)} ms   p95 ${percentile(t, 95).toFixed(1).padStart(6)} ms   (${t.length} queries)`;
+  const runLine = (label: string, run: Run, withWeb: boolean) =>
+    `${line(label, run.times)}, ${run.perSecond.toFixed(0)}/s\n` +
+    `  ${"".padEnd(34)} CPU a query: ${withWeb ? `web server ${run.cpu.web.toFixed(1)} ms, ` : ""}database ${run.cpu.database.toFixed(1)} ms, clients ${run.cpu.clients.toFixed(1)} ms`;
   console.log(
     [
       "",
-      `bench:search, ${pagesTotal} pages, ${clients} clients, ${seconds} s per run`,
-      line("API (HTTP, signed in)", api),
-      line("bare ranked SQL, same queries", bare),
-      `  API p95 / SQL p95: ${(percentile(api, 95) / percentile(bare, 95)).toFixed(2)}   (goals: API p95 ≤ 50 ms, ratio ≤ 2)`,
+      `bench:search, ${pagesTotal} pages, ${clients} clients for ${seconds} s, then 1 client for ${seconds / 3} s, on ${availableParallelism()} cores`,
+      runLine(`API (HTTP, signed in), ${clients} clients`, api, true),
+      runLine(`bare ranked SQL, ${clients} clients`, bare, false),
+      `  API p95 / SQL p95: ${(percentile(api.times, 95) / percentile(bare.times, 95)).toFixed(2)}   (goals: API p95 ≤ 50 ms, ratio ≤ 2)`,
+      runLine("API, 1 client", apiAlone, true),
+      runLine("bare ranked SQL, 1 client", bareAlone, false),
       line("every-page word, API", everyApi),
       line("every-page word, bare SQL", everySql),
       "  (goal: every-page query ≤ 150 ms)",

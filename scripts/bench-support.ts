@@ -1,6 +1,7 @@
 // Shared by the benchmarks: a manual with one revision, stored and queued as an upload would be,
 // and waiting until the worker has read it.
 import { createHash, randomUUID } from "node:crypto";
+import { readdirSync, readFileSync } from "node:fs";
 import { Readable } from "node:stream";
 import { eq } from "drizzle-orm";
 import { getDb } from "../db";
@@ -36,4 +37,35 @@ export async function ingestAndWait(revisionId: string): Promise<number> {
     if (row?.status === "failed") throw new Error(`bench ingest failed: ${row.error}`);
     await new Promise((r) => setTimeout(r, 50));
   }
+}
+
+/** User + system CPU seconds of one process, from /proc (Linux); 0 when it cannot be read. */
+function processCpu(pid: string): number {
+  try {
+    // The command name may hold spaces and parentheses: the fields start after the last ")".
+    const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+    const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+    return (Number(fields[11]) + Number(fields[12])) / 100; // utime, stime in clock ticks (USER_HZ = 100)
+  } catch {
+    return 0;
+  }
+}
+
+/**
+ * CPU seconds used so far by the web server (HL_WEB_PID) and by the database backends serving
+ * `database` (their command line names it). Two snapshots around a load give its CPU per query,
+ * which tells a slow query from a queue: on two cores, eight clients wait on each other.
+ */
+export function cpuSnapshot(database: string): { web: number; database: number } {
+  let db = 0;
+  for (const pid of readdirSync("/proc").filter((name) => /^\d+$/.test(name))) {
+    let command = "";
+    try {
+      command = readFileSync(`/proc/${pid}/cmdline`, "utf8");
+    } catch {
+      continue;
+    }
+    if (command.startsWith("postgres: ") && command.split(" ").includes(database)) db += processCpu(pid);
+  }
+  return { web: process.env.HL_WEB_PID ? processCpu(process.env.HL_WEB_PID) : 0, database: db };
 }

@@ -36,7 +36,8 @@ try {
   if (needsWeb.has(name)) {
     if (buildIsStale()) run(bin("next"), ["build"], { env: { ...env, NEXT_TELEMETRY_DISABLED: "1" } });
     const port = await freePort();
-    service("web", bin("next"), ["start", "-p", String(port)], { ...env, NEXT_TELEMETRY_DISABLED: "1" });
+    const web = service("web", bin("next"), ["start", "-p", String(port)], { ...env, NEXT_TELEMETRY_DISABLED: "1" });
+    env.HL_WEB_PID = String(web.pid); // for benchmarks that report the server's CPU time
     env.HL_BASE_URL = `http://127.0.0.1:${port}`;
     await waitForHttp(`${env.HL_BASE_URL}/api/health`);
     if (needsWorker.has(name)) {

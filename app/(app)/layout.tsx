@@ -19,7 +19,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
       </a>
       <header className="bg-deck text-white">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-2">
-          <Link href="/" className="no-underline" aria-label="Hangarleaf home">
+          <Link href="/" prefetch={false} className="no-underline" aria-label="Hangarleaf home">
             <Brand inverted />
           </Link>
           <MainNav items={items} />

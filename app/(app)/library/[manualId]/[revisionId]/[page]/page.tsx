@@ -49,13 +49,13 @@ export default async function ManualPageView({
   return (
     <div className="flex flex-col gap-4">
       <nav aria-label="Breadcrumb" className="flex flex-wrap gap-x-3">
-        <Link href="/library" className="py-2">Library</Link>
+        <Link href="/library" prefetch={false} className="py-2">Library</Link>
         <span aria-hidden="true" className="py-2">›</span>
-        <Link href={`/library/${manualId}`} className="py-2">{manual.title}</Link>
+        <Link href={`/library/${manualId}`} prefetch={false} className="py-2">{manual.title}</Link>
         {q ? (
           <>
             <span aria-hidden="true" className="py-2">›</span>
-            <Link href={`/search?q=${encodeURIComponent(q)}`} className="py-2">Back to the results</Link>
+            <Link href={`/search?q=${encodeURIComponent(q)}`} prefetch={false} className="py-2">Back to the results</Link>
           </>
         ) : null}
       </nav>
@@ -64,7 +64,7 @@ export default async function ManualPageView({
         <div role="alert" className="notice-error">
           This is {revision.label}, a superseded revision. Do not work from it.{" "}
           {current ? (
-            <Link href={`/library/${manualId}/${current.id}/${Math.min(pageNumber, current.pageCount ?? pageNumber)}${query}`}>
+            <Link href={`/library/${manualId}/${current.id}/${Math.min(pageNumber, current.pageCount ?? pageNumber)}${query}`} prefetch={false}>
               Open page {Math.min(pageNumber, current.pageCount ?? pageNumber)} of the current revision, {current.label}
             </Link>
           ) : null}
