@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
 import {
-  bigint, boolean, customType, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, real, text, timestamp, uniqueIndex, uuid,
+  bigint, boolean, check, customType, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, real, text, timestamp, uniqueIndex, uuid,
   type AnyPgColumn,
 } from "drizzle-orm/pg-core";
 
@@ -192,6 +192,19 @@ export const searchWords = pgTable("search_words", {
   word: text("word").primaryKey(),
   ...timestamps,
 });
+
+/**
+ * One row, whose number triggers raise whenever something a search can find or show changes
+ * (migration 0008): the search engine keeps answers under it (search/postgres.ts).
+ */
+export const searchGeneration = pgTable(
+  "search_generation",
+  {
+    id: boolean("id").primaryKey().default(true),
+    n: bigint("n", { mode: "number" }).notNull().default(0),
+  },
+  (t) => [check("search_generation_one_row", sql`${t.id}`)],
+);
 
 export const curriculumSubjects = pgTable(
   "curriculum_subjects",

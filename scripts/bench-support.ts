@@ -51,13 +51,19 @@ function processCpu(pid: string): number {
   }
 }
 
+export interface CpuSnapshot {
+  web: number;
+  /** By process id: a backend that starts during a load counts from zero. */
+  database: Map<string, number>;
+}
+
 /**
- * CPU seconds used so far by the web server (HL_WEB_PID) and by the database backends serving
- * `database` (their command line names it). Two snapshots around a load give its CPU per query,
- * which tells a slow query from a queue: on two cores, eight clients wait on each other.
+ * CPU seconds used so far by a web server and by the database backends serving `database` (their
+ * command line names it). Two snapshots around a load give its CPU per query (cpuSpent), which
+ * tells a slow query from a queue: on two cores, eight clients wait on each other.
  */
-export function cpuSnapshot(database: string): { web: number; database: number } {
-  let db = 0;
+export function cpuSnapshot(database: string, webPid: string | undefined): CpuSnapshot {
+  const db = new Map<string, number>();
   for (const pid of readdirSync("/proc").filter((name) => /^\d+$/.test(name))) {
     let command = "";
     try {
@@ -65,7 +71,14 @@ export function cpuSnapshot(database: string): { web: number; database: number }
     } catch {
       continue;
     }
-    if (command.startsWith("postgres: ") && command.split(" ").includes(database)) db += processCpu(pid);
+    if (command.startsWith("postgres: ") && command.split(" ").includes(database)) db.set(pid, processCpu(pid));
   }
-  return { web: process.env.HL_WEB_PID ? processCpu(process.env.HL_WEB_PID) : 0, database: db };
+  return { web: webPid ? processCpu(webPid) : 0, database: db };
+}
+
+/** CPU seconds between two snapshots (a backend that ended in between is not counted). */
+export function cpuSpent(before: CpuSnapshot, after: CpuSnapshot): { web: number; database: number } {
+  let database = 0;
+  for (const [pid, seconds] of after.database) database += seconds - (before.database.get(pid) ?? 0);
+  return { web: after.web - before.web, database };
 }

@@ -40,6 +40,14 @@ try {
     env.HL_WEB_PID = String(web.pid); // for benchmarks that report the server's CPU time
     env.HL_BASE_URL = `http://127.0.0.1:${port}`;
     await waitForHttp(`${env.HL_BASE_URL}/api/health`);
+    if (name === "search") {
+      // A second server that keeps no answers, to measure the search itself beside the kept ones.
+      const uncachedPort = await freePort();
+      const uncached = service("web-uncached", bin("next"), ["start", "-p", String(uncachedPort)], { ...env, NEXT_TELEMETRY_DISABLED: "1", HL_SEARCH_CACHE: "off" });
+      env.HL_UNCACHED_PID = String(uncached.pid);
+      env.HL_UNCACHED_URL = `http://127.0.0.1:${uncachedPort}`;
+      await waitForHttp(`${env.HL_UNCACHED_URL}/api/health`);
+    }
     if (needsWorker.has(name)) {
       env.HL_CHROMIUM = ensureChromium();
       service("worker", bin("tsx"), tsxArgs("worker/index.ts"), env);

@@ -4,7 +4,9 @@
 // corrected against search_words with trigrams and edit distance.
 import { sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db";
-import type { SearchEngine, SearchFilters, SearchHit } from "./engine";
+import { getEnv } from "@/lib/env";
+import { createLru } from "@/lib/lru";
+import type { SearchEngine, SearchFilters, SearchHit, SearchResult } from "./engine";
 import { totalLimit } from "./engine";
 import { markEnd, markStart, snippetToHtml, type ParsedQuery, type QueryWord } from "./query";
 
@@ -138,6 +140,65 @@ export function rankedSql(
 
 export { revisionsInScope };
 
+/**
+ * Answers kept by query, filters and page under the library's search generation (migration 0008),
+ * which every change a search could find or show raises: a kept answer is never older than the
+ * data it was read from. A class working the same task card searches the same words; a kept
+ * answer costs one small read instead of the ranked query. The answer is the same for everyone
+ * who may search (the library has no per-user visibility; if it gets some, the key must hold it).
+ * HL_SEARCH_CACHE=off turns it off (bench:search measures both).
+ */
+const answers = createLru<SearchResult>(500);
+/** Not needed for freshness (the generation is): it only lets old generations' answers go. */
+const answerLifetimeMs = 10 * 60_000;
+
+export async function searchGeneration(): Promise<number> {
+  const rows = await getDb().execute<{ n: string }>(sql`select n from search_generation`);
+  return Number(rows.rows[0]?.n ?? 0);
+}
+
+/** The uncached search: typo corrections and scope, then the ranked page of hits with snippets. */
+async function searchNow(query: ParsedQuery, filters: SearchFilters, { limit, offset }: { limit: number; offset: number }): Promise<SearchResult> {
+  const [tsquery, revisionIds] = await Promise.all([buildTsQuery(query), revisionsInScope(filters)]);
+  if (!tsquery || !revisionIds.length) return { hits: [], total: 0, totalCapped: false };
+  const rows = await getDb().execute<{
+      manual_id: string;
+      revision_id: string;
+      manual_title: string;
+      revision_label: string;
+      current: boolean;
+      page: number;
+      score: number;
+      matches: string;
+      snippet: string;
+    }>(sql`
+      with best as (${rankedSql(tsquery, revisionIds, { limit, offset, hasExclusions: query.excluded.length > 0 })})
+      select b.revision_id, b.page_number as page, b.score, b.matches, m.id as manual_id, m.title as manual_title,
+             r.label as revision_label, (m.current_revision_id = b.revision_id) as current,
+             ts_headline('english', p.text, ${tsquery},
+               ${`StartSel=${markStart}, StopSel=${markEnd}, MaxWords=30, MinWords=12, MaxFragments=2, FragmentDelimiter=" … "`}) as snippet
+      from best b
+      join pages p on p.revision_id = b.revision_id and p.page_number = b.page_number
+      join revisions r on r.id = b.revision_id
+      join manuals m on m.id = r.manual_id
+      order by b.score desc, b.revision_id, b.page_number`);
+
+  const hits: SearchHit[] = rows.rows.map((row) => ({
+    manualId: row.manual_id,
+    revisionId: row.revision_id,
+    manualTitle: row.manual_title,
+    revisionLabel: row.revision_label,
+    current: row.current,
+    page: row.page,
+    snippet: snippetToHtml(row.snippet),
+    score: Number(Number(row.score).toFixed(4)),
+  }));
+  // Every row carries the number of candidates, which is the count (see rankedSql). Only a page
+  // past the last hit has no row to carry it, and says nothing about the total: that one is counted.
+  const total = rows.rows.length ? Number(rows.rows[0]!.matches) : offset === 0 ? 0 : await countMatches(tsquery, revisionIds);
+  return { hits, total: Math.min(total, totalLimit), totalCapped: total > totalLimit };
+}
+
 export const postgresEngine: SearchEngine = {
   name: "postgres",
 
@@ -163,45 +224,15 @@ export const postgresEngine: SearchEngine = {
     // manuals.current_revision_id is read at query time: nothing to do.
   },
 
-  async search(query, filters, { limit, offset }) {
-    const [tsquery, revisionIds] = await Promise.all([buildTsQuery(query), revisionsInScope(filters)]);
-    if (!tsquery || !revisionIds.length) return { hits: [], total: 0, totalCapped: false };
-    const db = getDb();
-    const rows = await db.execute<{
-        manual_id: string;
-        revision_id: string;
-        manual_title: string;
-        revision_label: string;
-        current: boolean;
-        page: number;
-        score: number;
-        matches: string;
-        snippet: string;
-      }>(sql`
-        with best as (${rankedSql(tsquery, revisionIds, { limit, offset, hasExclusions: query.excluded.length > 0 })})
-        select b.revision_id, b.page_number as page, b.score, b.matches, m.id as manual_id, m.title as manual_title,
-               r.label as revision_label, (m.current_revision_id = b.revision_id) as current,
-               ts_headline('english', p.text, ${tsquery},
-                 ${`StartSel=${markStart}, StopSel=${markEnd}, MaxWords=30, MinWords=12, MaxFragments=2, FragmentDelimiter=" … "`}) as snippet
-        from best b
-        join pages p on p.revision_id = b.revision_id and p.page_number = b.page_number
-        join revisions r on r.id = b.revision_id
-        join manuals m on m.id = r.manual_id
-        order by b.score desc, b.revision_id, b.page_number`);
-
-    const hits: SearchHit[] = rows.rows.map((row) => ({
-      manualId: row.manual_id,
-      revisionId: row.revision_id,
-      manualTitle: row.manual_title,
-      revisionLabel: row.revision_label,
-      current: row.current,
-      page: row.page,
-      snippet: snippetToHtml(row.snippet),
-      score: Number(Number(row.score).toFixed(4)),
-    }));
-    // Every row carries the number of candidates, which is the count (see rankedSql). Only a page
-    // past the last hit has no row to carry it, and says nothing about the total: that one is counted.
-    const total = rows.rows.length ? Number(rows.rows[0]!.matches) : offset === 0 ? 0 : await countMatches(tsquery, revisionIds);
-    return { hits, total: Math.min(total, totalLimit), totalCapped: total > totalLimit };
+  async search(query, filters, page) {
+    if (getEnv().HL_SEARCH_CACHE === "off") return searchNow(query, filters, page);
+    // Read before the search: a change committed meanwhile raises the number, and this answer is
+    // kept under the old one, which nobody asks for any more.
+    const key = JSON.stringify([await searchGeneration(), query, filters, page.limit, page.offset]);
+    const kept = answers.get(key);
+    if (kept) return kept;
+    const answer = await searchNow(query, filters, page);
+    answers.set(key, Object.freeze(answer), Date.now() + answerLifetimeMs);
+    return answer;
   },
 };

@@ -4,6 +4,7 @@
 // be kept until the seal expires. Whether the session still counts is not decided here: the user row
 // (status, session version) is read on every request, so a sign-out elsewhere, a changed password
 // or a deactivated account still ends the session at once.
+import { createLru } from "../lru";
 
 /** The expiry iron writes into a seal (milliseconds, sixth `*` part), or null when it has none. */
 export function sealExpiry(seal: string): number | null {
@@ -18,27 +19,23 @@ export interface SealCache<T> {
 
 /**
  * `unseal` is only called on a miss; an empty answer (a bad or expired seal) is not kept, so a
- * cookie that fails keeps costing the full check. At `max` entries the oldest goes first.
+ * cookie that fails keeps costing the full check. At `max` entries the least used goes first.
  */
 export function createSealCache<T extends object>(
   unseal: (seal: string) => Promise<T>,
   { max = 2000, isEmpty }: { max?: number; isEmpty: (data: T) => boolean },
 ): SealCache<T> {
-  const entries = new Map<string, { data: T; expires: number }>();
+  const entries = createLru<T>(max);
   return {
     get size() {
       return entries.size;
     },
     async unseal(seal, now = Date.now()) {
-      const hit = entries.get(seal);
-      if (hit && hit.expires > now) return hit.data;
-      if (hit) entries.delete(seal);
+      const hit = entries.get(seal, now);
+      if (hit) return hit;
       const data = await unseal(seal);
       const expires = sealExpiry(seal);
-      if (!isEmpty(data) && expires !== null && expires > now) {
-        if (entries.size >= max) entries.delete(entries.keys().next().value!);
-        entries.set(seal, { data: Object.freeze(data), expires });
-      }
+      if (!isEmpty(data) && expires !== null && expires > now) entries.set(seal, Object.freeze(data), expires);
       return data;
     },
   };
