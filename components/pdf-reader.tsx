@@ -186,12 +186,26 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
     });
   }, [pageCount, pageHeight]);
 
+  // Once a link is followed out of the reader, the address is left alone: a replaceState while
+  // the app router fetches the next page cancels that navigation (e2e: the superseded banner's link
+  // stayed on the old revision when the page number changed as the neighbours appeared).
+  const leaving = useRef(false);
+  useEffect(() => {
+    const onClick = (event: MouseEvent) => {
+      const link = event.target instanceof Element ? event.target.closest("a[href]") : null;
+      if (link && link.getAttribute("target") !== "_blank" && !link.hasAttribute("download")) leaving.current = true;
+    };
+    document.addEventListener("click", onClick, true);
+    return () => document.removeEventListener("click", onClick, true);
+  }, []);
+
   useEffect(() => {
     // Keep the address on the page being read, so it can be shared or cited. The history API, not
     // a router navigation: that would render the page again on the server and take the focus away.
     // Only when the address differs: a needless replaceState during a link's navigation (the page
     // strip or the neighbours appearing) can cancel that navigation in the app router.
     const timer = setTimeout(() => {
+      if (leaving.current) return;
       const target = pageHref(current);
       if (`${window.location.pathname}${window.location.search}` !== target) window.history.replaceState(null, "", target);
     }, 400);

@@ -90,8 +90,9 @@ async function main() {
     // navigation started, set in the first task after the frame that shows the page. The test's
     // polling notices the pixels later: each of its checks reads the whole canvas back, and the
     // neighbours and the page strip drawn after the first page hold the main thread meanwhile.
+    await page.waitForFunction(`performance.getEntriesByName("hangarleaf:page-painted").length > 0`);
     const painted = Math.round(
-      (await page.evaluate(`performance.getEntriesByName("hangarleaf:page-painted")[0]?.startTime ?? -1`)) as number,
+      (await page.evaluate(`performance.getEntriesByName("hangarleaf:page-painted")[0].startTime`)) as number,
     );
     // Where the time went, from the page's own timeline: the document, scripts, the pdf.js worker,
     // the range requests, in milliseconds after the navigation started.

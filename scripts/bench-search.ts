@@ -93,9 +93,10 @@ async function timeApi(server: Server, cookie: string, q: string): Promise<numbe
 }
 
 async function timeSql(q: string): Promise<number> {
-  const [tsquery, scope] = await Promise.all([buildTsQuery(parseQuery(q)), revisionsInScope({})]);
+  const parsed = parseQuery(q);
+  const [tsquery, scope] = await Promise.all([buildTsQuery(parsed), revisionsInScope({})]);
   const start = performance.now();
-  await getDb().execute(rankedSql(tsquery!, scope, { limit: 10, offset: 0 }));
+  await getDb().execute(rankedSql(tsquery!, scope, { limit: 10, offset: 0, hasExclusions: parsed.excluded.length > 0 }));
   return performance.now() - start;
 }
 
@@ -165,10 +166,10 @@ async function main() {
     [
       "",
       `bench:search, ${pagesTotal} pages, ${clients} clients for ${seconds} s, then 1 client for ${seconds / 3} s, on ${availableParallelism()} cores`,
-      runLine(`API, answers kept, ${clients} clients`, apiKept, true),
+      runLine(`API, answers kept, ${clients} clients (the mix repeats: all kept)`, apiKept, true),
       runLine(`API, nothing kept, ${clients} clients`, apiUncached, true),
       runLine(`bare ranked SQL, ${clients} clients`, bare, false),
-      `  goal API p95 ≤ 50 ms: answers kept ${p95(apiKept.times).toFixed(0)} ms, nothing kept ${apiUncached ? p95(apiUncached.times).toFixed(0) : "?"} ms`,
+      `  goal API p95 ≤ 50 ms: repeated questions (kept) ${p95(apiKept.times).toFixed(0)} ms, new questions (nothing kept) ${apiUncached ? p95(apiUncached.times).toFixed(0) : "?"} ms`,
       `  goal API p95 ≤ 2 × SQL p95 (nothing kept, so the same work): ratio ${(p95(searched.times) / p95(bare.times)).toFixed(2)}`,
       runLine("API, answers kept, 1 client", aloneKept, true),
       runLine("API, nothing kept, 1 client", aloneUncached, true),

@@ -154,7 +154,9 @@ const answerLifetimeMs = 10 * 60_000;
 
 export async function searchGeneration(): Promise<number> {
   const rows = await getDb().execute<{ n: string }>(sql`select n from search_generation`);
-  return Number(rows.rows[0]?.n ?? 0);
+  // Without its row nothing would ever raise the number: better no search than stale answers.
+  if (!rows.rows[0]) throw new Error("search_generation has no row (migration 0008)");
+  return Number(rows.rows[0].n);
 }
 
 /** The uncached search: typo corrections and scope, then the ranked page of hits with snippets. */

@@ -20,8 +20,9 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   const instructor = await api("instructor@hangarleaf.test");
   const subjects = (await (await instructor.get("/api/subjects")).json()) as { subjects: { id: string; name: string }[] };
   const subject = subjects.subjects.find((s) => s.name === "Flight controls") ?? subjects.subjects[0]!;
-  const manuals = (await (await instructor.get("/api/manuals")).json()) as { manuals: { id: string; currentRevisionId: string | null }[] };
-  const revisionId = manuals.manuals.find((m) => m.currentRevisionId)!.currentRevisionId!;
+  // The demo's own manual: the integration tests leave manuals of their own in the same database.
+  const manuals = (await (await instructor.get("/api/manuals")).json()) as { manuals: { id: string; title: string; currentRevisionId: string | null }[] };
+  const revisionId = manuals.manuals.find((m) => m.title === "HT-20 Trainer Maintenance Manual" && m.currentRevisionId)!.currentRevisionId!;
   const title = `Rudder cable tension ${Date.now()}`;
   const stepIds = [crypto.randomUUID(), crypto.randomUUID()];
   const created = await instructor.post("/api/cards", {
