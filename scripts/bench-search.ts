@@ -166,7 +166,7 @@ async function main() {
     [
       "",
       `bench:search, ${pagesTotal} pages, ${clients} clients for ${seconds} s, then 1 client for ${seconds / 3} s, on ${availableParallelism()} cores`,
-      runLine(`API, answers kept, ${clients} clients (the mix repeats: all kept)`, apiKept, true),
+      runLine(`API, kept (mix repeats), ${clients} clients`, apiKept, true),
       runLine(`API, nothing kept, ${clients} clients`, apiUncached, true),
       runLine(`bare ranked SQL, ${clients} clients`, bare, false),
       `  goal API p95 ≤ 50 ms: repeated questions (kept) ${p95(apiKept.times).toFixed(0)} ms, new questions (nothing kept) ${apiUncached ? p95(apiUncached.times).toFixed(0) : "?"} ms`,
