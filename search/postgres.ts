@@ -110,7 +110,8 @@ const rank = (tsquery: SQL) => sql`ts_rank_cd('{0.1, 0.2, 0.4, 1.0}', p.search_v
 export function rankedSql(
   tsquery: SQL,
   revisionIds: string[],
-  { limit, offset, hasExclusions = true }: { limit: number; offset: number; hasExclusions?: boolean },
+  // Required, not defaulted: a caller that forgot it would time a different statement (bench:search did).
+  { limit, offset, hasExclusions }: { limit: number; offset: number; hasExclusions: boolean },
 ): SQL {
   // Compared as text so the planner filters the few matches by revision rather than reading the
   // primary key for every page of every revision in scope.
