@@ -18,7 +18,13 @@ const bodies: Record<CalculatorSlug, () => React.ReactNode> = {
   units: UnitConverter,
 };
 
-/** One calculator with its caution, formula, sources and the training-aid notice, on its page or in a step. */
+const order = { warning: 0, caution: 1, note: 2 } as const;
+
+/**
+ * One calculator with the notice that the manufacturer's data, the instructor, local rules and a
+ * licensed sign-off come first, its warnings, cautions and notes (in that order, before the
+ * calculator they apply to), its formula and sources, on its page or in a step.
+ */
 export function CalculatorPanel({ slug, headingLevel = 2 }: { slug: CalculatorSlug; headingLevel?: 2 | 4 }) {
   const info = calculators[slug];
   const Body = bodies[slug];
@@ -26,7 +32,11 @@ export function CalculatorPanel({ slug, headingLevel = 2 }: { slug: CalculatorSl
   return (
     <section className="flex flex-col gap-4" aria-label={info.title}>
       <p className="border-l-[6px] border-amber bg-amber-pale px-3 py-2 font-semibold">{trainingAidNotice}</p>
-      {info.caution ? <CardNotice kind="caution" text={info.caution} /> : null}
+      {[...info.notices]
+        .sort((a, b) => order[a.kind] - order[b.kind])
+        .map((n) => (
+          <CardNotice key={n.text} kind={n.kind} text={n.text} />
+        ))}
       <Body />
       <div>
         <Heading className="font-bold">Formula</Heading>

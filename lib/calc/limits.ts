@@ -1,7 +1,7 @@
 // Is a measured value inside its limits? The student may type the value in any unit of the same
 // kind as the limit (mm against an inch limit, N·m against in-lb, °C against °F); the judgement is
 // made in the limit's unit and the conversion is shown, so nobody has to trust a hidden number.
-import { convert, dimensionOf, formatNumber, parseQuantity, resolveUnit, unitLabel } from "./units";
+import { convert, dimensionOf, formatAgainst, formatNumber, parseQuantity, resolveUnit, unitLabel } from "./units";
 
 export interface Limit {
   unit: string;
@@ -28,10 +28,13 @@ export function describeLimit(limit: Limit): string {
   if (limit.nominal != null && limit.tolerance != null) {
     return `${formatNumber(limit.nominal, 6)} ± ${formatNumber(Math.abs(limit.tolerance), 6)} ${u}`;
   }
+  // A shown minimum is never rounded down, nor a maximum up: the text never allows more than the limit.
   const { low, high } = limitRange(limit);
-  if (low != null && high != null) return `${formatNumber(low, 6)} to ${formatNumber(high, 6)} ${u}`;
-  if (low != null) return `at least ${formatNumber(low, 6)} ${u}`;
-  if (high != null) return `at most ${formatNumber(high, 6)} ${u}`;
+  const lowText = low != null ? formatNumber(low, 6, "up") : "";
+  const highText = high != null ? formatNumber(high, 6, "down") : "";
+  if (low != null && high != null) return `${lowText} to ${highText} ${u}`;
+  if (low != null) return `at least ${lowText} ${u}`;
+  if (high != null) return `at most ${highText} ${u}`;
   return `any value in ${u}`;
 }
 
@@ -56,10 +59,15 @@ export function judgeValue(input: string | { value: number; unit: string }, limi
   const tooLow = low != null && converted < low - slack;
   const tooHigh = high != null && converted > high + slack;
   const limitText = describeLimit(limit);
+  // An "out" reading is shown with the digits that put it past the limit ("0.2500004 in", not
+  // "0.25 in: OUT … at most 0.25 in").
+  const crossed = tooLow ? low : tooHigh ? high : null;
+  const convertedText = crossed != null ? formatAgainst(converted, crossed, 5) : formatNumber(converted, 5);
+  const typedText = crossed != null && quantity.unit === limitUnit ? formatAgainst(quantity.value, crossed, 6) : formatNumber(quantity.value, 6);
   const shown =
     quantity.unit === limitUnit
-      ? `${formatNumber(quantity.value, 6)} ${unitLabel(limitUnit)}`
-      : `${formatNumber(quantity.value, 6)} ${unitLabel(quantity.unit)} = ${formatNumber(converted, 5)} ${unitLabel(limitUnit)}`;
+      ? `${typedText} ${unitLabel(limitUnit)}`
+      : `${typedText} ${unitLabel(quantity.unit)} = ${convertedText} ${unitLabel(limitUnit)}`;
   const status = tooLow || tooHigh ? "out" : "in";
   const message =
     status === "in"

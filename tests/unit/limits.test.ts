@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { describeLimit, judgeValue } from "@/lib/calc/limits";
-import { convert, parseNumber, parseQuantity, resolveUnit } from "@/lib/calc/units";
+import { convert, formatAgainst, formatNumber, parseNumber, parseQuantity, resolveUnit } from "@/lib/calc/units";
 
 describe("limits checks", () => {
   const torque = { unit: "in-lb", min: 50, max: 70 };
@@ -69,5 +69,43 @@ describe("limits checks", () => {
     expect(parseQuantity("70 F")).toEqual({ value: 70, unit: "°F" });
     expect(parseQuantity("42", "psi")).toEqual({ value: 42, unit: "psi" });
     expect(resolveUnit("LB-FT")).toBe("ft-lb");
+  });
+
+  it("reads the torque and length units people write: ft-lbs, in-lbs, in., lbf·ft, N.m (common practice)", () => {
+    expect(parseQuantity("40 ft-lbs")).toEqual({ value: 40, unit: "ft-lb" });
+    expect(parseQuantity("150 in-lbs")).toEqual({ value: 150, unit: "in-lb" });
+    expect(parseQuantity("0.25 in.")).toEqual({ value: 0.25, unit: "in" });
+    expect(parseQuantity("55 lbf·ft")).toEqual({ value: 55, unit: "ft-lb" });
+    expect(parseQuantity("55 lbf⋅ft")).toEqual({ value: 55, unit: "ft-lb" }); // the dot operator
+    expect(parseQuantity("9 N.m")).toEqual({ value: 9, unit: "N·m" });
+    expect(parseQuantity("9 N m")).toEqual({ value: 9, unit: "N·m" });
+    expect(parseQuantity("30 ft–lb")).toEqual({ value: 30, unit: "ft-lb" }); // an en dash from a word processor
+    expect(parseQuantity("5 FT-LBS")).toEqual({ value: 5, unit: "ft-lb" });
+    expect(judgeValue("5 ft-lbs", torque).status).toBe("in"); // 60 in-lb
+  });
+
+  it("never shows 0 or -0 for a tiny conversion, nor exponents for a huge one", () => {
+    // 1 nm is 0.0000000393701 in (exact definition: 1 in = 25.4 mm; 1e-6 / 25.4 = 3.93700787e-8).
+    expect(formatNumber(convert(1e-6, "mm", "in"), 6)).toBe("0.0000000393701");
+    expect(formatNumber(convert(-1e-6, "mm", "in"), 6)).toBe("-0.0000000393701");
+    expect(formatNumber(1e-7)).toBe("0.0000001");
+    expect(formatNumber(-0)).toBe("0");
+    expect(formatNumber(2.54e25)).toBe("2.54 × 10^25");
+    expect(formatNumber(1234567)).toBe("1235000");
+  });
+
+  it("shows an OUT reading with the digits that put it out: 6.35001 mm against at most 0.25 in", () => {
+    // 6.35001 mm ÷ 25.4 = 0.2500004 in (exact definition): five figures would print 0.25, which is the limit.
+    const out = judgeValue("6.35001 mm", { unit: "in", max: 0.25 });
+    expect(out.status).toBe("out");
+    expect(out.status !== "invalid" && out.shown).toBe("6.35001 mm = 0.2500004 in");
+    const same = judgeValue("0.2500001", { unit: "in", max: 0.25 });
+    expect(same.status !== "invalid" && same.message).toMatch(/^0\.2500001 in: OUT OF LIMITS, above at most 0\.25 in/);
+    expect(formatAgainst(0.24999996, 0.25)).toBe("0.24999996");
+  });
+
+  it("never rounds a shown limit outward: a minimum is rounded up, a maximum down", () => {
+    expect(describeLimit({ unit: "in", min: 0.1234564 })).toBe("at least 0.123457 in");
+    expect(describeLimit({ unit: "in", max: 0.1234567 })).toBe("at most 0.123456 in");
   });
 });
