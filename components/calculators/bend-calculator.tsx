@@ -20,9 +20,17 @@ export function BendCalculator() {
   const pattern = ok
     ? attempt(() => flatPattern({ thickness: t, radius: r, dimensions: dimensions as number[], bends: Array(dimensions.length - 1).fill(a) as number[] }))
     : { value: null, error: dims.trim() && !dimensions.every((d) => d !== null) ? "List the outside dimensions as numbers separated by commas." : null };
-  const check = t && r !== null ? attempt(() => checkBendRadius({ thickness: t, radius: r, temper })) : { value: null, error: null };
+  const check = t !== null && r !== null ? attempt(() => checkBendRadius({ thickness: t, radius: r, temper })) : { value: null, error: null };
 
   const rows: [string, string, string?][] = [];
+  if (check.value && check.value.low !== null && check.value.high !== null) {
+    // Shown rounded up: a minimum radius is never shown smaller than the table's.
+    rows.push([
+      "Minimum bend radius",
+      `${formatNumber(check.value.low, 4, "up")} in; use ${formatNumber(check.value.high, 4, "up")} in unless the drawing says otherwise`,
+      check.value.tableThickness !== null ? `AC 43.13-1B Table 4-6, ${temper}, row ${check.value.tableThickness} in` : `AC 43.13-1B Table 4-6, ${temper}`,
+    ]);
+  }
   if (pattern.value && a !== null) {
     const k = kFactor(a);
     rows.push(["K factor", formatNumber(k, 5), `tan(${angle}° ÷ 2)`]);
@@ -46,7 +54,7 @@ export function BendCalculator() {
         </div>
       </div>
       {check.value?.status === "ok" ? <p className="notice-ok">{check.value.message}</p> : null}
-      <Results rows={rows} warnings={warnings} error={pattern.error ?? check.error} />
+      <Results rows={rows} warnings={warnings} error={check.error ?? pattern.error} notes={["Between two gauges of the table, the thicker gauge's row is used: its radii are the safer ones."]} />
     </div>
   );
 }

@@ -47,13 +47,19 @@ export function SelectField<T extends string>({ label, value, onChange, options 
 
 export const num = (v: string): number | null => (v.trim() === "" ? null : parseNumber(v));
 
-export function Results({ rows, warnings = [], error }: { rows: [string, ReactNode, string?][]; warnings?: string[]; error?: string | null }) {
+/** The result rows, with what went wrong first, then the warnings, then notes that go with the result. */
+export function Results({ rows, warnings = [], notes = [], error }: { rows: [string, ReactNode, string?][]; warnings?: string[]; notes?: string[]; error?: string | null }) {
   return (
     <div aria-live="polite" className="flex flex-col gap-2">
       {error ? <p className="notice-error">{error}</p> : null}
       {warnings.map((w) => (
         <p key={w} className="notice-error">{w}</p>
       ))}
+      {rows.length
+        ? notes.map((n) => (
+            <p key={n} className="border-l-[6px] border-ink-soft bg-panel px-3 py-2">{n}</p>
+          ))
+        : null}
       {rows.length ? (
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 rounded-md bg-teal-pale p-3">
           {rows.map(([label, value, formula]) => (
@@ -71,7 +77,7 @@ export function Results({ rows, warnings = [], error }: { rows: [string, ReactNo
   );
 }
 
-/** Runs a calculation and turns its RangeError into a message instead of a crash. */
+/** Runs a calculation and turns its refusal (AppError "invalid", lib/calc/units.ts `refuse`) into a message instead of a crash. */
 export function attempt<T>(fn: () => T): { value: T | null; error: string | null } {
   try {
     return { value: fn(), error: null };

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { penetrantDwell } from "@/lib/calc/ndt";
+import { developmentWindows, penetrantDwell, penetrantWindowF, type DeveloperForm } from "@/lib/calc/ndt";
 import { formatNumber } from "@/lib/calc/units";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 
@@ -10,20 +10,28 @@ export function PenetrantCalculator() {
   const [temperature, setTemperature] = useState("70");
   const [unit, setUnit] = useState<"°F" | "°C">("°F");
   const [service, setService] = useState<"no" | "yes">("no");
+  const [developer, setDeveloper] = useState<DeveloperForm>("nonaqueous");
 
   const s = num(specified);
   const t = num(temperature);
-  const result = s !== null && t !== null ? attempt(() => penetrantDwell({ specifiedMinutes: s, temperature: t, unit, serviceInduced: service === "yes" })) : { value: null, error: null };
+  const result =
+    s !== null && t !== null
+      ? attempt(() => penetrantDwell({ specifiedMinutes: s, temperature: t, unit, serviceInduced: service === "yes", developer }))
+      : { value: null, error: null };
   const rows: [string, string, string?][] = [];
   const warnings: string[] = [];
   if (result.value) {
     const r = result.value;
-    rows.push(["Part temperature", `${formatNumber(r.temperatureF, 4)} °F`]);
+    rows.push(["Part temperature", `${formatNumber(r.temperatureF, 4)} °F`, `tests are done from ${penetrantWindowF.min} to ${penetrantWindowF.max} °F`]);
     if (r.allowed && r.dwellMinutes !== null) {
       rows.push(["Rule", r.rule]);
       rows.push(["Penetrant dwell", `${formatNumber(r.dwellMinutes, 3)} min`, r.shortestMinutes !== null && r.shortestMinutes < r.dwellMinutes ? `may be as short as ${formatNumber(r.shortestMinutes, 3)} min` : undefined]);
-      rows.push(["Development time, about", `${formatNumber(r.developmentMinutes!, 3)} min`, "½ of the dwell (TM 1-1500-204-23-7)"]);
-      rows.push(["Nonaqueous developer", "inspect 7 to 30 min after it dries", "NAVSEA T9074-AS-GIB-010/271"]);
+      const w = developmentWindows[developer];
+      rows.push([
+        "Development time",
+        `${formatNumber(r.developmentMinutes!, 3)} min`,
+        `about ½ the dwell (TM 1-1500-204-23-7), ${w.min} to ${w.max} min for ${w.label} developer (${w.source})`,
+      ]);
     }
     warnings.push(...r.warnings);
   }
@@ -33,6 +41,12 @@ export function PenetrantCalculator() {
         <NumberField label="Dwell the procedure specifies" unit="min" value={specified} onChange={setSpecified} />
         <NumberField label="Part temperature" value={temperature} onChange={setTemperature} />
         <SelectField label="Temperature unit" value={unit} onChange={setUnit} options={[["°F", "°F"], ["°C", "°C"]]} />
+        <SelectField
+          label="Developer form"
+          value={developer}
+          onChange={setDeveloper}
+          options={Object.entries(developmentWindows).map(([k, v]) => [k as DeveloperForm, v.label])}
+        />
         <SelectField label="Looking for service-induced flaws (fatigue, stress corrosion)?" value={service} onChange={setService} options={[["no", "No"], ["yes", "Yes"]]} />
       </div>
       <Results rows={rows} warnings={warnings} error={result.error} />

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { appliedTorque, wrenchSetting, type AdapterDirection } from "@/lib/calc/torque";
+import { adapterWarnings, appliedTorque, wrenchSetting, type AdapterDirection } from "@/lib/calc/torque";
 import { convert, formatNumber } from "@/lib/calc/units";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 
@@ -40,7 +40,12 @@ export function TorqueCalculator() {
           options={[["lengthens", "points away from the handle (lengthens)"], ["shortens", "points back toward the handle (shortens)"]]}
         />
       </div>
-      <Results rows={rows} error={setting.error} />
+      <Results
+        rows={rows}
+        warnings={setting.value !== null && l !== null && a !== null ? adapterWarnings({ lever: l, adapter: a, direction }) : []}
+        notes={["Set the wrench to the value shown; if the manual gives a range, aim inside it and never past its maximum."]}
+        error={setting.error}
+      />
     </div>
   );
 }
