@@ -1,6 +1,9 @@
 // The invented manuals of the demo school, as data: chapters, sections and their text. Every
 // model, value and name here is made up for training the software, not for any aircraft.
 // db/demo/manual-pdf.ts turns them into PDFs; the tests read the same data to know what to expect.
+// The penetrant procedure's temperature window is the calculator's (lib/calc/ndt.ts), so the
+// procedure, the demo card and the calculator cannot disagree.
+import { penetrantWindowF } from "@/lib/calc/ndt";
 
 export interface DemoSection {
   code: string; // ATA-style chapter-section-subject, e.g. 32-10-00
@@ -81,7 +84,7 @@ export const demoManuals: DemoManual[] = [
         ata: "32",
         title: "Landing Gear",
         sections: [
-          { code: "32-10-00", title: "Main Landing Gear - Inspection", warning: jackWarning, steps: ["Jack the aircraft until the main wheels are clear of the floor.", "Check the gear leg for cracks at the attach fittings with a 10x glass.", "Check the axle nut torque and the cotter pin.", "Spin each wheel and listen for bearing noise."], limits: [["Axle nut torque", "150 to 180 in-lb, then back to nearest slot"], ["Wheel bearing play", "none felt"]] },
+          { code: "32-10-00", title: "Main Landing Gear - Inspection", warning: jackWarning, steps: ["Jack the aircraft until the main wheels are clear of the floor.", "Check the gear leg for cracks at the attach fittings with a 10x glass.", "Check the axle nut torque and the cotter pin. Never back a torqued nut off to line up the cotter-pin hole.", "Spin each wheel and listen for bearing noise."], limits: [["Axle nut torque", "150 to 180 in-lb; line up the next slot inside the range, never back the nut off"], ["Wheel bearing play", "none felt"]] },
           { code: "32-40-00", title: "Wheels and Brakes", steps: ["Measure the brake lining thickness at the thinnest point.", "Replace both linings of a wheel when one reaches the limit.", "Bleed the brakes from the bottom up after any line is opened."], limits: [["Minimum brake lining thickness", "0.100 in"], ["Brake disc minimum thickness", "0.205 in"]] },
         ],
       },
@@ -105,7 +108,7 @@ export const demoManuals: DemoManual[] = [
         ata: "74",
         title: "Ignition",
         sections: [
-          { code: "74-10-00", title: "Magneto Timing to Engine", warning: engineWarning, note: "Time the left magneto first, then the right, with the timing light on both.", steps: ["Turn the crankshaft to the number one cylinder compression stroke.", "Set the crankshaft to the firing position on the timing marks.", "Install the magneto with its timing mark aligned.", "Turn the magneto until the breaker points just open and tighten the clamps.", "Check the timing again by turning the crankshaft back and forward."], limits: [["Ignition timing", "25 degrees BTC"]] },
+          { code: "74-10-00", title: "Magneto Timing to Engine", warning: engineWarning, note: "Time the left magneto first, then the right, with the timing light on both.", steps: ["Turn the crankshaft to the number one cylinder compression stroke.", "Set the crankshaft to the firing position on the timing marks.", "Install the magneto with its timing mark aligned.", "Turn the magneto until the breaker points just open and tighten the clamps.", "Check the timing again: turn the crankshaft opposite to its rotation well back from the mark, then forward in the direction of rotation only until the points open. If you pass the mark, go back well past it and come forward again: gear backlash makes a reading taken while turning backward wrong."], limits: [["Ignition timing", "25 degrees BTC, plus or minus 1"]] },
           { code: "74-20-00", title: "Spark Plugs", caution: "Never use a dropped spark plug: the ceramic insulator can crack inside.", steps: ["Remove the plugs and put them in a tray in cylinder order.", "Read the firing end of each plug for the condition of its cylinder.", "Gap the electrodes with a round wire gauge.", "Install with anti-seize on the threads and torque."], limits: [["Spark plug gap", "0.016 to 0.021 in"], ["Spark plug torque", "300 to 360 in-lb"]] },
         ],
       },
@@ -146,16 +149,16 @@ export const demoManuals: DemoManual[] = [
   {
     title: "Fernhollow Sheet-Metal Standard Practices",
     documentType: "handbook",
-    applicability: ["HT-20", "C-9"],
+    applicability: ["HT-20", "Shop practice panel"],
     publisher: "Fernhollow Technical College (invented)",
     chapters: [
       {
         ata: "51",
         title: "Structures - Standard Practices",
         sections: [
-          { code: "51-10-00", title: "Rivet Selection", note: "Shop practice: choose the rivet diameter at about three times the thickness of the thickest sheet.", steps: ["Measure the thickest sheet with a micrometer.", "Choose the rivet diameter and material from the table.", "Find the grip and add 1.5 diameters for the length."], limits: [["Minimum edge distance", "2 D"], ["Minimum rivet pitch", "3 D"], ["Transverse pitch", "75 percent of pitch"]] },
+          { code: "51-10-00", title: "Rivet Selection", note: "Shop practice: choose the rivet diameter at about three times the thickness of the thickest sheet.", steps: ["Measure the thickest sheet with a micrometer.", "Choose the rivet diameter and material from the table.", "Find the grip and add 1.5 diameters for the length."], limits: [["Minimum edge distance", "2 D"], ["Maximum edge distance", "4 D"], ["Minimum rivet pitch", "3 D"], ["Transverse pitch", "75 percent of pitch, never under 2.5 D"], ["Rivet length", "grip plus 1.5 D, next standard length up"]] },
           { code: "51-20-00", title: "Drilling and Deburring", caution: "Hold the drill square to the work; an oval hole weakens the joint.", steps: ["Center punch each rivet location lightly.", "Drill a pilot hole, then ream to size.", "Deburr both sides with a deburring tool, not a larger drill."], limits: [["Hole for 1/8 in rivet", "No. 30 drill"], ["Hole for 5/32 in rivet", "No. 21 drill"]] },
-          { code: "51-30-00", title: "Rivet Installation", warning: "Wear hearing and eye protection when you use a rivet gun.", steps: ["Clamp the sheets with cleco fasteners every fourth hole.", "Hold the bucking bar square to the rivet shank.", "Drive the rivet in short bursts until the shop head is formed.", "Check the shop head with a rivet gauge."], limits: [["Shop head diameter", "1.5 D"], ["Shop head height", "0.5 D"]] },
+          { code: "51-30-00", title: "Rivet Installation", warning: "Wear hearing and eye protection when you use a rivet gun.", steps: ["Clamp the sheets with cleco fasteners every fourth hole.", "Hold the bucking bar square to the rivet shank.", "Drive the rivet in short bursts until the shop head is formed.", "Check the shop head diameter and height with a rivet gauge."], limits: [["Shop head diameter", "1.5 D; 1/8 in rivet 0.180 to 0.200 in"], ["Shop head height", "0.5 D; 1/8 in rivet 0.055 to 0.070 in"]] },
           { code: "51-40-00", title: "Bending Sheet Metal", steps: ["Find the minimum bend radius for the alloy and thickness.", "Compute the setback and the bend allowance.", "Lay out the flat pattern and mark the bend lines.", "Bend on the brake with the sight line on the radius bar."], limits: [["Minimum radius, 0.040 in 2024-T3", "0.16 in"]] },
           { code: "51-50-00", title: "Repair of Skin Damage", steps: ["Trim the damage to a smooth round or oval hole.", "Make a doubler of the same alloy one gauge thicker.", "Lay out two rows of rivets around the hole.", "Install the doubler and the filler and rivet."] },
         ],
@@ -179,9 +182,9 @@ export const demoManuals: DemoManual[] = [
         ata: "51",
         title: "Nondestructive Testing - Liquid Penetrant",
         sections: [
-          { code: "51-61-01", title: "Preparation and Precleaning", warning: chemicalWarning, steps: ["Remove paint and coatings from the area to be inspected.", "Clean with solvent and let the part dry completely.", "Check that the part temperature is inside the limits."], limits: [["Part temperature", "40 to 125 F"]] },
+          { code: "51-61-01", title: "Preparation and Precleaning", warning: chemicalWarning, caution: "Never sand, blast or scrape paint off before the test: smeared metal closes the cracks the test must find.", steps: ["Remove paint and coatings from the area to be inspected with chemical stripper.", "Clean with solvent and let the part dry completely.", "Check that the part temperature is inside the limits."], limits: [["Part temperature", `${penetrantWindowF.min} to ${penetrantWindowF.max} F`]] },
           { code: "51-61-02", title: "Penetrant Application and Dwell", steps: ["Apply fluorescent penetrant by brush or spray to cover the area.", "Start the dwell timer.", "Keep the surface wet during the dwell."], limits: [["Penetrant dwell time", "10 minutes minimum, 60 maximum"]], note: "Dwell times are those of this school procedure; the penetrant maker's data and the part's manual come first." },
-          { code: "51-61-03", title: "Removal and Developer", caution: "Do not spray remover straight onto the part: it washes penetrant out of the flaws.", steps: ["Wipe off the excess penetrant with a dry lint-free cloth.", "Wipe with a cloth dampened with remover.", "Apply a thin even coat of nonaqueous developer.", "Start the development timer."], limits: [["Development time", "10 minutes minimum"]] },
+          { code: "51-61-03", title: "Removal and Developer", caution: "Do not spray remover straight onto the part: it washes penetrant out of the flaws.", steps: ["Wipe off the excess penetrant with a dry lint-free cloth.", "Wipe with a cloth dampened with remover.", "Apply a thin even coat of nonaqueous developer.", "Start the development timer."], limits: [["Development time", "half the dwell, 10 minutes minimum, inspect within 30 minutes after the developer dries"]] },
           { code: "51-61-04", title: "Inspection Under UV-A Light", warning: uvWarning, steps: ["Let your eyes adapt to the dark booth for at least 1 minute.", "Check the UV-A intensity at the part surface with the meter.", "Inspect for bright lines and dots.", "Mark each indication and record it on the process record."], limits: [["UV-A intensity at the surface", "1000 microwatts per square cm minimum"], ["Ambient white light in booth", "2 foot-candles maximum"]] },
         ],
       },
@@ -216,9 +219,9 @@ export const demoManuals: DemoManual[] = [
         ata: "71",
         title: "Power Plant - Removal and Installation",
         sections: [
-          { code: "71-00-10", title: "Engine Removal - Preparation", warning: "Drain the fuel lines into an approved container and keep fire extinguishers at the work area.", steps: ["Disconnect the battery and open the circuit breakers.", "Close the fuel shutoff valve and drain the lines.", "Tag and disconnect the electrical connectors.", "Cap every open line and fitting."] },
-          { code: "71-00-20", title: "Engine Removal - Hoisting", warning: "Never stand under a raised engine. A dropped engine crushes.", steps: ["Attach the lifting sling to the engine hoist points.", "Take up the weight with the hoist.", "Remove the mount bolts in the order shown.", "Lower the engine onto the transport stand and secure it."], limits: [["Engine dry weight", "310 lb"]] },
-          { code: "71-00-30", title: "Engine Installation", steps: ["Hoist the engine into position on the mounts.", "Install the mount bolts and torque them in sequence.", "Connect the lines and connectors, removing each cap as you go.", "Do a leak check and a ground run."], limits: [["Mount bolt torque", "40 to 45 ft-lb"]] },
+          { code: "71-00-10", title: "Engine Removal - Preparation", warning: "Drain the fuel lines into an approved container and keep fire extinguishers at the work area. The ignition exciter stores a lethal charge: open its circuit breaker and wait 5 minutes before you touch an igniter lead.", caution: "Install the tail stand before the engine comes off: without the engine's weight the centre of gravity moves aft and the aircraft can sit on its tail.", steps: ["Install the tail stand.", "Disconnect the battery, open the circuit breakers and tag them.", "Close the fuel shutoff valve and drain the lines.", "Tag and disconnect the electrical connectors, then cap them.", "Cap every open line and fitting."] },
+          { code: "71-00-20", title: "Engine Removal - Hoisting", warning: "Never stand under a raised engine. A dropped engine crushes.", caution: "Take up the weight with the hoist before the first mount bolt comes out, or the mounts bend.", steps: ["Attach the lifting sling to the engine hoist points.", "Take up the weight with the hoist.", "Remove the mount bolts in the order shown.", "Lower the engine onto the transport stand and secure it."], limits: [["Engine dry weight", "310 lb"]] },
+          { code: "71-00-30", title: "Engine Installation", steps: ["Hoist the engine into position on the mounts.", "Install the mount bolts and torque them in sequence. Never back a torqued nut off, or go past the maximum, to line up a cotter-pin hole.", "Connect the lines and connectors, removing each cap as you go.", "Close the circuit breakers, then do a leak check and a ground run."], limits: [["Mount bolt torque", "40 to 45 ft-lb"]] },
         ],
       },
       {
@@ -252,7 +255,7 @@ export function secondRevisionOfTrainer(first: DemoManual): DemoManual {
   for (const chapter of copy.chapters) {
     for (const section of chapter.sections) {
       if (section.code === "32-10-00" && section.limits) {
-        section.limits = section.limits.map(([k, v]) => (k === "Axle nut torque" ? [k, "120 to 150 in-lb, then back to nearest slot"] : [k, v]));
+        section.limits = section.limits.map(([k, v]) => (k === "Axle nut torque" ? [k, "120 to 150 in-lb; line up the next slot inside the range, never back the nut off"] : [k, v]));
       }
     }
     if (chapter.ata === "12") {
