@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { coilArrangements, coilShotCurrent, type CoilArrangement } from "@/lib/calc/ndt";
-import { formatNumber } from "@/lib/calc/units";
+import { coilArrangements, coilRatioRange, coilShotCurrent, type CoilArrangement } from "@/lib/calc/ndt";
+import { formatAgainst, formatNumber } from "@/lib/calc/units";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 
 export function CoilShotCalculator() {
@@ -25,7 +25,7 @@ export function CoilShotCalculator() {
   const rows: [string, string, string?][] = [];
   if (shot.value) {
     const v = shot.value;
-    rows.push(["L/D", formatNumber(v.ratio, 4), `${length} ÷ ${formatNumber(v.effectiveDiameter, 4)}${v.ratioUsed !== v.ratio ? `; ${v.ratioUsed} used` : ""}`]);
+    rows.push(["L/D", formatAgainst(v.ratio, v.ratio < 9 ? coilRatioRange.lowest : coilRatioRange.cap, 4), `${length} ÷ ${formatNumber(v.effectiveDiameter, 4)}${v.ratioUsed !== v.ratio ? `; ${v.ratioUsed} used` : ""}`]);
     if (v.fillFactor !== null) rows.push(["Fill factor", formatNumber(v.fillFactor, 3), "coil area ÷ part area"]);
     rows.push(["Coil current", `${formatNumber(v.amperes, 4)} A`, v.formula]);
     rows.push(["±10 %", `${formatNumber(v.range[0], 4)} to ${formatNumber(v.range[1], 4)} A`]);

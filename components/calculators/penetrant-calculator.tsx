@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { developmentWindows, penetrantDwell, penetrantWindowF, type DeveloperForm } from "@/lib/calc/ndt";
-import { formatNumber } from "@/lib/calc/units";
+import { formatAgainst, formatNumber } from "@/lib/calc/units";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 
 export function PenetrantCalculator() {
@@ -22,7 +22,9 @@ export function PenetrantCalculator() {
   const warnings: string[] = [];
   if (result.value) {
     const r = result.value;
-    rows.push(["Part temperature", `${formatNumber(r.temperatureF, 4)} °F`, `tests are done from ${penetrantWindowF.min} to ${penetrantWindowF.max} °F`]);
+    // Near an edge of the window, enough digits to show which side the part is on (39.99 °F, not 40).
+    const edge = r.temperatureF < (penetrantWindowF.min + penetrantWindowF.max) / 2 ? penetrantWindowF.min : penetrantWindowF.max;
+    rows.push(["Part temperature", `${formatAgainst(r.temperatureF, edge, 4)} °F`, `tests are done from ${penetrantWindowF.min} to ${penetrantWindowF.max} °F`]);
     if (r.allowed && r.dwellMinutes !== null) {
       rows.push(["Rule", r.rule]);
       rows.push(["Penetrant dwell", `${formatNumber(r.dwellMinutes, 3)} min`, r.shortestMinutes !== null && r.shortestMinutes < r.dwellMinutes ? `may be as short as ${formatNumber(r.shortestMinutes, 3)} min` : undefined]);

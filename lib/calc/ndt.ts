@@ -2,7 +2,7 @@
 // temperature with its development time, and the coil-shot current for magnetic-particle
 // inspection. Values from USAF T.O. 33B-1-1, US Army TM 1-1500-204-23-7, NAVSEA
 // T9074-AS-GIB-010/271 and ASTM E1417 / E1444; each rule names its source and how sure it is.
-import { convert, formatNumber, refuse } from "./units";
+import { convert, formatAgainst, formatNumber, refuse } from "./units";
 
 /**
  * The part temperatures at which a penetrant test is done at all, in °F: T.O. 33B-1-1 gives no test
@@ -189,24 +189,24 @@ export function coilShotCurrent({
   if (ratio <= coilRatioRange.lowest) {
     refuse(
       polePieces
-        ? `L/D is ${formatNumber(ratio, 4)} even with the pole pieces: add longer pole pieces until L/D is over ${coilRatioRange.lowest} (T.O. 33B-1-1).`
-        : `L/D is ${formatNumber(ratio, 4)}, ${coilRatioRange.lowest} or less: the formula gives no current. Add pole pieces (steel bars of the same diameter) to lengthen the part and enter the length with them (T.O. 33B-1-1).`,
+        ? `L/D is ${formatAgainst(ratio, coilRatioRange.lowest, 4)} even with the pole pieces: add longer pole pieces until L/D is over ${coilRatioRange.lowest} (T.O. 33B-1-1).`
+        : `L/D is ${formatAgainst(ratio, coilRatioRange.lowest, 4)}, ${coilRatioRange.lowest} or less: the formula gives no current. Add pole pieces (steel bars of the same diameter) to lengthen the part and enter the length with them (T.O. 33B-1-1).`,
     );
   }
   // Fill factor from the coil bore and the part's outside diameter (the area it fills).
   const fillFactor = coilDiameter != null ? (coilDiameter / diameter) ** 2 : null;
   if (fillFactor !== null && fillFactor > 2 && fillFactor < 10) {
-    refuse(`The fill factor is ${formatNumber(fillFactor, 3)}, between 2 and 10: neither the low nor the high fill-factor formula holds. Use the intermediate formula of your procedure, or a coil that suits the part.`);
+    refuse(`The fill factor is ${formatAgainst(fillFactor, fillFactor < 6 ? 2 : 10, 3)}, between 2 and 10: neither the low nor the high fill-factor formula holds. Use the intermediate formula of your procedure, or a coil that suits the part.`);
   }
   if (fillFactor !== null && arrangement !== "high-fill" && fillFactor <= 2) {
-    refuse(`The fill factor is ${formatNumber(fillFactor, 3)}: 2 or less is a high fill factor. Choose "${coilArrangements["high-fill"]}".`);
+    refuse(`The fill factor is ${formatAgainst(fillFactor, 2, 3)}: 2 or less is a high fill factor. Choose "${coilArrangements["high-fill"]}".`);
   }
   if (fillFactor !== null && arrangement === "high-fill" && fillFactor >= 10) {
-    refuse(`The fill factor is ${formatNumber(fillFactor, 3)}: 10 or more is a low fill factor. Choose whether the part lies against the coil wall or is centred.`);
+    refuse(`The fill factor is ${formatAgainst(fillFactor, 10, 3)}: 10 or more is a low fill factor. Choose whether the part lies against the coil wall or is centred.`);
   }
   const ratioUsed = Math.min(ratio, coilRatioRange.cap);
   const notes: string[] = [];
-  if (ratio > coilRatioRange.cap) notes.push(`L/D is ${formatNumber(ratio, 4)}: the formula uses ${coilRatioRange.cap}, its cap (ASTM E1444, from memory). A long part may need more than one shot along its length.`);
+  if (ratio > coilRatioRange.cap) notes.push(`L/D is ${formatAgainst(ratio, coilRatioRange.cap, 4)}: the formula uses ${coilRatioRange.cap}, its cap (ASTM E1444, from memory). A long part may need more than one shot along its length.`);
   if (insideDiameter > 0) notes.push(`Hollow part: effective diameter √(${formatNumber(diameter, 4)}² − ${formatNumber(insideDiameter, 4)}²) = ${formatNumber(effectiveDiameter, 4)} in.`);
 
   let ampereTurns: number;

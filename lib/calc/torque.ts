@@ -1,7 +1,7 @@
 // A torque wrench with an extension or adapter on its square drive: what to set the wrench to so
 // that the fastener gets the torque the manual asks for. The formula assumes the adapter lies in
 // line with the wrench handle (TM 1-1500-204-23-9).
-import { refuse } from "./units";
+import { formatNumber, refuse } from "./units";
 
 export type AdapterDirection = "lengthens" | "shortens";
 
@@ -19,7 +19,7 @@ function check(lever: number, adapter: number, direction: AdapterDirection) {
   if (!(adapter >= 0)) refuse("The adapter length is zero or more.");
   if (direction === "shortens" && lever - adapter < shortestLeverShare * lever - 1e-9) {
     refuse(
-      `An adapter that points back toward the handle may take off at most half the wrench length (${lever / 2} in of ${lever} in): ` +
+      `An adapter that points back toward the handle may take off at most half the wrench length (${formatNumber(lever / 2, 4, "down")} in of ${formatNumber(lever, 4)} in): ` +
         "beyond that the setting grows without bound. Turn the adapter to point away from the handle, or use a longer wrench.",
     );
   }

@@ -253,7 +253,7 @@ describe("torque wrench with an extension", () => {
     expect(wrenchSetting({ desired: 300, lever: 10, adapter: 2, direction: "shortens" })).toBeCloseTo(375, 9);
   });
   it("refuses an adapter that shortens the lever past half (common practice): 9.9 in on 10 in would ask 100 × the torque", () => {
-    refused(() => wrenchSetting({ desired: 300, lever: 10, adapter: 9.9, direction: "shortens" }), /half the wrench/);
+    refused(() => wrenchSetting({ desired: 300, lever: 10, adapter: 9.9, direction: "shortens" }), /half the wrench length \(5 in of 10 in\)/);
     refused(() => wrenchSetting({ desired: 300, lever: 10, adapter: 10, direction: "shortens" }), /half the wrench/);
     refused(() => wrenchSetting({ desired: 300, lever: 10, adapter: 12, direction: "shortens" }), /half the wrench/);
     // Exactly half: twice the torque (300 × 10 ÷ 5 = 600, worked by hand) is still given.
@@ -350,6 +350,8 @@ describe("magnetic-particle coil shot", () => {
   it("T.O. 33B-1-1: L/D of 3 or less gives no current without pole pieces", () => {
     refused(() => coilShotCurrent({ length: 6, diameter: 2, turns: 5 }), /pole pieces/);
     refused(() => coilShotCurrent({ length: 4, diameter: 2, turns: 5, polePieces: true }), /longer pole pieces/);
+    // Just under the bound, the message shows enough digits to say why (2.99999, not 3).
+    refused(() => coilShotCurrent({ length: 5.99998, diameter: 2, turns: 5 }), /L\/D is 2\.99999, 3 or less/);
     // With pole pieces the length is the part and pieces together: 8 in on a 2 in bar is L/D 4, 45,000 ÷ (4 × 5) = 2250 A (worked by hand).
     expect(coilShotCurrent({ length: 8, diameter: 2, turns: 5, polePieces: true }).amperes).toBeCloseTo(2250, 9);
   });
