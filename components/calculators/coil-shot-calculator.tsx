@@ -41,7 +41,7 @@ export function CoilShotCalculator() {
         <NumberField label="Coil inside diameter" unit="in" hint="Needed for a centred part; gives the fill factor." value={coil} onChange={setCoil} />
         <SelectField label="Pole pieces fitted?" value={poles} onChange={setPoles} options={[["no", "No"], ["yes", "Yes"]]} />
       </div>
-      <Results rows={rows} warnings={shot.value?.warnings} notes={[...(shot.value?.notes ?? []), "Demagnetise the part afterwards and check it with the field indicator."]} error={shot.error} />
+      <Results rows={rows} warnings={shot.value?.warnings} notes={shot.value?.notes} error={shot.error} />
     </div>
   );
 }

@@ -45,7 +45,8 @@ export function RivetCalculator() {
     if (d) results.push(["Rivet diameter", inch(d), d === choice.value.suggested ? "next size at or above 3 t (AC 43.13-1B 4-58g)" : "your choice"]);
   }
   if (length.value && d) {
-    results.push(["Rivet length", `${formatNumber(length.value.length, 4, "up")} in → ${length.value.lengthSixteenths}/16 in`, `${grip} + 1.5 × ${formatNumber(d, 4)}, next standard length up`]);
+    const standard = length.value.lengthSixteenths / 16;
+    results.push(["Rivet length", `${formatNumber(length.value.length, 4, "up")} in → ${fractionOfInch(standard) ?? formatNumber(standard, 4)} in`, `${grip} + 1.5 × ${formatNumber(d, 4)}, next standard length up`]);
     results.push(["Part number", rivetPartNumber({ head, material, diameter: d, lengthSixteenths: length.value.lengthSixteenths }), "diameter in 32nds, length in 16ths"]);
   }
   if (layout.value) {
@@ -71,7 +72,10 @@ export function RivetCalculator() {
           label="Rivet diameter"
           value={d !== null ? String(d) : ""}
           onChange={setPicked}
-          options={options.length ? options.map((o) => [String(o.diameter), `${fractionOfInch(o.diameter)} in: ${o.basis}`]) : [["", "Type the thickest sheet"]]}
+          options={[
+            ...(d === null ? [["", options.length ? "Choose a diameter" : "Type the thickest sheet"] as [string, string]] : []),
+            ...options.map((o): [string, string] => [String(o.diameter), `${fractionOfInch(o.diameter)} in: ${o.basis}`]),
+          ]}
         />
         <NumberField label="Pitch you lay out" unit="in" hint="Leave empty for the usual 4–8 D." value={pitch} onChange={setPitch} />
         <SelectField label="Head" value={head} onChange={setHead} options={Object.entries(headStyles).map(([k, v]) => [k as HeadStyle, `${k}, ${v}`])} />

@@ -124,7 +124,7 @@ export const calculators: Record<CalculatorSlug, CalculatorInfo> = {
     summary: "Lengths, torques, temperatures and pressures between the units manuals use.",
     formula: ["1 in = 25.4 mm", "1 in-lb = 0.11298 N·m", "°C = (°F − 32) × 5 ÷ 9"],
     sources: ["Exact definitions: lb = 0.45359237 kg, g = 9.80665 m/s², in = 25.4 mm"],
-    notices: [{ kind: "note", text: "Work to the value and unit the manual gives. A converted limit is never rounded toward the outside of the limit." }],
+    notices: [{ kind: "note", text: "Work to the value and unit the manual gives. Conversions here are rounded to six figures: judge a reading against a limit in the limit's own unit, as the card's measurement fields do." }],
   },
 };
 
