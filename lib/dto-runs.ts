@@ -56,7 +56,8 @@ export interface SignOffDto {
 export interface RunDetailDto {
   run: WorkItemDto;
   version: CardVersionDto;
-  events: (RunEvent & { userName: string; serverTime: string })[];
+  /** In the fold's order; `serverTime` is null for an event the cart has sent but not refreshed since. */
+  events: (RunEvent & { userName: string })[];
   /** Ids of the users whose buy-offs, returns and sign-offs count (instructors and admins). */
   reviewers: string[];
   photos: PhotoDto[];

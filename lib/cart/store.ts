@@ -169,7 +169,7 @@ export function cartData(userId: string) {
                   const known = new Set(detail.events.map((e) => e.id));
                   const added = leaving
                     .filter((p) => p.runId === runId && !known.has(p.event.id))
-                    .map((p) => ({ ...p.event, type: p.event.type as RunDetailDto["events"][number]["type"], userId, userName: "", serverTime: new Date().toISOString() }));
+                    .map((p) => ({ ...p.event, type: p.event.type as RunDetailDto["events"][number]["type"], userId, userName: "", serverTime: null }));
                   return { ...detail, events: [...detail.events, ...added] };
                 },
                 store,

@@ -10,8 +10,8 @@ import type { AssignmentDto, EventBatchResultDto, RunDetailDto, SignOffDto, Work
 import { AppError, databaseErrorCode } from "@/lib/errors";
 import { stepSchema } from "@/lib/validation/cards";
 import type { RunEventInput } from "@/lib/validation/runs";
-import { foldRun, type CardStepForRun, type RunEvent, type RunState, type RunStatus } from "./fold";
-import { activeMinutes } from "./hours";
+import { foldRun, orderEvents, type CardStepForRun, type RunEvent, type RunState, type RunStatus } from "./fold";
+import { workingMinutes } from "./hours";
 import { packetFor } from "./packet";
 import { workStatusOf } from "./work-status";
 
@@ -207,6 +207,7 @@ function toRunEvent(e: typeof runEvents.$inferSelect): RunEvent {
     type: e.type as RunEvent["type"],
     userId: e.userId,
     clientTime: e.clientTime.toISOString(),
+    serverTime: e.serverTime.toISOString(),
     stepId: e.stepId,
     payload: e.payload as Record<string, unknown>,
   };
@@ -255,9 +256,8 @@ export async function getRunDetail({ actor, runId }: { actor: Actor; runId: stri
   return {
     run: toWorkItem(item!),
     version,
-    events: rows
-      .map((r) => ({ ...toRunEvent(r.event), userName: r.userName, serverTime: r.event.serverTime.toISOString() }))
-      .sort((a, b) => (a.clientTime < b.clientTime ? -1 : a.clientTime > b.clientTime ? 1 : a.id < b.id ? -1 : 1)),
+    // In the fold's order, so a late event is listed after the review moment it arrived behind.
+    events: orderEvents(rows.map((r) => ({ ...toRunEvent(r.event), userName: r.userName }))).map((o) => o.event),
     reviewers: [...reviewers],
     photos,
     signOff: await signOffOf(db, runId),
@@ -309,8 +309,12 @@ export async function appendEvents({ actor, runId, events }: { actor: Actor; run
       if (fresh.length && run.studentId !== actor.id) throw new AppError("forbidden", "Only the student doing this run records its work.");
       if (fresh.length && run.status === "signed_off") throw signedOffConflict();
       if (fresh.length) {
+        // One receipt time for the batch, read after the run's lock: the fold orders batches by it,
+        // and the transaction's start time (the column default) can be earlier than a batch that
+        // held the lock first.
+        const serverTime = await receiptTime(tx);
         await tx.insert(runEvents).values(
-          fresh.map((e) => ({ id: e.id, runId, userId: actor.id, type: e.type, stepId: e.stepId, payload: e.payload, clientTime: new Date(e.clientTime) })),
+          fresh.map((e) => ({ id: e.id, runId, userId: actor.id, type: e.type, stepId: e.stepId, payload: e.payload, clientTime: new Date(e.clientTime), serverTime })),
         );
       }
       if (!fresh.length) return { stored: 0, duplicates: events.length, status: run.status };
@@ -326,15 +330,18 @@ export async function appendEvents({ actor, runId, events }: { actor: Actor; run
   }
 }
 
+async function receiptTime(tx: Tx): Promise<Date> {
+  const [row] = await tx.execute<{ now: Date | string }>(sql`select clock_timestamp() as now`).then((r) => r.rows);
+  return new Date(row!.now);
+}
+
 /**
- * A review event made on the server. It is timed after everything already on the run, so a cart
- * whose clock runs fast cannot have its earlier work folded in after the sign-off.
+ * A review event made on the server, at the server's time: the fold places it after everything
+ * received before it, so a cart whose clock runs fast cannot have earlier work folded in after it.
  */
 async function appendReviewEvent(tx: Tx, actor: Actor, runId: string, type: "run.returned" | "run.signed_off" | "inspection.bought_off", stepId: string | null, payload: Record<string, unknown>) {
-  const [latest] = await tx.select({ t: sql<string | null>`max(${runEvents.clientTime})` }).from(runEvents).where(eq(runEvents.runId, runId));
-  const now = Date.now();
-  const after = latest?.t ? Date.parse(latest.t) + 1 : 0;
-  await tx.insert(runEvents).values({ id: crypto.randomUUID(), runId, userId: actor.id, type, stepId, payload, clientTime: new Date(Math.max(now, after)) });
+  const serverTime = await receiptTime(tx);
+  await tx.insert(runEvents).values({ id: crypto.randomUUID(), runId, userId: actor.id, type, stepId, payload, clientTime: serverTime, serverTime });
 }
 
 async function reviewContext(tx: Tx, actor: Actor, runId: string) {
@@ -392,7 +399,10 @@ export async function signOffRun({ actor, runId, comment }: { actor: Actor; runI
       const unchecked = version.steps.findIndex((s) => !state.steps[s.id]?.checked);
       if (unchecked >= 0) throw new AppError("invalid", `Step ${unchecked + 1} is not done. Return the run instead.`);
       await appendReviewEvent(tx, actor, runId, "run.signed_off", null, { comment });
-      const actualMinutes = activeMinutes(events.filter((e) => e.userId === run.studentId).map((e) => e.clientTime));
+      const actualMinutes = workingMinutes(
+        events.filter((e) => e.userId === run.studentId),
+        { assignedAt: run.createdAt.toISOString() },
+      );
       const revisionsCited = revisionsCitedBy(version);
       await tx.insert(signOffs).values({ runId, instructorId: actor.id, versionId: version.id, revisionsCited, actualMinutes, comment });
       await tx.update(runs).set({ status: "signed_off" }).where(eq(runs.id, runId));

@@ -133,3 +133,86 @@ describe("what the instructor saw stays", () => {
     expect(state.status).toBe("in_progress");
   });
 });
+
+describe("a cart's clock cannot bend what was reviewed", () => {
+  // Receipt times are the server's; `at(m)` is minute m on both clocks.
+  const got = (e: RunEvent, minute: number): RunEvent => ({ ...e, serverTime: at(minute) });
+  const live = (list: RunEvent[]) => list.map((e) => got(e, Number(e.clientTime.slice(14, 16))));
+
+  it("keeps a bought-off value when a back-dated change arrives after the buy-off", () => {
+    const s1ip: CardStepForRun[] = [{ ...steps[0]!, inspectionPoint: true }, steps[2]!];
+    const before = live([ev("value.recorded", 1, { stepId: "s1", payload: { value: "60 in-lb" } }), ev("step.checked", 2, { stepId: "s1" }), ev("inspection.bought_off", 5, { stepId: "s1", userId: instructor })]);
+    const sneaked = got(ev("value.recorded", 3, { stepId: "s1", payload: { value: "95 in-lb" } }), 8); // stamped before the buy-off, sent after it
+    const state = foldRun([...before, sneaked], s1ip, instructors);
+    expect(state.steps.s1!.value!.text).toBe("60 in-lb");
+    expect(state.steps.s1!.value!.judgement.status).toBe("in");
+    expect(state.late).toEqual([{ id: sneaked.id, after: "buy-off", at: at(5) }]);
+    expect(state.ignored).toEqual([{ id: sneaked.id, reason: "arrived after the buy-off: this inspection point is bought off" }]);
+  });
+
+  it("keeps a handed-in run as handed in when a back-dated change arrives after the hand-in", () => {
+    const handedIn = live([ev("value.recorded", 1, { stepId: "s1", payload: { value: "60 in-lb" } }), ev("step.checked", 2, { stepId: "s1" }), ev("run.submitted", 3)]);
+    const sneaked = got(ev("value.recorded", 2, { stepId: "s1", payload: { value: "40 in-lb" } }), 9);
+    const state = foldRun([...handedIn, sneaked], steps, instructors);
+    expect(state.status).toBe("submitted");
+    expect(state.steps.s1!.value!.text).toBe("60 in-lb");
+    expect(state.ignored.map((i) => i.reason)).toEqual(["arrived after the hand-in: handed in: wait for the instructor"]);
+  });
+
+  it("changes nothing after a sign-off, whatever the stamp", () => {
+    const signed = live([...story.slice(0, 7), ev("run.submitted", 17), ev("inspection.bought_off", 18, { stepId: "s2", userId: instructor }), ev("run.signed_off", 25, { userId: instructor })]);
+    const sneaked = got(ev("step.unchecked", 4, { stepId: "s1" }), 40);
+    const state = foldRun([...signed, sneaked], steps, instructors);
+    expect(state.status).toBe("signed_off");
+    expect(state.steps.s1!.checked).toBe(true);
+    expect(state.ignored.at(-1)!.reason).toBe("arrived after the sign-off: after sign-off");
+  });
+
+  it("places a review after everything received before it, even a cart stamp from the future", () => {
+    const fast = got(ev("step.checked", 50, { stepId: "s3" }), 10); // the cart's clock runs 40 minutes fast
+    const returned = got(ev("run.returned", 11, { userId: instructor, payload: { comment: "Redo" } }), 11);
+    const order = orderEvents([returned, got(ev("run.submitted", 51), 10), fast]).map((o) => o.event.type);
+    expect(order).toEqual(["step.checked", "run.submitted", "run.returned"]);
+  });
+
+  it("folds an honest offline session sent late exactly as if it had been sent live", () => {
+    const work = story.filter((e) => e.type !== "inspection.bought_off" && e.type !== "run.submitted");
+    const asLive = foldRun(live(work), steps, instructors);
+    const allAtOnce = foldRun(work.map((e) => got(e, 59)), steps, instructors); // one batch an hour later
+    const inTwoLateBatches = foldRun(work.map((e, i) => got(e, i < 3 ? 40 : 45)), steps, instructors);
+    for (const s of [allAtOnce, inTwoLateBatches]) {
+      expect(s.steps).toEqual(asLive.steps);
+      expect(s.status).toBe(asLive.status);
+      expect(s.ignored).toEqual([]);
+    }
+    // Work offline while the instructor bought off another step: it still counts.
+    const boughtOff = live([ev("step.checked", 1, { stepId: "s2" }), ev("inspection.bought_off", 2, { stepId: "s2", userId: instructor })]);
+    const offline = got(ev("value.recorded", 1, { stepId: "s1", payload: { value: "61 in-lb" } }), 9);
+    const state = foldRun([...boughtOff, offline], steps, instructors);
+    expect(state.steps.s1!.value!.text).toBe("61 in-lb");
+    expect(state.ignored).toEqual([]);
+    expect(state.late).toEqual([{ id: offline.id, after: "buy-off", at: at(2) }]);
+  });
+
+  it("gives the same state for any listing order of the same received events (property)", () => {
+    let x = 7;
+    const rand = (k: number) => ((x = (x * 1103515245 + 12345) % 2 ** 31), x % k);
+    const types = ["step.checked", "step.unchecked", "value.recorded", "note.added", "run.submitted", "inspection.bought_off", "run.returned", "run.signed_off"] as const;
+    for (let trial = 0; trial < 200; trial++) {
+      const list: RunEvent[] = [];
+      for (let i = 0, count = 3 + rand(12); i < count; i++) {
+        const type = types[rand(types.length)]!;
+        const reviewer = type === "inspection.bought_off" || type === "run.returned" || type === "run.signed_off";
+        list.push(
+          got(
+            ev(type, rand(50), { userId: reviewer ? instructor : student, stepId: type.startsWith("run.") ? null : ["s1", "s2", "s3"][rand(3)]!, payload: { value: `${50 + rand(30)} in-lb`, text: "n" } }),
+            rand(8) * 7, // a handful of batches
+          ),
+        );
+      }
+      const expected = foldRun(list, steps, instructors);
+      for (let seed = 1; seed <= 5; seed++) expect(foldRun(shuffled(list, seed + trial), steps, instructors)).toEqual(expected);
+      expect(foldRun([...list, ...list.slice(0, 2)], steps, instructors)).toEqual(expected);
+    }
+  });
+});

@@ -1,7 +1,7 @@
 // The small pure parts of runs: hours from events, "overdue", CSV cells, and photo sniffing.
 import { describe, expect, it } from "vitest";
 import { csvCell, toCsv } from "@/lib/runs/csv";
-import { activeMinutes } from "@/lib/runs/hours";
+import { activeMinutes, offlineHours, workingMinutes } from "@/lib/runs/hours";
 import { workStatusOf } from "@/lib/runs/work-status";
 import { sniffImage } from "@/lib/validation/runs";
 
@@ -55,5 +55,32 @@ describe("photo sniffing", () => {
     expect(sniffImage(new TextEncoder().encode("<svg onload=alert(1)>"))).toBeNull();
     expect(sniffImage(new TextEncoder().encode("%PDF-1.7"))).toBeNull();
     expect(sniffImage(new Uint8Array(0))).toBeNull();
+  });
+});
+
+describe("working time bounded by what the server saw", () => {
+  const t = (m: number) => new Date(Date.UTC(2026, 11, 1, 8, 0) + m * 60_000).toISOString();
+  it("counts honest live and late-sent work at the cart's stamps", () => {
+    const live = [0, 5, 12].map((m) => ({ clientTime: t(m), serverTime: t(m) }));
+    expect(workingMinutes(live, { assignedAt: t(-60) })).toBe(12);
+    const sentAtTheEnd = [0, 5, 12].map((m) => ({ clientTime: t(m), serverTime: t(240) })); // four hours offline
+    expect(workingMinutes(sentAtTheEnd, { assignedAt: t(-60) })).toBe(12);
+  });
+
+  it("does not let a batch of back-dated stamps inflate the hours", () => {
+    // 500 events stamped 20 minutes apart over a week before, all sent in one batch after 10 minutes of work.
+    const honest = [0, 5, 10].map((m) => ({ clientTime: t(m), serverTime: t(m) }));
+    const backDated = Array.from({ length: 500 }, (_, i) => ({ clientTime: t(-i * 20), serverTime: t(10) }));
+    const bySumOfStamps = activeMinutes([...honest, ...backDated].map((e) => e.clientTime));
+    expect(bySumOfStamps).toBeGreaterThan(9000);
+    // Assigned an hour before: nothing counts before that.
+    expect(workingMinutes([...honest, ...backDated], { assignedAt: t(-60) })).toBe(70);
+    // Assigned long ago: at most one offline session (offlineHours) before the first receipt.
+    expect(workingMinutes([...honest, ...backDated], { assignedAt: t(-100_000) })).toBeLessThanOrEqual(offlineHours * 60 + 10);
+  });
+
+  it("does not count a stamp after its receipt (a fast clock)", () => {
+    const fast = [{ clientTime: t(0), serverTime: t(0) }, { clientTime: t(600), serverTime: t(6) }];
+    expect(workingMinutes(fast, { assignedAt: t(-1) })).toBe(6);
   });
 });

@@ -34,6 +34,8 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
   const detail = await getRunDetail({ actor: user, runId }).catch(notFoundOnMissing);
   const { version, state, run } = detail;
   const stepNumber = new Map(version.steps.map((s, i) => [s.id, i + 1]));
+  const lateById = new Map(state.late.map((l) => [l.id, l]));
+  const ignoredById = new Map(state.ignored.map((i) => [i.id, i.reason]));
   const revisions = [...new Map(version.steps.flatMap((s) => s.references).map((r) => [r.revisionId, r])).values()];
   return (
     <div className="flex flex-col gap-5">
@@ -127,17 +129,33 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
       <section aria-label="Everything that happened" className="panel">
         <h2>Everything that happened</h2>
         <ol className="flex flex-col gap-1">
-          {detail.events.map((e) => (
-            <li key={e.id} className="text-sm">
-              <span className="font-mono">{e.clientTime.slice(0, 16).replace("T", " ")}</span> · {e.userName} {eventLabel[e.type] ?? e.type}
-              {e.stepId ? ` step ${stepNumber.get(e.stepId) ?? "?"}` : ""}
-              {typeof e.payload?.value === "string" ? `: ${e.payload.value}` : ""}
-              {typeof e.payload?.comment === "string" && e.payload.comment ? `: “${e.payload.comment}”` : ""}
-            </li>
-          ))}
+          {detail.events.map((e) => {
+            const late = lateById.get(e.id);
+            const setAside = ignoredById.get(e.id);
+            return (
+              <li key={e.id} className="text-sm">
+                <span className="font-mono">{e.clientTime.slice(0, 16).replace("T", " ")}</span> · {e.userName} {eventLabel[e.type] ?? e.type}
+                {e.stepId ? ` step ${stepNumber.get(e.stepId) ?? "?"}` : ""}
+                {typeof e.payload?.value === "string" ? `: ${e.payload.value}` : ""}
+                {typeof e.payload?.comment === "string" && e.payload.comment ? `: “${e.payload.comment}”` : ""}
+                {late ? (
+                  <strong className="ml-2 rounded border border-line px-1">
+                    arrived after the {late.after} of {late.at.slice(0, 16).replace("T", " ")}
+                    {e.serverTime ? ` (received ${e.serverTime.slice(0, 16).replace("T", " ")})` : ""}
+                  </strong>
+                ) : null}
+                {setAside ? <span className="ml-2 hint">not counted: {setAside}</span> : null}
+              </li>
+            );
+          })}
           {detail.events.length === 0 ? <li>Nothing yet.</li> : null}
         </ol>
-        {state.ignored.length ? <p className="hint mt-2">{state.ignored.length} event(s) set aside (for example after sign-off).</p> : null}
+        {state.ignored.length ? (
+          <p className="hint mt-2">
+            {state.ignored.length} event(s) set aside and not part of the record: each says why above. Times are the cart&apos;s clock (UTC);
+            an event the server received after a buy-off, hand-in or sign-off never changes what was reviewed.
+          </p>
+        ) : null}
       </section>
     </div>
   );
