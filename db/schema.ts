@@ -70,6 +70,21 @@ export const accountTokens = pgTable(
   (t) => [uniqueIndex("account_tokens_hash_key").on(t.tokenHash), index("account_tokens_user_idx").on(t.userId)],
 );
 
+/**
+ * One signed-in session. The cookie names it; signing out deletes it, so a copy of the cookie
+ * replayed afterwards is refused even before the cookie's own expiry.
+ */
+export const userSessions = pgTable(
+  "user_sessions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    ...timestamps,
+  },
+  (t) => [index("user_sessions_user_idx").on(t.userId)],
+);
+
 export const signInThrottles = pgTable("sign_in_throttles", {
   // "account:<email>" or "address:<ip>"
   key: text("key").primaryKey(),
@@ -227,6 +242,17 @@ export const taskCards = pgTable("task_cards", {
   archivedAt: timestamp("archived_at", { withTimezone: true }),
   ...timestamps,
 });
+
+/** Instructors the owner lets edit, publish and archive the card beside them. */
+export const cardCoauthors = pgTable(
+  "card_coauthors",
+  {
+    cardId: uuid("card_id").notNull().references(() => taskCards.id, { onDelete: "cascade" }),
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    ...timestamps,
+  },
+  (t) => [primaryKey({ columns: [t.cardId, t.userId] }), index("card_coauthors_user_idx").on(t.userId)],
+);
 
 /**
  * One version of a card. A draft changes freely; a published version is frozen: a trigger in

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, gt, isNull, sql } from "drizzle-orm";
+import { and, asc, eq, gt, inArray, isNull, sql } from "drizzle-orm";
 import { getDb } from "@/db";
 import { accountTokens, classes, classMembers, users } from "@/db/schema";
 import { recordAudit, type Tx } from "./audit";
@@ -36,6 +36,15 @@ export async function listUsers() {
   return rows;
 }
 export type AccountRow = Awaited<ReturnType<typeof listUsers>>[number];
+
+/** Active instructors and admins by name: whom a card's owner may name as co-authors. */
+export async function listColleagues(): Promise<{ id: string; name: string }[]> {
+  return getDb()
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(and(inArray(users.role, ["instructor", "admin"]), eq(users.status, "active")))
+    .orderBy(asc(users.name));
+}
 
 export async function getUserById({ id }: { id: string }) {
   const [row] = await getDb().select(publicColumns).from(users).where(eq(users.id, id)).limit(1);

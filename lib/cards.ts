@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type Db } from "@/db";
-import { cardCitations, citationRechecks, curriculumSubjects, manuals, revisions, taskCards, taskCardVersions, users } from "@/db/schema";
+import { cardCitations, cardCoauthors, citationRechecks, curriculumSubjects, manuals, revisions, taskCards, taskCardVersions, users } from "@/db/schema";
 import { recordAudit } from "./audit";
 import { can, type Actor } from "./auth/permissions";
 import type { CardDto, CardListStatus, CardSummaryDto, CardVersionDto, ReferenceDto, StepDto, SubjectDto } from "./dto-cards";
@@ -273,6 +273,8 @@ export async function getCard({ actor, id }: { actor: Actor; id: string }): Prom
     id: card.id,
     ownerId: card.ownerId,
     ownerName: card.ownerName,
+    coauthors: author ? await coauthorsOf(db, id) : [],
+    canEdit: await editsCard(db, actor, card),
     archivedAt: card.archivedAt?.toISOString() ?? null,
     openRechecks: author ? (open?.n ?? 0) : 0,
     versions: versions.map((v) => ({ number: v.number, status: v.status, publishedAt: v.publishedAt?.toISOString() ?? null, updatedAt: v.updatedAt.toISOString() })),
@@ -374,10 +376,57 @@ export async function createCard({ actor, content, ownerId }: { actor: Actor; co
   return getCard({ actor, id });
 }
 
-async function lockCard(tx: Tx, cardId: string) {
-  const [card] = await tx.select({ id: taskCards.id, archivedAt: taskCards.archivedAt }).from(taskCards).where(eq(taskCards.id, cardId)).for("update");
+/**
+ * Locks the card for a change by the actor: its owner, a co-author the owner named, or an admin.
+ * Other authors may read and duplicate it (403 here, since they can see the card).
+ */
+async function lockCard(tx: Tx, cardId: string, actor: Actor) {
+  const [card] = await tx.select({ id: taskCards.id, ownerId: taskCards.ownerId, archivedAt: taskCards.archivedAt }).from(taskCards).where(eq(taskCards.id, cardId)).for("update");
   if (!card) throw notFound();
+  if (!(await editsCard(tx, actor, card))) {
+    throw new AppError("forbidden", "Only the card's owner, its co-authors or an admin can change this card. Duplicate it to make your own.");
+  }
   return card;
+}
+
+async function editsCard(db: Db | Tx, actor: Actor, card: { id: string; ownerId: string | null }): Promise<boolean> {
+  if (!isAuthor(actor)) return false;
+  if (can(actor, "cards:edit-any") || card.ownerId === actor.id) return true;
+  const [row] = await db
+    .select({ userId: cardCoauthors.userId })
+    .from(cardCoauthors)
+    .where(and(eq(cardCoauthors.cardId, card.id), eq(cardCoauthors.userId, actor.id)));
+  return !!row;
+}
+
+async function coauthorsOf(db: Db | Tx, cardId: string): Promise<{ id: string; name: string }[]> {
+  return db
+    .select({ id: users.id, name: users.name })
+    .from(cardCoauthors)
+    .innerJoin(users, eq(users.id, cardCoauthors.userId))
+    .where(eq(cardCoauthors.cardId, cardId))
+    .orderBy(asc(users.name));
+}
+
+/** The owner (or an admin) names who may edit the card beside them: active instructors or admins. */
+export async function setCoauthors({ actor, cardId, userIds }: { actor: Actor; cardId: string; userIds: string[] }) {
+  const wanted = [...new Set(userIds)];
+  await getDb().transaction(async (tx) => {
+    const [card] = await tx.select({ id: taskCards.id, ownerId: taskCards.ownerId }).from(taskCards).where(eq(taskCards.id, cardId)).for("update");
+    if (!card) throw notFound();
+    if (card.ownerId !== actor.id && !can(actor, "cards:edit-any")) throw new AppError("forbidden", "Only the card's owner or an admin names its co-authors.");
+    const people = wanted.length
+      ? await tx.select({ id: users.id, role: users.role, status: users.status }).from(users).where(inArray(users.id, wanted))
+      : [];
+    const fit = people.filter((p) => p.status === "active" && (p.role === "instructor" || p.role === "admin") && p.id !== card.ownerId);
+    if (fit.length !== wanted.filter((id) => id !== card.ownerId).length) {
+      throw new AppError("invalid", "Co-authors are active instructors or admins.", { fields: { userIds: "Choose active instructors." } });
+    }
+    await tx.delete(cardCoauthors).where(eq(cardCoauthors.cardId, cardId));
+    if (fit.length) await tx.insert(cardCoauthors).values(fit.map((p) => ({ cardId, userId: p.id })));
+    await recordAudit(tx, { actorId: actor.id, action: "card.coauthors_set", subjectType: "task_card", subjectId: cardId, details: { coauthors: fit.map((p) => p.id) } });
+  });
+  return coauthorsOf(getDb(), cardId);
 }
 
 /** The card's open draft, made from its newest version when there is none. */
@@ -405,7 +454,7 @@ async function openDraft(tx: Tx, actor: Actor, cardId: string) {
 export async function saveDraft({ actor, cardId, content, editCount }: { actor: Actor; cardId: string; content: CardContent; editCount?: number }): Promise<CardVersionDto> {
   try {
     const versionId = await getDb().transaction(async (tx) => {
-      const card = await lockCard(tx, cardId);
+      const card = await lockCard(tx, cardId, actor);
       if (card.archivedAt) throw new AppError("conflict", "That card is archived. Bring it back from the archive to edit it.");
       const { draft, opened } = await openDraft(tx, actor, cardId);
       // A draft opened by this save has no other editor yet; the count the editor holds is the
@@ -450,7 +499,7 @@ export async function applyToDraft({
 }): Promise<CardVersionDto> {
   try {
     const versionId = await getDb().transaction(async (tx) => {
-      const card = await lockCard(tx, cardId);
+      const card = await lockCard(tx, cardId, actor);
       if (card.archivedAt) throw new AppError("conflict", "That card is archived. Bring it back from the archive first.");
       const { draft } = await openDraft(tx, actor, cardId);
       const content = versionToContent(draft);
@@ -471,7 +520,7 @@ export async function applyToDraft({
 export async function citePage({ actor, cardId, stepId, revisionId, page, quote }: { actor: Actor; cardId: string; stepId: string; revisionId: string; page: number; quote: string }) {
   try {
     return await getDb().transaction(async (tx) => {
-      const card = await lockCard(tx, cardId);
+      const card = await lockCard(tx, cardId, actor);
       if (card.archivedAt) throw new AppError("conflict", "That card is archived.");
       const { draft } = await openDraft(tx, actor, cardId);
       const content = versionToContent(draft);
@@ -493,7 +542,7 @@ export async function citePage({ actor, cardId, stepId, revisionId, page, quote 
 export async function publishDraft({ actor, cardId }: { actor: Actor; cardId: string }): Promise<CardVersionDto> {
   try {
     const versionId = await getDb().transaction(async (tx) => {
-      const card = await lockCard(tx, cardId);
+      const card = await lockCard(tx, cardId, actor);
       if (card.archivedAt) throw new AppError("conflict", "That card is archived. Bring it back from the archive to publish it.");
       const [draft] = await tx.select().from(taskCardVersions).where(and(eq(taskCardVersions.cardId, cardId), eq(taskCardVersions.status, "draft")));
       if (!draft) throw new AppError("conflict", "There is no draft to publish: the newest version is already published.");
@@ -515,7 +564,7 @@ export async function publishDraft({ actor, cardId }: { actor: Actor; cardId: st
 /** Throws away the open draft; the published versions stay. A card with nothing published keeps its draft. */
 export async function discardDraft({ actor, cardId }: { actor: Actor; cardId: string }) {
   await getDb().transaction(async (tx) => {
-    await lockCard(tx, cardId);
+    await lockCard(tx, cardId, actor);
     const versions = await tx.select({ id: taskCardVersions.id, status: taskCardVersions.status }).from(taskCardVersions).where(eq(taskCardVersions.cardId, cardId));
     const draft = versions.find((v) => v.status === "draft");
     if (!draft) throw new AppError("conflict", "There is no draft to discard.");
@@ -546,7 +595,7 @@ export async function duplicateCard({ actor, cardId }: { actor: Actor; cardId: s
 
 export async function setArchived({ actor, cardId, archived }: { actor: Actor; cardId: string; archived: boolean }) {
   await getDb().transaction(async (tx) => {
-    await lockCard(tx, cardId);
+    await lockCard(tx, cardId, actor);
     await tx.update(taskCards).set({ archivedAt: archived ? new Date() : null }).where(eq(taskCards.id, cardId));
     await recordAudit(tx, { actorId: actor.id, action: archived ? "card.archived" : "card.restored", subjectType: "task_card", subjectId: cardId });
   });

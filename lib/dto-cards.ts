@@ -51,6 +51,10 @@ export interface CardDto {
   id: string;
   ownerId: string | null;
   ownerName: string | null;
+  /** Who else may edit, publish and archive it (authors see this; students get []). */
+  coauthors: { id: string; name: string }[];
+  /** Whether the one asking may change it: owner, co-author or admin. */
+  canEdit: boolean;
   archivedAt: string | null;
   /** Citations a new revision touched that wait for the author's recheck. */
   openRechecks: number;

@@ -18,7 +18,7 @@ export default async function HomePage() {
   const shortcuts = navigationFor(user).filter((n) => n.href !== "/");
   // What is waiting, at a glance: a student's open work, an instructor's queue.
   const work = can(user, "runs:do") ? await listMyWork({ actor: user }) : null;
-  const waiting = can(user, "runs:review") ? (await listReviewQueue()).length : null;
+  const waiting = can(user, "runs:review") ? (await listReviewQueue({ actor: user })).length : null;
   const open = work?.filter((w) => w.status !== "signed_off" && w.status !== "submitted") ?? [];
   return (
     <div className="flex flex-col gap-6">

@@ -19,6 +19,7 @@ const rules = {
   "classes:manage": ["admin"],
   /** See classes and their members (instructors see the classes they belong to). */
   "classes:view": ["instructor", "admin"],
+  /** Every class, not only those one is staff of: classes, their runs, reviews, records and assignments. */
   "classes:view-all": ["admin"],
   "audit:view": ["admin"],
   /** Read the library: manuals, revisions that are ready, their pages and files. */
@@ -27,17 +28,19 @@ const rules = {
   "library:manage": ["librarian", "admin"],
   /** Read task cards: students see published versions, authors drafts as well. */
   "cards:view": ["student", "instructor", "librarian", "admin"],
-  /** Write, publish, duplicate and archive task cards. */
+  /** Write task cards, duplicate any; edit, publish and archive one's own and those one co-authors. */
   "cards:author": ["instructor", "admin"],
+  /** Edit, publish and archive anyone's card, and name its co-authors. */
+  "cards:edit-any": ["admin"],
   /** Keep the list of curriculum subjects cards are filed under. */
   "subjects:manage": ["admin"],
   /** Give published card versions to a class or to students. */
   "assignments:manage": ["instructor", "admin"],
   /** Run assigned cards at the aircraft (a run belongs to one student). */
   "runs:do": ["student"],
-  /** See every run, buy off inspection points, return and sign off runs. */
+  /** Review runs (of one's own classes, or assigned oneself; lib/runs/scope.ts): buy off, return, sign off. */
   "runs:review": ["instructor", "admin"],
-  /** Records: students see their own, reviewers everyone's. */
+  /** Records: students see their own; instructors those of the students they review; admins all. */
   "records:view": ["student", "instructor", "admin"],
   "records:view-all": ["instructor", "admin"],
   /** The link to the local outbox (the page itself is open while the fake SMTP server runs). */

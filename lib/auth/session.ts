@@ -1,10 +1,10 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { and, eq, gt, lt } from "drizzle-orm";
 import { getIronSession, unsealData, type SessionOptions } from "iron-session";
 import { cookies } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
 import { getDb } from "@/db";
-import { users } from "@/db/schema";
+import { userSessions, users } from "@/db/schema";
 import { getEnv } from "../env";
 import { assertCan, assertSignedIn, can, type Permission, type Role } from "./permissions";
 import { createSealCache } from "./seal-cache";
@@ -12,6 +12,8 @@ import { createSealCache } from "./seal-cache";
 export interface SessionData {
   userId?: string;
   version?: number;
+  /** The `user_sessions` row: deleted at sign-out, so the cookie stops working everywhere at once. */
+  sid?: string;
 }
 
 export interface SessionUser {
@@ -28,7 +30,7 @@ function sessionOptions(): SessionOptions {
   return {
     password: env.HL_SESSION_SECRET,
     cookieName: sessionCookieName,
-    ttl: 12 * 3600, // one long shop day
+    ttl: sessionSeconds,
     cookieOptions: {
       httpOnly: true,
       sameSite: "lax",
@@ -41,6 +43,8 @@ function sessionOptions(): SessionOptions {
 async function getSession() {
   return getIronSession<SessionData>(await cookies(), sessionOptions());
 }
+
+const sessionSeconds = 12 * 3600; // one long shop day
 
 const sealed = createSealCache<SessionData>(
   (seal) => {
@@ -57,12 +61,13 @@ async function readSession(): Promise<SessionData> {
 }
 
 /**
- * The signed-in user, read fresh from the database on every request: a deactivated account or a
- * changed password ends its sessions at once, which a cookie alone could not do.
+ * The signed-in user, read fresh from the database on every request with the session's own row: a
+ * deactivated account, a changed password or a sign-out ends the session at once, which a cookie
+ * alone could not do.
  */
 export async function getCurrentUser(): Promise<SessionUser | null> {
   const session = await readSession();
-  if (!session.userId) return null;
+  if (!session.userId || !session.sid) return null;
   const [row] = await getDb()
     .select({
       id: users.id,
@@ -72,21 +77,32 @@ export async function getCurrentUser(): Promise<SessionUser | null> {
       status: users.status,
       sessionVersion: users.sessionVersion,
     })
-    .from(users)
-    .where(eq(users.id, session.userId))
+    .from(userSessions)
+    .innerJoin(users, eq(users.id, userSessions.userId))
+    .where(and(eq(userSessions.id, session.sid), eq(userSessions.userId, session.userId), gt(userSessions.expiresAt, new Date())))
     .limit(1);
   if (!row || row.status !== "active" || row.sessionVersion !== session.version) return null;
   return { id: row.id, email: row.email, name: row.name, role: row.role };
 }
 
 export async function startSession(user: { id: string; sessionVersion: number }): Promise<void> {
+  const db = getDb();
+  await db.delete(userSessions).where(and(eq(userSessions.userId, user.id), lt(userSessions.expiresAt, new Date())));
+  const [row] = await db
+    .insert(userSessions)
+    .values({ userId: user.id, expiresAt: new Date(Date.now() + sessionSeconds * 1000) })
+    .returning({ id: userSessions.id });
   const session = await getSession();
   session.userId = user.id;
   session.version = user.sessionVersion;
+  session.sid = row!.id;
   await session.save();
 }
 
+/** Ends this session on the server (its row goes) and clears the cookie. */
 export async function endSession(): Promise<void> {
+  const data = await readSession();
+  if (data.sid) await getDb().delete(userSessions).where(eq(userSessions.id, data.sid));
   const session = await getSession();
   session.destroy();
 }

@@ -9,13 +9,14 @@ import { AppError } from "@/lib/errors";
 import { CardWriter, grey } from "@/lib/pdf/card-pdf";
 import { toCsv } from "./csv";
 import { listRunsOfStudent } from "./runs";
+import { readsRecordOf } from "./scope";
 
 const noSubject = "No subject";
 
-/** A student's record: students see their own; instructors and admins anyone's. */
+/** A student's record: students see their own; instructors those of the students they teach; admins anyone's. */
 export async function studentRecord({ actor, studentId }: { actor: Actor; studentId: string }): Promise<StudentRecordDto> {
-  if (studentId !== actor.id && !can(actor, "records:view-all")) throw new AppError("not_found", "That record was not found.");
   const db = getDb();
+  if (!(await readsRecordOf(db, actor, studentId))) throw new AppError("not_found", "That record was not found.");
   const [student] = await db.select({ id: users.id, name: users.name, email: users.email, role: users.role }).from(users).where(eq(users.id, studentId));
   if (!student || student.role !== "student") throw new AppError("not_found", "That record was not found.");
   const signed = await db

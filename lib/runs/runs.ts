@@ -13,6 +13,7 @@ import type { RunEventInput } from "@/lib/validation/runs";
 import { foldRun, orderEvents, type CardStepForRun, type RunEvent, type RunState, type RunStatus } from "./fold";
 import { workingMinutes } from "./hours";
 import { packetFor } from "./packet";
+import { assignableStudents, reviewScope, reviewsRun } from "./scope";
 import { workStatusOf } from "./work-status";
 
 const runNotFound = () => new AppError("not_found", "That run was not found.");
@@ -63,8 +64,10 @@ export async function createAssignment({ actor, input }: { actor: Actor; input: 
         .select({ id: users.id })
         .from(users)
         .where(and(inArray(users.id, input.studentIds), eq(users.role, "student"), ne(users.status, "deactivated")));
-      if (named.length !== new Set(input.studentIds).size) {
-        throw new AppError("invalid", "Some of the people chosen are not active students.", { fields: { studentIds: "Only active students can be assigned." } });
+      const mine = await assignableStudents(tx, actor, named.map((n) => n.id));
+      // Someone else's student is answered like a stranger: an instructor learns nothing of other classes.
+      if (named.length !== new Set(input.studentIds).size || mine.size !== named.length) {
+        throw new AppError("invalid", "Some of the people chosen are not active students of your classes.", { fields: { studentIds: "Only active students of your classes can be assigned." } });
       }
       named.forEach((m) => studentIds.add(m.id));
     }
@@ -90,7 +93,11 @@ export async function createAssignment({ actor, input }: { actor: Actor; input: 
   });
 }
 
-export async function listAssignments({ cardId }: { cardId?: string } = {}): Promise<AssignmentDto[]> {
+/** Assignments the actor made or that reach a class they are staff of (all, for an admin). */
+export async function listAssignments({ actor, cardId }: { actor: Actor; cardId?: string }): Promise<AssignmentDto[]> {
+  const mine = can(actor, "classes:view-all")
+    ? undefined
+    : sql`(${assignments.assignedBy} = ${actor.id} or ${assignments.classId} in (select class_id from class_members where user_id = ${actor.id}))`;
   const rows = await getDb()
     .select({
       id: assignments.id,
@@ -108,7 +115,7 @@ export async function listAssignments({ cardId }: { cardId?: string } = {}): Pro
     .innerJoin(taskCardVersions, eq(taskCardVersions.id, assignments.versionId))
     .leftJoin(classes, eq(classes.id, assignments.classId))
     .leftJoin(users, eq(users.id, assignments.assignedBy))
-    .where(cardId ? eq(assignments.cardId, cardId) : undefined)
+    .where(and(cardId ? eq(assignments.cardId, cardId) : undefined, mine))
     .orderBy(desc(assignments.createdAt))
     .limit(200);
   const zero: Record<RunStatus, number> = { not_started: 0, in_progress: 0, submitted: 0, returned: 0, signed_off: 0 };
@@ -165,8 +172,8 @@ export async function listMyWork({ actor }: { actor: Actor }): Promise<WorkItemD
 }
 
 /** Runs waiting for an instructor: submitted ones, oldest first, and inspection points waiting on a cart. */
-export async function listReviewQueue({ status = "submitted" }: { status?: RunStatus } = {}): Promise<WorkItemDto[]> {
-  const rows = await workItemQuery(getDb()).where(eq(runs.status, status)).orderBy(asc(runs.submittedAt), asc(runs.lastEventAt)).limit(500);
+export async function listReviewQueue({ actor, status = "submitted" }: { actor: Actor; status?: RunStatus }): Promise<WorkItemDto[]> {
+  const rows = await workItemQuery(getDb()).where(and(eq(runs.status, status), reviewScope(actor))).orderBy(asc(runs.submittedAt), asc(runs.lastEventAt)).limit(500);
   return rows.map(toWorkItem);
 }
 
@@ -175,11 +182,14 @@ export async function listRunsOfStudent(db: Db | Tx, studentId: string): Promise
   return rows.map(toWorkItem);
 }
 
-/** The run, if the actor may see it: its student, or a reviewer. Anyone else gets a 404, not a 403. */
+/**
+ * The run, if the actor may see it: its student, or an instructor who reviews it (lib/runs/scope.ts).
+ * Anyone else gets a 404, not a 403.
+ */
 async function loadRun(db: Db | Tx, actor: Actor, runId: string, { lock = false } = {}) {
   const query = db.select().from(runs).where(eq(runs.id, runId));
   const [run] = lock ? await query.for("update") : await query;
-  if (!run || (run.studentId !== actor.id && !can(actor, "runs:review"))) throw runNotFound();
+  if (!run || (run.studentId !== actor.id && !(await reviewsRun(db, actor, run)))) throw runNotFound();
   return run;
 }
 

@@ -137,3 +137,7 @@ export const recheckDecisionsSchema = z.object({
     .min(1, "Decide at least one citation.")
     .max(200),
 });
+
+export const coauthorsSchema = z.object({
+  userIds: z.array(z.uuid("Each co-author is named by their account id."), { error: "Send { userIds: [...] }." }).max(20, "At most 20 co-authors."),
+});

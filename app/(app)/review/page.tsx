@@ -14,10 +14,10 @@ const tabs: { status: RunStatus; label: string }[] = [
 ];
 
 export default async function ReviewPage({ searchParams }: { searchParams: Promise<{ status?: string }> }) {
-  await requirePageUser("runs:review", "/review");
+  const user = await requirePageUser("runs:review", "/review");
   const wanted = (await searchParams).status;
   const status = tabs.find((t) => t.status === wanted)?.status ?? "submitted";
-  const runs = await listReviewQueue({ status });
+  const runs = await listReviewQueue({ actor: user, status });
   return (
     <div className="flex flex-col gap-5">
       <div className="flex flex-wrap items-center gap-3">

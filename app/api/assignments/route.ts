@@ -4,9 +4,9 @@ import { createAssignment, listAssignments } from "@/lib/runs/runs";
 import { createAssignmentSchema } from "@/lib/validation/runs";
 
 export const GET = route(async (request) => {
-  await requireApiUser("assignments:manage");
+  const actor = await requireApiUser("assignments:manage");
   const card = new URL(request.url).searchParams.get("card") ?? "";
-  return Response.json({ assignments: await listAssignments({ cardId: isUuid(card) ? card : undefined }) });
+  return Response.json({ assignments: await listAssignments({ actor, cardId: isUuid(card) ? card : undefined }) });
 });
 
 export const POST = route(async (request) => {

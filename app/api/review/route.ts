@@ -6,7 +6,7 @@ import { listReviewQueue } from "@/lib/runs/runs";
 const statusSchema = z.enum(["in_progress", "submitted", "returned", "signed_off"]).catch("submitted");
 
 export const GET = route(async (request) => {
-  await requireApiUser("runs:review");
+  const actor = await requireApiUser("runs:review");
   const status = statusSchema.parse(new URL(request.url).searchParams.get("status") ?? undefined);
-  return Response.json({ runs: await listReviewQueue({ status }) });
+  return Response.json({ runs: await listReviewQueue({ actor, status }) });
 });

@@ -4,8 +4,10 @@ import { notFound } from "next/navigation";
 import { CardView } from "@/components/card-view";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
+import { listColleagues } from "@/lib/accounts";
 import { getCard, getCardVersion } from "@/lib/cards";
 import { CardActions } from "../_components/card-actions";
+import { CoauthorsForm } from "../_components/coauthors-form";
 import { isUuid } from "@/lib/http";
 import { notFoundOnMissing } from "@/lib/pages";
 
@@ -57,6 +59,7 @@ export default async function CardPage({ params, searchParams }: { params: Promi
       {author ? (
         <section className="panel flex flex-col gap-3" aria-label="Card versions and actions">
           <CardActions card={card} />
+          {card.ownerId === user.id || can(user, "cards:edit-any") ? <CoauthorsForm card={card} colleagues={await listColleagues()} /> : null}
           <div>
             <h2 className="text-base font-bold">Versions</h2>
             <ul className="flex flex-wrap gap-2">
@@ -72,7 +75,7 @@ export default async function CardPage({ params, searchParams }: { params: Promi
                 </li>
               ))}
             </ul>
-            <p className="hint mt-1">Owner: {card.ownerName ?? "nobody"}{shown.publishedByName ? ` · published by ${shown.publishedByName}` : ""}</p>
+            <p className="hint mt-1">Owner: {card.ownerName ?? "nobody"}{card.coauthors.length ? ` · co-authors: ${card.coauthors.map((c) => c.name).join(", ")}` : ""}{shown.publishedByName ? ` · published by ${shown.publishedByName}` : ""}</p>
           </div>
         </section>
       ) : null}

@@ -23,6 +23,23 @@ export function CardActions({ card }: { card: CardDto }) {
       .catch((error: unknown) => setMessage({ ok: false, text: error instanceof ApiError ? error.message : "That did not work." }));
 
   const archived = !!card.archivedAt;
+  if (!card.canEdit) {
+    return (
+      <div className="flex flex-col gap-3">
+        <p className="hint">
+          {card.ownerName ?? "Another author"} owns this card: only the owner, the co-authors they name or an admin can change it. Duplicate it to make a card of your own.
+        </p>
+        <div>
+          <button type="button" className="btn btn-secondary" disabled={action.isPending} onClick={() => void run("duplicate", "")}>
+            Duplicate
+          </button>
+        </div>
+        <p aria-live="polite" className={message ? (message.ok ? "notice-ok" : "notice-error") : ""}>
+          {message?.text ?? ""}
+        </p>
+      </div>
+    );
+  }
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap gap-2">

@@ -77,3 +77,11 @@ export function useSaveSubject() {
     onSuccess: () => client.invalidateQueries({ queryKey: ["subjects"] }),
   });
 }
+
+export function useSetCoauthors(cardId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async (userIds: string[]) => (await callApi<{ coauthors: { id: string; name: string }[] }>("PUT", `/api/cards/${cardId}/coauthors`, { userIds })).coauthors,
+    onSuccess: () => client.invalidateQueries({ queryKey: cardsKey }),
+  });
+}

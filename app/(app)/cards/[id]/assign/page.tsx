@@ -19,7 +19,7 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
   const classes = await listClasses({ actor: user });
   const members = await Promise.all(classes.map((c) => getClassById({ actor: user, id: c.id })));
   const students = [...new Map(members.flatMap((c) => c.members.filter((m) => m.role === "student" && m.status !== "deactivated").map((m) => [m.id, { id: m.id, name: m.name, className: c.name }]))).values()];
-  const assignments = await listAssignments({ cardId: id });
+  const assignments = await listAssignments({ actor: user, cardId: id });
   const published = card.versions.filter((v) => v.status === "published").map((v) => v.number);
   return (
     <div className="flex flex-col gap-5">

@@ -34,7 +34,12 @@ export default async function EditCardPage({ params }: { params: Promise<{ id: s
       </nav>
       <h1>{card.draft ? `Editing draft version ${card.draft.number}` : `Editing: the first change makes draft version ${base.number + 1}`}</h1>
       {card.archivedAt ? <p className="notice-error">This card is archived. Bring it back from the archive before editing.</p> : null}
-      <CardEditor key={`${base.number}-${base.editCount}`} card={card} subjects={subjects} manuals={options} userId={user.id} />
+      {card.canEdit ? null : (
+        <p className="notice-error">
+          {card.ownerName ?? "Another author"} owns this card: only the owner, their co-authors or an admin can change it. <Link href={`/cards/${id}`}>Back to the card</Link> to duplicate it.
+        </p>
+      )}
+      {card.canEdit ? <CardEditor key={`${base.number}-${base.editCount}`} card={card} subjects={subjects} manuals={options} userId={user.id} /> : null}
     </div>
   );
 }
