@@ -1,15 +1,16 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { sessionCookieName } from "@/lib/auth/cookie";
 
 // A convenience only: visitors without a session cookie are sent to sign-in before a page renders.
 // Whether a cookie is valid, and what its user may do, every page and handler checks itself.
 // The cart's shells (/cart, /cart/run) hold no data and must open offline and be precached by the
 // service worker before anyone signs in; they ask the API (or IndexedDB) who is signed in.
-const publicPaths = [/^\/sign-in$/, /^\/forgot-password$/, /^\/set-password\/[^/]+$/, /^\/outbox$/, /^\/cart$/, /^\/cart\/run$/];
+const publicPaths = [/^\/sign-in$/, /^\/forgot-password$/, /^\/set-password\/[^/]+$/, /^\/cart$/, /^\/cart\/run$/];
 
 export function proxy(request: NextRequest) {
   const { pathname, search } = request.nextUrl;
   if (publicPaths.some((p) => p.test(pathname))) return NextResponse.next();
-  if (request.cookies.has("hangarleaf_session")) return NextResponse.next();
+  if (request.cookies.has(sessionCookieName)) return NextResponse.next();
   const url = request.nextUrl.clone();
   url.pathname = "/sign-in";
   url.search = pathname === "/" ? "" : `?next=${encodeURIComponent(pathname + search)}`;

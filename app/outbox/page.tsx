@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { Brand } from "@/components/brand";
+import { requirePageUser } from "@/lib/auth/session";
 import { getEnv } from "@/lib/env";
 
 export const metadata: Metadata = { title: "Outbox" };
@@ -26,12 +27,13 @@ function TextWithLinks({ text }: { text: string }) {
 
 /**
  * The local fake SMTP server's messages, for trying invitations and password resets without a
- * mail service. Exists only while that fake runs (HL_OUTBOX_URL); open without sign-in so a person
- * who forgot a password can read the reset mail.
+ * mail service. Exists only while that fake runs (HL_OUTBOX_URL), and only for a signed-in admin:
+ * every reset link is here, so anyone else reading it could take over any account.
  */
 export default async function OutboxPage() {
   const url = getEnv().HL_OUTBOX_URL;
   if (!url) notFound();
+  await requirePageUser("outbox:view", "/outbox");
   let messages: OutboxMessage[] = [];
   let problem: string | null = null;
   try {

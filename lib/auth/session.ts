@@ -7,6 +7,7 @@ import { getDb } from "@/db";
 import { userSessions, users } from "@/db/schema";
 import { getEnv } from "../env";
 import { assertCan, assertSignedIn, can, type Permission, type Role } from "./permissions";
+import { sessionCookieName } from "./cookie";
 import { createSealCache } from "./seal-cache";
 
 export interface SessionData {
@@ -23,7 +24,7 @@ export interface SessionUser {
   role: Role;
 }
 
-export const sessionCookieName = "hangarleaf_session";
+export { sessionCookieName };
 
 function sessionOptions(): SessionOptions {
   const env = getEnv();

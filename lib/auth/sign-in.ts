@@ -4,7 +4,7 @@ import { getDb } from "@/db";
 import { signInThrottles, users } from "@/db/schema";
 import { AppError } from "../errors";
 import { getDummyHash, verifyPassword } from "./password";
-import { delayAfterFailures, failuresAfter, throttleKeys, throttlePolicy } from "./throttle";
+import { delayAfterFailures, failuresAfter, resetThrottleKeys, throttleKeys, throttlePolicy, type ThrottleRule } from "./throttle";
 
 const wrongCredentials = "That e-mail and password do not match an active account.";
 
@@ -17,7 +17,7 @@ async function secondsBlocked(keys: string[], now: Date): Promise<number> {
   return until > now.getTime() ? Math.ceil((until - now.getTime()) / 1000) : 0;
 }
 
-async function recordFailure(key: string, freeFailures: number, now: Date): Promise<void> {
+async function recordFailure(key: string, rule: ThrottleRule, now: Date): Promise<void> {
   const db = getDb();
   await db.transaction(async (tx) => {
     // Lock the row so two simultaneous failures both count.
@@ -27,7 +27,7 @@ async function recordFailure(key: string, freeFailures: number, now: Date): Prom
       .where(eq(signInThrottles.key, key))
       .for("update");
     const failures = failuresAfter(row?.failures ?? 0, row?.lastFailureAt ?? null, now);
-    const delay = delayAfterFailures(failures, freeFailures);
+    const delay = delayAfterFailures(failures, rule);
     const blockedUntil = delay > 0 ? new Date(now.getTime() + delay * 1000) : null;
     await tx
       .insert(signInThrottles)
@@ -43,7 +43,7 @@ async function recordFailure(key: string, freeFailures: number, now: Date): Prom
 export async function verifySignIn({ email, password, address }: { email: string; password: string; address: string }) {
   const now = new Date();
   const keys = throttleKeys(email, address);
-  const wait = await secondsBlocked([keys.account, keys.address], now);
+  const wait = await secondsBlocked([keys.pair, keys.account, keys.address], now);
   if (wait > 0) {
     throw new AppError("rate_limited", `Too many failed sign-ins. Wait ${wait} seconds, then try again.`, {
       retryAfterSeconds: wait,
@@ -66,12 +66,28 @@ export async function verifySignIn({ email, password, address }: { email: string
 
   const matches = await verifyPassword(user?.passwordHash ?? (await getDummyHash()), password);
   if (!user || !matches || user.status !== "active") {
-    await recordFailure(keys.account, throttlePolicy.accountFreeFailures, now);
-    await recordFailure(keys.address, throttlePolicy.addressFreeFailures, now);
+    await recordFailure(keys.pair, throttlePolicy.pair, now);
+    await recordFailure(keys.account, throttlePolicy.account, now);
+    await recordFailure(keys.address, throttlePolicy.address, now);
     throw new AppError("unauthorized", wrongCredentials);
   }
 
-  await getDb().delete(signInThrottles).where(eq(signInThrottles.key, keys.account));
+  await getDb().delete(signInThrottles).where(inArray(signInThrottles.key, [keys.pair, keys.account]));
   await getDb().update(users).set({ lastSignInAt: sql`now()` }).where(eq(users.id, user.id));
   return { id: user.id, email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion };
+}
+
+/**
+ * Counts a password-reset request per address and per e-mail asked for (whether or not it has an
+ * account, so the answer says nothing of which exist); 429 once either has asked too often.
+ */
+export async function throttleResetRequest({ email, address }: { email: string; address: string }): Promise<void> {
+  const now = new Date();
+  const keys = resetThrottleKeys(email, address);
+  const wait = await secondsBlocked([keys.account, keys.address], now);
+  if (wait > 0) {
+    throw new AppError("rate_limited", `Too many password-reset requests. Wait ${wait} seconds, then try again.`, { retryAfterSeconds: wait });
+  }
+  await recordFailure(keys.account, throttlePolicy.resetAccount, now);
+  await recordFailure(keys.address, throttlePolicy.resetAddress, now);
 }

@@ -64,10 +64,15 @@ beforeAll(async () => {
     const a = await makeAccount(role);
     return { id: a.id, cookie: await signIn(a.email, a.password) };
   };
-  instructor = (await account("instructor")).cookie;
+  const teacher = await account("instructor");
+  instructor = teacher.cookie;
   librarian = (await account("librarian")).cookie;
   students.push(await account("student"), await account("student"));
   admin = await signIn(demo.admin);
+  // The instructor reviews the students of their own classes only (lib/runs/scope.ts).
+  const ownClass = await call("POST", "/api/classes", { cookie: admin, json: { name: uniqueTitle("Runs home class") } });
+  const ownClassId = ((await ownClass.json()) as { class: { id: string } }).class.id;
+  await call("POST", `/api/classes/${ownClassId}/members`, { cookie: admin, json: { userIds: [teacher.id, ...students.map((s) => s.id)] } });
   const [revision] = await getDb()
     .select({ id: revisions.id })
     .from(revisions)

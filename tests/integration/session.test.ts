@@ -30,22 +30,36 @@ describe("signing in", () => {
     expect(await wrong.json()).toEqual(await unknown.json());
   });
 
-  it("slows down an account after repeated failures, even with the right password", async () => {
+  it("slows down the one guessing at an account, even with the right password, but not the real person elsewhere", async () => {
     const account = await makeAccount("student");
-    for (let i = 0; i < throttlePolicy.accountFreeFailures; i++) {
-      const r = await call("POST", "/api/session", { json: { email: account.email, password: `wrong-${i}-password` }, headers: fakeAddress() });
+    const guesser = fakeAddress();
+    for (let i = 0; i < throttlePolicy.pair.free; i++) {
+      const r = await call("POST", "/api/session", { json: { email: account.email, password: `wrong-${i}-password` }, headers: guesser });
       expect(r.status).toBe(401);
     }
-    const blocked = await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: fakeAddress() });
+    const blocked = await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: guesser });
     expect(blocked.status).toBe(429);
     expect(Number(blocked.headers.get("retry-after"))).toBeGreaterThan(0);
     expect(((await blocked.json()) as { error: { code: string } }).error.code).toBe("rate_limited");
+    // A stranger's wrong passwords do not lock the account: its owner signs in from their own place.
+    expect((await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: fakeAddress() })).status).toBe(200);
+  });
+
+  it("throttles password-reset requests per address and per account", async () => {
+    const address = fakeAddress();
+    const ask = (email: string, headers = address) => call("POST", "/api/password-resets", { json: { email }, headers });
+    for (let i = 0; i < throttlePolicy.resetAccount.free; i++) expect((await ask("reset-flood@hangarleaf.test", fakeAddress())).status).toBe(202);
+    const tooMany = await ask("reset-flood@hangarleaf.test", fakeAddress());
+    expect(tooMany.status).toBe(429);
+    expect(Number(tooMany.headers.get("retry-after"))).toBeGreaterThan(0);
+    for (let i = 0; i < throttlePolicy.resetAddress.free; i++) expect((await ask(`reset-${i}-${Date.now()}@hangarleaf.test`)).status).toBe(202);
+    expect((await ask(`reset-last-${Date.now()}@hangarleaf.test`)).status).toBe(429);
   });
 
   it("slows down one address that tries many accounts", async () => {
     const address = fakeAddress();
     const account = await makeAccount("student");
-    for (let i = 0; i < throttlePolicy.addressFreeFailures; i++) {
+    for (let i = 0; i < throttlePolicy.address.free; i++) {
       await call("POST", "/api/session", { json: { email: `spray-${i}@hangarleaf.test`, password: "guess-guess" }, headers: address });
     }
     const blocked = await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: address });
@@ -64,11 +78,18 @@ describe("signing in", () => {
     expect((await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: fakeAddress() })).status).toBe(401);
   });
 
-  it("signs out", async () => {
-    const response = await call("DELETE", "/api/session", { cookie: await signIn(demo.student) });
+  it("signs out, and the old cookie replayed afterwards is refused", async () => {
+    const cookie = await signIn(demo.student);
+    const other = await signIn(demo.student); // the same person on another cart
+    expect((await call("GET", "/api/session", { cookie })).status).toBe(200);
+    const response = await call("DELETE", "/api/session", { cookie });
     expect(response.status).toBe(204);
     const cleared = response.headers.getSetCookie().find((c) => c.startsWith("hangarleaf_session="));
     expect(cleared).toMatch(/Max-Age=0|Expires=Thu, 01 Jan 1970/i);
+    expect((await call("GET", "/api/session", { cookie })).status).toBe(401);
+    expect((await call("GET", "/api/my-work", { cookie })).status).toBe(401);
+    // Only that session ended.
+    expect((await call("GET", "/api/session", { cookie: other })).status).toBe(200);
   });
 
   it("refuses bodies that are not JSON, too large or incomplete", async () => {
