@@ -25,7 +25,9 @@ export default tseslint.config(
     rules: { "no-restricted-properties": "off" },
   },
   {
-    files: ["scripts/**/*.mjs"],
-    languageOptions: { globals: { console: "readonly", process: "readonly", fetch: "readonly", setTimeout: "readonly", Buffer: "readonly" } },
+    files: ["scripts/**/*.mjs", "server/**/*.mjs"],
+    languageOptions: {
+      globals: { console: "readonly", process: "readonly", fetch: "readonly", setTimeout: "readonly", setInterval: "readonly", clearInterval: "readonly", Buffer: "readonly" },
+    },
   },
 );

@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { sessionCookieName } from "@/lib/auth/cookie";
+import { urlRefusal } from "@/lib/edge";
 
 // A convenience only: visitors without a session cookie are sent to sign-in before a page renders.
 // Whether a cookie is valid, and what its user may do, every page and handler checks itself.
@@ -8,6 +9,10 @@ import { sessionCookieName } from "@/lib/auth/cookie";
 const publicPaths = [/^\/sign-in$/, /^\/forgot-password$/, /^\/set-password\/[^/]+$/, /^\/cart$/, /^\/cart\/run$/];
 
 export function proxy(request: NextRequest) {
+  // The same edge rules as the API's route(): a broken address is a 400 page, not a 500.
+  const raw = request.url.slice(request.url.indexOf("/", request.url.indexOf("//") + 2));
+  const refusal = urlRefusal(raw);
+  if (refusal) return new NextResponse(`${refusal.message}\n`, { status: 400, headers: { "content-type": "text/plain; charset=utf-8" } });
   const { pathname, search } = request.nextUrl;
   if (publicPaths.some((p) => p.test(pathname))) return NextResponse.next();
   if (request.cookies.has(sessionCookieName)) return NextResponse.next();

@@ -1,13 +1,24 @@
 // Helpers for route handlers: one wrapper that turns any error into the JSON error body, and
 // body parsing with zod. Route handlers stay thin: session → permission → parse → lib → respond.
 import type { z } from "zod";
+import { crossOriginRefusal, unstorableValue, urlRefusal } from "./edge";
+import { getEnv } from "./env";
 import { AppError, toAppError, type FieldErrors } from "./errors";
 
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
+/** The path and query exactly as sent (request.url has them still percent-encoded). */
+function rawPathAndQuery(request: Request): string {
+  const url = request.url;
+  const start = url.indexOf("/", url.indexOf("//") + 2);
+  return start < 0 ? "/" : url.slice(start);
+}
+
 export function route<C = unknown>(fn: Handler<C>): Handler<C> {
   return async (request, context) => {
     try {
+      const refusal = urlRefusal(rawPathAndQuery(request)) ?? crossOriginRefusal(request, new URL(getEnv().APP_URL).origin);
+      if (refusal) throw refusal;
       return await fn(request, context);
     } catch (error) {
       return toAppError(error).toResponse();
@@ -30,6 +41,9 @@ export function fieldErrors(error: z.ZodError): FieldErrors {
 }
 
 export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {
+  // One rule for every body, query and form field: what cannot be stored never reaches a schema.
+  const unstorable = unstorableValue(value);
+  if (unstorable) throw new AppError("invalid", unstorable.message, { fields: { [unstorable.field]: unstorable.message } });
   const result = schema.safeParse(value);
   if (!result.success) {
     const fields = fieldErrors(result.error);
@@ -42,6 +56,31 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.out
 
 const defaultMaxJsonBytes = 64 * 1024;
 
+/**
+ * The body as text, counted while it streams: a declared Content-Length over the limit is refused
+ * before reading, and a chunked body without one is cut off as soon as it passes the limit, so a
+ * huge body is never held in memory.
+ */
+export async function readBodyText(request: Request, maxBytes: number): Promise<string> {
+  const tooLarge = () => new AppError("payload_too_large", `The request body is larger than ${Math.round(maxBytes / 1024)} KiB.`);
+  if (Number(request.headers.get("content-length") ?? 0) > maxBytes) throw tooLarge();
+  if (!request.body) return "";
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > maxBytes) {
+      await reader.cancel().catch(() => undefined);
+      throw tooLarge();
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks).toString("utf8");
+}
+
 /** Reads a JSON body (at most 64 KiB unless the route allows more) and validates it. */
 export async function readJson<S extends z.ZodType>(
   request: Request,
@@ -52,11 +91,7 @@ export async function readJson<S extends z.ZodType>(
   if (!type.toLowerCase().startsWith("application/json")) {
     throw new AppError("unsupported_media_type", "Send the body as application/json.");
   }
-  const declared = Number(request.headers.get("content-length") ?? 0);
-  const tooLarge = () => new AppError("payload_too_large", `The request body is larger than ${Math.round(maxBytes / 1024)} KiB.`);
-  if (declared > maxBytes) throw tooLarge();
-  const text = await request.text();
-  if (Buffer.byteLength(text) > maxBytes) throw tooLarge();
+  const text = await readBodyText(request, maxBytes);
   let value: unknown;
   try {
     value = JSON.parse(text);
@@ -80,11 +115,10 @@ export function idParam(value: string | undefined, what = "That record"): string
 }
 
 /**
- * The client's address for throttling: the first x-forwarded-for entry. `next start` fills it in
- * from the socket when absent; behind a reverse proxy, the proxy must set it.
+ * The client's address for throttling. server/web.mjs rewrites X-Forwarded-For on every request
+ * to the one address it believes: the socket's, or behind proxies named in HL_TRUSTED_PROXIES the
+ * first untrusted hop. Nothing a client writes gets through.
  */
 export function clientAddress(request: Request): string {
-  const forwarded = request.headers.get("x-forwarded-for");
-  const first = forwarded?.split(",")[0]?.trim();
-  return first || request.headers.get("x-real-ip") || "unknown";
+  return request.headers.get("x-forwarded-for")?.trim() || "unknown";
 }

@@ -36,14 +36,14 @@ try {
   if (needsWeb.has(name)) {
     if (buildIsStale()) run(bin("next"), ["build"], { env: { ...env, NEXT_TELEMETRY_DISABLED: "1" } });
     const port = await freePort();
-    const web = service("web", bin("next"), ["start", "-p", String(port)], { ...env, NEXT_TELEMETRY_DISABLED: "1" });
+    const web = service("web", process.execPath, ["server/web.mjs"], { ...env, PORT: String(port), NEXT_TELEMETRY_DISABLED: "1" });
     env.HL_WEB_PID = String(web.pid); // for benchmarks that report the server's CPU time
     env.HL_BASE_URL = `http://127.0.0.1:${port}`;
     await waitForHttp(`${env.HL_BASE_URL}/api/health`);
     if (name === "search") {
       // A second server that keeps no answers, to measure the search itself beside the kept ones.
       const uncachedPort = await freePort();
-      const uncached = service("web-uncached", bin("next"), ["start", "-p", String(uncachedPort)], { ...env, NEXT_TELEMETRY_DISABLED: "1", HL_SEARCH_CACHE: "off" });
+      const uncached = service("web-uncached", process.execPath, ["server/web.mjs"], { ...env, PORT: String(uncachedPort), NEXT_TELEMETRY_DISABLED: "1", HL_SEARCH_CACHE: "off" });
       env.HL_UNCACHED_PID = String(uncached.pid);
       env.HL_UNCACHED_URL = `http://127.0.0.1:${uncachedPort}`;
       await waitForHttp(`${env.HL_UNCACHED_URL}/api/health`);

@@ -25,6 +25,18 @@ export function run(command, args, options = {}) {
   }
 }
 
+/**
+ * The same, without blocking this process: the services it supervises keep their logs flowing and
+ * are restarted while a long test run goes on.
+ */
+export function runAsync(command, args, options = {}) {
+  return new Promise((resolve, reject) => {
+    const child = spawn(command, args, { stdio: "inherit", cwd: root, ...options });
+    child.on("error", reject);
+    child.on("exit", (code, signal) => (code === 0 ? resolve() : reject(new Error(`${command} ${args.join(" ")} exited with ${code ?? signal}`))));
+  });
+}
+
 function capture(command, args, options = {}) {
   const result = spawnSync(command, args, { encoding: "utf8", cwd: root, ...options });
   return { ok: result.status === 0, out: `${result.stdout ?? ""}${result.stderr ?? ""}`.trim() };
@@ -129,21 +141,29 @@ export async function startCluster({ bin, home, port }) {
   }
 
   const pgCtl = path.join(bin, "pg_ctl");
+  // 128 MB of shared buffers (the default) is less than 50,000 pages' vectors and text: every
+  // search then re-read them from the kernel's cache (bench:search, SQL 35 % slower).
+  const serverOptions = `-p ${port} -h 127.0.0.1 -k '' -c shared_buffers=512MB`;
   const status = capture(...asPostgres(pgCtl, ["status", "-D", data]));
   let startedHere = false;
   if (!status.ok) {
     log(`starting PostgreSQL on 127.0.0.1:${port} (log: ${path.join(home, "postgres.log")})`);
-    run(...asPostgres(pgCtl, [
-      "start", "-w", "-t", "60", "-D", data, "-l", path.join(home, "postgres.log"),
-      // 128 MB of shared buffers (the default) is less than 50,000 pages' vectors and text: every
-      // search then re-read them from the kernel's cache (bench:search, SQL 35 % slower).
-      "-o", `-p ${port} -h 127.0.0.1 -k '' -c shared_buffers=512MB`,
-    ], { stdio: ["ignore", "ignore", "inherit"] }));
+    run(...asPostgres(pgCtl, ["start", "-w", "-t", "60", "-D", data, "-l", path.join(home, "postgres.log"), "-o", serverOptions], { stdio: ["ignore", "ignore", "inherit"] }));
     startedHere = true;
   } else {
     log(`PostgreSQL is already running for ${data}`);
   }
+  // PostgreSQL is a service like the others: if its server stops (killed, out of memory), start
+  // it again. The app answers 503 on /api/health meanwhile and its pool reconnects afterwards.
+  const watchdog = setInterval(() => {
+    if (!startedHere || stoppingAll) return;
+    if (capture(...asPostgres(pgCtl, ["status", "-D", data])).ok) return;
+    log("PostgreSQL stopped unexpectedly; starting it again");
+    spawnSync(...asPostgres(pgCtl, ["start", "-w", "-t", "60", "-D", data, "-l", path.join(home, "postgres.log"), "-o", serverOptions], { stdio: "ignore" }));
+  }, 5000);
+  watchdog.unref();
   const stop = () => {
+    clearInterval(watchdog);
     if (!startedHere) return;
     startedHere = false;
     log("stopping PostgreSQL");
@@ -237,7 +257,43 @@ export function service(name, command, args, env, onExit) {
   return child;
 }
 
+let stoppingAll = false;
+
+/** The backoff before the n-th restart in a row (1 s, 2 s, 4 s … at most 30 s). */
+export function restartDelaySeconds(restartsInARow) {
+  return Math.min(30, 2 ** Math.max(0, restartsInARow - 1));
+}
+
+/**
+ * A service that is started again when it dies, after a backoff, and says so in the log: one dead
+ * worker or fake must not take the web app and the database down with it. A service that stayed up
+ * for a minute starts its backoff again from one second. With `pidFile`, the running child's pid
+ * is written there at each start (the integration test that kills the worker reads it).
+ */
+export function supervise(name, command, args, env, { pidFile } = {}) {
+  let restarts = 0;
+  const start = () => {
+    const startedAt = Date.now();
+    const child = service(name, command, args, env, (_name, code, signal) => {
+      if (stoppingAll) return;
+      restarts = Date.now() - startedAt > 60_000 ? 1 : restarts + 1;
+      const wait = restartDelaySeconds(restarts);
+      log(`${name} stopped unexpectedly (${signal ?? `exit code ${code}`}); starting it again in ${wait} s (restart ${restarts} in a row)`);
+      setTimeout(() => {
+        if (!stoppingAll) start();
+      }, wait * 1000).unref();
+    });
+    if (pidFile) {
+      mkdirSync(path.dirname(pidFile), { recursive: true });
+      writeFileSync(pidFile, String(child.pid));
+    }
+    return child;
+  };
+  start();
+}
+
 export async function stopAll() {
+  stoppingAll = true;
   const waits = [...children].map(
     (child) =>
       new Promise((resolve) => {

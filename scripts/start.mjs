@@ -5,7 +5,7 @@
 import path from "node:path";
 import {
   assertPortFree, bin, buildIsStale, buildServiceWorker, dataDir, ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, localSecret, log,
-  run, service, startCluster, stopAll, tsx, tsxArgs, waitForHttp,
+  run, startCluster, stopAll, supervise, tsx, tsxArgs, waitForHttp,
   copyPdfAssets,
 } from "./lib.mjs";
 
@@ -96,22 +96,19 @@ try {
     await buildServiceWorker();
   }
 
-  const onExit = (name, code, signal) => {
-    if (stopping) return;
-    log(`${name} stopped unexpectedly (${code ?? signal}); stopping the rest`);
-    void shutdown(1);
-  };
+  // Each service is started again when it dies (with a backoff, said in the log); the others and
+  // the database go on serving.
   if (useFakeMail) {
-    service("mail", bin("tsx"), tsxArgs("fakes/smtp.ts"), {
+    supervise("mail", bin("tsx"), tsxArgs("fakes/smtp.ts"), {
       ...env, HL_SMTP_PORT: String(smtpPort), HL_OUTBOX_PORT: String(outboxPort),
       HL_OUTBOX_FILE: path.join(dataDir, "outbox.jsonl"),
-    }, onExit);
+    });
   }
   if (useFakeS3) {
-    service("s3", bin("tsx"), tsxArgs("fakes/s3.ts"), { ...env, HL_S3_PORT: String(s3Port), HL_S3_DIR: path.join(dataDir, "s3") }, onExit);
+    supervise("s3", bin("tsx"), tsxArgs("fakes/s3.ts"), { ...env, HL_S3_PORT: String(s3Port), HL_S3_DIR: path.join(dataDir, "s3") });
   }
-  service("worker", bin("tsx"), tsxArgs("worker/index.ts"), env, onExit);
-  service("web", bin("next"), [dev ? "dev" : "start", "-p", String(port)], env, onExit);
+  supervise("worker", bin("tsx"), tsxArgs("worker/index.ts"), env, { pidFile: path.join(dataDir, "pids", "worker.pid") });
+  supervise("web", process.execPath, ["server/web.mjs", ...(dev ? ["--dev"] : [])], env);
 
   await waitForHttp(`http://127.0.0.1:${port}/api/health`, dev ? 180 : 90);
   log(`Hangarleaf is ready at ${env.APP_URL}`);

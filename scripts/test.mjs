@@ -6,7 +6,7 @@ import { existsSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
 import {
   bin, ensureChromium, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log,
-  run, service, stopAll, throwawayDatabase, tsx, tsxArgs, waitForHttp,
+  run, runAsync, stopAll, supervise, throwawayDatabase, tsx, tsxArgs, waitForHttp,
   buildServiceWorker, copyPdfAssets,
 } from "./lib.mjs";
 
@@ -14,11 +14,11 @@ const results = [];
 let cluster = null;
 let home = null;
 
-function stage(name, fn) {
+async function stage(name, fn) {
   log(`── ${name}`);
   const started = Date.now();
   try {
-    fn();
+    await fn();
     results.push({ name, ok: true, seconds: (Date.now() - started) / 1000 });
     return true;
   } catch (error) {
@@ -78,19 +78,24 @@ try {
     HL_S3_DIR: path.join(home, "s3"),
     HL_TEST_S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
     PORT: String(webPort),
+    // The tests send made-up client addresses (tests/support/http.ts fakeAddress) through the
+    // loopback as if from a proxy; without this setting the web server believes only the socket.
+    HL_TRUSTED_PROXIES: "127.0.0.1 ::1",
+    // Where the supervisor writes the worker's pid: the test that kills it mid-ingest reads it.
+    HL_PIDS_DIR: path.join(home, "pids"),
   };
   // vitest and Playwright are tools, not the app: they run in the test environment.
   const testEnv = { ...env, NODE_ENV: "test" };
 
-  stage("migrate and seed", () => {
+  await stage("migrate and seed", () => {
     tsx("scripts/migrate.ts", env);
     tsx("db/seed.ts", env);
     tsx("db/seed.ts", env); // twice: the seed must be idempotent (tests/integration/seed.test.ts checks)
   });
-  stage("typecheck", () => run(bin("tsc"), ["--noEmit"], { env }));
-  stage("lint", () => run(bin("eslint"), ["--max-warnings", "0", "."], { env }));
+  await stage("typecheck", () => run(bin("tsc"), ["--noEmit"], { env }));
+  await stage("lint", () => run(bin("eslint"), ["--max-warnings", "0", "."], { env }));
   copyPdfAssets();
-  let built = stage("build", () => run(bin("next"), ["build"], { env }));
+  let built = await stage("build", () => run(bin("next"), ["build"], { env }));
   if (built) {
     try {
       await buildServiceWorker();
@@ -104,21 +109,21 @@ try {
   let vitest = null;
   let playwright = null;
   if (built) {
-    service("mail", bin("tsx"), tsxArgs("fakes/smtp.ts"), env);
-    service("s3", bin("tsx"), tsxArgs("fakes/s3.ts"), env);
-    service("worker", bin("tsx"), tsxArgs("worker/index.ts"), env);
-    service("web", bin("next"), ["start", "-p", String(webPort)], env);
+    supervise("mail", bin("tsx"), tsxArgs("fakes/smtp.ts"), env);
+    supervise("s3", bin("tsx"), tsxArgs("fakes/s3.ts"), env);
+    supervise("worker", bin("tsx"), tsxArgs("worker/index.ts"), env, { pidFile: path.join(env.HL_PIDS_DIR, "worker.pid") });
+    supervise("web", process.execPath, ["server/web.mjs"], env);
     await waitForHttp(`http://127.0.0.1:${webPort}/api/health`);
     await waitForHttp(`${env.HL_OUTBOX_URL}/messages`);
 
     const vitestReport = path.join(reports, "vitest.json");
-    stage("unit and integration tests (vitest)", () =>
-      run(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${vitestReport}`], { env: testEnv }));
+    await stage("unit and integration tests (vitest)", () =>
+      runAsync(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${vitestReport}`], { env: testEnv }));
     vitest = readJson(vitestReport);
 
     const playwrightReport = path.join(reports, "playwright.json");
-    stage("end-to-end tests (Playwright, Chromium)", () =>
-      run(bin("playwright"), ["test"], { env: { ...testEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport } }));
+    await stage("end-to-end tests (Playwright, Chromium)", () =>
+      runAsync(bin("playwright"), ["test"], { env: { ...testEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport } }));
     playwright = readJson(playwrightReport);
   }
 

@@ -1,8 +1,8 @@
 // Ingest of one revision, run by the worker: pages out of the PDF (text layer, OCR where there is
 // none), stored in batches, then in one transaction the revision becomes ready and current.
 // Until that transaction, the revision's pages are visible to nobody (lib/library/manuals.ts).
-import { and, eq, lt, sql } from "drizzle-orm";
-import { getDb } from "@/db";
+import { and, eq, sql } from "drizzle-orm";
+import { getDb, getPool } from "@/db";
 import { manuals, pages, revisions } from "@/db/schema";
 import { recordAudit } from "../audit";
 import { extractPageTexts, ocrImage, PdfProblem, readPdfInfo, renderPage } from "../pdf/tools";
@@ -20,16 +20,36 @@ export const maxAttempts = 3;
 
 type Outcome = "ready" | "failed" | "skipped";
 
+/**
+ * While a worker reads a revision it holds a PostgreSQL advisory lock on it, on a connection of its
+ * own. A worker that dies loses its connection and so the lock at once: a "processing" revision
+ * whose lock is free has lost its worker, and a restarted worker takes it up again within seconds
+ * rather than after the heartbeat goes stale.
+ */
+const lockKey = (revisionId: string) => `ingest:${revisionId}`;
+
 export async function ingestRevision({ revisionId, log = console.log }: { revisionId: string; log?: (m: string) => void }): Promise<Outcome> {
+  const holder = await getPool().connect();
+  try {
+    const { rows } = await holder.query<{ ok: boolean }>("select pg_try_advisory_lock(hashtextextended($1, 0)) as ok", [lockKey(revisionId)]);
+    if (!rows[0]?.ok) return "skipped"; // a live worker has it
+    return await ingestLocked({ revisionId, log });
+  } finally {
+    await holder.query("select pg_advisory_unlock_all()").catch(() => undefined);
+    holder.release();
+  }
+}
+
+async function ingestLocked({ revisionId, log }: { revisionId: string; log: (m: string) => void }): Promise<Outcome> {
   const db = getDb();
-  // Claim it: only a queued revision, or one whose worker went quiet, is taken.
+  // Claim it: a queued revision, or a processing one whose worker died (we hold its lock now).
   const [claimed] = await db
     .update(revisions)
     .set({ status: "processing", attempts: sql`${revisions.attempts} + 1`, heartbeatAt: sql`now()`, error: null, pagesDone: 0 })
     .where(
       and(
         eq(revisions.id, revisionId),
-        sql`(${revisions.status} = 'queued' or (${revisions.status} = 'processing' and ${revisions.heartbeatAt} < now() - make_interval(secs => ${staleAfterSeconds})))`,
+        sql`${revisions.status} in ('queued', 'processing')`,
       ),
     )
     .returning({ id: revisions.id, manualId: revisions.manualId, fileKey: revisions.fileKey, attempts: revisions.attempts, label: revisions.label });
@@ -153,12 +173,28 @@ export async function ingestRevision({ revisionId, log = console.log }: { revisi
   }
 }
 
-/** Revisions whose worker died: back to the queue, or failed once they used their attempts. */
+/**
+ * Revisions whose worker died: "processing" with nobody holding their lock, or with a heartbeat
+ * gone quiet. The sweeper puts them back in the queue, or fails them once they used their attempts.
+ */
 export async function findStaleRevisions(): Promise<{ id: string; attempts: number }[]> {
-  return getDb()
-    .select({ id: revisions.id, attempts: revisions.attempts })
+  const processing = await getDb()
+    .select({ id: revisions.id, attempts: revisions.attempts, quiet: sql<boolean>`${revisions.heartbeatAt} < now() - make_interval(secs => ${staleAfterSeconds})` })
     .from(revisions)
-    .where(and(eq(revisions.status, "processing"), lt(revisions.heartbeatAt, sql`now() - make_interval(secs => ${staleAfterSeconds})`)));
+    .where(eq(revisions.status, "processing"));
+  if (!processing.length) return [];
+  const probe = await getPool().connect();
+  try {
+    const orphaned: { id: string; attempts: number }[] = [];
+    for (const r of processing) {
+      const { rows } = await probe.query<{ ok: boolean }>("select pg_try_advisory_lock(hashtextextended($1, 0)) as ok", [lockKey(r.id)]);
+      if (rows[0]?.ok) await probe.query("select pg_advisory_unlock(hashtextextended($1, 0))", [lockKey(r.id)]);
+      if (rows[0]?.ok || r.quiet) orphaned.push({ id: r.id, attempts: r.attempts });
+    }
+    return orphaned;
+  } finally {
+    probe.release();
+  }
 }
 
 export async function failRevision({ id, reason }: { id: string; reason: string }) {

@@ -6,19 +6,29 @@ import path from "node:path";
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
-import { classes, manuals, runs, taskCardVersions, users } from "@/db/schema";
+import { classes, classMembers, manuals, runs, taskCardVersions, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/permissions";
-import { call, demo, signIn } from "../support/http";
+import { call, demo, makeAccount, signIn } from "../support/http";
 
-type Who = "anonymous" | Role;
-const everyone: Who[] = ["anonymous", "student", "instructor", "librarian", "admin"];
+// "otherInstructor" and "otherStudent" have a class of their own, apart from the demo student's
+// day cohort: they must reach nothing of that class's runs and records (lib/runs/scope.ts). Unless
+// a row says otherwise in `cross`, they get what the instructor and the student get.
+type Who = "anonymous" | Role | "otherInstructor" | "otherStudent";
+const everyone: Who[] = ["anonymous", "student", "instructor", "librarian", "admin", "otherInstructor", "otherStudent"];
 
 interface Row {
   method: string;
   route: string; // as in app/api, e.g. /api/users/[id]
   path: (ids: Ids) => string;
   json?: unknown;
-  expect: Record<Who, number>;
+  expect: Record<Role | "anonymous", number>;
+  cross?: Partial<Record<"otherInstructor" | "otherStudent", number>>;
+}
+
+function expected(row: Row, who: Who): number {
+  if (who === "otherInstructor") return row.cross?.otherInstructor ?? row.expect.instructor;
+  if (who === "otherStudent") return row.cross?.otherStudent ?? row.expect.student;
+  return row.expect[who];
 }
 interface Ids {
   adminId: string;
@@ -32,7 +42,7 @@ interface Ids {
   runId: string;
 }
 
-const only = (allowed: Partial<Record<Who, number>>, denied = 403): Record<Who, number> => ({
+const only = (allowed: Partial<Record<Role | "anonymous", number>>, denied = 403): Record<Role | "anonymous", number> => ({
   anonymous: 401,
   student: denied,
   instructor: denied,
@@ -40,8 +50,8 @@ const only = (allowed: Partial<Record<Who, number>>, denied = 403): Record<Who, 
   admin: denied,
   ...allowed,
 });
-const all = (status: number): Record<Who, number> =>
-  Object.fromEntries(everyone.map((w) => [w, status])) as Record<Who, number>;
+const all = (status: number): Record<Role | "anonymous", number> =>
+  Object.fromEntries(["anonymous", "student", "instructor", "librarian", "admin"].map((w) => [w, status])) as Record<Role | "anonymous", number>;
 
 export const accessMatrix: Row[] = [
   { method: "GET", route: "/api/health", path: () => "/api/health", expect: all(200) },
@@ -57,7 +67,7 @@ export const accessMatrix: Row[] = [
   { method: "POST", route: "/api/password", path: () => "/api/password", json: {}, expect: all(422) },
   { method: "GET", route: "/api/classes", path: () => "/api/classes", expect: only({ instructor: 200, admin: 200 }) },
   { method: "POST", route: "/api/classes", path: () => "/api/classes", json: {}, expect: only({ admin: 422 }) },
-  { method: "GET", route: "/api/classes/[id]", path: (i) => `/api/classes/${i.dayClassId}`, expect: only({ instructor: 200, admin: 200 }) },
+  { method: "GET", route: "/api/classes/[id]", path: (i) => `/api/classes/${i.dayClassId}`, expect: only({ instructor: 200, admin: 200 }), cross: { otherInstructor: 404 } },
   { method: "PATCH", route: "/api/classes/[id]", path: (i) => `/api/classes/${i.dayClassId}`, json: { name: "" }, expect: only({ admin: 422 }) },
   { method: "POST", route: "/api/classes/[id]/members", path: (i) => `/api/classes/${i.dayClassId}/members`, json: { userIds: [] }, expect: only({ admin: 422 }) },
   {
@@ -106,16 +116,19 @@ export const accessMatrix: Row[] = [
   { method: "GET", route: "/api/my-work", path: () => "/api/my-work", expect: only({ student: 200 }) },
   { method: "GET", route: "/api/review", path: () => "/api/review", expect: only({ instructor: 200, admin: 200 }) },
   // A run is seen by its student and by reviewers; anyone else is told it does not exist.
-  { method: "GET", route: "/api/runs/[id]", path: (i) => `/api/runs/${i.runId}`, expect: { anonymous: 401, student: 200, instructor: 200, librarian: 404, admin: 200 } },
+  { method: "GET", route: "/api/runs/[id]", path: (i) => `/api/runs/${i.runId}`, expect: { anonymous: 401, student: 200, instructor: 200, librarian: 404, admin: 200 }, cross: { otherInstructor: 404, otherStudent: 404 } },
   { method: "POST", route: "/api/runs/[id]/events", path: (i) => `/api/runs/${i.runId}/events`, json: {}, expect: { ...all(422), anonymous: 401 } },
-  { method: "GET", route: "/api/runs/[id]/packet", path: (i) => `/api/runs/${i.runId}/packet`, expect: { anonymous: 401, student: 200, instructor: 200, librarian: 404, admin: 200 } },
+  { method: "GET", route: "/api/runs/[id]/packet", path: (i) => `/api/runs/${i.runId}/packet`, expect: { anonymous: 401, student: 200, instructor: 200, librarian: 404, admin: 200 }, cross: { otherInstructor: 404, otherStudent: 404 } },
   { method: "PUT", route: "/api/runs/[id]/photos/[photoId]", path: (i) => `/api/runs/${i.nobody}/photos/${i.nobody}`, expect: { ...all(404), anonymous: 401 } },
   { method: "GET", route: "/api/runs/[id]/photos/[photoId]", path: (i) => `/api/runs/${i.runId}/photos/${i.nobody}`, expect: { anonymous: 401, student: 404, instructor: 404, librarian: 404, admin: 404 } },
-  { method: "POST", route: "/api/runs/[id]/buy-off", path: (i) => `/api/runs/${i.runId}/buy-off`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  // A step that is no inspection point: the run's own reviewers get as far as the 422.
+  { method: "POST", route: "/api/runs/[id]/buy-off", path: (i) => `/api/runs/${i.runId}/buy-off`, json: { stepId: "00000000-0000-4000-8000-00000000abcd" }, expect: only({ instructor: 422, admin: 422 }), cross: { otherInstructor: 404 } },
   { method: "POST", route: "/api/runs/[id]/return", path: (i) => `/api/runs/${i.runId}/return`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
   { method: "POST", route: "/api/runs/[id]/sign-off", path: (i) => `/api/runs/${i.nobody}/sign-off`, json: {}, expect: only({ instructor: 404, admin: 404 }) },
-  { method: "GET", route: "/api/records/students/[id]", path: (i) => `/api/records/students/${i.studentId}`, expect: only({ student: 200, instructor: 200, admin: 200 }) },
-  { method: "GET", route: "/api/records/classes/[id]", path: (i) => `/api/records/classes/${i.dayClassId}`, expect: only({ instructor: 200, admin: 200 }) },
+  { method: "GET", route: "/api/records/students/[id]", path: (i) => `/api/records/students/${i.studentId}`, expect: only({ student: 200, instructor: 200, admin: 200 }), cross: { otherInstructor: 404, otherStudent: 404 } },
+  { method: "GET", route: "/api/records/classes/[id]", path: (i) => `/api/records/classes/${i.dayClassId}`, expect: only({ instructor: 200, admin: 200 }), cross: { otherInstructor: 404 } },
+  // Only the owner (or an admin) names co-authors; the demo card is the evening instructor's.
+  { method: "PUT", route: "/api/cards/[id]/coauthors", path: (i) => `/api/cards/${i.cardId}/coauthors`, json: { userIds: [] }, expect: only({ admin: 200 }) },
   { method: "PUT", route: "/api/manuals/[id]/carts", path: (i) => `/api/manuals/${i.manualId}/carts`, json: {}, expect: only({ librarian: 422, admin: 422 }) },
 ];
 
@@ -124,6 +137,12 @@ let ids: Ids;
 
 beforeAll(async () => {
   for (const role of ["student", "instructor", "librarian", "admin"] as const) cookies[role] = await signIn(demo[role]);
+  const otherInstructor = await makeAccount("instructor", "Other class instructor");
+  const otherStudent = await makeAccount("student", "Other class student");
+  cookies.otherInstructor = await signIn(otherInstructor.email, otherInstructor.password);
+  cookies.otherStudent = await signIn(otherStudent.email, otherStudent.password);
+  const [own] = await getDb().insert(classes).values({ name: `Other class ${otherStudent.id.slice(0, 8)}` }).returning({ id: classes.id });
+  await getDb().insert(classMembers).values([otherInstructor, otherStudent].map((a) => ({ classId: own!.id, userId: a.id })));
   const [admin] = await getDb().select({ id: users.id }).from(users).where(eq(users.email, demo.admin));
   const [day] = await getDb().select({ id: classes.id }).from(classes).where(eq(classes.name, "AMT Day Cohort 2027"));
   // A demo manual once the worker has read it (the seed queues it just before the tests).
@@ -153,9 +172,9 @@ beforeAll(async () => {
 describe("access matrix", () => {
   for (const row of accessMatrix) {
     for (const who of everyone) {
-      it(`${row.method} ${row.route} as ${who} → ${row.expect[who]}`, async () => {
+      it(`${row.method} ${row.route} as ${who} → ${expected(row, who)}`, async () => {
         const response = await call(row.method, row.path(ids), { cookie: cookies[who], json: row.json });
-        expect(response.status).toBe(row.expect[who]);
+        expect(response.status).toBe(expected(row, who));
         if (response.status >= 400) {
           const body = (await response.json()) as { error?: { code?: string; message?: string } };
           expect(body.error?.code).toBeTypeOf("string");

@@ -140,11 +140,10 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                 {typeof e.payload?.comment === "string" && e.payload.comment ? `: “${e.payload.comment}”` : ""}
                 {late ? (
                   <strong className="ml-2 rounded border border-line px-1">
-                    arrived after the {late.after} of {late.at.slice(0, 16).replace("T", " ")}
-                    {e.serverTime ? ` (received ${e.serverTime.slice(0, 16).replace("T", " ")})` : ""}
+                    {`arrived after the ${late.after} of ${late.at.slice(0, 16).replace("T", " ")}${e.serverTime ? ` (received ${e.serverTime.slice(0, 16).replace("T", " ")})` : ""}`}
                   </strong>
                 ) : null}
-                {setAside ? <span className="ml-2 hint">not counted: {setAside}</span> : null}
+                {setAside ? <span className="ml-2 hint">{`not counted: ${setAside}`}</span> : null}
               </li>
             );
           })}
