@@ -23,6 +23,8 @@ interface Row {
   json?: unknown;
   expect: Record<Role | "anonymous", number>;
   cross?: Partial<Record<"otherInstructor" | "otherStudent", number>>;
+  /** Signs in anew for this row (a sign-out would end the shared session). */
+  freshSession?: boolean;
 }
 
 function expected(row: Row, who: Who): number {
@@ -57,7 +59,8 @@ export const accessMatrix: Row[] = [
   { method: "GET", route: "/api/health", path: () => "/api/health", expect: all(200) },
   { method: "GET", route: "/api/session", path: () => "/api/session", expect: { ...all(200), anonymous: 401 } },
   { method: "POST", route: "/api/session", path: () => "/api/session", json: {}, expect: all(422) },
-  { method: "DELETE", route: "/api/session", path: () => "/api/session", expect: all(204) },
+  // Sign-out ends the session on the server: it gets a session of its own, so the others go on.
+  { method: "DELETE", route: "/api/session", path: () => "/api/session", expect: all(204), freshSession: true },
   { method: "GET", route: "/api/users", path: () => "/api/users", expect: only({ admin: 200 }) },
   { method: "POST", route: "/api/users", path: () => "/api/users", json: {}, expect: only({ admin: 422 }) },
   { method: "GET", route: "/api/users/[id]", path: (i) => `/api/users/${i.adminId}`, expect: only({ admin: 200 }) },
@@ -133,14 +136,20 @@ export const accessMatrix: Row[] = [
 ];
 
 const cookies: Partial<Record<Who, string>> = {};
+const credentials: Partial<Record<Who, { email: string; password?: string }>> = {};
 let ids: Ids;
 
 beforeAll(async () => {
-  for (const role of ["student", "instructor", "librarian", "admin"] as const) cookies[role] = await signIn(demo[role]);
+  for (const role of ["student", "instructor", "librarian", "admin"] as const) {
+    cookies[role] = await signIn(demo[role]);
+    credentials[role] = { email: demo[role] };
+  }
   const otherInstructor = await makeAccount("instructor", "Other class instructor");
   const otherStudent = await makeAccount("student", "Other class student");
   cookies.otherInstructor = await signIn(otherInstructor.email, otherInstructor.password);
   cookies.otherStudent = await signIn(otherStudent.email, otherStudent.password);
+  credentials.otherInstructor = otherInstructor;
+  credentials.otherStudent = otherStudent;
   const [own] = await getDb().insert(classes).values({ name: `Other class ${otherStudent.id.slice(0, 8)}` }).returning({ id: classes.id });
   await getDb().insert(classMembers).values([otherInstructor, otherStudent].map((a) => ({ classId: own!.id, userId: a.id })));
   const [admin] = await getDb().select({ id: users.id }).from(users).where(eq(users.email, demo.admin));
@@ -173,7 +182,9 @@ describe("access matrix", () => {
   for (const row of accessMatrix) {
     for (const who of everyone) {
       it(`${row.method} ${row.route} as ${who} → ${expected(row, who)}`, async () => {
-        const response = await call(row.method, row.path(ids), { cookie: cookies[who], json: row.json });
+        const login = credentials[who];
+        const cookie = row.freshSession && login ? await signIn(login.email, login.password) : cookies[who];
+        const response = await call(row.method, row.path(ids), { cookie, json: row.json });
         expect(response.status).toBe(expected(row, who));
         if (response.status >= 400) {
           const body = (await response.json()) as { error?: { code?: string; message?: string } };

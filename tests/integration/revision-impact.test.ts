@@ -21,6 +21,7 @@ const sectionPages = (manual: typeof first, code: string) => [0, 1, 2, 3, 4].map
 let rev3: string;
 let rev4: string;
 let instructor: string;
+let propellerOwner: string;
 let librarian: string;
 let student: string;
 
@@ -45,6 +46,8 @@ beforeAll(async () => {
     await new Promise((r) => setTimeout(r, 500));
   }
   instructor = await signIn(demo.instructor);
+  // The propeller card is the evening instructor's: only its owner (or a co-author, or an admin) rechecks it.
+  propellerOwner = await signIn("instructor2@hangarleaf.test");
   librarian = await signIn(demo.librarian);
   student = await signIn(demo.student);
 }, 180_000);
@@ -120,21 +123,21 @@ describe("revision impact", () => {
     expect(magneto.steps.every((s) => !s.underRecheck)).toBe(true);
 
     expect((await call("GET", `/api/cards/${id}/rechecks`, { cookie: student })).status).toBe(403);
-    const list = (await (await call("GET", `/api/cards/${id}/rechecks`, { cookie: instructor })).json()) as { rechecks: { id: string; stepNumber: number; old: { text: string }; suggested: { page: number | null } }[] };
+    const list = (await (await call("GET", `/api/cards/${id}/rechecks`, { cookie: propellerOwner })).json()) as { rechecks: { id: string; stepNumber: number; old: { text: string }; suggested: { page: number | null } }[] };
     expect(list.rechecks.map((r) => r.stepNumber)).toEqual([1, 2]);
     expect(list.rechecks[0]!.old.text).toContain("61-20-00");
 
     // Accepting a suggestion that does not exist, or a page past the end, is refused and changes nothing.
     const [one, two] = list.rechecks;
-    const noSuggestion = await call("POST", `/api/cards/${id}/rechecks`, { cookie: instructor, json: { decisions: [{ id: one!.id, action: "accept" }] } });
+    const noSuggestion = await call("POST", `/api/cards/${id}/rechecks`, { cookie: propellerOwner, json: { decisions: [{ id: one!.id, action: "accept" }] } });
     expect(noSuggestion.status).toBe(422);
-    const pastEnd = await call("POST", `/api/cards/${id}/rechecks`, { cookie: instructor, json: { decisions: [{ id: one!.id, action: "relink", page: 5000 }] } });
+    const pastEnd = await call("POST", `/api/cards/${id}/rechecks`, { cookie: propellerOwner, json: { decisions: [{ id: one!.id, action: "relink", page: 5000 }] } });
     expect(pastEnd.status).toBe(422);
-    expect(((await (await call("GET", `/api/cards/${id}`, { cookie: instructor })).json()) as { card: CardDto }).card.draft).toBeNull();
+    expect(((await (await call("GET", `/api/cards/${id}`, { cookie: propellerOwner })).json()) as { card: CardDto }).card.draft).toBeNull();
 
     const propellerInspection = after("61-10-00");
     const done = await call("POST", `/api/cards/${id}/rechecks`, {
-      cookie: instructor,
+      cookie: propellerOwner,
       json: { decisions: [{ id: one!.id, action: "relink", page: propellerInspection }, { id: two!.id, action: "drop" }] },
     });
     expect(done.status).toBe(200);
@@ -142,14 +145,14 @@ describe("revision impact", () => {
     expect(draft).toMatchObject({ number: 2, status: "draft" });
     expect(draft.steps[0]!.references.map((r) => [r.revisionId, r.page])).toEqual([[rev4, propellerInspection]]);
     expect(draft.steps[1]!.references).toEqual([]);
-    const twice = await call("POST", `/api/cards/${id}/rechecks`, { cookie: instructor, json: { decisions: [{ id: two!.id, action: "drop" }] } });
+    const twice = await call("POST", `/api/cards/${id}/rechecks`, { cookie: propellerOwner, json: { decisions: [{ id: two!.id, action: "drop" }] } });
     expect(twice.status).toBe(409);
 
     // Until version 2 is published, students still see the notice on version 1.
     const stillFlagged = ((await (await call("GET", `/api/cards/${id}/versions/1`, { cookie: student })).json()) as { version: CardVersionDto }).version;
     expect(stillFlagged.steps.map((s) => s.underRecheck)).toEqual([true, true]);
-    expect((await (await call("GET", `/api/cards/${id}/rechecks`, { cookie: instructor })).json()) as { rechecks: unknown[] }).toEqual({ rechecks: [] });
-    expect((await call("POST", `/api/cards/${id}/publish`, { cookie: instructor })).status).toBe(200);
+    expect((await (await call("GET", `/api/cards/${id}/rechecks`, { cookie: propellerOwner })).json()) as { rechecks: unknown[] }).toEqual({ rechecks: [] });
+    expect((await call("POST", `/api/cards/${id}/publish`, { cookie: propellerOwner })).status).toBe(200);
     const v2 = ((await (await call("GET", `/api/cards/${id}/versions/2`, { cookie: student })).json()) as { version: CardVersionDto }).version;
     expect(v2.steps.every((s) => !s.underRecheck)).toBe(true);
   });

@@ -1,8 +1,8 @@
 // The rules at the edge of every request (lib/edge.ts) and who is on the other end of the socket
-// (server/client-address.mjs).
+// (server/edge.mjs).
 import { describe, expect, it } from "vitest";
 import { crossOriginRefusal, maxJsonDepth, unstorableValue, urlRefusal } from "@/lib/edge";
-import { clientAddressOf, parseTrustedProxies } from "../../server/client-address.mjs";
+import { clientAddressOf, hasBrokenEncoding, parseTrustedProxies } from "../../server/edge.mjs";
 
 const request = (method: string, headers: Record<string, string>) => ({ method, headers: new Headers(headers) });
 const app = "http://localhost:3000";
@@ -42,6 +42,9 @@ describe("what cannot be stored", () => {
     expect(urlRefusal("/library/%E0%A4%A")?.code).toBe("bad_request");
     expect(urlRefusal("/api/search?q=100%25+torque&limit=5")).toBeNull();
     expect(urlRefusal("/library/abc?x=%F0%9F%98%80")).toBeNull();
+    expect(hasBrokenEncoding("/api/search?q=%E0%A4%A")).toBe(true);
+    expect(hasBrokenEncoding("/library/%E0%A4%A")).toBe(true);
+    expect(hasBrokenEncoding("/api/search?q=100%25+torque")).toBe(false);
   });
 });
 

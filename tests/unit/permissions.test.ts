@@ -16,6 +16,7 @@ const expected: Record<string, Role[]> = {
   "library:manage": ["librarian", "admin"],
   "cards:view": ["student", "instructor", "librarian", "admin"],
   "cards:author": ["instructor", "admin"],
+  "cards:edit-any": ["admin"],
   "assignments:manage": ["instructor", "admin"],
   "runs:do": ["student"],
   "runs:review": ["instructor", "admin"],
