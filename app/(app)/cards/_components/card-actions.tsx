@@ -23,32 +23,20 @@ export function CardActions({ card }: { card: CardDto }) {
       .catch((error: unknown) => setMessage({ ok: false, text: error instanceof ApiError ? error.message : "That did not work." }));
 
   const archived = !!card.archivedAt;
-  if (!card.canEdit) {
-    return (
-      <div className="flex flex-col gap-3">
+  return (
+    <div className="flex flex-col gap-3">
+      {card.canEdit ? null : (
         <p className="hint">
           {card.ownerName ?? "Another author"} owns this card: only the owner, the co-authors they name or an admin can change it. Duplicate it to make a card of your own.
         </p>
-        <div>
-          <button type="button" className="btn btn-secondary" disabled={action.isPending} onClick={() => void run("duplicate", "")}>
-            Duplicate
-          </button>
-        </div>
-        <p aria-live="polite" className={message ? (message.ok ? "notice-ok" : "notice-error") : ""}>
-          {message?.text ?? ""}
-        </p>
-      </div>
-    );
-  }
-  return (
-    <div className="flex flex-col gap-3">
+      )}
       <div className="flex flex-wrap gap-2">
-        {archived ? null : (
+        {archived || !card.canEdit ? null : (
           <Link href={`/cards/${card.id}/edit`} className="btn btn-primary">
             {card.draft ? `Edit draft v${card.draft.number}` : "Edit (makes a new draft)"}
           </Link>
         )}
-        {card.draft && !archived ? (
+        {card.draft && !archived && card.canEdit ? (
           <button type="button" className="btn btn-primary" disabled={action.isPending} onClick={() => void run("publish", `Version ${card.draft!.number} is published.`)}>
             Publish draft v{card.draft.number}
           </button>
@@ -56,14 +44,16 @@ export function CardActions({ card }: { card: CardDto }) {
         <button type="button" className="btn btn-secondary" disabled={action.isPending} onClick={() => void run("duplicate", "")}>
           Duplicate
         </button>
-        {card.draft && card.published && !archived ? (
+        {card.draft && card.published && !archived && card.canEdit ? (
           <button type="button" className="btn btn-danger" disabled={action.isPending} onClick={() => void run("discard", "The draft was discarded.")}>
             Discard draft
           </button>
         ) : null}
-        <button type="button" className="btn btn-danger" disabled={action.isPending} onClick={() => void run(archived ? "restore" : "archive", archived ? "The card is back in the list." : "The card is archived.")}>
-          {archived ? "Bring back from the archive" : "Archive"}
-        </button>
+        {card.canEdit ? (
+          <button type="button" className="btn btn-danger" disabled={action.isPending} onClick={() => void run(archived ? "restore" : "archive", archived ? "The card is back in the list." : "The card is archived.")}>
+            {archived ? "Bring back from the archive" : "Archive"}
+          </button>
+        ) : null}
       </div>
       <p aria-live="polite" className={message ? (message.ok ? "notice-ok" : "notice-error") : ""}>
         {message?.text ?? ""}
