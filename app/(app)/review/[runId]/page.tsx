@@ -143,7 +143,7 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                     {`arrived after the ${late.after} of ${late.at.slice(0, 16).replace("T", " ")}${e.serverTime ? ` (received ${e.serverTime.slice(0, 16).replace("T", " ")})` : ""}`}
                   </strong>
                 ) : null}
-                {setAside ? <span className="ml-2 hint">{`not counted: ${setAside}`}</span> : null}
+                {setAside ? <span className="ml-2 hint">{`not counted: ${late ? setAside.replace(/^arrived after the [^:]+: /, "") : setAside}`}</span> : null}
               </li>
             );
           })}
