@@ -24,6 +24,30 @@ export default tseslint.config(
     files: ["lib/env.ts", "scripts/**", "fakes/**", "tests/**", "drizzle.config.ts", "playwright.config.ts", "vitest.config.ts"],
     rules: { "no-restricted-properties": "off" },
   },
+  // Where code may run, enforced: browser code never reaches the database or server-only modules,
+  // and the pure domain modules take no framework and no I/O (DEVELOPERS.md, "Where code runs").
+  {
+    files: ["components/**/*.{ts,tsx}", "app/**/_components/**/*.{ts,tsx}", "lib/cart/**/*.ts", "lib/api-client.ts", "lib/citing-target.ts", "worker/service/**/*.ts"],
+    rules: {
+      "no-restricted-imports": ["error", {
+        patterns: [
+          { group: ["@/db", "@/db/*", "../db", "../db/*", "drizzle-orm", "drizzle-orm/*", "pg", "pg-boss"], message: "Browser code cannot reach the database: take the data from the API or a server component." },
+          { group: ["server-only", "@/lib/auth/session", "next/headers"], message: "A server-only module in browser code." },
+        ],
+      }],
+    },
+  },
+  {
+    files: ["lib/calc/**/*.ts", "lib/runs/fold.ts", "lib/runs/hours.ts", "lib/runs/work-status.ts", "lib/revisions/compare.ts", "search/query.ts", "lib/edge.ts", "lib/vocabulary.ts", "lib/escape.ts", "lib/auth/permissions.ts", "lib/auth/throttle.ts", "lib/pdf/text.ts"],
+    rules: {
+      "no-restricted-imports": ["error", {
+        patterns: [
+          { group: ["@/db", "@/db/*", "drizzle-orm", "drizzle-orm/*", "pg", "pg-boss", "node:*", "server-only"], message: "Pure domain code: no database and no I/O, so it is unit-tested without a server." },
+          { group: ["next", "next/*", "react", "react-dom", "react/*"], message: "Pure domain code: no framework." },
+        ],
+      }],
+    },
+  },
   {
     files: ["scripts/**/*.mjs", "server/**/*.mjs"],
     languageOptions: {

@@ -5,6 +5,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { Document, Page, pdfjs } from "react-pdf";
 import "react-pdf/dist/Page/TextLayer.css";
+import { escapeHtml, escapeRegExp } from "@/lib/escape";
 import { chunkSize, getRange, takePdfWorker } from "./pdf-prefetch";
 
 // Copied from pdfjs-dist by scripts/lib.mjs (copyPdfWorker) before every build.
@@ -29,13 +30,7 @@ if (typeof window !== "undefined") readerWorker();
 const gap = 16;
 const nearby = 2; // pages drawn above and below the visible ones
 
-function escapeHtml(s: string) {
-  return s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c);
-}
 
-function escapeRegExp(s: string) {
-  return s.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
-}
 
 export interface PdfReaderProps {
   fileUrl: string;

@@ -4,6 +4,8 @@ import { getEnv } from "@/lib/env";
 import * as schema from "./schema";
 
 export type Db = NodePgDatabase<typeof schema>;
+/** A transaction handed to `getDb().transaction(async (tx) => …)`. */
+export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 // One pool per process. In development Next reloads modules, so the pool lives on globalThis
 // rather than in module scope, or every reload would open another pool.

@@ -3,9 +3,10 @@ import {
   bigint, boolean, check, customType, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, real, text, timestamp, uniqueIndex, uuid,
   type AnyPgColumn,
 } from "drizzle-orm/pg-core";
+import { documentTypes, roles, runStatuses, userStatuses } from "../lib/vocabulary";
 
-export const userRole = pgEnum("user_role", ["student", "instructor", "librarian", "admin"]);
-export const userStatus = pgEnum("user_status", ["invited", "active", "deactivated"]);
+export const userRole = pgEnum("user_role", roles);
+export const userStatus = pgEnum("user_status", userStatuses);
 export const tokenPurpose = pgEnum("token_purpose", ["invitation", "password_reset"]);
 
 const timestamps = {
@@ -108,15 +109,6 @@ export const auditEvents = pgTable(
   (t) => [index("audit_events_created_idx").on(t.createdAt)],
 );
 
-export const documentTypes = [
-  "maintenance_manual",
-  "overhaul_manual",
-  "parts_catalog",
-  "service_bulletin",
-  "airworthiness_directive",
-  "handbook",
-  "school_procedure",
-] as const;
 export const documentType = pgEnum("document_type", documentTypes);
 export const revisionStatus = pgEnum("revision_status", ["queued", "processing", "ready", "failed"]);
 
@@ -368,7 +360,6 @@ export type CardCitation = typeof cardCitations.$inferSelect;
 export type Manual = typeof manuals.$inferSelect;
 export type Revision = typeof revisions.$inferSelect;
 export type Page = typeof pages.$inferSelect;
-export type DocumentType = (typeof documentTypes)[number];
 
 export type User = typeof users.$inferSelect;
 export type NewUser = typeof users.$inferInsert;
@@ -397,7 +388,7 @@ export const assignments = pgTable(
   (t) => [index("assignments_version_idx").on(t.versionId)],
 );
 
-export const runStatus = pgEnum("run_status", ["not_started", "in_progress", "submitted", "returned", "signed_off"]);
+export const runStatus = pgEnum("run_status", runStatuses);
 
 /**
  * One student's run of an assignment. Its state is folded from run_events (lib/runs/fold.ts);

@@ -1,10 +1,9 @@
 import { and, desc, eq, gte, like, lt, or, sql, type SQL } from "drizzle-orm";
-import type { Db } from "@/db";
+import type { Db, Tx } from "@/db";
 import { getDb } from "@/db";
 import { auditEvents, users } from "@/db/schema";
 import { auditKinds, type AuditKind } from "./validation/audit";
 
-type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 export interface AuditEntry {
   actorId: string | null;

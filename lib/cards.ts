@@ -1,6 +1,6 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
-import { getDb, type Db } from "@/db";
+import { getDb, type Db, type Tx } from "@/db";
 import { cardCitations, cardCoauthors, citationRechecks, curriculumSubjects, manuals, revisions, taskCards, taskCardVersions, users } from "@/db/schema";
 import { recordAudit } from "./audit";
 import { can, type Actor } from "./auth/permissions";
@@ -11,7 +11,6 @@ import {
   cardContentSchema, publishableCardSchema, sortNotices, stepSchema, versionNumberSchema, type CardContent, type Step,
 } from "./validation/cards";
 
-type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 const notFound = () => new AppError("not_found", "That task card was not found.");
 const frozen = () =>

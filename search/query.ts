@@ -1,6 +1,7 @@
 // Turns what a student types into the parts of a search. Pure and forgiving: any input gives a
 // query (maybe an empty one), never an error. Supported: words, "quoted phrases", -excluded words
 // or -"phrases", and a last word still being typed (searched as a prefix).
+import { escapeHtml } from "@/lib/escape";
 import abbreviations from "./abbreviations.json";
 
 export interface QueryWord {
@@ -85,6 +86,5 @@ export const markStart = "\u0002";
 export const markEnd = "\u0003";
 
 export function snippetToHtml(snippet: string): string {
-  const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c);
-  return escape(snippet).replaceAll(markStart, "<mark>").replaceAll(markEnd, "</mark>");
+  return escapeHtml(snippet).replaceAll(markStart, "<mark>").replaceAll(markEnd, "</mark>");
 }

@@ -1,9 +1,9 @@
 // Who may do what. Pure: no database, no Next, so it is unit-tested on its own. Every page, action
 // and route handler asks here; nothing else in the code compares role names.
 import { AppError } from "../errors";
+import { roles, type Role } from "../vocabulary";
 
-export const roles = ["student", "instructor", "librarian", "admin"] as const;
-export type Role = (typeof roles)[number];
+export { roles, type Role };
 
 export const roleLabels: Record<Role, string> = {
   student: "Student",

@@ -1,9 +1,7 @@
 // Marks the searched words in a page's text, for the page view opened from a search hit. Pure.
+import { escapeRegExp } from "@/lib/escape";
 import { markEnd, markStart, parseQuery, snippetToHtml } from "@/search/query";
 
-function escapeRegExp(s: string) {
-  return s.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
-}
 
 /**
  * The beginnings of the words to mark for a query: each word, its expansions, and `also` (the

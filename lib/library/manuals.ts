@@ -1,7 +1,8 @@
 import "server-only";
 import { and, asc, desc, eq, sql } from "drizzle-orm";
 import { getDb } from "@/db";
-import { manuals, pages, revisions, users, type DocumentType } from "@/db/schema";
+import { manuals, pages, revisions, users } from "@/db/schema";
+import type { DocumentType } from "@/lib/vocabulary";
 import { recordAudit } from "../audit";
 import { can, type Actor } from "../auth/permissions";
 import { AppError } from "../errors";

@@ -1,5 +1,6 @@
 // The mails Hangarleaf sends, as plain text with a simple HTML twin. Pure functions.
 import { z } from "zod";
+import { escapeHtml } from "../escape";
 
 export const mailMessageSchema = z.object({
   to: z.string().min(3),
@@ -9,9 +10,6 @@ export const mailMessageSchema = z.object({
 });
 export type MailMessage = z.infer<typeof mailMessageSchema>;
 
-function escapeHtml(value: string): string {
-  return value.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c);
-}
 
 function withLink(paragraphs: string[], link: { label: string; href: string }, after: string[]) {
   const text = [...paragraphs, `${link.label}: ${link.href}`, ...after, "— Hangarleaf"].join("\n\n");

@@ -8,6 +8,8 @@
 //    move (a chapter moved), similar text near the same place is a change; the rest are added
 //    (new side) or removed (old side).
 
+import { escapeRegExp } from "@/lib/escape";
+
 export type PageStatus = "unchanged" | "changed" | "moved" | "added" | "removed";
 
 export interface PageChange {
@@ -35,9 +37,6 @@ export interface CompareOptions {
 const dateLike = /\b(\d{4}-\d{2}-\d{2}|\d{1,2}\/\d{1,2}\/\d{2,4}|\d{1,2} (jan|feb|mar|apr|may|jun|jul|aug|sep|oct|nov|dec)[a-z]* \d{4}|(jan|feb|mar|apr|may|jun|jul|aug|sep|oct|nov|dec)[a-z]* \d{1,2},? \d{4})\b/g;
 const pageWord = /\b(page|pg\.?|p\.)\s*\d+(\s*(of|\/)\s*\d+)?\b/g;
 
-function escapeRegExp(s: string) {
-  return s.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
-}
 
 /** The lines of a page with digits masked: the shape a running header keeps from page to page. */
 function lineShape(line: string) {

@@ -9,6 +9,7 @@
 // says, so a back-dated event cannot slip under a buy-off, a hand-in or a sign-off. Such an event is
 // kept and shown as "arrived after …", never folded into what the instructor saw or signed.
 import { judgeValue, type Judgement, type Limit } from "@/lib/calc/limits";
+import type { RunStatus } from "@/lib/vocabulary";
 
 export const runEventTypes = [
   "step.checked",
@@ -54,7 +55,7 @@ export interface StepState {
   boughtOff: { by: string; at: string } | null;
 }
 
-export type RunStatus = "not_started" | "in_progress" | "submitted" | "returned" | "signed_off";
+export type { RunStatus };
 
 export interface RunState {
   status: RunStatus;

@@ -5,7 +5,7 @@ import { and, eq, inArray, sql } from "drizzle-orm";
 import { PDFDocument, type PDFPage } from "pdf-lib";
 import type { Db } from "@/db";
 import { manuals, pages, revisions } from "@/db/schema";
-import type { Tx } from "@/lib/audit";
+import type { Tx } from "@/db";
 import type { CardVersionDto } from "@/lib/dto-cards";
 import type { PacketPageDto } from "@/lib/dto-runs";
 import { getStore, storageKeys } from "@/lib/storage";

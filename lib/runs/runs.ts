@@ -1,8 +1,8 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, ne, sql } from "drizzle-orm";
-import { getDb, type Db } from "@/db";
+import { getDb, type Db, type Tx } from "@/db";
 import { assignments, classes, classMembers, curriculumSubjects, runEvents, runPhotos, runs, signOffs, taskCards, taskCardVersions, users } from "@/db/schema";
-import { recordAudit, type Tx } from "@/lib/audit";
+import { recordAudit } from "@/lib/audit";
 import { can, type Actor } from "@/lib/auth/permissions";
 import { getVersionById } from "@/lib/cards";
 import type { CardVersionDto } from "@/lib/dto-cards";
@@ -12,7 +12,7 @@ import { stepSchema } from "@/lib/validation/cards";
 import type { RunEventInput } from "@/lib/validation/runs";
 import { foldRun, orderEvents, type CardStepForRun, type RunEvent, type RunState, type RunStatus } from "./fold";
 import { workingMinutes } from "./hours";
-import { packetFor } from "./packet";
+import { packetBytes, packetFor } from "./packet";
 import { assignableStudents, reviewScope, reviewsRun } from "./scope";
 import { workStatusOf } from "./work-status";
 
@@ -275,6 +275,15 @@ export async function getRunDetail({ actor, runId }: { actor: Actor; runId: stri
     keepOnCarts: packet.keepOnCarts,
     state,
   };
+}
+
+/** The run's offline packet as PDF bytes: only the pages its card version cites. */
+export async function getRunPacket({ actor, runId }: { actor: Actor; runId: string }): Promise<{ bytes: Uint8Array; hash: string }> {
+  const db = getDb();
+  const run = await loadRun(db, actor, runId);
+  const plan = await packetFor(db, await getVersionById(run.versionId, db));
+  if (!plan.pages.length) throw new AppError("not_found", "This card cites no manual pages.");
+  return { bytes: await packetBytes(db, plan), hash: plan.hash };
 }
 
 // ---------------------------------------------------------------- writing events

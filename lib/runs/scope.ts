@@ -1,8 +1,7 @@
 import "server-only";
 import { sql, type SQL } from "drizzle-orm";
-import type { Db } from "@/db";
+import type { Db, Tx } from "@/db";
 import { assignments, runs } from "@/db/schema";
-import type { Tx } from "@/lib/audit";
 import { can, type Actor } from "@/lib/auth/permissions";
 
 // Whose work an instructor may review, buy off, sign off and read records of: the students of the

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { documentTypes } from "@/db/schema";
+import { documentTypes } from "@/lib/vocabulary";
 import { calendarDay } from "./dates";
 
 export const documentTypeLabels: Record<(typeof documentTypes)[number], string> = {

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { documentTypes } from "@/db/schema";
+import { documentTypes } from "@/lib/vocabulary";
 
 const flag = z
   .enum(["1", "0", "true", "false"], { error: "Use 1 or 0." })

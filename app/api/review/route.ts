@@ -1,9 +1,10 @@
 import { z } from "zod";
 import { requireApiUser } from "@/lib/auth/session";
 import { route } from "@/lib/http";
+import { runStatuses } from "@/lib/vocabulary";
 import { listReviewQueue } from "@/lib/runs/runs";
 
-const statusSchema = z.enum(["in_progress", "submitted", "returned", "signed_off"]).catch("submitted");
+const statusSchema = z.enum(runStatuses.filter((s) => s !== "not_started")).catch("submitted");
 
 export const GET = route(async (request) => {
   const actor = await requireApiUser("runs:review");

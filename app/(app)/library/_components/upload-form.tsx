@@ -7,7 +7,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { FormField } from "@/components/form-field";
-import { documentTypes } from "@/db/schema";
+import { documentTypes } from "@/lib/vocabulary";
 import { formatBytes } from "@/lib/library/format";
 import { documentTypeLabels, manualUploadSchema, revisionFieldsSchema } from "@/lib/validation/library";
 import { useRetryRevision, useRevisionStatus } from "./use-revision-status";

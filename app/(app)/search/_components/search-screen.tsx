@@ -4,7 +4,7 @@ import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { MarkedText } from "@/components/marked-text";
-import { documentTypes } from "@/db/schema";
+import { documentTypes } from "@/lib/vocabulary";
 import { ApiError } from "@/lib/api-client";
 import { documentTypeLabels } from "@/lib/validation/library";
 import { useSearch, type SearchHitDto, type SearchInput } from "./use-search";

@@ -1,4 +1,5 @@
 import { requireApiUser } from "@/lib/auth/session";
+import { fileResponse, fileSlug } from "@/lib/file-response";
 import { idParam, route } from "@/lib/http";
 import { studentRecord, studentRecordCsv, studentRecordPdf } from "@/lib/runs/records";
 
@@ -9,16 +10,8 @@ export const GET = route<Context>(async (request, { params }) => {
   const actor = await requireApiUser("records:view");
   const record = await studentRecord({ actor, studentId: idParam((await params).id, "That record") });
   const format = new URL(request.url).searchParams.get("format");
-  const base = `record-${record.student.name.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "student"}`;
-  if (format === "csv") {
-    return new Response(studentRecordCsv(record), {
-      headers: { "Content-Type": "text/csv; charset=utf-8", "Content-Disposition": `attachment; filename="${base}.csv"`, "Cache-Control": "private, no-store" },
-    });
-  }
-  if (format === "pdf") {
-    return new Response(Buffer.from(await studentRecordPdf(record)), {
-      headers: { "Content-Type": "application/pdf", "Content-Disposition": `inline; filename="${base}.pdf"`, "Cache-Control": "private, no-store" },
-    });
-  }
+  const base = `record-${fileSlug(record.student.name, "student")}`;
+  if (format === "csv") return fileResponse(studentRecordCsv(record), { type: "text/csv; charset=utf-8", filename: `${base}.csv`, download: true });
+  if (format === "pdf") return fileResponse(await studentRecordPdf(record), { type: "application/pdf", filename: `${base}.pdf` });
   return Response.json(record);
 });

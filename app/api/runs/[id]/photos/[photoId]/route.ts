@@ -1,4 +1,4 @@
-import { Readable } from "node:stream";
+import { fileResponse } from "@/lib/file-response";
 import { requireApiUser } from "@/lib/auth/session";
 import { idParam, isUuid, route } from "@/lib/http";
 import { readPhoto, storePhoto } from "@/lib/runs/photos";
@@ -18,7 +18,5 @@ export const GET = route<Context>(async (_request, { params }) => {
   const actor = await requireApiUser();
   const { id, photoId } = await params;
   const { body, size, contentType } = await readPhoto({ actor, runId: idParam(id, "That run"), photoId: idParam(photoId, "That photo") });
-  return new Response(Readable.toWeb(body) as ReadableStream, {
-    headers: { "Content-Type": contentType, "Content-Length": String(size), "Cache-Control": "private, no-store", "X-Content-Type-Options": "nosniff" },
-  });
+  return fileResponse(body, { type: contentType, size });
 });

@@ -1,4 +1,4 @@
-import { Readable } from "node:stream";
+import { fileResponse } from "@/lib/file-response";
 import { requireApiUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
 import { idParam, parseWith, route } from "@/lib/http";
@@ -14,7 +14,5 @@ export const GET = route<Context>(async (_request, { params }) => {
   const page = await getPage({ revisionId: idParam(id, "That revision"), pageNumber: parseWith(pageNumberSchema, n) });
   if (!page.thumbnailKey) throw new AppError("not_found", "This page has no thumbnail yet.");
   const { body, size } = await getStore().get(page.thumbnailKey);
-  return new Response(Readable.toWeb(body) as ReadableStream, {
-    headers: { "Content-Type": "image/png", "Content-Length": String(size), "Cache-Control": "private, max-age=86400, immutable" },
-  });
+  return fileResponse(body, { type: "image/png", size, cache: "private, max-age=86400, immutable" });
 });

@@ -1,0 +1,23 @@
+// The words the database, the server and the browser share: each list once, here. Pure data, so a
+// client component can import it without drizzle's pg-core coming along (db/schema.ts builds its
+// enums from these).
+
+export const roles = ["student", "instructor", "librarian", "admin"] as const;
+export type Role = (typeof roles)[number];
+
+export const userStatuses = ["invited", "active", "deactivated"] as const;
+export type UserStatus = (typeof userStatuses)[number];
+
+export const documentTypes = [
+  "maintenance_manual",
+  "overhaul_manual",
+  "parts_catalog",
+  "service_bulletin",
+  "airworthiness_directive",
+  "handbook",
+  "school_procedure",
+] as const;
+export type DocumentType = (typeof documentTypes)[number];
+
+export const runStatuses = ["not_started", "in_progress", "submitted", "returned", "signed_off"] as const;
+export type RunStatus = (typeof runStatuses)[number];
