@@ -1,18 +1,13 @@
 // The job worker: a separate process started by `npm start`, running the durable jobs queued in
-// PostgreSQL. More of these can run side by side; pg-boss hands each job to one of them.
+// PostgreSQL (declared in lib/jobs.ts, handled in ./handlers.ts). More of these can run side by
+// side; pg-boss hands each job to one of them.
 import PgBoss from "pg-boss";
-import { z } from "zod";
 import { closeDb } from "../db";
 import { getEnv } from "../lib/env";
-import { failRevision, findStaleRevisions, ingestRevision, maxAttempts } from "../lib/ingest/ingest-revision";
+import { failRevision, findStaleRevisions, maxAttempts } from "../lib/ingest/ingest-revision";
 import { queueIngest } from "../lib/ingest/queue";
-import { makeReaderCopy, makeThumbnails } from "../lib/ingest/thumbnails";
-import { createQueues, queues } from "../lib/jobs";
-import { deliverMail } from "../lib/mail";
-import { mailMessageSchema } from "../lib/mail/messages";
-import { compareRevision } from "../lib/revisions/impact";
-
-const revisionJob = z.object({ revisionId: z.uuid() });
+import { createQueues, deadLetterQueue, jobs, type JobName } from "../lib/jobs";
+import { handlers } from "./handlers";
 
 async function main() {
   const boss = new PgBoss({ connectionString: getEnv().DATABASE_URL, max: 4 });
@@ -20,48 +15,21 @@ async function main() {
   await boss.start();
   await createQueues(boss);
 
-  await boss.work(queues.sendMail.name, { pollingIntervalSeconds: 1 }, async (jobs) => {
-    for (const job of jobs) {
-      const parsed = mailMessageSchema.safeParse(job.data);
-      // A malformed job would fail the same way on every retry: log it and let it go.
-      if (!parsed.success) {
-        console.error(`mail job ${job.id} is malformed and was dropped`, parsed.error.issues);
-        continue;
+  for (const [key, job] of Object.entries(jobs) as [JobName, (typeof jobs)[JobName]][]) {
+    const handle = handlers[key] as (payload: unknown) => Promise<void>;
+    await boss.work(job.name, { pollingIntervalSeconds: job.pollingIntervalSeconds }, async (batch) => {
+      for (const item of batch) {
+        const parsed = job.payload.safeParse(item.data);
+        // A payload that does not fit would fail the same way on every retry: to the dead letters.
+        if (!parsed.success) {
+          console.error(`${job.name} job ${item.id} has a malformed payload; moved to ${deadLetterQueue}`, parsed.error.issues);
+          await boss.send(deadLetterQueue, { queue: job.name, jobId: item.id, data: item.data, issues: parsed.error.issues.map((i) => i.message) });
+          continue;
+        }
+        await handle(parsed.data);
       }
-      await deliverMail(parsed.data);
-      console.log(`sent "${parsed.data.subject}" to ${parsed.data.to}`);
-    }
-  });
-
-  // Polled often: a librarian is watching the progress bar.
-  await boss.work(queues.ingestRevision.name, { pollingIntervalSeconds: 0.5 }, async (jobs) => {
-    for (const job of jobs) {
-      const parsed = revisionJob.safeParse(job.data);
-      if (!parsed.success) {
-        console.error(`ingest job ${job.id} is malformed and was dropped`);
-        continue;
-      }
-      await ingestRevision({ revisionId: parsed.data.revisionId });
-    }
-  });
-
-  await boss.work(queues.makeThumbnails.name, { pollingIntervalSeconds: 2 }, async (jobs) => {
-    for (const job of jobs) {
-      const parsed = revisionJob.safeParse(job.data);
-      if (!parsed.success) continue;
-      const packed = await makeReaderCopy(parsed.data);
-      console.log(`revision ${parsed.data.revisionId}: reader copy ${packed ? "made" : "not made"}, ${await makeThumbnails(parsed.data)} thumbnails`);
-    }
-  });
-
-  await boss.work(queues.compareRevision.name, { pollingIntervalSeconds: 1 }, async (jobs) => {
-    for (const job of jobs) {
-      const parsed = revisionJob.safeParse(job.data);
-      if (!parsed.success) continue;
-      const outcome = await compareRevision(parsed.data);
-      if (outcome.flagged) console.log(`revision ${parsed.data.revisionId}: ${outcome.flagged} citations to recheck, ${outcome.mailed} instructors told`);
-    }
-  });
+    });
+  }
 
   // A worker killed half way leaves its revision "processing" with a heartbeat that stops: queue
   // it again (the next claim starts it clean), or fail it once it has used its attempts.

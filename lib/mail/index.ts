@@ -1,12 +1,11 @@
 import nodemailer, { type Transporter } from "nodemailer";
 import { getEnv } from "../env";
-import { getQueue, queues } from "../jobs";
+import { sendJob } from "../jobs";
 import type { MailMessage } from "./messages";
 
 /** Mail goes through the job queue: a slow or absent SMTP server never holds up a request. */
 export async function queueMail(message: MailMessage): Promise<void> {
-  const boss = await getQueue();
-  await boss.send(queues.sendMail.name, message);
+  await sendJob("sendMail", message);
 }
 
 let transport: Transporter | undefined;

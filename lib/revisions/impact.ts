@@ -8,7 +8,7 @@ import {
   cardCitations, citationRechecks, manuals, pages, revisionComparisons, revisions, taskCards, taskCardVersions, users,
 } from "@/db/schema";
 import { getEnv } from "../env";
-import { getQueue, queues } from "../jobs";
+import { sendJob } from "../jobs";
 import { queueMail } from "../mail";
 import { revisionImpactMail } from "../mail/messages";
 import { comparePages, suggestPage, type Comparison, type PageChange } from "./compare";
@@ -16,8 +16,7 @@ import { comparePages, suggestPage, type Comparison, type PageChange } from "./c
 const log = (message: string) => console.log(`[compare] ${message}`);
 
 export async function queueComparison({ revisionId }: { revisionId: string }) {
-  const boss = await getQueue();
-  await boss.send(queues.compareRevision.name, { revisionId }, { singletonKey: revisionId });
+  await sendJob("compareRevision", { revisionId });
 }
 
 /**

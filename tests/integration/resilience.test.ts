@@ -8,6 +8,7 @@ import { eq, sql } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { pages, revisions } from "@/db/schema";
+import { deadLetterQueue, getQueue, jobs } from "@/lib/jobs";
 import { call, demo, signIn } from "../support/http";
 import { makePdf, uniqueTitle, upload, waitForRevision } from "../support/library";
 
@@ -47,4 +48,20 @@ describe.skipIf(!process.env.HL_PIDS_DIR)("the job worker killed during an inges
     const [row] = await getDb().select({ attempts: revisions.attempts }).from(revisions).where(eq(revisions.id, revisionId));
     expect(row!.attempts).toBeGreaterThanOrEqual(2);
   }, 180_000);
+});
+
+describe("a job whose payload cannot be read", () => {
+  it("is moved to the dead-letter queue, not retried or dropped silently", async () => {
+    const boss = await getQueue();
+    const id = await boss.send(jobs.ingestRevision.name, { revisionId: "not-a-uuid" });
+    expect(id).toBeTruthy();
+    const deadline = Date.now() + 30_000;
+    let found = 0;
+    while (!found && Date.now() < deadline) {
+      const rows = await getDb().execute<{ n: number }>(sql`select count(*)::int as n from pgboss.job where name = ${deadLetterQueue} and data->>'jobId' = ${id}`);
+      found = rows.rows[0]?.n ?? 0;
+      if (!found) await new Promise((r) => setTimeout(r, 300));
+    }
+    expect(found).toBe(1);
+  });
 });
