@@ -91,7 +91,7 @@ describe("a signed record cannot be bent by a cart's clock", () => {
     // The page the instructor reviews on: the bought-off value stands, the late one is listed as late.
     const page = await (await call("GET", `/review/${runId}`, { cookie: teacher.cookie })).text();
     expect(page).toContain("arrived after the buy-off");
-    expect(page).toMatch(/not counted: arrived after the buy-off/);
+    expect(page).toContain("not counted: this inspection point is bought off");
   });
 
   it("keeps a handed-in run as handed in, and signs off what was handed in", async () => {
