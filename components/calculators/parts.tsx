@@ -36,7 +36,7 @@ export function SelectField<T extends string>({ label, value, onChange, options 
   return (
     <div className="field">
       <label htmlFor={id} className="label">{label}</label>
-      <select id={id} className="input max-w-80" value={value} onChange={(e) => onChange(e.target.value as T)}>
+      <select id={id} className="input w-full max-w-md" value={value} onChange={(e) => onChange(e.target.value as T)}>
         {options.map(([v, text]) => (
           <option key={v} value={v}>{text}</option>
         ))}
