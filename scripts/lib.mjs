@@ -276,12 +276,19 @@ export function supervise(name, command, args, env, { pidFile } = {}) {
     const startedAt = Date.now();
     const child = service(name, command, args, env, (_name, code, signal) => {
       if (stoppingAll) return;
+      // What the dead process started (tsx runs the script in a child of its own) goes with it.
+      try {
+        process.kill(-child.pid, "SIGKILL");
+      } catch {
+        /* the whole group is gone already */
+      }
       restarts = Date.now() - startedAt > 60_000 ? 1 : restarts + 1;
       const wait = restartDelaySeconds(restarts);
       log(`${name} stopped unexpectedly (${signal ?? `exit code ${code}`}); starting it again in ${wait} s (restart ${restarts} in a row)`);
+      // Not unref'd: with every service down at once, this timer keeps the supervisor alive.
       setTimeout(() => {
         if (!stoppingAll) start();
-      }, wait * 1000).unref();
+      }, wait * 1000);
     });
     if (pidFile) {
       mkdirSync(path.dirname(pidFile), { recursive: true });

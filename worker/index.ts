@@ -31,7 +31,7 @@ async function main() {
     });
   }
 
-  // A worker killed half way leaves its revision "processing" with a heartbeat that stops: queue
+  // A worker killed half way leaves its revision "processing" with nobody holding its lock: queue
   // it again (the next claim starts it clean), or fail it once it has used its attempts.
   const sweep = async () => {
     for (const stale of await findStaleRevisions()) {

@@ -1,5 +1,5 @@
 import "server-only";
-import { eq, inArray, sql } from "drizzle-orm";
+import { and, eq, inArray, sql } from "drizzle-orm";
 import { getDb } from "@/db";
 import { signInThrottles, users } from "@/db/schema";
 import { AppError } from "../errors";
@@ -8,32 +8,33 @@ import { delayAfterFailures, failuresAfter, resetThrottleKeys, throttleKeys, thr
 
 const wrongCredentials = "That e-mail and password do not match an active account.";
 
-async function secondsBlocked(keys: string[], now: Date): Promise<number> {
-  const rows = await getDb()
-    .select({ blockedUntil: signInThrottles.blockedUntil })
-    .from(signInThrottles)
-    .where(inArray(signInThrottles.key, keys));
-  const until = Math.max(0, ...rows.map((r) => r.blockedUntil?.getTime() ?? 0));
-  return until > now.getTime() ? Math.ceil((until - now.getTime()) / 1000) : 0;
+/**
+ * Counts one attempt on `key` before the password is checked, unless the key is blocked now, in
+ * one transaction holding the key's row: of many attempts sent at once, only the free ones get
+ * through to the check. Returns the seconds to wait (0 when this attempt was counted and may go on).
+ */
+async function reserveAttempt(key: string, rule: ThrottleRule, now: Date): Promise<number> {
+  return getDb().transaction(async (tx) => {
+    await tx.insert(signInThrottles).values({ key, failures: 0, lastFailureAt: now, blockedUntil: null }).onConflictDoNothing();
+    const [row] = await tx.select().from(signInThrottles).where(eq(signInThrottles.key, key)).for("update");
+    const blockedUntil = row?.blockedUntil?.getTime() ?? 0;
+    if (blockedUntil > now.getTime()) return Math.ceil((blockedUntil - now.getTime()) / 1000);
+    const failures = row && row.failures > 0 ? failuresAfter(row.failures, row.lastFailureAt, now) : 1;
+    const delay = delayAfterFailures(failures, rule);
+    await tx
+      .update(signInThrottles)
+      .set({ failures, lastFailureAt: now, blockedUntil: delay > 0 ? new Date(now.getTime() + delay * 1000) : null })
+      .where(eq(signInThrottles.key, key));
+    return 0;
+  });
 }
 
-async function recordFailure(key: string, rule: ThrottleRule, now: Date): Promise<void> {
-  const db = getDb();
-  await db.transaction(async (tx) => {
-    // Lock the row so two simultaneous failures both count.
-    const [row] = await tx
-      .select()
-      .from(signInThrottles)
-      .where(eq(signInThrottles.key, key))
-      .for("update");
-    const failures = failuresAfter(row?.failures ?? 0, row?.lastFailureAt ?? null, now);
-    const delay = delayAfterFailures(failures, rule);
-    const blockedUntil = delay > 0 ? new Date(now.getTime() + delay * 1000) : null;
-    await tx
-      .insert(signInThrottles)
-      .values({ key, failures, lastFailureAt: now, blockedUntil })
-      .onConflictDoUpdate({ target: signInThrottles.key, set: { failures, lastFailureAt: now, blockedUntil } });
-  });
+/** Reserves the attempt on every key; the longest wait wins, and nothing is counted past a block. */
+async function reserveAll(keys: [string, ThrottleRule][], now: Date, what: string): Promise<void> {
+  for (const [key, rule] of keys) {
+    const wait = await reserveAttempt(key, rule, now);
+    if (wait > 0) throw new AppError("rate_limited", `Too many ${what}. Wait ${wait} seconds, then try again.`, { retryAfterSeconds: wait });
+  }
 }
 
 /**
@@ -43,12 +44,9 @@ async function recordFailure(key: string, rule: ThrottleRule, now: Date): Promis
 export async function verifySignIn({ email, password, address }: { email: string; password: string; address: string }) {
   const now = new Date();
   const keys = throttleKeys(email, address);
-  const wait = await secondsBlocked([keys.pair, keys.account, keys.address], now);
-  if (wait > 0) {
-    throw new AppError("rate_limited", `Too many failed sign-ins. Wait ${wait} seconds, then try again.`, {
-      retryAfterSeconds: wait,
-    });
-  }
+  // Counted as a failure before the check, so attempts sent all at once cannot slip past a block;
+  // a right password takes its count back below.
+  await reserveAll([[keys.pair, throttlePolicy.pair], [keys.account, throttlePolicy.account], [keys.address, throttlePolicy.address]], now, "failed sign-ins");
 
   const [user] = await getDb()
     .select({
@@ -66,13 +64,16 @@ export async function verifySignIn({ email, password, address }: { email: string
 
   const matches = await verifyPassword(user?.passwordHash ?? (await getDummyHash()), password);
   if (!user || !matches || user.status !== "active") {
-    await recordFailure(keys.pair, throttlePolicy.pair, now);
-    await recordFailure(keys.account, throttlePolicy.account, now);
-    await recordFailure(keys.address, throttlePolicy.address, now);
     throw new AppError("unauthorized", wrongCredentials);
   }
 
+  // The right password: this person's counts start again, and the address gets its attempt back
+  // (a classroom behind one address signs in many times).
   await getDb().delete(signInThrottles).where(inArray(signInThrottles.key, [keys.pair, keys.account]));
+  await getDb()
+    .update(signInThrottles)
+    .set({ failures: sql`greatest(${signInThrottles.failures} - 1, 0)`, blockedUntil: null })
+    .where(and(eq(signInThrottles.key, keys.address), sql`${signInThrottles.failures} < ${throttlePolicy.address.free}`));
   await getDb().update(users).set({ lastSignInAt: sql`now()` }).where(eq(users.id, user.id));
   return { id: user.id, email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion };
 }
@@ -82,12 +83,6 @@ export async function verifySignIn({ email, password, address }: { email: string
  * account, so the answer says nothing of which exist); 429 once either has asked too often.
  */
 export async function throttleResetRequest({ email, address }: { email: string; address: string }): Promise<void> {
-  const now = new Date();
   const keys = resetThrottleKeys(email, address);
-  const wait = await secondsBlocked([keys.account, keys.address], now);
-  if (wait > 0) {
-    throw new AppError("rate_limited", `Too many password-reset requests. Wait ${wait} seconds, then try again.`, { retryAfterSeconds: wait });
-  }
-  await recordFailure(keys.account, throttlePolicy.resetAccount, now);
-  await recordFailure(keys.address, throttlePolicy.resetAddress, now);
+  await reserveAll([[keys.address, throttlePolicy.resetAddress], [keys.account, throttlePolicy.resetAccount]], new Date(), "password-reset requests");
 }

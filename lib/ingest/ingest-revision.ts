@@ -14,11 +14,12 @@ import { queueThumbnails } from "./queue";
 
 const batchSize = 200;
 export const heartbeatSeconds = 15;
-/** A processing revision whose worker said nothing for this long has lost its worker. */
-export const staleAfterSeconds = 120;
 export const maxAttempts = 3;
 
 type Outcome = "ready" | "failed" | "skipped";
+
+/** This attempt's claim was taken over (the sweeper queued the revision again meanwhile). */
+class GivenUp extends Error {}
 
 /**
  * While a worker reads a revision it holds a PostgreSQL advisory lock on it, on a connection of its
@@ -119,7 +120,7 @@ async function ingestLocked({ revisionId, log }: { revisionId: string; log: (m: 
       const [me] = await tx.select({ revisionDate: revisions.revisionDate }).from(revisions).where(eq(revisions.id, revisionId));
       // A revision that finishes after a newer one stays readable but does not take over.
       const becomesCurrent = !manual?.currentRevisionId || !manual.currentDate || (me && me.revisionDate >= manual.currentDate);
-      await tx
+      const [turned] = await tx
         .update(revisions)
         .set({
           status: "ready",
@@ -129,7 +130,10 @@ async function ingestLocked({ revisionId, log }: { revisionId: string; log: (m: 
           heartbeatAt: null,
           supersededAt: becomesCurrent ? null : sql`now()`,
         })
-        .where(eq(revisions.id, revisionId));
+        // Only the attempt this worker claimed turns it ready: a sweeper that gave it up meanwhile wins.
+        .where(and(eq(revisions.id, revisionId), eq(revisions.status, "processing"), eq(revisions.attempts, claimed.attempts)))
+        .returning({ id: revisions.id });
+      if (!turned) throw new GivenUp();
       if (becomesCurrent) {
         if (manual?.currentRevisionId) {
           await tx.update(revisions).set({ supersededAt: sql`now()` }).where(eq(revisions.id, manual.currentRevisionId));
@@ -155,6 +159,11 @@ async function ingestLocked({ revisionId, log }: { revisionId: string; log: (m: 
     await queueComparisonsAfterReady({ revisionId }).catch((error: unknown) => log(`comparison not queued: ${String(error)}`));
     return "ready";
   } catch (error) {
+    // Another attempt owns the revision now: leave it and its pages alone.
+    if (error instanceof GivenUp) {
+      log(`revision ${revisionId}: this attempt was given up while it ran; leaving it to the newer one`);
+      return "skipped";
+    }
     const known = error instanceof PdfProblem;
     const lastTry = known || claimed.attempts >= maxAttempts;
     if (!lastTry) {
@@ -174,12 +183,13 @@ async function ingestLocked({ revisionId, log }: { revisionId: string; log: (m: 
 }
 
 /**
- * Revisions whose worker died: "processing" with nobody holding their lock, or with a heartbeat
- * gone quiet. The sweeper puts them back in the queue, or fails them once they used their attempts.
+ * Revisions whose worker died: "processing" with nobody holding their lock (it went with the dead
+ * worker's connection). The sweeper puts them back in the queue, or fails them once they used their
+ * attempts.
  */
 export async function findStaleRevisions(): Promise<{ id: string; attempts: number }[]> {
   const processing = await getDb()
-    .select({ id: revisions.id, attempts: revisions.attempts, quiet: sql<boolean>`${revisions.heartbeatAt} < now() - make_interval(secs => ${staleAfterSeconds})` })
+    .select({ id: revisions.id, attempts: revisions.attempts })
     .from(revisions)
     .where(eq(revisions.status, "processing"));
   if (!processing.length) return [];
@@ -189,7 +199,8 @@ export async function findStaleRevisions(): Promise<{ id: string; attempts: numb
     for (const r of processing) {
       const { rows } = await probe.query<{ ok: boolean }>("select pg_try_advisory_lock(hashtextextended($1, 0)) as ok", [lockKey(r.id)]);
       if (rows[0]?.ok) await probe.query("select pg_advisory_unlock(hashtextextended($1, 0))", [lockKey(r.id)]);
-      if (rows[0]?.ok || r.quiet) orphaned.push({ id: r.id, attempts: r.attempts });
+      // Only a revision nobody holds: a live worker whose heartbeat went quiet keeps its work.
+      if (rows[0]?.ok) orphaned.push({ id: r.id, attempts: r.attempts });
     }
     return orphaned;
   } finally {

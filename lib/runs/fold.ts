@@ -122,7 +122,9 @@ export function orderEvents<E extends RunEvent>(events: readonly E[]): OrderedEv
       const event = byReceipt[i]!;
       const moment = momentOf(event.type);
       const at = laterOf(event.clientTime, moment ? latest : (wall?.at ?? ""));
-      const lateAfter = !moment && wall && at !== event.clientTime ? { moment: wall.moment, receivedAt: wall.receivedAt } : null;
+      // Late means stamped before the wall was received: a wall placed far ahead by one fast cart
+      // stamp does not make honest work after it look back-dated (it is still placed after it).
+      const lateAfter = wall && at !== event.clientTime && event.clientTime < wall.receivedAt ? { moment: wall.moment, receivedAt: wall.receivedAt } : null;
       placed.push({ event, at, lateAfter, batch });
       nextLatest = laterOf(nextLatest, at);
       if (moment && (!nextWall || at >= nextWall.at)) nextWall = { moment, at, receivedAt: event.serverTime ?? at };
@@ -164,6 +166,11 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
     }
     const isInstructor = instructors.has(e.userId);
     if (e.type === "run.submitted") {
+      // A hand-in made before the instructor's return (an offline cart's, sent late) is not a new one.
+      if (lateAfter?.moment === "return") {
+        setAside("handed in before the return");
+        continue;
+      }
       state.status = "submitted";
       continue;
     }

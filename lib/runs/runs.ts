@@ -331,7 +331,7 @@ export async function appendEvents({ actor, runId, events }: { actor: Actor; run
         // One receipt time for the batch, read after the run's lock: the fold orders batches by it,
         // and the transaction's start time (the column default) can be earlier than a batch that
         // held the lock first.
-        const serverTime = await receiptTime(tx);
+        const serverTime = await receiptTime(tx, runId);
         await tx.insert(runEvents).values(
           fresh.map((e) => ({ id: e.id, runId, userId: actor.id, type: e.type, stepId: e.stepId, payload: e.payload, clientTime: new Date(e.clientTime), serverTime })),
         );
@@ -349,8 +349,17 @@ export async function appendEvents({ actor, runId, events }: { actor: Actor; run
   }
 }
 
-async function receiptTime(tx: Tx): Promise<Date> {
-  const [row] = await tx.execute<{ now: Date | string }>(sql`select clock_timestamp() as now`).then((r) => r.rows);
+/**
+ * The receipt time of what is written now on this run, read under the run's lock: later than every
+ * receipt before it on the run, even within one millisecond (JavaScript keeps milliseconds) or if
+ * the clock steps back, so a batch never ties with the review moment it waited behind.
+ */
+async function receiptTime(tx: Tx, runId: string): Promise<Date> {
+  const [row] = await tx
+    .execute<{ now: Date | string }>(
+      sql`select greatest(clock_timestamp(), coalesce(max(server_time) + interval '1 millisecond', clock_timestamp())) as now from run_events where run_id = ${runId}`,
+    )
+    .then((r) => r.rows);
   return new Date(row!.now);
 }
 
@@ -359,7 +368,7 @@ async function receiptTime(tx: Tx): Promise<Date> {
  * received before it, so a cart whose clock runs fast cannot have earlier work folded in after it.
  */
 async function appendReviewEvent(tx: Tx, actor: Actor, runId: string, type: "run.returned" | "run.signed_off" | "inspection.bought_off", stepId: string | null, payload: Record<string, unknown>) {
-  const serverTime = await receiptTime(tx);
+  const serverTime = await receiptTime(tx, runId);
   await tx.insert(runEvents).values({ id: crypto.randomUUID(), runId, userId: actor.id, type, stepId, payload, clientTime: serverTime, serverTime });
 }
 
@@ -408,6 +417,17 @@ function revisionsCitedBy(version: CardVersionDto): SignOffDto["revisionsCited"]
   return [...byRevision.values()].map((e) => ({ ...e, pages: e.pages.sort((a, b) => a - b) }));
 }
 
+/**
+ * The student's events that count as work: folded (not set aside) and placed up to the last
+ * hand-in, so notes sent while waiting for the sign-off do not add hours.
+ */
+function workCounted(events: RunEvent[], state: RunState, studentId: string): RunEvent[] {
+  const setAside = new Set(state.ignored.map((i) => i.id));
+  const ordered = orderEvents(events).map((o) => o.event);
+  const lastHandIn = ordered.map((e) => e.type).lastIndexOf("run.submitted");
+  return ordered.slice(0, lastHandIn + 1).filter((e) => e.userId === studentId && !setAside.has(e.id));
+}
+
 export async function signOffRun({ actor, runId, comment }: { actor: Actor; runId: string; comment: string }) {
   try {
     return await getDb().transaction(async (tx) => {
@@ -418,10 +438,7 @@ export async function signOffRun({ actor, runId, comment }: { actor: Actor; runI
       const unchecked = version.steps.findIndex((s) => !state.steps[s.id]?.checked);
       if (unchecked >= 0) throw new AppError("invalid", `Step ${unchecked + 1} is not done. Return the run instead.`);
       await appendReviewEvent(tx, actor, runId, "run.signed_off", null, { comment });
-      const actualMinutes = workingMinutes(
-        events.filter((e) => e.userId === run.studentId),
-        { assignedAt: run.createdAt.toISOString() },
-      );
+      const actualMinutes = workingMinutes(workCounted(events, state, run.studentId), { assignedAt: run.createdAt.toISOString() });
       const revisionsCited = revisionsCitedBy(version);
       await tx.insert(signOffs).values({ runId, instructorId: actor.id, versionId: version.id, revisionsCited, actualMinutes, comment });
       await tx.update(runs).set({ status: "signed_off" }).where(eq(runs.id, runId));

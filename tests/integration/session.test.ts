@@ -45,6 +45,17 @@ describe("signing in", () => {
     expect((await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: fakeAddress() })).status).toBe(200);
   });
 
+  it("lets no more than the free attempts through when many are sent at once", async () => {
+    const account = await makeAccount("student");
+    const guesser = fakeAddress();
+    const answers = await Promise.all(
+      Array.from({ length: 30 }, (_, i) => call("POST", "/api/session", { json: { email: account.email, password: `guess-${i}-wrong` }, headers: guesser })),
+    );
+    const checked = answers.filter((a) => a.status === 401).length;
+    expect(checked).toBeLessThanOrEqual(throttlePolicy.pair.free);
+    expect(answers.filter((a) => a.status === 429).length).toBe(30 - checked);
+  });
+
   it("throttles password-reset requests per address and per account", async () => {
     const address = fakeAddress();
     const ask = (email: string, headers = address) => call("POST", "/api/password-resets", { json: { email }, headers });

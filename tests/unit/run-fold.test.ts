@@ -194,6 +194,23 @@ describe("a cart's clock cannot bend what was reviewed", () => {
     expect(state.late).toEqual([{ id: offline.id, after: "buy-off", at: at(2) }]);
   });
 
+  it("does not hand a returned run in again with a hand-in made before the return", () => {
+    const returned = live([ev("step.checked", 1, { stepId: "s1" }), ev("run.submitted", 2), ev("run.returned", 5, { userId: instructor, payload: { comment: "Redo" } })]);
+    const oldHandIn = got(ev("run.submitted", 3), 9); // a second cart's, offline, sent after the return
+    const state = foldRun([...returned, oldHandIn], steps, instructors);
+    expect(state.status).toBe("returned");
+    expect(state.ignored.map((i) => i.reason)).toEqual(["arrived after the return: handed in before the return"]);
+  });
+
+  it("does not call honest work late because one fast stamp pushed a review ahead", () => {
+    const fast = got(ev("step.checked", 50, { stepId: "s1" }), 2); // this cart's clock ran 48 minutes fast once
+    const boughtOff = got(ev("inspection.bought_off", 3, { stepId: "s2", userId: instructor }), 3);
+    const honest = got(ev("step.checked", 4, { stepId: "s3" }), 4);
+    const state = foldRun([fast, got(ev("step.checked", 2, { stepId: "s2" }), 2), boughtOff, honest], steps, instructors);
+    expect(state.late).toEqual([]);
+    expect(state.steps.s3!.checked).toBe(true);
+  });
+
   it("gives the same state for any listing order of the same received events (property)", () => {
     let x = 7;
     const rand = (k: number) => ((x = (x * 1103515245 + 12345) % 2 ** 31), x % k);
