@@ -29,7 +29,10 @@ async function reserveAttempt(key: string, rule: ThrottleRule, now: Date): Promi
   });
 }
 
-/** Reserves the attempt on every key; the longest wait wins, and nothing is counted past a block. */
+/**
+ * Reserves the attempt on each key in turn and stops at the first one that is blocked (429 with its
+ * wait); the keys before it have counted this attempt, the blocked one and those after it have not.
+ */
 async function reserveAll(keys: [string, ThrottleRule][], now: Date, what: string): Promise<void> {
   for (const [key, rule] of keys) {
     const wait = await reserveAttempt(key, rule, now);
