@@ -16,34 +16,47 @@ export default tseslint.config(
       ...reactHooks.configs.recommended.rules,
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
       "@typescript-eslint/consistent-type-imports": ["error", { fixStyle: "inline-type-imports" }],
-      // Server-side code stays behind the session check: no reading process.env outside lib/env.ts.
-      "no-restricted-properties": ["error", { object: "process", property: "env", message: "Use getEnv() from lib/env.ts." }],
+      // Server-side code stays behind the session check: no reading process.env outside lib/server/env.ts.
+      "no-restricted-properties": ["error", { object: "process", property: "env", message: "Use getEnv() from lib/server/env.ts." }],
     },
   },
   {
-    files: ["lib/env.ts", "scripts/**", "fakes/**", "tests/**", "drizzle.config.ts", "playwright.config.ts", "vitest.config.ts"],
+    files: ["lib/server/env.ts", "scripts/**", "fakes/**", "tests/**", "drizzle.config.ts", "playwright.config.ts", "vitest.config.ts"],
     rules: { "no-restricted-properties": "off" },
   },
-  // Where code may run, enforced: browser code never reaches the database or server-only modules,
-  // and the pure domain modules take no framework and no I/O (DEVELOPERS.md, "Where code runs").
+  // Where code may run, enforced (DEVELOPERS.md, "Where code runs"): lib/domain and lib/contracts
+  // are pure (no framework, no I/O), lib/server is server code without Next, lib/client and the
+  // components are browser code, and the Next adapters live in app/_adapters.
   {
-    files: ["components/**/*.{ts,tsx}", "app/**/_components/**/*.{ts,tsx}", "lib/cart/**/*.ts", "lib/api-client.ts", "lib/citing-target.ts", "worker/service/**/*.ts"],
+    files: ["components/**/*.{ts,tsx}", "app/**/_components/**/*.{ts,tsx}", "lib/client/**/*.ts", "service-worker/**/*.ts"],
     rules: {
       "no-restricted-imports": ["error", {
         patterns: [
-          { group: ["@/db", "@/db/*", "../db", "../db/*", "drizzle-orm", "drizzle-orm/*", "pg", "pg-boss"], message: "Browser code cannot reach the database: take the data from the API or a server component." },
-          { group: ["server-only", "@/lib/auth/session", "next/headers"], message: "A server-only module in browser code." },
+          { group: ["@/db", "@/db/*", "drizzle-orm", "drizzle-orm/*", "pg", "pg-boss"], message: "Browser code cannot reach the database: take the data from the API or a server component." },
+          { group: ["server-only", "next/headers", "@/lib/server/*", "@/app/_adapters/*", "@/search/*", "!@/search/query"], message: "A server-only module in browser code." },
         ],
       }],
     },
   },
   {
-    files: ["lib/calc/**/*.ts", "lib/runs/fold.ts", "lib/runs/hours.ts", "lib/runs/work-status.ts", "lib/revisions/compare.ts", "search/query.ts", "lib/edge.ts", "lib/vocabulary.ts", "lib/escape.ts", "lib/auth/permissions.ts", "lib/auth/throttle.ts", "lib/pdf/text.ts"],
+    files: ["lib/domain/**/*.ts", "lib/contracts/**/*.ts", "search/query.ts"],
     rules: {
       "no-restricted-imports": ["error", {
         patterns: [
           { group: ["@/db", "@/db/*", "drizzle-orm", "drizzle-orm/*", "pg", "pg-boss", "node:*", "server-only"], message: "Pure domain code: no database and no I/O, so it is unit-tested without a server." },
           { group: ["next", "next/*", "react", "react-dom", "react/*"], message: "Pure domain code: no framework." },
+          { group: ["@/lib/server/*", "@/lib/client/*", "@/app/*", "@/components/*", "@/search/*", "!@/search/query"], message: "Pure domain code imports only pure code (lib/domain, lib/contracts, search/query)." },
+        ],
+      }],
+    },
+  },
+  {
+    files: ["lib/server/**/*.ts", "search/**/*.ts", "worker/**/*.ts"],
+    rules: {
+      "no-restricted-imports": ["error", {
+        patterns: [
+          { group: ["next", "next/*", "react", "react-dom", "react/*"], message: "Server code runs in the worker and the scripts too: Next belongs in app/_adapters." },
+          { group: ["@/lib/client/*", "@/app/*", "@/components/*"], message: "Server code does not import browser code or routing files." },
         ],
       }],
     },

@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { sessionCookieName } from "@/lib/auth/cookie";
-import { urlRefusal } from "@/lib/edge";
+import { sessionCookieName } from "@/lib/server/auth/cookie";
+import { urlRefusal } from "@/lib/domain/edge";
 
 // A convenience only: visitors without a session cookie are sent to sign-in before a page renders.
 // Whether a cookie is valid, and what its user may do, every page and handler checks itself.

@@ -1,5 +1,5 @@
-import type { NoticeKind } from "@/lib/validation/cards";
-import { noticeLabels } from "@/lib/validation/cards";
+import type { NoticeKind } from "@/lib/domain/validation/cards";
+import { noticeLabels } from "@/lib/domain/validation/cards";
 
 const style: Record<NoticeKind, string> = {
   warning: "border-danger bg-danger-pale",

@@ -1,8 +1,8 @@
 import Link from "next/link";
-import { calculators } from "@/lib/calc";
-import { describeLimit } from "@/lib/calc/limits";
-import type { CardVersionDto } from "@/lib/dto-cards";
-import { sortNotices } from "@/lib/validation/cards";
+import { calculators } from "@/lib/domain/calc";
+import { describeLimit } from "@/lib/domain/calc/limits";
+import type { CardVersionDto } from "@/lib/contracts/cards";
+import { sortNotices } from "@/lib/domain/validation/cards";
 import { CalculatorPanel } from "./calculators/calculator-panel";
 import { CardNotice } from "./card-notice";
 import { LimitCheckField } from "./limit-check-field";

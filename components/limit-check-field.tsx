@@ -1,8 +1,8 @@
 "use client";
 
 import { useId, useState } from "react";
-import { judgeValue, type Limit } from "@/lib/calc/limits";
-import { dimensionOf, unitLabel, unitsOf } from "@/lib/calc/units";
+import { judgeValue, type Limit } from "@/lib/domain/calc/limits";
+import { dimensionOf, unitLabel, unitsOf } from "@/lib/domain/calc/units";
 
 /** A measured value judged against its limits as it is typed, in any unit of the same kind. */
 export function LimitCheckField({ id, label, limit, value, onChange }: { id?: string; label: string; limit: Limit; value?: string; onChange?: (v: string) => void }) {

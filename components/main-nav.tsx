@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { usePathname } from "next/navigation";
-import type { NavItem } from "@/lib/auth/permissions";
+import type { NavItem } from "@/lib/domain/access/permissions";
 
 export function MainNav({ items }: { items: NavItem[] }) {
   const pathname = usePathname();

@@ -5,7 +5,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { Document, Page, pdfjs } from "react-pdf";
 import "react-pdf/dist/Page/TextLayer.css";
-import { escapeHtml, escapeRegExp } from "@/lib/escape";
+import { escapeHtml, escapeRegExp } from "@/lib/domain/escape";
 import { chunkSize, getRange, takePdfWorker } from "./pdf-prefetch";
 
 // Copied from pdfjs-dist by scripts/lib.mjs (copyPdfWorker) before every build.

@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect } from "react";
-import { endPendingSignOut } from "@/lib/cart/cart";
+import { endPendingSignOut } from "@/lib/client/cart/cart";
 
 /**
  * Registered from the cart's pages only: a student opens "My work" online before working offline,

@@ -2,9 +2,9 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { callApi } from "@/lib/api-client";
-import { cartData, syncer } from "@/lib/cart/cart";
-import { forgetUser, lastUser, markSignOutPending } from "@/lib/cart/store";
+import { callApi } from "@/lib/client/api";
+import { cartData, syncer } from "@/lib/client/cart/cart";
+import { forgetUser, lastUser, markSignOutPending } from "@/lib/client/cart/store";
 
 /**
  * Signing out on a shared cart: waiting changes are sent first when possible, then this user's

@@ -1,6 +1,6 @@
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import pg from "pg";
-import { getEnv } from "@/lib/env";
+import { getEnv } from "@/lib/server/env";
 import * as schema from "./schema";
 
 export type Db = NodePgDatabase<typeof schema>;

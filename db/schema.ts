@@ -3,7 +3,7 @@ import {
   bigint, boolean, check, customType, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, real, text, timestamp, uniqueIndex, uuid,
   type AnyPgColumn,
 } from "drizzle-orm/pg-core";
-import { documentTypes, roles, runStatuses, userStatuses } from "../lib/vocabulary";
+import { documentTypes, roles, runStatuses, userStatuses } from "@/lib/domain/vocabulary";
 
 export const userRole = pgEnum("user_role", roles);
 export const userStatus = pgEnum("user_status", userStatuses);
@@ -265,7 +265,7 @@ export const taskCardVersions = pgTable(
     tools: text("tools").array().notNull().default(sql`'{}'::text[]`),
     consumables: text("consumables").array().notNull().default(sql`'{}'::text[]`),
     protectiveEquipment: text("protective_equipment").array().notNull().default(sql`'{}'::text[]`),
-    // The ordered steps, as validated by lib/validation/cards.ts (stepSchema).
+    // The ordered steps, as validated by lib/domain/validation/cards.ts (stepSchema).
     steps: jsonb("steps").notNull().default(sql`'[]'::jsonb`),
     // Bumped on every save of a draft: a save made from an older copy is refused (409), so two
     // editors never overwrite each other without knowing.
@@ -303,7 +303,7 @@ export const cardCitations = pgTable(
   (t) => [index("card_citations_revision_page_idx").on(t.revisionId, t.pageNumber), index("card_citations_version_idx").on(t.versionId)],
 );
 
-/** A ready revision compared page by page with the one before it (lib/revisions/compare.ts). */
+/** A ready revision compared page by page with the one before it (lib/domain/revisions/compare.ts). */
 export const revisionComparisons = pgTable("revision_comparisons", {
   revisionId: uuid("revision_id").primaryKey().references(() => revisions.id, { onDelete: "cascade" }),
   previousRevisionId: uuid("previous_revision_id").references(() => revisions.id, { onDelete: "cascade" }),
@@ -391,7 +391,7 @@ export const assignments = pgTable(
 export const runStatus = pgEnum("run_status", runStatuses);
 
 /**
- * One student's run of an assignment. Its state is folded from run_events (lib/runs/fold.ts);
+ * One student's run of an assignment. Its state is folded from run_events (lib/domain/runs/fold.ts);
  * `status` and the times here are a copy of the fold kept for lists and queues.
  */
 export const runs = pgTable(

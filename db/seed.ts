@@ -1,10 +1,10 @@
 // The demo school: an invented college with invented people. Idempotent: what exists is left as it
 // is, so a second `npm start` adds nothing and keeps any change made through the app.
 import { eq, inArray } from "drizzle-orm";
-import { hashPassword } from "../lib/auth/password";
-import type { Role } from "../lib/auth/permissions";
-import { getEnv } from "../lib/env";
-import { getQueue } from "../lib/jobs";
+import { hashPassword } from "@/lib/server/auth/password";
+import type { Role } from "@/lib/domain/access/permissions";
+import { getEnv } from "@/lib/server/env";
+import { getQueue } from "@/lib/server/jobs";
 import { seedCards } from "./demo/seed-cards";
 import { seedRuns } from "./demo/seed-runs";
 import { seedLibrary } from "./demo/seed-library";

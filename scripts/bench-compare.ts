@@ -1,9 +1,9 @@
 // `npm run bench:compare`: two generated 2,000-page revisions (pages inserted, deleted, a chapter
-// moved, pages edited, new labels and dates on every page) compared by lib/revisions/compare.ts.
+// moved, pages edited, new labels and dates on every page) compared by lib/domain/revisions/compare.ts.
 // Prints the median of 5 runs, and as the baseline of the same run the `diff` package's array diff
 // over the same normalised pages (alignment only, no similarity matching). Goal: a few seconds.
 import { diffArrays } from "diff";
-import { comparePages, normalisePages } from "../lib/revisions/compare";
+import { comparePages, normalisePages } from "@/lib/domain/revisions/compare";
 
 const pagesCount = 2000;
 const syllables = ["ba", "ke", "lo", "mi", "nu", "ra", "so", "ti", "vu", "za", "pe", "do", "fi", "gu", "ha", "je", "co", "wy"];

@@ -12,7 +12,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { PDFDocument, StandardFonts } from "pdf-lib";
 import { closeDb } from "../db";
-import { getQueue } from "../lib/jobs";
+import { getQueue } from "@/lib/server/jobs";
 import { ingestAndWait, storeManual } from "./bench-support";
 
 const words = "inspect torque safety wire cotter pin bearing race grease seal gasket cylinder magneto lead harness bracket rivet doubler skin stringer rib spar fitting bushing shim clamp hose fuel oil filter screen valve actuator cable pulley turnbuckle".split(" ");

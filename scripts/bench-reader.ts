@@ -7,8 +7,8 @@ import { sql } from "drizzle-orm";
 import { PDFDocument, StandardFonts, concatTransformationMatrix, drawObject, popGraphicsState, pushGraphicsState } from "pdf-lib";
 import { chromium } from "playwright-core";
 import { closeDb, getDb } from "../db";
-import { hashPassword } from "../lib/auth/password";
-import { getQueue } from "../lib/jobs";
+import { hashPassword } from "@/lib/server/auth/password";
+import { getQueue } from "@/lib/server/jobs";
 import { ingestAndWait, storeManual } from "./bench-support";
 
 const baseUrl = process.env.HL_BASE_URL!;

@@ -8,7 +8,7 @@ import { randomUUID } from "node:crypto";
 import { availableParallelism } from "node:os";
 import { sql } from "drizzle-orm";
 import { closeDb, getDb } from "../db";
-import { hashPassword } from "../lib/auth/password";
+import { hashPassword } from "@/lib/server/auth/password";
 import { buildTsQuery, postgresEngine, rankedSql, revisionsInScope } from "../search/postgres";
 import { parseQuery } from "../search/query";
 import { cpuSnapshot, cpuSpent } from "./bench-support";

@@ -6,8 +6,8 @@ import { Readable } from "node:stream";
 import { eq } from "drizzle-orm";
 import { getDb } from "../db";
 import { manuals, revisions } from "../db/schema";
-import { queueIngest } from "../lib/ingest/queue";
-import { getStore, storageKeys } from "../lib/storage";
+import { queueIngest } from "@/lib/server/ingest/queue";
+import { getStore, storageKeys } from "@/lib/server/storage";
 
 export async function storeManual(title: string, bytes: Uint8Array): Promise<{ manualId: string; revisionId: string }> {
   const db = getDb();

@@ -1,4 +1,4 @@
-// `npm run bench:sync`: 1,000 events queued on a "cart" and sent through lib/cart/sync.ts over a
+// `npm run bench:sync`: 1,000 events queued on a "cart" and sent through lib/client/cart/sync.ts over a
 // link that drops 30 % of requests: half of the drops lose the request before the server sees it,
 // half lose the answer after the server stored the batch (the hard case: the cart must re-send
 // what is already stored). Prints the time, the events stored and the duplicates, against the
@@ -9,8 +9,8 @@ import type { AddressInfo } from "node:net";
 import { sql } from "drizzle-orm";
 import { closeDb, getDb } from "../db";
 import { assignments, runs, taskCards, taskCardVersions, users } from "../db/schema";
-import { hashPassword } from "../lib/auth/password";
-import { batchSize, syncUntilDone, type PendingEvent, type SyncPort } from "../lib/cart/sync";
+import { hashPassword } from "@/lib/server/auth/password";
+import { batchSize, syncUntilDone, type PendingEvent, type SyncPort } from "@/lib/client/cart/sync";
 
 const base = process.env.HL_BASE_URL!;
 const eventCount = 1000;
@@ -130,7 +130,7 @@ async function trial(label: string, share: number, seed = 1) {
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
 
-console.log(`bench:sync — ${eventCount} events in batches of ${batchSize} (lib/cart/sync.ts, the cart's own code and backoff)`);
+console.log(`bench:sync — ${eventCount} events in batches of ${batchSize} (lib/client/cart/sync.ts, the cart's own code and backoff)`);
 await trial("warm-up (not counted)", 0);
 const clean: Awaited<ReturnType<typeof trial>>[] = [];
 const flaky: Awaited<ReturnType<typeof trial>>[] = [];

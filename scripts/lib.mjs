@@ -397,7 +397,7 @@ export function copyPdfAssets() {
 
 /**
  * The service worker, bundled after `next build` (it precaches the build's own files, so it can
- * only be made once they exist): worker/service/sw.ts with the precache list written in, to
+ * only be made once they exist): service-worker/sw.ts with the precache list written in, to
  * .next/hangarleaf-sw.js, which app/sw.js/route.ts serves. Hashed files under /_next/static need
  * no revision; the rest are named with a hash of their content or the build id.
  */

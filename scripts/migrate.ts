@@ -3,8 +3,8 @@
 import { migrate } from "drizzle-orm/node-postgres/migrator";
 import PgBoss from "pg-boss";
 import { closeDb, getDb } from "../db";
-import { getEnv } from "../lib/env";
-import { createQueues } from "../lib/jobs";
+import { getEnv } from "@/lib/server/env";
+import { createQueues } from "@/lib/server/jobs";
 
 async function main() {
   await migrate(getDb(), { migrationsFolder: "db/migrations" });

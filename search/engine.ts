@@ -1,36 +1,9 @@
 // The one search interface. The PostgreSQL engine (search/postgres.ts) is the default and needs
 // nothing extra; the Meilisearch engine (search/meilisearch.ts) is chosen with MEILI_URL.
+import type { SearchFilters, SearchResult } from "@/lib/contracts/search";
 import type { ParsedQuery } from "./query";
 
-export interface SearchFilters {
-  manualId?: string;
-  documentType?: string;
-  model?: string;
-  ata?: string;
-  /** One revision, current or not. */
-  revisionId?: string;
-  /** Also pages of superseded (ready) revisions. */
-  includeSuperseded?: boolean;
-}
-
-export interface SearchHit {
-  manualId: string;
-  revisionId: string;
-  manualTitle: string;
-  revisionLabel: string;
-  current: boolean;
-  page: number;
-  /** HTML-escaped text with the matched words in <mark>. */
-  snippet: string;
-  score: number;
-}
-
-export interface SearchResult {
-  hits: SearchHit[];
-  /** Matches counted up to `totalLimit`; `totalCapped` when there are more. */
-  total: number;
-  totalCapped: boolean;
-}
+export type { SearchFilters, SearchHit, SearchResult } from "@/lib/contracts/search";
 
 export interface SearchEngine {
   readonly name: "postgres" | "meilisearch";

@@ -1,4 +1,4 @@
-import { getEnv } from "@/lib/env";
+import { getEnv } from "@/lib/server/env";
 import type { SearchEngine } from "./engine";
 import { meilisearchEngine } from "./meilisearch";
 import { postgresEngine } from "./postgres";

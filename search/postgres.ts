@@ -4,8 +4,8 @@
 // corrected against search_words with trigrams and edit distance.
 import { sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db";
-import { getEnv } from "@/lib/env";
-import { createLru } from "@/lib/lru";
+import { getEnv } from "@/lib/server/env";
+import { createLru } from "@/lib/server/lru";
 import type { SearchEngine, SearchFilters, SearchHit, SearchResult } from "./engine";
 import { totalLimit } from "./engine";
 import { markEnd, markStart, snippetToHtml, type ParsedQuery, type QueryWord } from "./query";

@@ -1,7 +1,7 @@
 // Turns what a student types into the parts of a search. Pure and forgiving: any input gives a
 // query (maybe an empty one), never an error. Supported: words, "quoted phrases", -excluded words
 // or -"phrases", and a last word still being typed (searched as a prefix).
-import { escapeHtml } from "@/lib/escape";
+import { escapeHtml } from "@/lib/domain/escape";
 import abbreviations from "./abbreviations.json";
 
 export interface QueryWord {

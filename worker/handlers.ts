@@ -1,10 +1,10 @@
-// What the worker does for each job of lib/jobs.ts. A handler gets the payload already checked
+// What the worker does for each job of lib/server/jobs.ts. A handler gets the payload already checked
 // against its job's schema; what it throws is retried by pg-boss.
-import { ingestRevision } from "../lib/ingest/ingest-revision";
-import { makeReaderCopy, makeThumbnails } from "../lib/ingest/thumbnails";
-import type { JobName, JobPayload } from "../lib/jobs";
-import { deliverMail } from "../lib/mail";
-import { compareRevision } from "../lib/revisions/impact";
+import { ingestRevision } from "@/lib/server/ingest/ingest-revision";
+import { makeReaderCopy, makeThumbnails } from "@/lib/server/ingest/thumbnails";
+import type { JobName, JobPayload } from "@/lib/server/jobs";
+import { deliverMail } from "@/lib/server/mail";
+import { compareRevision } from "@/lib/server/revisions/impact";
 
 export const handlers: { [K in JobName]: (payload: JobPayload<K>) => Promise<void> } = {
   sendMail: async (message) => {

@@ -1,12 +1,12 @@
 // The job worker: a separate process started by `npm start`, running the durable jobs queued in
-// PostgreSQL (declared in lib/jobs.ts, handled in ./handlers.ts). More of these can run side by
+// PostgreSQL (declared in lib/server/jobs.ts, handled in ./handlers.ts). More of these can run side by
 // side; pg-boss hands each job to one of them.
 import PgBoss from "pg-boss";
 import { closeDb } from "../db";
-import { getEnv } from "../lib/env";
-import { failRevision, findStaleRevisions, maxAttempts } from "../lib/ingest/ingest-revision";
-import { queueIngest } from "../lib/ingest/queue";
-import { createQueues, deadLetterQueue, jobs, type JobName } from "../lib/jobs";
+import { getEnv } from "@/lib/server/env";
+import { failRevision, findStaleRevisions, maxAttempts } from "@/lib/server/ingest/ingest-revision";
+import { queueIngest } from "@/lib/server/ingest/queue";
+import { createQueues, deadLetterQueue, jobs, type JobName } from "@/lib/server/jobs";
 import { handlers } from "./handlers";
 
 async function main() {

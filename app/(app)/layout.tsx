@@ -5,9 +5,9 @@ import { MainNav } from "@/components/main-nav";
 import { Providers } from "@/components/providers";
 import { SafetyNotice } from "@/components/safety-notice";
 import { SignOutButton } from "@/components/sign-out-button";
-import { navigationFor, roleLabels } from "@/lib/auth/permissions";
-import { requirePageUser } from "@/lib/auth/session";
-import { getEnv } from "@/lib/env";
+import { navigationFor, roleLabels } from "@/lib/domain/access/permissions";
+import { requirePageUser } from "@/app/_adapters/session";
+import { getEnv } from "@/lib/server/env";
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   const user = await requirePageUser();

@@ -1,9 +1,9 @@
 import Link from "next/link";
-import { navigationFor, roleLabels, type Role } from "@/lib/auth/permissions";
-import { requirePageUser } from "@/lib/auth/session";
-import { can } from "@/lib/auth/permissions";
-import { listClassesOfUser } from "@/lib/classes";
-import { listMyWork, listReviewQueue } from "@/lib/runs/runs";
+import { navigationFor, roleLabels, type Role } from "@/lib/domain/access/permissions";
+import { requirePageUser } from "@/app/_adapters/session";
+import { can } from "@/lib/domain/access/permissions";
+import { listClassesOfUser } from "@/lib/server/classes";
+import { listMyWork, listReviewQueue } from "@/lib/server/runs/runs";
 
 const roleIntro: Record<Role, string> = {
   student: "The task cards your instructors assign are under My work; it also opens on the cart without a network.",

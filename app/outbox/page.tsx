@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { Brand } from "@/components/brand";
-import { requirePageUser } from "@/lib/auth/session";
-import { getEnv } from "@/lib/env";
+import { requirePageUser } from "@/app/_adapters/session";
+import { getEnv } from "@/lib/server/env";
 
 export const metadata: Metadata = { title: "Outbox" };
 export const dynamic = "force-dynamic";

@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { checkBendRadius, flatPattern, kFactor, type Temper } from "@/lib/calc/bend";
-import { formatNumber } from "@/lib/calc/units";
+import { checkBendRadius, flatPattern, kFactor, type Temper } from "@/lib/domain/calc/bend";
+import { formatNumber } from "@/lib/domain/calc/units";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 
 export function BendCalculator() {

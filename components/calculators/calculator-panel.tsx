@@ -1,6 +1,6 @@
 "use client";
 
-import { calculators, trainingAidNotice, type CalculatorSlug } from "@/lib/calc";
+import { calculators, trainingAidNotice, type CalculatorSlug } from "@/lib/domain/calc";
 import { CardNotice } from "../card-notice";
 import { BendCalculator } from "./bend-calculator";
 import { CoilShotCalculator } from "./coil-shot-calculator";

@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { coilArrangements, coilRatioRange, coilShotCurrent, type CoilArrangement } from "@/lib/calc/ndt";
-import { formatAgainst, formatNumber } from "@/lib/calc/units";
+import { coilArrangements, coilRatioRange, coilShotCurrent, type CoilArrangement } from "@/lib/domain/calc/ndt";
+import { formatAgainst, formatNumber } from "@/lib/domain/calc/units";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 
 export function CoilShotCalculator() {

@@ -1,7 +1,7 @@
 "use client";
 
 import { useId, type ReactNode } from "react";
-import { parseNumber } from "@/lib/calc/units";
+import { parseNumber } from "@/lib/domain/calc/units";
 
 /** A number field that takes decimals and shop fractions ("0.040", "1/8", "1 1/4"). */
 export function NumberField({ label, value, onChange, unit, hint }: { label: string; value: string; onChange: (v: string) => void; unit?: string; hint?: string }) {
@@ -77,7 +77,7 @@ export function Results({ rows, warnings = [], notes = [], error }: { rows: [str
   );
 }
 
-/** Runs a calculation and turns its refusal (AppError "invalid", lib/calc/units.ts `refuse`) into a message instead of a crash. */
+/** Runs a calculation and turns its refusal (AppError "invalid", lib/domain/calc/units.ts `refuse`) into a message instead of a crash. */
 export function attempt<T>(fn: () => T): { value: T | null; error: string | null } {
   try {
     return { value: fn(), error: null };

@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { developmentWindows, penetrantDwell, penetrantWindowF, type DeveloperForm } from "@/lib/calc/ndt";
-import { formatAgainst, formatNumber } from "@/lib/calc/units";
+import { developmentWindows, penetrantDwell, penetrantWindowF, type DeveloperForm } from "@/lib/domain/calc/ndt";
+import { formatAgainst, formatNumber } from "@/lib/domain/calc/units";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 
 export function PenetrantCalculator() {

@@ -4,8 +4,8 @@ import { useState } from "react";
 import {
   chooseRivetDiameter, fractionOfInch, headStyles, rivetLayout, rivetLength, rivetMaterials, rivetPartNumber, rivetsForSplice,
   type HeadStyle, type RivetMaterial,
-} from "@/lib/calc/rivets";
-import { formatNumber } from "@/lib/calc/units";
+} from "@/lib/domain/calc/rivets";
+import { formatNumber } from "@/lib/domain/calc/units";
 import { CardNotice } from "../card-notice";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 

@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { adapterWarnings, appliedTorque, wrenchSetting, type AdapterDirection } from "@/lib/calc/torque";
-import { convert, formatNumber } from "@/lib/calc/units";
+import { adapterWarnings, appliedTorque, wrenchSetting, type AdapterDirection } from "@/lib/domain/calc/torque";
+import { convert, formatNumber } from "@/lib/domain/calc/units";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 
 const torqueUnits: [string, string][] = [["in-lb", "in-lb"], ["ft-lb", "ft-lb"], ["N·m", "N·m"]];

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { convert, dimensionOf, formatNumber, unitLabel, unitsOf, type Dimension } from "@/lib/calc/units";
+import { convert, dimensionOf, formatNumber, unitLabel, unitsOf, type Dimension } from "@/lib/domain/calc/units";
 import { num, NumberField, Results, SelectField } from "./parts";
 
 const kinds: [Dimension, string][] = [["length", "Length"], ["torque", "Torque"], ["temperature", "Temperature"], ["pressure", "Pressure"], ["force", "Force"], ["volume", "Volume"]];

@@ -1,8 +1,8 @@
 "use client";
 
 import { createContext, useContext, useEffect, useState, useSyncExternalStore } from "react";
-import { cartData, openSession, syncer } from "@/lib/cart/cart";
-import type { CartData, CartUser } from "@/lib/cart/store";
+import { cartData, openSession, syncer } from "@/lib/client/cart/cart";
+import type { CartData, CartUser } from "@/lib/client/cart/store";
 
 interface CartState {
   ready: boolean;

@@ -3,20 +3,20 @@
 // The cart screen for one run: one step at a time (or the whole list), big targets, the notices
 // before their step, values judged at once, notes, photos, timers, cited pages from the offline
 // packet, and the inspection point that stops the run until an instructor buys it off. Every
-// action is an event queued in IndexedDB and sent when the network allows (lib/cart/cart.ts).
+// action is an event queued in IndexedDB and sent when the network allows (lib/client/cart/cart.ts).
 import dynamic from "next/dynamic";
 import { useCallback, useEffect, useMemo, useState } from "react";
 import { CardNotice } from "@/components/card-notice";
 import { LimitCheckField } from "@/components/limit-check-field";
 import { StepMarkdown } from "@/components/step-markdown";
-import { calculators } from "@/lib/calc";
-import { describeLimit } from "@/lib/calc/limits";
-import { record, refreshRun, syncer } from "@/lib/cart/cart";
-import type { CartData, RefusedItem } from "@/lib/cart/store";
-import type { RunDetailDto } from "@/lib/dto-runs";
-import { foldRun, type RunEvent, type RunEventType } from "@/lib/runs/fold";
-import { sortNotices } from "@/lib/validation/cards";
-import { maxPhotoBytes, photoTypes } from "@/lib/validation/runs";
+import { calculators } from "@/lib/domain/calc";
+import { describeLimit } from "@/lib/domain/calc/limits";
+import { record, refreshRun, syncer } from "@/lib/client/cart/cart";
+import type { CartData, RefusedItem } from "@/lib/client/cart/store";
+import type { RunDetailDto } from "@/lib/contracts/runs";
+import { foldRun, type RunEvent, type RunEventType } from "@/lib/domain/runs/fold";
+import { sortNotices } from "@/lib/domain/validation/cards";
+import { maxPhotoBytes, photoTypes } from "@/lib/domain/validation/runs";
 import { formatLeft } from "./timer-watch";
 
 const PacketPage = dynamic(() => import("./packet-page"), { ssr: false, loading: () => <p role="status">Opening the page…</p> });

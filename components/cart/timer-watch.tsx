@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useState } from "react";
-import type { CartData, TimerEntry } from "@/lib/cart/store";
+import type { CartData, TimerEntry } from "@/lib/client/cart/store";
 
 /** A short two-tone ring through Web Audio (no sound file to cache). */
 export function ring() {

@@ -2,8 +2,8 @@
 
 import MiniSearch from "minisearch";
 import { useEffect, useMemo, useState } from "react";
-import type { CartData } from "@/lib/cart/store";
-import type { WorkItemDto, WorkStatus } from "@/lib/dto-runs";
+import type { CartData } from "@/lib/client/cart/store";
+import type { WorkItemDto, WorkStatus } from "@/lib/contracts/runs";
 
 const label: Record<WorkStatus, string> = {
   not_started: "Not started",

@@ -1,9 +1,9 @@
 // The invented manuals of the demo school, as data: chapters, sections and their text. Every
 // model, value and name here is made up for training the software, not for any aircraft.
 // db/demo/manual-pdf.ts turns them into PDFs; the tests read the same data to know what to expect.
-// The penetrant procedure's temperature window is the calculator's (lib/calc/ndt.ts), so the
+// The penetrant procedure's temperature window is the calculator's (lib/domain/calc/ndt.ts), so the
 // procedure, the demo card and the calculator cannot disagree.
-import { penetrantWindowF } from "@/lib/calc/ndt";
+import { penetrantWindowF } from "@/lib/domain/calc/ndt";
 
 export interface DemoSection {
   code: string; // ATA-style chapter-section-subject, e.g. 32-10-00

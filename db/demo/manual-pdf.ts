@@ -6,8 +6,8 @@ import { mkdtemp, readFile, rm, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf-lib";
-import { runTool } from "@/lib/pdf/tools";
-import { wrapLine } from "@/lib/pdf/wrap";
+import { runTool } from "@/lib/server/pdf/tools";
+import { wrapLine } from "@/lib/server/pdf/wrap";
 import type { DemoManual, DemoSection } from "./manual-content";
 
 const pageSize: [number, number] = [612, 792]; // US letter, points

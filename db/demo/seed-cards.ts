@@ -1,13 +1,13 @@
 // Demo curriculum subjects and published task cards built on the invented manuals. Invented content
 // only. The cards are written straight to the tables: at seed time the manuals are still queued for
-// ingest, so the library's "cite only ready revisions" check of lib/cards.ts cannot pass yet.
+// ingest, so the library's "cite only ready revisions" check of lib/server/cards/cards.ts cannot pass yet.
 import { randomUUID } from "node:crypto";
 import { and, eq, inArray } from "drizzle-orm";
 import type { Db } from "@/db";
 import { cardCitations, curriculumSubjects, manuals, revisions, taskCards, taskCardVersions, users } from "@/db/schema";
-import { penetrantDwell, penetrantWindowF } from "@/lib/calc/ndt";
-import { parseWith } from "@/lib/http";
-import { cardContentSchema, type CardContentInput } from "@/lib/validation/cards";
+import { penetrantDwell, penetrantWindowF } from "@/lib/domain/calc/ndt";
+import { parseWith } from "@/lib/server/http";
+import { cardContentSchema, type CardContentInput } from "@/lib/domain/validation/cards";
 import { demoManuals, demoRevisions } from "./manual-content";
 import { sectionPage } from "./manual-pdf";
 

@@ -5,8 +5,8 @@ import { Readable } from "node:stream";
 import { and, eq } from "drizzle-orm";
 import type { Db } from "@/db";
 import { manuals, revisions, users } from "@/db/schema";
-import { queueIngest } from "@/lib/ingest/queue";
-import { getStore, storageKeys } from "@/lib/storage";
+import { queueIngest } from "@/lib/server/ingest/queue";
+import { getStore, storageKeys } from "@/lib/server/storage";
 import { demoManuals, demoRevisions, secondRevisionOfTrainer, type DemoManual } from "./manual-content";
 import { renderManualPdf } from "./manual-pdf";
 

@@ -5,10 +5,10 @@ import { randomUUID } from "node:crypto";
 import { and, eq, inArray } from "drizzle-orm";
 import type { Db } from "@/db";
 import { assignments, classes, classMembers, manuals, revisions, runEvents, runs, signOffs, taskCardVersions, users } from "@/db/schema";
-import { foldRun } from "@/lib/runs/fold";
-import { activeMinutes } from "@/lib/runs/hours";
-import { stepSchema, type Step } from "@/lib/validation/cards";
-import { unitLabel } from "@/lib/calc/units";
+import { foldRun } from "@/lib/domain/runs/fold";
+import { activeMinutes } from "@/lib/domain/runs/hours";
+import { stepSchema, type Step } from "@/lib/domain/validation/cards";
+import { unitLabel } from "@/lib/domain/calc/units";
 
 type Progress = "none" | "started" | "submitted" | "signed_off";
 
@@ -81,7 +81,7 @@ function eventsFor(steps: Step[], progress: Progress, studentId: string, instruc
   return made;
 }
 
-/** What a sign-off records of the cited revisions (lib/runs/runs.ts does the same from the DTO). */
+/** What a sign-off records of the cited revisions (lib/server/runs/runs.ts does the same from the DTO). */
 async function revisionsCited(db: Db, steps: Step[]) {
   const refs = steps.flatMap((s) => s.references);
   if (!refs.length) return [];
@@ -112,7 +112,7 @@ export async function seedRuns(db: Db): Promise<number> {
     if (exists) continue;
     const [klass] = a.className ? await db.select({ id: classes.id }).from(classes).where(eq(classes.name, a.className)) : [];
     const studentEmails = a.students ?? [...people.values()].filter((p) => p.role === "student").map((p) => p.email);
-    // The class's students, as assignment to a class does it in lib/runs/runs.ts.
+    // The class's students, as assignment to a class does it in lib/server/runs/runs.ts.
     const members = klass
       ? (await db.select({ email: users.email }).from(classMembers).innerJoin(users, eq(users.id, classMembers.userId)).where(and(eq(classMembers.classId, klass.id), eq(users.role, "student")))).map((r) => r.email)
       : studentEmails;

@@ -7,11 +7,11 @@ import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { classes, classMembers, manuals, runs, taskCardVersions, users } from "@/db/schema";
-import type { Role } from "@/lib/auth/permissions";
+import type { Role } from "@/lib/domain/access/permissions";
 import { call, demo, makeAccount, signIn } from "../support/http";
 
 // "otherInstructor" and "otherStudent" have a class of their own, apart from the demo student's
-// day cohort: they must reach nothing of that class's runs and records (lib/runs/scope.ts). Unless
+// day cohort: they must reach nothing of that class's runs and records (lib/server/runs/scope.ts). Unless
 // a row says otherwise in `cross`, they get what the instructor and the student get.
 type Who = "anonymous" | Role | "otherInstructor" | "otherStudent";
 const everyone: Who[] = ["anonymous", "student", "instructor", "librarian", "admin", "otherInstructor", "otherStudent"];

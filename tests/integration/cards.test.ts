@@ -11,7 +11,7 @@ import { eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { cardCitations, curriculumSubjects, taskCardVersions } from "@/db/schema";
-import type { CardDto, CardSummaryDto, CardVersionDto } from "@/lib/dto-cards";
+import type { CardDto, CardSummaryDto, CardVersionDto } from "@/lib/contracts/cards";
 import { call, demo, makeAccount, signIn } from "../support/http";
 import { makePdf, uniqueTitle, upload, waitForRevision } from "../support/library";
 

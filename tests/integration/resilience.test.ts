@@ -8,7 +8,7 @@ import { eq, sql } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { pages, revisions } from "@/db/schema";
-import { deadLetterQueue, getQueue, jobs } from "@/lib/jobs";
+import { deadLetterQueue, getQueue, jobs } from "@/lib/server/jobs";
 import { call, demo, signIn } from "../support/http";
 import { makePdf, uniqueTitle, upload, waitForRevision } from "../support/library";
 

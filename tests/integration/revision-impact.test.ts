@@ -7,9 +7,9 @@ import { getDb } from "@/db";
 import { demoManuals, demoRevisions, secondRevisionOfTrainer } from "@/db/demo/manual-content";
 import { sectionPage } from "@/db/demo/manual-pdf";
 import { citationRechecks, manuals, revisionComparisons, revisions, taskCardVersions } from "@/db/schema";
-import type { CardDto, CardVersionDto } from "@/lib/dto-cards";
-import type { PageChange } from "@/lib/revisions/compare";
-import { compareRevision } from "@/lib/revisions/impact";
+import type { CardDto, CardVersionDto } from "@/lib/contracts/cards";
+import type { PageChange } from "@/lib/domain/revisions/compare";
+import { compareRevision } from "@/lib/server/revisions/impact";
 import { call, demo, signIn, waitForMail } from "../support/http";
 
 const first = demoManuals.find((m) => m.title.startsWith("HT-20"))!;

@@ -13,8 +13,8 @@ import { PDFDocument } from "pdf-lib";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { auditEvents, curriculumSubjects, revisions, runEvents, signOffs } from "@/db/schema";
-import type { CardDto } from "@/lib/dto-cards";
-import type { RunDetailDto, StudentRecordDto, WorkItemDto } from "@/lib/dto-runs";
+import type { CardDto } from "@/lib/contracts/cards";
+import type { RunDetailDto, StudentRecordDto, WorkItemDto } from "@/lib/contracts/runs";
 import { call, demo, makeAccount, signIn } from "../support/http";
 import { uniqueTitle } from "../support/library";
 
@@ -69,7 +69,7 @@ beforeAll(async () => {
   librarian = (await account("librarian")).cookie;
   students.push(await account("student"), await account("student"));
   admin = await signIn(demo.admin);
-  // The instructor reviews the students of their own classes only (lib/runs/scope.ts).
+  // The instructor reviews the students of their own classes only (lib/server/runs/scope.ts).
   const ownClass = await call("POST", "/api/classes", { cookie: admin, json: { name: uniqueTitle("Runs home class") } });
   const ownClassId = ((await ownClass.json()) as { class: { id: string } }).class.id;
   await call("POST", `/api/classes/${ownClassId}/members`, { cookie: admin, json: { userIds: [teacher.id, ...students.map((s) => s.id)] } });

@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { users } from "@/db/schema";
-import { throttlePolicy } from "@/lib/auth/throttle";
+import { throttlePolicy } from "@/lib/domain/access/throttle";
 import { call, demo, fakeAddress, makeAccount, sessionCookie, signIn } from "../support/http";
 
 describe("signing in", () => {

@@ -7,9 +7,9 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { Readable } from "node:stream";
 import { describe, expect, it } from "vitest";
-import { diskStore } from "@/lib/storage/disk";
-import { s3Store } from "@/lib/storage/s3";
-import type { ObjectStore } from "@/lib/storage/types";
+import { diskStore } from "@/lib/server/storage/disk";
+import { s3Store } from "@/lib/server/storage/s3";
+import type { ObjectStore } from "@/lib/server/storage/types";
 
 async function text(stream: Readable): Promise<string> {
   const chunks: Buffer[] = [];

@@ -6,9 +6,9 @@ import { and, eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { classes, classMembers, curriculumSubjects, revisions, signOffs } from "@/db/schema";
-import type { CardDto } from "@/lib/dto-cards";
-import type { RunDetailDto, WorkItemDto } from "@/lib/dto-runs";
-import { offlineHours } from "@/lib/runs/hours";
+import type { CardDto } from "@/lib/contracts/cards";
+import type { RunDetailDto, WorkItemDto } from "@/lib/contracts/runs";
+import { offlineHours } from "@/lib/domain/runs/hours";
 import { baseUrl, call, demo, makeAccount, signIn } from "../support/http";
 import { uniqueTitle } from "../support/library";
 

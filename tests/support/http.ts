@@ -3,8 +3,8 @@
 import { randomUUID } from "node:crypto";
 import { getDb } from "@/db";
 import { users } from "@/db/schema";
-import { hashPassword } from "@/lib/auth/password";
-import type { Role } from "@/lib/auth/permissions";
+import { hashPassword } from "@/lib/server/auth/password";
+import type { Role } from "@/lib/domain/access/permissions";
 
 export const baseUrl = process.env.HL_BASE_URL ?? "http://localhost:3000";
 export const outboxUrl = process.env.HL_OUTBOX_URL ?? "http://127.0.0.1:2526";

@@ -5,7 +5,7 @@ import { createElement } from "react";
 import { renderToString } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { CalculatorPanel } from "@/components/calculators/calculator-panel";
-import { calculators, calculatorSlugs, type CalculatorSlug } from "@/lib/calc";
+import { calculators, calculatorSlugs, type CalculatorSlug } from "@/lib/domain/calc";
 
 const text = (slug: CalculatorSlug) =>
   renderToString(createElement(CalculatorPanel, { slug }))

@@ -3,14 +3,14 @@
 // practice". Expected values are the handbook's, or worked by hand beside the check: never the
 // code's own formula run again.
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors";
-import { bendAllowance, checkBendRadius, flatPattern, kFactor, setback } from "@/lib/calc/bend";
-import { coilShotCurrent, penetrantDwell, penetrantWindowF } from "@/lib/calc/ndt";
+import { AppError } from "@/lib/domain/errors";
+import { bendAllowance, checkBendRadius, flatPattern, kFactor, setback } from "@/lib/domain/calc/bend";
+import { coilShotCurrent, penetrantDwell, penetrantWindowF } from "@/lib/domain/calc/ndt";
 import {
   chooseRivetDiameter, fractionOfInch, parseRivetPartNumber, rivetLayout, rivetLength, rivetPartNumber, rivetsForSplice, substituteWith2117,
-} from "@/lib/calc/rivets";
-import { adapterWarnings, appliedTorque, wrenchSetting } from "@/lib/calc/torque";
-import { convert, formatNumber } from "@/lib/calc/units";
+} from "@/lib/domain/calc/rivets";
+import { adapterWarnings, appliedTorque, wrenchSetting } from "@/lib/domain/calc/torque";
+import { convert, formatNumber } from "@/lib/domain/calc/units";
 
 /** Every refusal is the project's one error type, "invalid", with a message for the screen. */
 function refused(fn: () => unknown, message: RegExp) {

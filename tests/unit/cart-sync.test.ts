@@ -1,8 +1,8 @@
-// The cart's sender (lib/cart/sync.ts) against a fake server: batches, a lost request retried at
+// The cart's sender (lib/client/cart/sync.ts) against a fake server: batches, a lost request retried at
 // once, refusals set aside without blocking the queue, sign-out stops, backoff grows only while
 // nothing gets through.
 import { describe, expect, it } from "vitest";
-import { backoffDelay, syncOnce, syncUntilDone, type Answer, type PendingEvent, type SyncPort } from "@/lib/cart/sync";
+import { backoffDelay, syncOnce, syncUntilDone, type Answer, type PendingEvent, type SyncPort } from "@/lib/client/cart/sync";
 
 function fakeCart(count: number, answer: (runId: string, ids: string[], call: number) => Answer | "lost") {
   let queue: PendingEvent[] = Array.from({ length: count }, (_, i) => ({

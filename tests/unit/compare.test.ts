@@ -2,7 +2,7 @@
 // reference: the `diff` package's array diff over the same normalised page texts.
 import { diffArrays } from "diff";
 import { describe, expect, it } from "vitest";
-import { comparePages, normalisePages, suggestPage, type Comparison } from "@/lib/revisions/compare";
+import { comparePages, normalisePages, suggestPage, type Comparison } from "@/lib/domain/revisions/compare";
 
 const words = ["magneto", "timing", "breaker", "points", "rotor", "cable", "tension", "turnbuckle", "rigging", "brake", "lining", "axle", "nut", "torque", "cotter", "pin", "propeller", "blade", "nick", "spinner", "fuel", "sump", "drain", "oil", "filter", "gasket", "seal", "bearing", "hub", "strut"];
 

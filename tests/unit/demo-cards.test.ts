@@ -6,9 +6,9 @@ import { describe, expect, it } from "vitest";
 import { demoManuals, secondRevisionOfTrainer } from "@/db/demo/manual-content";
 import { sectionPage } from "@/db/demo/manual-pdf";
 import { demoCards } from "@/db/demo/seed-cards";
-import { penetrantDwell, penetrantWindowF } from "@/lib/calc/ndt";
-import { chooseRivetDiameter, rivetLayout } from "@/lib/calc/rivets";
-import { cardContentSchema } from "@/lib/validation/cards";
+import { penetrantDwell, penetrantWindowF } from "@/lib/domain/calc/ndt";
+import { chooseRivetDiameter, rivetLayout } from "@/lib/domain/calc/rivets";
+import { cardContentSchema } from "@/lib/domain/validation/cards";
 
 const card = (title: string) => {
   const found = demoCards.find((c) => c.title === title);

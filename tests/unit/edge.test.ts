@@ -1,7 +1,7 @@
-// The rules at the edge of every request (lib/edge.ts) and who is on the other end of the socket
+// The rules at the edge of every request (lib/domain/edge.ts) and who is on the other end of the socket
 // (server/edge.mjs).
 import { describe, expect, it } from "vitest";
-import { crossOriginRefusal, maxJsonDepth, unstorableValue, urlRefusal } from "@/lib/edge";
+import { crossOriginRefusal, maxJsonDepth, unstorableValue, urlRefusal } from "@/lib/domain/edge";
 import { clientAddressOf, hasBrokenEncoding, parseTrustedProxies } from "../../server/edge.mjs";
 
 const request = (method: string, headers: Record<string, string>) => ({ method, headers: new Headers(headers) });

@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { AppError, toAppError } from "@/lib/errors";
-import { parseWith } from "@/lib/http";
-import { invitationMail } from "@/lib/mail/messages";
-import { createAccountSchema, signInSchema } from "@/lib/validation/accounts";
-import { createClassSchema } from "@/lib/validation/classes";
+import { AppError, toAppError } from "@/lib/domain/errors";
+import { parseWith } from "@/lib/server/http";
+import { invitationMail } from "@/lib/server/mail/messages";
+import { createAccountSchema, signInSchema } from "@/lib/domain/validation/accounts";
+import { createClassSchema } from "@/lib/domain/validation/classes";
 
 describe("AppError", () => {
   it.each([

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { parseRange } from "@/lib/library/range";
-import { headingOf, needsOcr, normalisePageText, wordOverlap, wordsOf } from "@/lib/pdf/text";
-import { assertKey, storageKeys } from "@/lib/storage/types";
-import { manualUploadSchema, revisionFieldsSchema } from "@/lib/validation/library";
+import { parseRange } from "@/lib/domain/library/range";
+import { headingOf, needsOcr, normalisePageText, wordOverlap, wordsOf } from "@/lib/domain/library/page-text";
+import { assertKey, storageKeys } from "@/lib/server/storage/types";
+import { manualUploadSchema, revisionFieldsSchema } from "@/lib/domain/validation/library";
 
 describe("page text", () => {
   it("trims trailing blanks and folds runs of empty lines", () => {

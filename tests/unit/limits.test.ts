@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { describeLimit, judgeValue } from "@/lib/calc/limits";
-import { convert, formatAgainst, formatNumber, parseNumber, parseQuantity, resolveUnit } from "@/lib/calc/units";
+import { describeLimit, judgeValue } from "@/lib/domain/calc/limits";
+import { convert, formatAgainst, formatNumber, parseNumber, parseQuantity, resolveUnit } from "@/lib/domain/calc/units";
 
 describe("limits checks", () => {
   const torque = { unit: "in-lb", min: 50, max: 70 };

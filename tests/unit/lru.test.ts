@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { createLru } from "@/lib/lru";
+import { createLru } from "@/lib/server/lru";
 
 describe("lru", () => {
   it("drops the least recently used entry, not the oldest", () => {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { hashPassword, newPasswordSchema, verifyPassword } from "@/lib/auth/password";
+import { hashPassword, verifyPassword } from "@/lib/server/auth/password";
+import { newPasswordSchema } from "@/lib/domain/validation/accounts";
 
 describe("password hashing", () => {
   it("verifies the right password and refuses a wrong one", async () => {

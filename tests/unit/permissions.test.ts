@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { assertCan, can, navigationFor, permissionNames, roles, rolesWith, type Role } from "@/lib/auth/permissions";
-import { AppError } from "@/lib/errors";
+import { assertCan, can, navigationFor, permissionNames, roles, rolesWith, type Role } from "@/lib/domain/access/permissions";
+import { AppError } from "@/lib/domain/errors";
 
 const actor = (role: Role) => ({ id: "00000000-0000-4000-8000-000000000000", role });
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { foldRun, orderEvents, type CardStepForRun, type RunEvent } from "@/lib/runs/fold";
+import { foldRun, orderEvents, type CardStepForRun, type RunEvent } from "@/lib/domain/runs/fold";
 
 const steps: CardStepForRun[] = [
   { id: "s1", inspectionPoint: false, measurement: { unit: "in-lb", min: 50, max: 70 }, timerMinutes: null },

@@ -1,9 +1,9 @@
 // The small pure parts of runs: hours from events, "overdue", CSV cells, and photo sniffing.
 import { describe, expect, it } from "vitest";
-import { csvCell, toCsv } from "@/lib/runs/csv";
-import { activeMinutes, offlineHours, workingMinutes } from "@/lib/runs/hours";
-import { workStatusOf } from "@/lib/runs/work-status";
-import { sniffImage } from "@/lib/validation/runs";
+import { csvCell, toCsv } from "@/lib/domain/runs/csv";
+import { activeMinutes, offlineHours, workingMinutes } from "@/lib/domain/runs/hours";
+import { workStatusOf } from "@/lib/domain/runs/work-status";
+import { sniffImage } from "@/lib/domain/validation/runs";
 
 const t = (minutes: number) => new Date(Date.UTC(2026, 11, 2, 8, 0) + minutes * 60_000).toISOString();
 

@@ -1,6 +1,6 @@
 import { sealData } from "iron-session";
 import { describe, expect, it } from "vitest";
-import { createSealCache, sealExpiry } from "@/lib/auth/seal-cache";
+import { createSealCache, sealExpiry } from "@/lib/server/auth/seal-cache";
 
 // The shape iron-session writes: Fe26.2*id*salt*iv*data*expiration*hmacSalt*hmac~2
 const seal = (name: string, expires: number | "") => `Fe26.2*1*salt*iv*${name}*${expires}*hsalt*hmac~2`;

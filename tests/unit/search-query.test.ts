@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { highlightWords } from "@/lib/library/highlight";
+import { highlightWords } from "@/lib/domain/library/highlight";
 import { expansionsOf, isEmptyQuery, markEnd, markStart, parseQuery, snippetToHtml } from "@/search/query";
 
 describe("parseQuery", () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { delayAfterFailures, failuresAfter, throttleKeys, throttlePolicy } from "@/lib/auth/throttle";
+import { delayAfterFailures, failuresAfter, throttleKeys, throttlePolicy } from "@/lib/domain/access/throttle";
 
 describe("sign-in throttling policy", () => {
   const rule = throttlePolicy.pair;

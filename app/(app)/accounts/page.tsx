@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
-import { listUsers } from "@/lib/accounts";
-import { requirePageUser } from "@/lib/auth/session";
-import { toAccountDto } from "@/lib/dto";
+import { listUsers } from "@/lib/server/accounts";
+import { requirePageUser } from "@/app/_adapters/session";
+import { toAccountDto } from "@/lib/contracts/accounts";
 import { AccountsManager } from "./_components/accounts-manager";
 
 export const metadata: Metadata = { title: "Accounts" };

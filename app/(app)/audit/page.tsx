@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
-import { listAuditEvents } from "@/lib/audit";
-import { requirePageUser } from "@/lib/auth/session";
-import { auditQuerySchema, type AuditKind } from "@/lib/validation/audit";
+import { listAuditEvents } from "@/lib/server/audit";
+import { requirePageUser } from "@/app/_adapters/session";
+import { auditQuerySchema, type AuditKind } from "@/lib/domain/validation/audit";
 
 export const metadata: Metadata = { title: "Audit log" };
 

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { requirePageUser } from "@/lib/auth/session";
-import { calculators, calculatorSlugs, trainingAidNotice } from "@/lib/calc";
+import { requirePageUser } from "@/app/_adapters/session";
+import { calculators, calculatorSlugs, trainingAidNotice } from "@/lib/domain/calc";
 
 export const metadata: Metadata = { title: "Calculators" };
 

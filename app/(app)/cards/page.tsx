@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { can } from "@/lib/auth/permissions";
-import { requirePageUser } from "@/lib/auth/session";
-import { listCards, listSubjects } from "@/lib/cards";
+import { can } from "@/lib/domain/access/permissions";
+import { requirePageUser } from "@/app/_adapters/session";
+import { listCards, listSubjects } from "@/lib/server/cards/cards";
 import { CardsTable } from "./_components/cards-table";
 
 export const metadata: Metadata = { title: "Task cards" };

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { can } from "@/lib/auth/permissions";
-import { requirePageUser } from "@/lib/auth/session";
-import { listClasses } from "@/lib/classes";
+import { can } from "@/lib/domain/access/permissions";
+import { requirePageUser } from "@/app/_adapters/session";
+import { listClasses } from "@/lib/server/classes";
 import { CreateClassForm } from "./_components/create-class-form";
 
 export const metadata: Metadata = { title: "Classes" };

@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { can } from "@/lib/auth/permissions";
-import { requirePageUser } from "@/lib/auth/session";
-import { listManuals } from "@/lib/library/manuals";
-import { documentTypeLabels } from "@/lib/validation/library";
+import { can } from "@/lib/domain/access/permissions";
+import { requirePageUser } from "@/app/_adapters/session";
+import { listManuals } from "@/lib/server/library/manuals";
+import { documentTypeLabels } from "@/lib/domain/validation/library";
 
 export const metadata: Metadata = { title: "Library" };
 

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { requirePageUser } from "@/lib/auth/session";
-import type { RunStatus } from "@/lib/runs/fold";
-import { listReviewQueue } from "@/lib/runs/runs";
+import { requirePageUser } from "@/app/_adapters/session";
+import type { RunStatus } from "@/lib/domain/runs/fold";
+import { listReviewQueue } from "@/lib/server/runs/runs";
 
 export const metadata: Metadata = { title: "Review" };
 

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
-import { requirePageUser } from "@/lib/auth/session";
-import { listManuals } from "@/lib/library/manuals";
+import { requirePageUser } from "@/app/_adapters/session";
+import { listManuals } from "@/lib/server/library/manuals";
 import { SearchScreen } from "./_components/search-screen";
 
 export const metadata: Metadata = { title: "Search" };

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
-import { getCurrentUser } from "@/lib/auth/session";
+import { getCurrentUser } from "@/app/_adapters/session";
 import { SignInForm } from "./_components/sign-in-form";
 
 export const metadata: Metadata = { title: "Sign in" };

@@ -4,8 +4,8 @@ import Link from "next/link";
 import { useEffect, useState } from "react";
 import { useCart, useOnline } from "@/components/cart/cart-provider";
 import { WorkList } from "@/components/cart/work-list";
-import { refreshWork } from "@/lib/cart/cart";
-import type { WorkItemDto } from "@/lib/dto-runs";
+import { refreshWork } from "@/lib/client/cart/cart";
+import type { WorkItemDto } from "@/lib/contracts/runs";
 
 export default function MyWorkPage() {
   const { ready, data, user } = useCart();

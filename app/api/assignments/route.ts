@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { isUuid, readJson, route } from "@/lib/http";
-import { createAssignment, listAssignments } from "@/lib/runs/runs";
-import { createAssignmentSchema } from "@/lib/validation/runs";
+import { requireApiUser } from "@/app/_adapters/session";
+import { isUuid, readJson, route } from "@/lib/server/http";
+import { createAssignment, listAssignments } from "@/lib/server/runs/runs";
+import { createAssignmentSchema } from "@/lib/domain/validation/runs";
 
 export const GET = route(async (request) => {
   const actor = await requireApiUser("assignments:manage");

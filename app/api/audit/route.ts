@@ -1,7 +1,7 @@
-import { listAuditEvents } from "@/lib/audit";
-import { requireApiUser } from "@/lib/auth/session";
-import { parseWith, route } from "@/lib/http";
-import { auditQuerySchema } from "@/lib/validation/audit";
+import { listAuditEvents } from "@/lib/server/audit";
+import { requireApiUser } from "@/app/_adapters/session";
+import { parseWith, route } from "@/lib/server/http";
+import { auditQuerySchema } from "@/lib/domain/validation/audit";
 
 /** ?kind=accounts|classes|library|cards|assignments|runs&actor=&from=&to=&limit= */
 export const GET = route(async (request) => {

@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { cardBodyLimit, createCard, listCards } from "@/lib/cards";
-import { parseWith, readJson, route } from "@/lib/http";
-import { cardListQuerySchema, createCardSchema } from "@/lib/validation/cards";
+import { requireApiUser } from "@/app/_adapters/session";
+import { cardBodyLimit, createCard, listCards } from "@/lib/server/cards/cards";
+import { parseWith, readJson, route } from "@/lib/server/http";
+import { cardListQuerySchema, createCardSchema } from "@/lib/domain/validation/cards";
 
 export const GET = route(async (request) => {
   const actor = await requireApiUser("cards:view");

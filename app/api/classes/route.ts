@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { createClass, listClasses } from "@/lib/classes";
-import { readJson, route } from "@/lib/http";
-import { createClassSchema } from "@/lib/validation/classes";
+import { requireApiUser } from "@/app/_adapters/session";
+import { createClass, listClasses } from "@/lib/server/classes";
+import { readJson, route } from "@/lib/server/http";
+import { createClassSchema } from "@/lib/domain/validation/classes";
 
 export const GET = route(async () => {
   const actor = await requireApiUser("classes:view");

@@ -1,4 +1,4 @@
-import { databaseAnswers } from "@/lib/health";
+import { databaseAnswers } from "@/lib/server/health";
 
 export const dynamic = "force-dynamic";
 

@@ -1,11 +1,11 @@
-import { can } from "@/lib/auth/permissions";
-import { requireApiUser } from "@/lib/auth/session";
-import { getEnv } from "@/lib/env";
-import { parseWith, route } from "@/lib/http";
-import { createManualWithRevision, listManuals } from "@/lib/library/manuals";
-import { withUploadedPdf } from "@/lib/library/upload";
-import { getStore } from "@/lib/storage";
-import { manualUploadSchema } from "@/lib/validation/library";
+import { can } from "@/lib/domain/access/permissions";
+import { requireApiUser } from "@/app/_adapters/session";
+import { getEnv } from "@/lib/server/env";
+import { parseWith, route } from "@/lib/server/http";
+import { createManualWithRevision, listManuals } from "@/lib/server/library/manuals";
+import { withUploadedPdf } from "@/lib/server/library/upload";
+import { getStore } from "@/lib/server/storage";
+import { manualUploadSchema } from "@/lib/domain/validation/library";
 
 export const GET = route(async () => {
   const actor = await requireApiUser("library:view");

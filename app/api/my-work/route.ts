@@ -1,6 +1,6 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { route } from "@/lib/http";
-import { listMyWork } from "@/lib/runs/runs";
+import { requireApiUser } from "@/app/_adapters/session";
+import { route } from "@/lib/server/http";
+import { listMyWork } from "@/lib/server/runs/runs";
 
 export const GET = route(async () => {
   const actor = await requireApiUser("runs:do");

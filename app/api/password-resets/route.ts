@@ -1,7 +1,7 @@
-import { requestPasswordReset } from "@/lib/accounts";
-import { throttleResetRequest } from "@/lib/auth/sign-in";
-import { clientAddress, readJson, route } from "@/lib/http";
-import { passwordResetRequestSchema } from "@/lib/validation/accounts";
+import { requestPasswordReset } from "@/lib/server/accounts";
+import { throttleResetRequest } from "@/lib/server/auth/sign-in";
+import { clientAddress, readJson, route } from "@/lib/server/http";
+import { passwordResetRequestSchema } from "@/lib/domain/validation/accounts";
 
 /** Anyone may ask; the answer is the same whether or not the address has an account. */
 export const POST = route(async (request) => {

@@ -1,6 +1,6 @@
-import { setPasswordWithToken } from "@/lib/accounts";
-import { readJson, route } from "@/lib/http";
-import { setPasswordSchema } from "@/lib/validation/accounts";
+import { setPasswordWithToken } from "@/lib/server/accounts";
+import { readJson, route } from "@/lib/server/http";
+import { setPasswordSchema } from "@/lib/domain/validation/accounts";
 
 /** Sets a password with the token from an invitation or reset mail. */
 export const POST = route(async (request) => {

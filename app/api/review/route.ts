@@ -1,8 +1,8 @@
 import { z } from "zod";
-import { requireApiUser } from "@/lib/auth/session";
-import { route } from "@/lib/http";
-import { runStatuses } from "@/lib/vocabulary";
-import { listReviewQueue } from "@/lib/runs/runs";
+import { requireApiUser } from "@/app/_adapters/session";
+import { route } from "@/lib/server/http";
+import { runStatuses } from "@/lib/domain/vocabulary";
+import { listReviewQueue } from "@/lib/server/runs/runs";
 
 const statusSchema = z.enum(runStatuses.filter((s) => s !== "not_started")).catch("submitted");
 

@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
-import { parseWith, route } from "@/lib/http";
-import { searchParamsSchema } from "@/lib/validation/search";
+import { requireApiUser } from "@/app/_adapters/session";
+import { AppError } from "@/lib/domain/errors";
+import { parseWith, route } from "@/lib/server/http";
+import { searchParamsSchema } from "@/lib/domain/validation/search";
 import { getSearchEngine, isEmptyQuery, parseQuery } from "@/search";
 
 export const GET = route(async (request) => {

@@ -1,8 +1,8 @@
-import { verifySignIn } from "@/lib/auth/sign-in";
-import { endSession, getCurrentUser, startSession } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
-import { clientAddress, readJson, route } from "@/lib/http";
-import { signInSchema } from "@/lib/validation/accounts";
+import { verifySignIn } from "@/lib/server/auth/sign-in";
+import { endSession, getCurrentUser, startSession } from "@/app/_adapters/session";
+import { AppError } from "@/lib/domain/errors";
+import { clientAddress, readJson, route } from "@/lib/server/http";
+import { signInSchema } from "@/lib/domain/validation/accounts";
 
 export const GET = route(async () => {
   const user = await getCurrentUser();

@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { createSubject, listSubjects } from "@/lib/cards";
-import { readJson, route } from "@/lib/http";
-import { subjectSchema } from "@/lib/validation/cards";
+import { requireApiUser } from "@/app/_adapters/session";
+import { createSubject, listSubjects } from "@/lib/server/cards/cards";
+import { readJson, route } from "@/lib/server/http";
+import { subjectSchema } from "@/lib/domain/validation/cards";
 
 export const GET = route(async () => {
   await requireApiUser("cards:view");

@@ -1,8 +1,8 @@
-import { createUser, listUsers } from "@/lib/accounts";
-import { requireApiUser } from "@/lib/auth/session";
-import { toAccountDto } from "@/lib/dto";
-import { readJson, route } from "@/lib/http";
-import { createAccountSchema } from "@/lib/validation/accounts";
+import { createUser, listUsers } from "@/lib/server/accounts";
+import { requireApiUser } from "@/app/_adapters/session";
+import { toAccountDto } from "@/lib/contracts/accounts";
+import { readJson, route } from "@/lib/server/http";
+import { createAccountSchema } from "@/lib/domain/validation/accounts";
 
 export const GET = route(async () => {
   await requireApiUser("accounts:manage");

@@ -6,9 +6,9 @@ import {
 } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import { DataTable } from "@/components/data-table";
-import { ApiError } from "@/lib/api-client";
-import { roleLabels, roles, type Role } from "@/lib/auth/permissions";
-import type { AccountDto } from "@/lib/dto";
+import { ApiError } from "@/lib/client/api";
+import { roleLabels, roles, type Role } from "@/lib/domain/access/permissions";
+import type { AccountDto } from "@/lib/contracts/accounts";
 import { CreateAccountForm } from "./create-account-form";
 import { useAccounts, useResendInvitation, useUpdateAccount } from "./use-accounts";
 

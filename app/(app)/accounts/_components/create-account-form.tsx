@@ -5,9 +5,9 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { FormField } from "@/components/form-field";
 import { FormResult } from "@/components/form-result";
-import { ApiError } from "@/lib/api-client";
-import { roleLabels, roles } from "@/lib/auth/permissions";
-import { createAccountSchema, type CreateAccountInput } from "@/lib/validation/accounts";
+import { ApiError } from "@/lib/client/api";
+import { roleLabels, roles } from "@/lib/domain/access/permissions";
+import { createAccountSchema, type CreateAccountInput } from "@/lib/domain/validation/accounts";
 import { useCreateAccount } from "./use-accounts";
 
 export function CreateAccountForm() {

@@ -1,9 +1,9 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { callApi } from "@/lib/api-client";
-import type { AccountDto } from "@/lib/dto";
-import type { CreateAccountInput } from "@/lib/validation/accounts";
+import { callApi } from "@/lib/client/api";
+import type { AccountDto } from "@/lib/contracts/accounts";
+import type { CreateAccountInput } from "@/lib/domain/validation/accounts";
 
 // Every read and write of accounts from the browser goes through these hooks, under one key.
 export const accountsKey = ["accounts"] as const;

@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { CalculatorPanel } from "@/components/calculators/calculator-panel";
-import { requirePageUser } from "@/lib/auth/session";
-import { calculators, calculatorSlugs, type CalculatorSlug } from "@/lib/calc";
+import { requirePageUser } from "@/app/_adapters/session";
+import { calculators, calculatorSlugs, type CalculatorSlug } from "@/lib/domain/calc";
 
 const isSlug = (s: string): s is CalculatorSlug => (calculatorSlugs as readonly string[]).includes(s);
 

@@ -2,14 +2,14 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { CardView } from "@/components/card-view";
-import { can } from "@/lib/auth/permissions";
-import { requirePageUser } from "@/lib/auth/session";
-import { listColleagues } from "@/lib/accounts";
-import { getCard, getCardVersion } from "@/lib/cards";
+import { can } from "@/lib/domain/access/permissions";
+import { requirePageUser } from "@/app/_adapters/session";
+import { listColleagues } from "@/lib/server/accounts";
+import { getCard, getCardVersion } from "@/lib/server/cards/cards";
 import { CardActions } from "../_components/card-actions";
 import { CoauthorsForm } from "../_components/coauthors-form";
-import { isUuid } from "@/lib/http";
-import { notFoundOnMissing } from "@/lib/pages";
+import { isUuid } from "@/lib/server/http";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Task card" };
 

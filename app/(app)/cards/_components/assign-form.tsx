@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError, callApi } from "@/lib/api-client";
+import { ApiError, callApi } from "@/lib/client/api";
 
 interface Props {
   cardId: string;

@@ -3,8 +3,8 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError } from "@/lib/api-client";
-import type { CardDto } from "@/lib/dto-cards";
+import { ApiError } from "@/lib/client/api";
+import type { CardDto } from "@/lib/contracts/cards";
 import { useCardAction } from "./use-cards";
 
 /** What an author can do with a card from its page. */

@@ -5,10 +5,10 @@ import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { useFieldArray, useForm } from "react-hook-form";
 import { CardView } from "@/components/card-view";
-import { ApiError, callApi } from "@/lib/api-client";
-import type { CardDto, CardVersionDto, SubjectDto } from "@/lib/dto-cards";
+import { ApiError, callApi } from "@/lib/client/api";
+import type { CardDto, CardVersionDto, SubjectDto } from "@/lib/contracts/cards";
 import { emptyStep, fromVersion, toContent, toPreview, type CardForm } from "./card-form";
-import { writeCitingTarget } from "@/lib/citing-target";
+import { writeCitingTarget } from "@/lib/client/citing-target";
 import { StepEditor, type ManualOption } from "./step-editor";
 import { useSaveDraft } from "./use-cards";
 

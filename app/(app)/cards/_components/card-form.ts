@@ -1,9 +1,9 @@
 // The editor's form values and their conversion to the API's card content and to a preview.
 // Form fields are strings (what inputs hold); numbers are read on the way out.
-import type { CalculatorSlug } from "@/lib/calc";
-import { parseNumber } from "@/lib/calc/units";
-import type { CardVersionDto, StepDto } from "@/lib/dto-cards";
-import type { CardContentInput, NoticeKind } from "@/lib/validation/cards";
+import type { CalculatorSlug } from "@/lib/domain/calc";
+import { parseNumber } from "@/lib/domain/calc/units";
+import type { CardVersionDto, StepDto } from "@/lib/contracts/cards";
+import type { CardContentInput, NoticeKind } from "@/lib/domain/validation/cards";
 
 export interface ReferenceField {
   revisionId: string;

@@ -7,7 +7,7 @@ import {
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { DataTable } from "@/components/data-table";
-import type { CardListStatus, CardSummaryDto, SubjectDto } from "@/lib/dto-cards";
+import type { CardListStatus, CardSummaryDto, SubjectDto } from "@/lib/contracts/cards";
 import { useCardList } from "./use-cards";
 
 const column = createColumnHelper<CardSummaryDto>();

@@ -2,8 +2,8 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError } from "@/lib/api-client";
-import type { CardDto } from "@/lib/dto-cards";
+import { ApiError } from "@/lib/client/api";
+import type { CardDto } from "@/lib/contracts/cards";
 import { useSetCoauthors } from "./use-cards";
 
 /** The owner names the colleagues who may edit, publish and archive the card with them. */

@@ -2,8 +2,8 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError } from "@/lib/api-client";
-import type { SubjectDto } from "@/lib/dto-cards";
+import { ApiError } from "@/lib/client/api";
+import type { SubjectDto } from "@/lib/contracts/cards";
 import { useCreateCard } from "./use-cards";
 
 /** Title and subject first; the editor does the rest, saving as it goes. */

@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState, type ReactNode } from "react";
-import { ApiError, callApi } from "@/lib/api-client";
+import { ApiError, callApi } from "@/lib/client/api";
 
 interface Item {
   id: string;

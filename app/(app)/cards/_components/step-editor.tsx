@@ -2,9 +2,9 @@
 
 import { useState } from "react";
 import { useFieldArray, useWatch, type Control, type UseFormRegister, type UseFormSetValue } from "react-hook-form";
-import { calculators, calculatorSlugs } from "@/lib/calc";
-import { allUnits, unitLabel } from "@/lib/calc/units";
-import { noticeKinds, noticeLabels } from "@/lib/validation/cards";
+import { calculators, calculatorSlugs } from "@/lib/domain/calc";
+import { allUnits, unitLabel } from "@/lib/domain/calc/units";
+import { noticeKinds, noticeLabels } from "@/lib/domain/validation/cards";
 import type { CardForm } from "./card-form";
 
 export interface ManualOption {

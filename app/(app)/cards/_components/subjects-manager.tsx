@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { ApiError } from "@/lib/api-client";
-import type { SubjectDto } from "@/lib/dto-cards";
+import { ApiError } from "@/lib/client/api";
+import type { SubjectDto } from "@/lib/contracts/cards";
 import { useSaveSubject, useSubjects } from "./use-cards";
 
 export function SubjectsManager({ initialSubjects }: { initialSubjects: SubjectDto[] }) {

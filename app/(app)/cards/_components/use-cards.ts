@@ -1,9 +1,9 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { callApi } from "@/lib/api-client";
-import type { CardDto, CardListStatus, CardSummaryDto, CardVersionDto, SubjectDto } from "@/lib/dto-cards";
-import type { CardContentInput } from "@/lib/validation/cards";
+import { callApi } from "@/lib/client/api";
+import type { CardDto, CardListStatus, CardSummaryDto, CardVersionDto, SubjectDto } from "@/lib/contracts/cards";
+import type { CardContentInput } from "@/lib/domain/validation/cards";
 
 // Every read and write of task cards from the browser goes through these hooks, under one key.
 export const cardsKey = ["cards"] as const;

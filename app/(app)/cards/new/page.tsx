@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
-import { requirePageUser } from "@/lib/auth/session";
-import { listSubjects } from "@/lib/cards";
+import { requirePageUser } from "@/app/_adapters/session";
+import { listSubjects } from "@/lib/server/cards/cards";
 import { NewCardForm } from "../_components/new-card-form";
 
 export const metadata: Metadata = { title: "New task card" };

@@ -1,13 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { listUsers } from "@/lib/accounts";
-import { can, roleLabels } from "@/lib/auth/permissions";
-import { requirePageUser } from "@/lib/auth/session";
-import { getClassById } from "@/lib/classes";
+import { listUsers } from "@/lib/server/accounts";
+import { can, roleLabels } from "@/lib/domain/access/permissions";
+import { requirePageUser } from "@/app/_adapters/session";
+import { getClassById } from "@/lib/server/classes";
 import { AddMembersForm, RemoveMemberButton } from "./_components/member-controls";
-import { isUuid } from "@/lib/http";
-import { notFoundOnMissing } from "@/lib/pages";
+import { isUuid } from "@/lib/server/http";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Class" };
 

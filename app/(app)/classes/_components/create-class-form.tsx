@@ -7,8 +7,8 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { FormField } from "@/components/form-field";
 import { FormResult } from "@/components/form-result";
-import { ApiError, callApi } from "@/lib/api-client";
-import { createClassSchema, type CreateClassInput } from "@/lib/validation/classes";
+import { ApiError, callApi } from "@/lib/client/api";
+import { createClassSchema, type CreateClassInput } from "@/lib/domain/validation/classes";
 
 export function CreateClassForm() {
   const router = useRouter();

@@ -1,15 +1,15 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { can } from "@/lib/auth/permissions";
-import { requirePageUser } from "@/lib/auth/session";
-import { getManual } from "@/lib/library/manuals";
-import { documentTypeLabels } from "@/lib/validation/library";
+import { can } from "@/lib/domain/access/permissions";
+import { requirePageUser } from "@/app/_adapters/session";
+import { getManual } from "@/lib/server/library/manuals";
+import { documentTypeLabels } from "@/lib/domain/validation/library";
 import { KeepOnCarts } from "../_components/keep-on-carts";
 import { RetryButton } from "../_components/retry-button";
 import { UploadForm } from "../_components/upload-form";
-import { isUuid } from "@/lib/http";
-import { notFoundOnMissing } from "@/lib/pages";
+import { isUuid } from "@/lib/server/http";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Manual" };
 

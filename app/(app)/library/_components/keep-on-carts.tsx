@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError, callApi } from "@/lib/api-client";
+import { ApiError, callApi } from "@/lib/client/api";
 
 /** A librarian's switch: carts store the whole current PDF of this manual, not only cited pages. */
 export function KeepOnCarts({ manualId, kept }: { manualId: string; kept: boolean }) {

@@ -7,9 +7,9 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { FormField } from "@/components/form-field";
-import { documentTypes } from "@/lib/vocabulary";
-import { formatBytes } from "@/lib/library/format";
-import { documentTypeLabels, manualUploadSchema, revisionFieldsSchema } from "@/lib/validation/library";
+import { documentTypes } from "@/lib/domain/vocabulary";
+import { formatBytes } from "@/lib/domain/library/format";
+import { documentTypeLabels, manualUploadSchema, revisionFieldsSchema } from "@/lib/domain/validation/library";
 import { useRetryRevision, useRevisionStatus } from "./use-revision-status";
 
 type Mode = { kind: "manual" } | { kind: "revision"; manualId: string };

@@ -1,8 +1,8 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { callApi } from "@/lib/api-client";
-import type { RevisionStatusDto } from "@/lib/dto-library";
+import { callApi } from "@/lib/client/api";
+import type { RevisionStatusDto } from "@/lib/contracts/library";
 
 export const revisionKey = (id: string) => ["revision", id] as const;
 

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { requirePageUser } from "@/lib/auth/session";
-import { getEnv } from "@/lib/env";
-import { formatBytes } from "@/lib/library/format";
+import { requirePageUser } from "@/app/_adapters/session";
+import { getEnv } from "@/lib/server/env";
+import { formatBytes } from "@/lib/domain/library/format";
 import { UploadForm } from "../_components/upload-form";
 
 export const metadata: Metadata = { title: "Upload a manual" };

@@ -3,13 +3,13 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { CardNotice } from "@/components/card-notice";
 import { StepMarkdown } from "@/components/step-markdown";
-import { describeLimit } from "@/lib/calc/limits";
-import { requirePageUser } from "@/lib/auth/session";
-import { isUuid } from "@/lib/http";
-import { getRunDetail } from "@/lib/runs/runs";
-import { sortNotices } from "@/lib/validation/cards";
+import { describeLimit } from "@/lib/domain/calc/limits";
+import { requirePageUser } from "@/app/_adapters/session";
+import { isUuid } from "@/lib/server/http";
+import { getRunDetail } from "@/lib/server/runs/runs";
+import { sortNotices } from "@/lib/domain/validation/cards";
 import { ReviewActions } from "../_components/review-actions";
-import { notFoundOnMissing } from "@/lib/pages";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Review a run" };
 

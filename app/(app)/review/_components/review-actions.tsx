@@ -2,8 +2,8 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError, callApi } from "@/lib/api-client";
-import type { RunStatus } from "@/lib/runs/fold";
+import { ApiError, callApi } from "@/lib/client/api";
+import type { RunStatus } from "@/lib/domain/runs/fold";
 
 interface Point {
   id: string;

@@ -4,9 +4,9 @@ import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { MarkedText } from "@/components/marked-text";
-import { documentTypes } from "@/lib/vocabulary";
-import { ApiError } from "@/lib/api-client";
-import { documentTypeLabels } from "@/lib/validation/library";
+import { documentTypes } from "@/lib/domain/vocabulary";
+import { ApiError } from "@/lib/client/api";
+import { documentTypeLabels } from "@/lib/domain/validation/library";
 import { useSearch, type SearchHitDto, type SearchInput } from "./use-search";
 
 function useDebounced<T>(value: T, ms: number): T {

@@ -1,8 +1,8 @@
 "use client";
 
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import { callApi } from "@/lib/api-client";
-import type { SearchHit, SearchResult } from "@/search/engine";
+import { callApi } from "@/lib/client/api";
+import type { SearchHit, SearchResult } from "@/lib/contracts/search";
 
 export type SearchHitDto = SearchHit;
 export type SearchResponseDto = SearchResult & { tookMs: number };

@@ -6,8 +6,8 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { FormField } from "@/components/form-field";
 import { FormResult } from "@/components/form-result";
-import { ApiError, callApi } from "@/lib/api-client";
-import { passwordResetRequestSchema } from "@/lib/validation/accounts";
+import { ApiError, callApi } from "@/lib/client/api";
+import { passwordResetRequestSchema } from "@/lib/domain/validation/accounts";
 
 export function ForgotPasswordForm() {
   const [result, setResult] = useState<{ ok: boolean; message: string } | null>(null);

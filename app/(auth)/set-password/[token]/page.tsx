@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { describeLinkToken } from "@/lib/accounts";
+import { describeLinkToken } from "@/lib/server/accounts";
 import { SetPasswordForm } from "./_components/set-password-form";
 
 export const metadata: Metadata = { title: "Choose a password" };

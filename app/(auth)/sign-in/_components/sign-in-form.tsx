@@ -6,9 +6,9 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { FormField } from "@/components/form-field";
-import { ApiError, callApi } from "@/lib/api-client";
-import { signInSchema, type SignInInput } from "@/lib/validation/accounts";
-import { clearSignOutPending } from "@/lib/cart/store";
+import { ApiError, callApi } from "@/lib/client/api";
+import { signInSchema, type SignInInput } from "@/lib/domain/validation/accounts";
+import { clearSignOutPending } from "@/lib/client/cart/store";
 
 export function SignInForm({ next }: { next: string }) {
   const router = useRouter();

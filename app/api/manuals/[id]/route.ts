@@ -1,8 +1,8 @@
-import { can } from "@/lib/auth/permissions";
-import { requireApiUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
-import { idParam, route } from "@/lib/http";
-import { getManual } from "@/lib/library/manuals";
+import { can } from "@/lib/domain/access/permissions";
+import { requireApiUser } from "@/app/_adapters/session";
+import { AppError } from "@/lib/domain/errors";
+import { idParam, route } from "@/lib/server/http";
+import { getManual } from "@/lib/server/library/manuals";
 
 type Context = { params: Promise<{ id: string }> };
 

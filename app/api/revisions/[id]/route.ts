@@ -1,6 +1,6 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, route } from "@/lib/http";
-import { getRevision } from "@/lib/library/manuals";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, route } from "@/lib/server/http";
+import { getRevision } from "@/lib/server/library/manuals";
 
 type Context = { params: Promise<{ id: string }> };
 

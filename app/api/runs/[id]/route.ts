@@ -1,6 +1,6 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, route } from "@/lib/http";
-import { getRunDetail } from "@/lib/runs/runs";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, route } from "@/lib/server/http";
+import { getRunDetail } from "@/lib/server/runs/runs";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -1,8 +1,8 @@
-import { getUserById, updateUser } from "@/lib/accounts";
-import { requireApiUser } from "@/lib/auth/session";
-import { toAccountDto } from "@/lib/dto";
-import { idParam, readJson, route } from "@/lib/http";
-import { updateAccountSchema } from "@/lib/validation/accounts";
+import { getUserById, updateUser } from "@/lib/server/accounts";
+import { requireApiUser } from "@/app/_adapters/session";
+import { toAccountDto } from "@/lib/contracts/accounts";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { updateAccountSchema } from "@/lib/domain/validation/accounts";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -1,13 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { requirePageUser } from "@/lib/auth/session";
-import { getCard } from "@/lib/cards";
-import { getClassById, listClasses } from "@/lib/classes";
-import { isUuid } from "@/lib/http";
-import { listAssignments } from "@/lib/runs/runs";
+import { requirePageUser } from "@/app/_adapters/session";
+import { getCard } from "@/lib/server/cards/cards";
+import { getClassById, listClasses } from "@/lib/server/classes";
+import { isUuid } from "@/lib/server/http";
+import { listAssignments } from "@/lib/server/runs/runs";
 import { AssignForm } from "../../_components/assign-form";
-import { notFoundOnMissing } from "@/lib/pages";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Assign a task card" };
 

@@ -1,12 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { requirePageUser } from "@/lib/auth/session";
-import { getCard, listSubjects } from "@/lib/cards";
-import { listManuals } from "@/lib/library/manuals";
+import { requirePageUser } from "@/app/_adapters/session";
+import { getCard, listSubjects } from "@/lib/server/cards/cards";
+import { listManuals } from "@/lib/server/library/manuals";
 import { CardEditor } from "../../_components/card-editor";
-import { isUuid } from "@/lib/http";
-import { notFoundOnMissing } from "@/lib/pages";
+import { isUuid } from "@/lib/server/http";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Edit task card" };
 

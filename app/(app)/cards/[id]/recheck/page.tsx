@@ -2,12 +2,12 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PageDiff } from "@/components/page-diff";
-import { requirePageUser } from "@/lib/auth/session";
-import { getCard } from "@/lib/cards";
-import { listOpenRechecks } from "@/lib/revisions/rechecks";
+import { requirePageUser } from "@/app/_adapters/session";
+import { getCard } from "@/lib/server/cards/cards";
+import { listOpenRechecks } from "@/lib/server/revisions/rechecks";
 import { RecheckForm } from "../../_components/recheck-form";
-import { isUuid } from "@/lib/http";
-import { notFoundOnMissing } from "@/lib/pages";
+import { isUuid } from "@/lib/server/http";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Recheck task card" };
 

@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FormResult } from "@/components/form-result";
-import { ApiError, callApi } from "@/lib/api-client";
+import { ApiError, callApi } from "@/lib/client/api";
 
 export function AddMembersForm({ classId, candidates }: { classId: string; candidates: { id: string; label: string }[] }) {
   const router = useRouter();

@@ -1,10 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { requirePageUser } from "@/lib/auth/session";
-import { isUuid } from "@/lib/http";
-import { classRecord } from "@/lib/runs/records";
-import { notFoundOnMissing } from "@/lib/pages";
+import { requirePageUser } from "@/app/_adapters/session";
+import { isUuid } from "@/lib/server/http";
+import { classRecord } from "@/lib/server/runs/records";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Class progress" };
 

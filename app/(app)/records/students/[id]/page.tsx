@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { can } from "@/lib/auth/permissions";
-import { requirePageUser } from "@/lib/auth/session";
-import { isUuid } from "@/lib/http";
-import { studentRecord } from "@/lib/runs/records";
-import { notFoundOnMissing } from "@/lib/pages";
+import { can } from "@/lib/domain/access/permissions";
+import { requirePageUser } from "@/app/_adapters/session";
+import { isUuid } from "@/lib/server/http";
+import { studentRecord } from "@/lib/server/runs/records";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Training record" };
 

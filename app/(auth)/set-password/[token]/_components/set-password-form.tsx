@@ -6,8 +6,8 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { FormField } from "@/components/form-field";
-import { ApiError, callApi } from "@/lib/api-client";
-import { setPasswordFormSchema } from "@/lib/validation/accounts";
+import { ApiError, callApi } from "@/lib/client/api";
+import { setPasswordFormSchema } from "@/lib/domain/validation/accounts";
 
 export function SetPasswordForm({ token }: { token: string }) {
   const router = useRouter();

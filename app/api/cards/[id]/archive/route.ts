@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { setArchived } from "@/lib/cards";
-import { idParam, readJson, route } from "@/lib/http";
-import { archiveSchema } from "@/lib/validation/cards";
+import { requireApiUser } from "@/app/_adapters/session";
+import { setArchived } from "@/lib/server/cards/cards";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { archiveSchema } from "@/lib/domain/validation/cards";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { setCoauthors } from "@/lib/cards";
-import { idParam, readJson, route } from "@/lib/http";
-import { coauthorsSchema } from "@/lib/validation/cards";
+import { requireApiUser } from "@/app/_adapters/session";
+import { setCoauthors } from "@/lib/server/cards/cards";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { coauthorsSchema } from "@/lib/domain/validation/cards";
 
 type Context = { params: Promise<{ id: string }> };
 

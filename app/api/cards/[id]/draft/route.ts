@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { cardBodyLimit, discardDraft, saveDraft } from "@/lib/cards";
-import { idParam, readJson, route } from "@/lib/http";
-import { saveDraftSchema } from "@/lib/validation/cards";
+import { requireApiUser } from "@/app/_adapters/session";
+import { cardBodyLimit, discardDraft, saveDraft } from "@/lib/server/cards/cards";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { saveDraftSchema } from "@/lib/domain/validation/cards";
 
 type Context = { params: Promise<{ id: string }> };
 

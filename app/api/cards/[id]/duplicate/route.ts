@@ -1,6 +1,6 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { duplicateCard } from "@/lib/cards";
-import { idParam, route } from "@/lib/http";
+import { requireApiUser } from "@/app/_adapters/session";
+import { duplicateCard } from "@/lib/server/cards/cards";
+import { idParam, route } from "@/lib/server/http";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, readJson, route } from "@/lib/http";
-import { applyRechecks, listOpenRechecks } from "@/lib/revisions/rechecks";
-import { recheckDecisionsSchema } from "@/lib/validation/cards";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { applyRechecks, listOpenRechecks } from "@/lib/server/revisions/rechecks";
+import { recheckDecisionsSchema } from "@/lib/domain/validation/cards";
 
 type Context = { params: Promise<{ id: string }> };
 

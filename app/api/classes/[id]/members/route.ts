@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { addClassMembers } from "@/lib/classes";
-import { idParam, readJson, route } from "@/lib/http";
-import { addMembersSchema } from "@/lib/validation/classes";
+import { requireApiUser } from "@/app/_adapters/session";
+import { addClassMembers } from "@/lib/server/classes";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { addMembersSchema } from "@/lib/domain/validation/classes";
 
 type Context = { params: Promise<{ id: string }> };
 

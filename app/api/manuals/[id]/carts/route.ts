@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, readJson, route } from "@/lib/http";
-import { setKeepOnCarts } from "@/lib/library/manuals";
-import { keepOnCartsSchema } from "@/lib/validation/runs";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { setKeepOnCarts } from "@/lib/server/library/manuals";
+import { keepOnCartsSchema } from "@/lib/domain/validation/runs";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -1,10 +1,10 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { getEnv } from "@/lib/env";
-import { idParam, parseWith, route } from "@/lib/http";
-import { addRevision, assertManualExists } from "@/lib/library/manuals";
-import { withUploadedPdf } from "@/lib/library/upload";
-import { getStore } from "@/lib/storage";
-import { revisionFieldsSchema } from "@/lib/validation/library";
+import { requireApiUser } from "@/app/_adapters/session";
+import { getEnv } from "@/lib/server/env";
+import { idParam, parseWith, route } from "@/lib/server/http";
+import { addRevision, assertManualExists } from "@/lib/server/library/manuals";
+import { withUploadedPdf } from "@/lib/server/library/upload";
+import { getStore } from "@/lib/server/storage";
+import { revisionFieldsSchema } from "@/lib/domain/validation/library";
 
 type Context = { params: Promise<{ id: string }> };
 

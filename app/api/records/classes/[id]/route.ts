@@ -1,6 +1,6 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, route } from "@/lib/http";
-import { classRecord } from "@/lib/runs/records";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, route } from "@/lib/server/http";
+import { classRecord } from "@/lib/server/runs/records";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { fileResponse, fileSlug } from "@/lib/file-response";
-import { idParam, route } from "@/lib/http";
-import { studentRecord, studentRecordCsv, studentRecordPdf } from "@/lib/runs/records";
+import { requireApiUser } from "@/app/_adapters/session";
+import { fileResponse, fileSlug } from "@/lib/server/file-response";
+import { idParam, route } from "@/lib/server/http";
+import { studentRecord, studentRecordCsv, studentRecordPdf } from "@/lib/server/runs/records";
 
 type Context = { params: Promise<{ id: string }> };
 

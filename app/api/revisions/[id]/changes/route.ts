@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, route } from "@/lib/http";
-import { getReadableRevision } from "@/lib/library/manuals";
-import { getComparison } from "@/lib/revisions/rechecks";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, route } from "@/lib/server/http";
+import { getReadableRevision } from "@/lib/server/library/manuals";
+import { getComparison } from "@/lib/server/revisions/rechecks";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -1,10 +1,10 @@
 import { Readable } from "node:stream";
-import { requireApiUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
-import { idParam, route } from "@/lib/http";
-import { getReadableRevision } from "@/lib/library/manuals";
-import { parseRange } from "@/lib/library/range";
-import { getStore } from "@/lib/storage";
+import { requireApiUser } from "@/app/_adapters/session";
+import { AppError } from "@/lib/domain/errors";
+import { idParam, route } from "@/lib/server/http";
+import { getReadableRevision } from "@/lib/server/library/manuals";
+import { parseRange } from "@/lib/domain/library/range";
+import { getStore } from "@/lib/server/storage";
 
 type Context = { params: Promise<{ id: string }> };
 

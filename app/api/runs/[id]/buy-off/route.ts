@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, readJson, route } from "@/lib/http";
-import { buyOff } from "@/lib/runs/runs";
-import { buyOffSchema } from "@/lib/validation/runs";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { buyOff } from "@/lib/server/runs/runs";
+import { buyOffSchema } from "@/lib/domain/validation/runs";
 
 type Context = { params: Promise<{ id: string }> };
 

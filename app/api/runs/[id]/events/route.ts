@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, readJson, route } from "@/lib/http";
-import { appendEvents } from "@/lib/runs/runs";
-import { eventBatchSchema } from "@/lib/validation/runs";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { appendEvents } from "@/lib/server/runs/runs";
+import { eventBatchSchema } from "@/lib/domain/validation/runs";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { fileResponse } from "@/lib/file-response";
-import { idParam, route } from "@/lib/http";
-import { getRunPacket } from "@/lib/runs/runs";
+import { requireApiUser } from "@/app/_adapters/session";
+import { fileResponse } from "@/lib/server/file-response";
+import { idParam, route } from "@/lib/server/http";
+import { getRunPacket } from "@/lib/server/runs/runs";
 
 type Context = { params: Promise<{ id: string }> };
 

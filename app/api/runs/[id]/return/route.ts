@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, readJson, route } from "@/lib/http";
-import { returnRun } from "@/lib/runs/runs";
-import { returnRunSchema } from "@/lib/validation/runs";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { returnRun } from "@/lib/server/runs/runs";
+import { returnRunSchema } from "@/lib/domain/validation/runs";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -1,7 +1,7 @@
-import { resendInvitation } from "@/lib/accounts";
-import { requireApiUser } from "@/lib/auth/session";
-import { toAccountDto } from "@/lib/dto";
-import { idParam, route } from "@/lib/http";
+import { resendInvitation } from "@/lib/server/accounts";
+import { requireApiUser } from "@/app/_adapters/session";
+import { toAccountDto } from "@/lib/contracts/accounts";
+import { idParam, route } from "@/lib/server/http";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -2,16 +2,16 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { MarkedText } from "@/components/marked-text";
-import { can } from "@/lib/auth/permissions";
-import { requirePageUser } from "@/lib/auth/session";
+import { can } from "@/lib/domain/access/permissions";
+import { requirePageUser } from "@/app/_adapters/session";
 import { PdfReaderLoader } from "@/components/pdf-reader-loader";
-import { highlightWords, markStems } from "@/lib/library/highlight";
-import { getManual, getPage, getReadableRevision } from "@/lib/library/manuals";
+import { highlightWords, markStems } from "@/lib/domain/library/highlight";
+import { getManual, getPage, getReadableRevision } from "@/lib/server/library/manuals";
 import { findCorrections } from "@/search/postgres";
 import { parseQuery } from "@/search/query";
 import { CiteOnCard } from "./_components/cite-on-card";
-import { isUuid } from "@/lib/http";
-import { notFoundOnMissing } from "@/lib/pages";
+import { isUuid } from "@/lib/server/http";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Page" };
 

@@ -1,13 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { requirePageUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
-import { getManual, getReadableRevision } from "@/lib/library/manuals";
-import type { PageStatus } from "@/lib/revisions/compare";
-import { getComparison, listRechecksOfRevision } from "@/lib/revisions/rechecks";
-import { isUuid } from "@/lib/http";
-import { notFoundOnMissing } from "@/lib/pages";
+import { requirePageUser } from "@/app/_adapters/session";
+import { AppError } from "@/lib/domain/errors";
+import { getManual, getReadableRevision } from "@/lib/server/library/manuals";
+import type { PageStatus } from "@/lib/domain/revisions/compare";
+import { getComparison, listRechecksOfRevision } from "@/lib/server/revisions/rechecks";
+import { isUuid } from "@/lib/server/http";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "What changed" };
 

@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { citePage } from "@/lib/cards";
-import { idParam, readJson, route } from "@/lib/http";
-import { citePageSchema } from "@/lib/validation/cards";
+import { requireApiUser } from "@/app/_adapters/session";
+import { citePage } from "@/lib/server/cards/cards";
+import { idParam, readJson, route } from "@/lib/server/http";
+import { citePageSchema } from "@/lib/domain/validation/cards";
 
 type Context = { params: Promise<{ id: string }> };
 

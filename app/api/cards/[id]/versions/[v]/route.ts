@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { cardBodyLimit, getCardVersion, updateVersion, versionParams } from "@/lib/cards";
-import { readJson, route } from "@/lib/http";
-import { saveDraftSchema } from "@/lib/validation/cards";
+import { requireApiUser } from "@/app/_adapters/session";
+import { cardBodyLimit, getCardVersion, updateVersion, versionParams } from "@/lib/server/cards/cards";
+import { readJson, route } from "@/lib/server/http";
+import { saveDraftSchema } from "@/lib/domain/validation/cards";
 
 type Context = { params: Promise<{ id: string; v: string }> };
 

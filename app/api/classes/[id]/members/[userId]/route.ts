@@ -1,6 +1,6 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { removeClassMember } from "@/lib/classes";
-import { idParam, route } from "@/lib/http";
+import { requireApiUser } from "@/app/_adapters/session";
+import { removeClassMember } from "@/lib/server/classes";
+import { idParam, route } from "@/lib/server/http";
 
 type Context = { params: Promise<{ id: string; userId: string }> };
 

@@ -1,7 +1,7 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, parseWith, route } from "@/lib/http";
-import { getPage } from "@/lib/library/manuals";
-import { pageNumberSchema } from "@/lib/validation/library";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, parseWith, route } from "@/lib/server/http";
+import { getPage } from "@/lib/server/library/manuals";
+import { pageNumberSchema } from "@/lib/domain/validation/library";
 
 type Context = { params: Promise<{ id: string; n: string }> };
 

@@ -1,7 +1,7 @@
-import { fileResponse } from "@/lib/file-response";
-import { requireApiUser } from "@/lib/auth/session";
-import { idParam, isUuid, route } from "@/lib/http";
-import { readPhoto, storePhoto } from "@/lib/runs/photos";
+import { fileResponse } from "@/lib/server/file-response";
+import { requireApiUser } from "@/app/_adapters/session";
+import { idParam, isUuid, route } from "@/lib/server/http";
+import { readPhoto, storePhoto } from "@/lib/server/runs/photos";
 
 type Context = { params: Promise<{ id: string; photoId: string }> };
 

@@ -3,9 +3,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useEffect, useState } from "react";
-import { ApiError, callApi } from "@/lib/api-client";
-import { readCitingTarget, writeCitingTarget, type CitingTarget } from "@/lib/citing-target";
-import type { CardDto } from "@/lib/dto-cards";
+import { ApiError, callApi } from "@/lib/client/api";
+import { readCitingTarget, writeCitingTarget, type CitingTarget } from "@/lib/client/citing-target";
+import type { CardDto } from "@/lib/contracts/cards";
 
 /** The page the reader shows now: it keeps the URL's last segment current while scrolling. */
 function currentPage(fallback: number): number {

@@ -2,11 +2,11 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PageDiff } from "@/components/page-diff";
-import { requirePageUser } from "@/lib/auth/session";
-import { getManual, getPage, getReadableRevision } from "@/lib/library/manuals";
-import { getComparison } from "@/lib/revisions/rechecks";
-import { isUuid } from "@/lib/http";
-import { notFoundOnMissing } from "@/lib/pages";
+import { requirePageUser } from "@/app/_adapters/session";
+import { getManual, getPage, getReadableRevision } from "@/lib/server/library/manuals";
+import { getComparison } from "@/lib/server/revisions/rechecks";
+import { isUuid } from "@/lib/server/http";
+import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Old and new page" };
 

@@ -1,8 +1,8 @@
-import { requireApiUser } from "@/lib/auth/session";
-import { getCardVersion, versionParams } from "@/lib/cards";
-import { fileResponse, fileSlug } from "@/lib/file-response";
-import { route } from "@/lib/http";
-import { renderCardPdf } from "@/lib/pdf/card-pdf";
+import { requireApiUser } from "@/app/_adapters/session";
+import { getCardVersion, versionParams } from "@/lib/server/cards/cards";
+import { fileResponse, fileSlug } from "@/lib/server/file-response";
+import { route } from "@/lib/server/http";
+import { renderCardPdf } from "@/lib/server/pdf/card-pdf";
 
 type Context = { params: Promise<{ id: string; v: string }> };
 

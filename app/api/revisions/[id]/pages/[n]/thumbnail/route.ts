@@ -1,10 +1,10 @@
-import { fileResponse } from "@/lib/file-response";
-import { requireApiUser } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
-import { idParam, parseWith, route } from "@/lib/http";
-import { getPage } from "@/lib/library/manuals";
-import { getStore } from "@/lib/storage";
-import { pageNumberSchema } from "@/lib/validation/library";
+import { fileResponse } from "@/lib/server/file-response";
+import { requireApiUser } from "@/app/_adapters/session";
+import { AppError } from "@/lib/domain/errors";
+import { idParam, parseWith, route } from "@/lib/server/http";
+import { getPage } from "@/lib/server/library/manuals";
+import { getStore } from "@/lib/server/storage";
+import { pageNumberSchema } from "@/lib/domain/validation/library";
 
 type Context = { params: Promise<{ id: string; n: string }> };
 

@@ -1,0 +1,122 @@
+import "server-only";
+import { and, asc, eq, ne } from "drizzle-orm";
+import { PDFDocument, StandardFonts } from "pdf-lib";
+import { getDb } from "@/db";
+import { classes, classMembers, curriculumSubjects, runs, signOffs, taskCardVersions, users } from "@/db/schema";
+import { can, type Actor } from "@/lib/domain/access/permissions";
+import type { ClassRecordDto, StudentRecordDto } from "@/lib/contracts/runs";
+import { AppError } from "@/lib/domain/errors";
+import { CardWriter, grey } from "@/lib/server/pdf/card-pdf";
+import { toCsv } from "@/lib/domain/runs/csv";
+import { listRunsOfStudent } from "@/lib/server/runs/runs";
+import { readsRecordOf } from "@/lib/server/runs/scope";
+
+const noSubject = "No subject";
+
+/** A student's record: students see their own; instructors those of the students they teach; admins anyone's. */
+export async function studentRecord({ actor, studentId }: { actor: Actor; studentId: string }): Promise<StudentRecordDto> {
+  const db = getDb();
+  if (!(await readsRecordOf(db, actor, studentId))) throw new AppError("not_found", "That record was not found.");
+  const [student] = await db.select({ id: users.id, name: users.name, email: users.email, role: users.role }).from(users).where(eq(users.id, studentId));
+  if (!student || student.role !== "student") throw new AppError("not_found", "That record was not found.");
+  const signed = await db
+    .select({
+      runId: runs.id,
+      title: taskCardVersions.title,
+      versionNumber: taskCardVersions.number,
+      subjectName: curriculumSubjects.name,
+      signedAt: signOffs.signedAt,
+      instructorName: users.name,
+      estimatedMinutes: taskCardVersions.estimatedMinutes,
+      actualMinutes: signOffs.actualMinutes,
+    })
+    .from(signOffs)
+    .innerJoin(runs, eq(runs.id, signOffs.runId))
+    .innerJoin(taskCardVersions, eq(taskCardVersions.id, signOffs.versionId))
+    .leftJoin(curriculumSubjects, eq(curriculumSubjects.id, taskCardVersions.subjectId))
+    .innerJoin(users, eq(users.id, signOffs.instructorId))
+    .where(eq(runs.studentId, studentId))
+    .orderBy(asc(curriculumSubjects.name), asc(signOffs.signedAt));
+  const bySubject = new Map<string, StudentRecordDto["subjects"][number]["signedOff"]>();
+  for (const s of signed) {
+    const list = bySubject.get(s.subjectName ?? noSubject) ?? [];
+    list.push({ ...s, signedAt: s.signedAt.toISOString() });
+    bySubject.set(s.subjectName ?? noSubject, list);
+  }
+  const all = await listRunsOfStudent(db, studentId);
+  return {
+    student: { id: student.id, name: student.name, email: student.email },
+    subjects: [...bySubject.entries()].map(([subjectName, signedOff]) => ({ subjectName, signedOff })),
+    open: all.filter((r) => r.status === "not_started" || r.status === "in_progress" || r.status === "submitted"),
+    returned: all.filter((r) => r.status === "returned"),
+    totals: {
+      signedOff: signed.length,
+      estimatedMinutes: signed.reduce((n, s) => n + (s.estimatedMinutes ?? 0), 0),
+      actualMinutes: signed.reduce((n, s) => n + s.actualMinutes, 0),
+    },
+  };
+}
+
+const hours = (minutes: number) => (minutes / 60).toFixed(1);
+
+export function studentRecordCsv(record: StudentRecordDto): string {
+  const rows = record.subjects.flatMap((s) =>
+    s.signedOff.map((c) => [record.student.name, s.subjectName, c.title, c.versionNumber, c.signedAt.slice(0, 10), c.instructorName, c.estimatedMinutes != null ? hours(c.estimatedMinutes) : "", hours(c.actualMinutes)]),
+  );
+  return toCsv(["Student", "Subject", "Task card", "Version", "Signed off", "Instructor", "Estimated hours", "Actual hours"], rows);
+}
+
+export async function studentRecordPdf(record: StudentRecordDto, printedAt = new Date()): Promise<Uint8Array> {
+  const doc = await PDFDocument.create();
+  doc.setTitle(`Training record: ${record.student.name}`);
+  doc.setProducer("Hangarleaf");
+  const w = new CardWriter(doc, await doc.embedFont(StandardFonts.Helvetica), await doc.embedFont(StandardFonts.HelveticaBold), `Training record of ${record.student.name} - printed ${printedAt.toISOString().slice(0, 10)}`);
+  w.text("TRAINING RECORD", { size: 9, bold: true, color: grey });
+  w.text(record.student.name, { size: 17, bold: true });
+  w.text(`${record.totals.signedOff} task cards signed off · estimated ${hours(record.totals.estimatedMinutes)} h · actual ${hours(record.totals.actualMinutes)} h`, { size: 10, color: grey });
+  w.gap(8);
+  for (const subject of record.subjects) {
+    w.text(subject.subjectName, { size: 13, bold: true });
+    for (const c of subject.signedOff) {
+      w.text(`${c.title} (version ${c.versionNumber}) - signed off ${c.signedAt.slice(0, 10)} by ${c.instructorName}; ${c.estimatedMinutes != null ? `estimated ${hours(c.estimatedMinutes)} h, ` : ""}actual ${hours(c.actualMinutes)} h`, { indent: 12 });
+    }
+    w.gap(6);
+  }
+  if (!record.subjects.length) w.text("No task card is signed off yet.");
+  if (record.open.length || record.returned.length) {
+    w.gap(6);
+    w.text("Open and returned runs", { size: 13, bold: true });
+    for (const r of [...record.returned, ...record.open]) w.text(`${r.title} (version ${r.versionNumber}): ${r.workStatus.replace("_", " ")}${r.dueOn ? `, due ${r.dueOn}` : ""}`, { indent: 12 });
+  }
+  w.finish();
+  return doc.save();
+}
+
+/** A class at a glance: each student's signed-off and assigned cards per subject. */
+export async function classRecord({ actor, classId }: { actor: Actor; classId: string }): Promise<ClassRecordDto> {
+  const db = getDb();
+  const [klass] = await db.select({ id: classes.id, name: classes.name }).from(classes).where(eq(classes.id, classId));
+  const member = klass && (can(actor, "classes:view-all") || (await db.select().from(classMembers).where(and(eq(classMembers.classId, classId), eq(classMembers.userId, actor.id)))).length > 0);
+  if (!klass || !member || !can(actor, "records:view-all")) throw new AppError("not_found", "That class was not found.");
+  const students = await db
+    .select({ id: users.id, name: users.name })
+    .from(classMembers)
+    .innerJoin(users, eq(users.id, classMembers.userId))
+    .where(and(eq(classMembers.classId, classId), eq(users.role, "student"), ne(users.status, "deactivated")))
+    .orderBy(asc(users.name));
+  const result: ClassRecordDto["students"] = [];
+  const subjects = new Set<string>();
+  for (const s of students) {
+    const work = await listRunsOfStudent(db, s.id);
+    const bySubject: ClassRecordDto["students"][number]["bySubject"] = {};
+    for (const w of work) {
+      const key = w.subjectName ?? noSubject;
+      subjects.add(key);
+      bySubject[key] ??= { signedOff: 0, assigned: 0 };
+      bySubject[key].assigned++;
+      if (w.status === "signed_off") bySubject[key].signedOff++;
+    }
+    result.push({ id: s.id, name: s.name, bySubject, overdue: work.filter((w) => w.workStatus === "overdue").length });
+  }
+  return { class: klass, subjects: [...subjects].sort(), students: result };
+}
