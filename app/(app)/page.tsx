@@ -3,7 +3,7 @@ import { navigationFor, roleLabels, type Role } from "@/lib/domain/access/permis
 import { requirePageUser } from "@/app/_adapters/session";
 import { can } from "@/lib/domain/access/permissions";
 import { listClassesOfUser } from "@/lib/server/classes";
-import { listMyWork, listReviewQueue } from "@/lib/server/runs/runs";
+import { listMyWork, listReviewQueue } from "@/lib/server/runs/queries";
 
 const roleIntro: Record<Role, string> = {
   student: "The task cards your instructors assign are under My work; it also opens on the cart without a network.",

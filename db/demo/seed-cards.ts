@@ -1,6 +1,6 @@
 // Demo curriculum subjects and published task cards built on the invented manuals. Invented content
 // only. The cards are written straight to the tables: at seed time the manuals are still queued for
-// ingest, so the library's "cite only ready revisions" check of lib/server/cards/cards.ts cannot pass yet.
+// ingest, so the library's "cite only ready revisions" check of lib/server/cards/draft.ts cannot pass yet.
 import { randomUUID } from "node:crypto";
 import { and, eq, inArray } from "drizzle-orm";
 import type { Db } from "@/db";

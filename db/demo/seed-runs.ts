@@ -81,7 +81,7 @@ function eventsFor(steps: Step[], progress: Progress, studentId: string, instruc
   return made;
 }
 
-/** What a sign-off records of the cited revisions (lib/server/runs/runs.ts does the same from the DTO). */
+/** What a sign-off records of the cited revisions (lib/server/runs/review.ts does the same from the DTO). */
 async function revisionsCited(db: Db, steps: Step[]) {
   const refs = steps.flatMap((s) => s.references);
   if (!refs.length) return [];
@@ -112,7 +112,7 @@ export async function seedRuns(db: Db): Promise<number> {
     if (exists) continue;
     const [klass] = a.className ? await db.select({ id: classes.id }).from(classes).where(eq(classes.name, a.className)) : [];
     const studentEmails = a.students ?? [...people.values()].filter((p) => p.role === "student").map((p) => p.email);
-    // The class's students, as assignment to a class does it in lib/server/runs/runs.ts.
+    // The class's students, as assignment to a class does it in lib/server/runs/assign.ts.
     const members = klass
       ? (await db.select({ email: users.email }).from(classMembers).innerJoin(users, eq(users.id, classMembers.userId)).where(and(eq(classMembers.classId, klass.id), eq(users.role, "student")))).map((r) => r.email)
       : studentEmails;

@@ -2,7 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
-import { listCards, listSubjects } from "@/lib/server/cards/cards";
+import { listCards } from "@/lib/server/cards/read";
+import { listSubjects } from "@/lib/server/cards/subjects";
 import { CardsTable } from "./_components/cards-table";
 
 export const metadata: Metadata = { title: "Task cards" };

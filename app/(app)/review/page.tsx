@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageUser } from "@/app/_adapters/session";
 import type { RunStatus } from "@/lib/domain/runs/fold";
-import { listReviewQueue } from "@/lib/server/runs/runs";
+import { listReviewQueue } from "@/lib/server/runs/queries";
 
 export const metadata: Metadata = { title: "Review" };
 

@@ -1,6 +1,6 @@
 import { requireApiUser } from "@/app/_adapters/session";
 import { isUuid, readJson, route } from "@/lib/server/http";
-import { createAssignment, listAssignments } from "@/lib/server/runs/runs";
+import { createAssignment, listAssignments } from "@/lib/server/runs/assign";
 import { createAssignmentSchema } from "@/lib/domain/validation/runs";
 
 export const GET = route(async (request) => {

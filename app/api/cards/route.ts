@@ -1,5 +1,6 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { cardBodyLimit, createCard, listCards } from "@/lib/server/cards/cards";
+import { cardBodyLimit, listCards } from "@/lib/server/cards/read";
+import { createCard } from "@/lib/server/cards/draft";
 import { parseWith, readJson, route } from "@/lib/server/http";
 import { cardListQuerySchema, createCardSchema } from "@/lib/domain/validation/cards";
 

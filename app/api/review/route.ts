@@ -2,7 +2,7 @@ import { z } from "zod";
 import { requireApiUser } from "@/app/_adapters/session";
 import { route } from "@/lib/server/http";
 import { runStatuses } from "@/lib/domain/vocabulary";
-import { listReviewQueue } from "@/lib/server/runs/runs";
+import { listReviewQueue } from "@/lib/server/runs/queries";
 
 const statusSchema = z.enum(runStatuses.filter((s) => s !== "not_started")).catch("submitted");
 

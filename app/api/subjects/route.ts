@@ -1,5 +1,5 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { createSubject, listSubjects } from "@/lib/server/cards/cards";
+import { createSubject, listSubjects } from "@/lib/server/cards/subjects";
 import { readJson, route } from "@/lib/server/http";
 import { subjectSchema } from "@/lib/domain/validation/cards";
 

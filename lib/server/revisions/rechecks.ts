@@ -6,7 +6,7 @@ import { getDb } from "@/db";
 import { citationRechecks, manuals, pages, revisionComparisons, revisions, taskCards, taskCardVersions, users } from "@/db/schema";
 import { recordAudit } from "@/lib/server/audit";
 import type { Actor } from "@/lib/domain/access/permissions";
-import { applyToDraft } from "@/lib/server/cards/cards";
+import { applyToDraft } from "@/lib/server/cards/draft";
 import { AppError } from "@/lib/domain/errors";
 import type { PageChange, PageStatus } from "@/lib/domain/revisions/compare";
 

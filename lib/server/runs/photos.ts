@@ -7,7 +7,7 @@ import type { Actor } from "@/lib/domain/access/permissions";
 import { AppError } from "@/lib/domain/errors";
 import { getStore, storageKeys } from "@/lib/server/storage";
 import { maxPhotoBytes, sniffImage } from "@/lib/domain/validation/runs";
-import { loadRun } from "@/lib/server/runs/runs";
+import { loadRun } from "@/lib/server/runs/queries";
 
 /** Reads at most `limit` bytes of a request body; one byte more is a 413, not a silent cut. */
 async function readLimited(request: Request, limit: number): Promise<Uint8Array> {

@@ -8,7 +8,7 @@ import type { ClassRecordDto, StudentRecordDto } from "@/lib/contracts/runs";
 import { AppError } from "@/lib/domain/errors";
 import { CardWriter, grey } from "@/lib/server/pdf/card-pdf";
 import { toCsv } from "@/lib/domain/runs/csv";
-import { listRunsOfStudent } from "@/lib/server/runs/runs";
+import { listRunsOfStudent } from "@/lib/server/runs/queries";
 import { readsRecordOf } from "@/lib/server/runs/scope";
 
 const noSubject = "No subject";

@@ -5,7 +5,7 @@ import { CardView } from "@/components/card-view";
 import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
 import { listColleagues } from "@/lib/server/accounts";
-import { getCard, getCardVersion } from "@/lib/server/cards/cards";
+import { getCard, getCardVersion } from "@/lib/server/cards/read";
 import { CardActions } from "../_components/card-actions";
 import { CoauthorsForm } from "../_components/coauthors-form";
 import { isUuid } from "@/lib/server/http";

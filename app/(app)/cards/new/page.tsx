@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/app/_adapters/session";
-import { listSubjects } from "@/lib/server/cards/cards";
+import { listSubjects } from "@/lib/server/cards/subjects";
 import { NewCardForm } from "../_components/new-card-form";
 
 export const metadata: Metadata = { title: "New task card" };

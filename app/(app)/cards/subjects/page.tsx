@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/app/_adapters/session";
-import { listSubjects } from "@/lib/server/cards/cards";
+import { listSubjects } from "@/lib/server/cards/subjects";
 import { SubjectsManager } from "../_components/subjects-manager";
 
 export const metadata: Metadata = { title: "Curriculum subjects" };

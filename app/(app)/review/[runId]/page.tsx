@@ -6,7 +6,7 @@ import { StepMarkdown } from "@/components/step-markdown";
 import { describeLimit } from "@/lib/domain/calc/limits";
 import { requirePageUser } from "@/app/_adapters/session";
 import { isUuid } from "@/lib/server/http";
-import { getRunDetail } from "@/lib/server/runs/runs";
+import { getRunDetail } from "@/lib/server/runs/queries";
 import { sortNotices } from "@/lib/domain/validation/cards";
 import { ReviewActions } from "../_components/review-actions";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";

@@ -1,5 +1,5 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { getCard } from "@/lib/server/cards/cards";
+import { getCard } from "@/lib/server/cards/read";
 import { idParam, route } from "@/lib/server/http";
 
 type Context = { params: Promise<{ id: string }> };

@@ -1,6 +1,6 @@
 import { requireApiUser } from "@/app/_adapters/session";
 import { idParam, route } from "@/lib/server/http";
-import { getRunDetail } from "@/lib/server/runs/runs";
+import { getRunDetail } from "@/lib/server/runs/queries";
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -1,5 +1,5 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { renameSubject } from "@/lib/server/cards/cards";
+import { renameSubject } from "@/lib/server/cards/subjects";
 import { idParam, readJson, route } from "@/lib/server/http";
 import { subjectSchema } from "@/lib/domain/validation/cards";
 

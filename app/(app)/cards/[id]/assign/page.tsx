@@ -2,10 +2,10 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requirePageUser } from "@/app/_adapters/session";
-import { getCard } from "@/lib/server/cards/cards";
+import { getCard } from "@/lib/server/cards/read";
 import { getClassById, listClasses } from "@/lib/server/classes";
 import { isUuid } from "@/lib/server/http";
-import { listAssignments } from "@/lib/server/runs/runs";
+import { listAssignments } from "@/lib/server/runs/assign";
 import { AssignForm } from "../../_components/assign-form";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PageDiff } from "@/components/page-diff";
 import { requirePageUser } from "@/app/_adapters/session";
-import { getCard } from "@/lib/server/cards/cards";
+import { getCard } from "@/lib/server/cards/read";
 import { listOpenRechecks } from "@/lib/server/revisions/rechecks";
 import { RecheckForm } from "../../_components/recheck-form";
 import { isUuid } from "@/lib/server/http";

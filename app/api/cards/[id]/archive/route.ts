@@ -1,5 +1,5 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { setArchived } from "@/lib/server/cards/cards";
+import { setArchived } from "@/lib/server/cards/draft";
 import { idParam, readJson, route } from "@/lib/server/http";
 import { archiveSchema } from "@/lib/domain/validation/cards";
 

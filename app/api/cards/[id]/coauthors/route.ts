@@ -1,5 +1,5 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { setCoauthors } from "@/lib/server/cards/cards";
+import { setCoauthors } from "@/lib/server/cards/access";
 import { idParam, readJson, route } from "@/lib/server/http";
 import { coauthorsSchema } from "@/lib/domain/validation/cards";
 

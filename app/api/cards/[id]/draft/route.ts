@@ -1,5 +1,6 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { cardBodyLimit, discardDraft, saveDraft } from "@/lib/server/cards/cards";
+import { cardBodyLimit } from "@/lib/server/cards/read";
+import { discardDraft, saveDraft } from "@/lib/server/cards/draft";
 import { idParam, readJson, route } from "@/lib/server/http";
 import { saveDraftSchema } from "@/lib/domain/validation/cards";
 

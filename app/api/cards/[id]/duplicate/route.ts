@@ -1,5 +1,5 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { duplicateCard } from "@/lib/server/cards/cards";
+import { duplicateCard } from "@/lib/server/cards/draft";
 import { idParam, route } from "@/lib/server/http";
 
 type Context = { params: Promise<{ id: string }> };

@@ -1,5 +1,5 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { publishDraft } from "@/lib/server/cards/cards";
+import { publishDraft } from "@/lib/server/cards/publish";
 import { idParam, route } from "@/lib/server/http";
 
 type Context = { params: Promise<{ id: string }> };

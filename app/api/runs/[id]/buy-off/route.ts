@@ -1,6 +1,6 @@
 import { requireApiUser } from "@/app/_adapters/session";
 import { idParam, readJson, route } from "@/lib/server/http";
-import { buyOff } from "@/lib/server/runs/runs";
+import { buyOff } from "@/lib/server/runs/review";
 import { buyOffSchema } from "@/lib/domain/validation/runs";
 
 type Context = { params: Promise<{ id: string }> };

@@ -1,6 +1,6 @@
 import { requireApiUser } from "@/app/_adapters/session";
 import { idParam, readJson, route } from "@/lib/server/http";
-import { appendEvents } from "@/lib/server/runs/runs";
+import { appendEvents } from "@/lib/server/runs/events";
 import { eventBatchSchema } from "@/lib/domain/validation/runs";
 
 type Context = { params: Promise<{ id: string }> };

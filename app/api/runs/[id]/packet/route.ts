@@ -1,7 +1,7 @@
 import { requireApiUser } from "@/app/_adapters/session";
 import { fileResponse } from "@/lib/server/file-response";
 import { idParam, route } from "@/lib/server/http";
-import { getRunPacket } from "@/lib/server/runs/runs";
+import { getRunPacket } from "@/lib/server/runs/queries";
 
 type Context = { params: Promise<{ id: string }> };
 

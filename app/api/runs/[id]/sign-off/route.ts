@@ -1,6 +1,6 @@
 import { requireApiUser } from "@/app/_adapters/session";
 import { idParam, readJson, route } from "@/lib/server/http";
-import { signOffRun } from "@/lib/server/runs/runs";
+import { signOffRun } from "@/lib/server/runs/review";
 import { reviewCommentSchema } from "@/lib/domain/validation/runs";
 
 type Context = { params: Promise<{ id: string }> };

@@ -1,5 +1,5 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { citePage } from "@/lib/server/cards/cards";
+import { citePage } from "@/lib/server/cards/draft";
 import { idParam, readJson, route } from "@/lib/server/http";
 import { citePageSchema } from "@/lib/domain/validation/cards";
 

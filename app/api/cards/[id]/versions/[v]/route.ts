@@ -1,5 +1,6 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { cardBodyLimit, getCardVersion, updateVersion, versionParams } from "@/lib/server/cards/cards";
+import { cardBodyLimit, getCardVersion, versionParams } from "@/lib/server/cards/read";
+import { updateVersion } from "@/lib/server/cards/draft";
 import { readJson, route } from "@/lib/server/http";
 import { saveDraftSchema } from "@/lib/domain/validation/cards";
 

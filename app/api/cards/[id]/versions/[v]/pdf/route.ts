@@ -1,5 +1,5 @@
 import { requireApiUser } from "@/app/_adapters/session";
-import { getCardVersion, versionParams } from "@/lib/server/cards/cards";
+import { getCardVersion, versionParams } from "@/lib/server/cards/read";
 import { fileResponse, fileSlug } from "@/lib/server/file-response";
 import { route } from "@/lib/server/http";
 import { renderCardPdf } from "@/lib/server/pdf/card-pdf";

@@ -1,0 +1,36 @@
+// Publishing a draft: completeness and every citation are checked again, then the version freezes.
+import "server-only";
+import { and, eq } from "drizzle-orm";
+import { getDb } from "@/db";
+import { taskCards, taskCardVersions } from "@/db/schema";
+import { recordAudit } from "@/lib/server/audit";
+import { type Actor } from "@/lib/domain/access/permissions";
+import type { CardVersionDto } from "@/lib/contracts/cards";
+import { AppError } from "@/lib/domain/errors";
+import { parseWith } from "@/lib/server/http";
+import { publishableCardSchema } from "@/lib/domain/validation/cards";
+import { asConflict, lockCard } from "@/lib/server/cards/access";
+import { loadVersions, toVersionDto } from "@/lib/server/cards/read";
+import { citationsFor, versionToContent } from "@/lib/server/cards/draft";
+
+export async function publishDraft({ actor, cardId }: { actor: Actor; cardId: string }): Promise<CardVersionDto> {
+  try {
+    const versionId = await getDb().transaction(async (tx) => {
+      const card = await lockCard(tx, cardId, actor);
+      if (card.archivedAt) throw new AppError("conflict", "That card is archived. Bring it back from the archive to publish it.");
+      const [draft] = await tx.select().from(taskCardVersions).where(and(eq(taskCardVersions.cardId, cardId), eq(taskCardVersions.status, "draft")));
+      if (!draft) throw new AppError("conflict", "There is no draft to publish: the newest version is already published.");
+      const content = parseWith(publishableCardSchema, versionToContent(draft));
+      // Citations are checked again: a page cited last week must still exist in a ready revision.
+      await citationsFor(tx, draft.id, content.steps);
+      await tx.update(taskCardVersions).set({ status: "published", publishedAt: new Date(), publishedBy: actor.id }).where(eq(taskCardVersions.id, draft.id));
+      await tx.update(taskCards).set({ updatedAt: new Date() }).where(eq(taskCards.id, cardId));
+      await recordAudit(tx, { actorId: actor.id, action: "card.published", subjectType: "task_card", subjectId: cardId, details: { title: draft.title, version: draft.number } });
+      return draft.id;
+    });
+    const [row] = await loadVersions(getDb(), eq(taskCardVersions.id, versionId));
+    return toVersionDto(getDb(), row!);
+  } catch (error) {
+    asConflict(error);
+  }
+}

@@ -1,0 +1,180 @@
+// Reading runs: work lists, the review queue, one run folded from its events, its packet.
+import "server-only";
+import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { getDb, type Db, type Tx } from "@/db";
+import { assignments, curriculumSubjects, runEvents, runPhotos, runs, signOffs, taskCardVersions, users } from "@/db/schema";
+import { type Actor } from "@/lib/domain/access/permissions";
+import { getVersionById } from "@/lib/server/cards/read";
+import type { CardVersionDto } from "@/lib/contracts/cards";
+import type { RunDetailDto, SignOffDto, WorkItemDto } from "@/lib/contracts/runs";
+import { AppError } from "@/lib/domain/errors";
+import { stepSchema } from "@/lib/domain/validation/cards";
+import { foldRun, orderEvents, type CardStepForRun, type RunEvent, type RunState, type RunStatus } from "@/lib/domain/runs/fold";
+import { packetBytes, packetFor } from "@/lib/server/runs/packet";
+import { reviewScope, reviewsRun } from "@/lib/server/runs/scope";
+import { workStatusOf } from "@/lib/domain/runs/work-status";
+import { reviewEventTypes } from "@/lib/server/runs/events";
+
+const runNotFound = () => new AppError("not_found", "That run was not found.");
+
+function workItemQuery(db: Db | Tx) {
+  const newest = sql<number | null>`(select max(v.number) from task_card_versions v where v.card_id = ${taskCardVersions.cardId} and v.status = 'published')`;
+  return db
+    .select({
+      runId: runs.id,
+      assignmentId: runs.assignmentId,
+      cardId: taskCardVersions.cardId,
+      title: taskCardVersions.title,
+      versionNumber: taskCardVersions.number,
+      newest,
+      subjectName: curriculumSubjects.name,
+      ataChapter: taskCardVersions.ataChapter,
+      dueOn: assignments.dueOn,
+      note: assignments.note,
+      status: runs.status,
+      studentId: runs.studentId,
+      studentName: users.name,
+      lastEventAt: runs.lastEventAt,
+      estimatedMinutes: taskCardVersions.estimatedMinutes,
+    })
+    .from(runs)
+    .innerJoin(assignments, eq(assignments.id, runs.assignmentId))
+    .innerJoin(taskCardVersions, eq(taskCardVersions.id, runs.versionId))
+    .innerJoin(users, eq(users.id, runs.studentId))
+    .leftJoin(curriculumSubjects, eq(curriculumSubjects.id, taskCardVersions.subjectId));
+}
+
+type WorkRow = Awaited<ReturnType<ReturnType<typeof workItemQuery>["execute"]>>[number];
+
+function toWorkItem(r: WorkRow): WorkItemDto {
+  const { newest, ...rest } = r;
+  return {
+    ...rest,
+    newerVersion: newest != null && newest > r.versionNumber ? newest : null,
+    workStatus: workStatusOf(r.status, r.dueOn),
+    lastEventAt: r.lastEventAt?.toISOString() ?? null,
+  };
+}
+
+/** A student's own runs, the ones still to do first. */
+export async function listMyWork({ actor }: { actor: Actor }): Promise<WorkItemDto[]> {
+  const rows = await workItemQuery(getDb())
+    .where(eq(runs.studentId, actor.id))
+    .orderBy(sql`${runs.status} = 'signed_off'`, sql`${assignments.dueOn} nulls last`, desc(runs.createdAt));
+  return rows.map(toWorkItem);
+}
+
+/** Runs waiting for an instructor: submitted ones, oldest first, and inspection points waiting on a cart. */
+export async function listReviewQueue({ actor, status = "submitted" }: { actor: Actor; status?: RunStatus }): Promise<WorkItemDto[]> {
+  const rows = await workItemQuery(getDb()).where(and(eq(runs.status, status), reviewScope(actor))).orderBy(asc(runs.submittedAt), asc(runs.lastEventAt)).limit(500);
+  return rows.map(toWorkItem);
+}
+
+export async function listRunsOfStudent(db: Db | Tx, studentId: string): Promise<WorkItemDto[]> {
+  const rows = await workItemQuery(db).where(eq(runs.studentId, studentId)).orderBy(desc(runs.createdAt));
+  return rows.map(toWorkItem);
+}
+
+/**
+ * The run, if the actor may see it: its student, or an instructor who reviews it (lib/server/runs/scope.ts).
+ * Anyone else gets a 404, not a 403.
+ */
+export async function loadRun(db: Db | Tx, actor: Actor, runId: string, { lock = false } = {}) {
+  const query = db.select().from(runs).where(eq(runs.id, runId));
+  const [run] = lock ? await query.for("update") : await query;
+  if (!run || (run.studentId !== actor.id && !(await reviewsRun(db, actor, run)))) throw runNotFound();
+  return run;
+}
+
+function stepsForFold(version: Pick<CardVersionDto, "steps">): CardStepForRun[] {
+  return version.steps.map((s) => ({ id: s.id, inspectionPoint: s.inspectionPoint, measurement: s.measurement, timerMinutes: s.timerMinutes }));
+}
+
+/** Only the steps, for folding: the full version (manual titles, rechecks) is not needed to store events. */
+export async function stepsOnly(db: Db | Tx, versionId: string): Promise<Pick<CardVersionDto, "steps">> {
+  const [row] = await db.select({ steps: taskCardVersions.steps }).from(taskCardVersions).where(eq(taskCardVersions.id, versionId));
+  return { steps: ((row?.steps ?? []) as unknown[]).map((s) => stepSchema.parse(s)) as unknown as CardVersionDto["steps"] };
+}
+
+async function eventsOf(db: Db | Tx, runId: string) {
+  return db
+    .select({ event: runEvents, userName: users.name, role: users.role })
+    .from(runEvents)
+    .innerJoin(users, eq(users.id, runEvents.userId))
+    .where(eq(runEvents.runId, runId));
+}
+
+function toRunEvent(e: typeof runEvents.$inferSelect): RunEvent {
+  return {
+    id: e.id,
+    type: e.type as RunEvent["type"],
+    userId: e.userId,
+    clientTime: e.clientTime.toISOString(),
+    serverTime: e.serverTime.toISOString(),
+    stepId: e.stepId,
+    payload: e.payload as Record<string, unknown>,
+  };
+}
+
+/** The fold of what is stored, with the reviewers' ids as the server knows them. */
+export async function foldStored(db: Db | Tx, runId: string, version: Pick<CardVersionDto, "steps">) {
+  const rows = await eventsOf(db, runId);
+  // Review events are written only by the permission-checked routes below (the events API refuses
+  // them), so whoever wrote one was a reviewer then, even if their role changed since.
+  const reviewers = new Set(rows.filter((r) => reviewEventTypes.has(r.event.type)).map((r) => r.event.userId));
+  const events = rows.map((r) => toRunEvent(r.event));
+  return { rows, events, reviewers, state: foldRun(events, stepsForFold(version), reviewers) };
+}
+
+async function signOffOf(db: Db | Tx, runId: string): Promise<SignOffDto | null> {
+  const [row] = await db
+    .select({ s: signOffs, instructorName: users.name, versionNumber: taskCardVersions.number })
+    .from(signOffs)
+    .innerJoin(users, eq(users.id, signOffs.instructorId))
+    .innerJoin(taskCardVersions, eq(taskCardVersions.id, signOffs.versionId))
+    .where(eq(signOffs.runId, runId));
+  if (!row) return null;
+  return {
+    instructorName: row.instructorName,
+    signedAt: row.s.signedAt.toISOString(),
+    versionNumber: row.versionNumber,
+    revisionsCited: row.s.revisionsCited as SignOffDto["revisionsCited"],
+    actualMinutes: row.s.actualMinutes,
+    comment: row.s.comment,
+  };
+}
+
+export async function getRunDetail({ actor, runId }: { actor: Actor; runId: string }): Promise<RunDetailDto & { state: RunState }> {
+  const db = getDb();
+  const run = await loadRun(db, actor, runId);
+  const [item] = await workItemQuery(db).where(eq(runs.id, runId));
+  const version = await getVersionById(run.versionId, db);
+  const { rows, reviewers, state } = await foldStored(db, runId, version);
+  const photos = await db
+    .select({ id: runPhotos.id, stepId: runPhotos.stepId, contentType: runPhotos.contentType, bytes: runPhotos.bytes })
+    .from(runPhotos)
+    .where(eq(runPhotos.runId, runId))
+    .orderBy(asc(runPhotos.createdAt));
+  const packet = await packetFor(db, version);
+  return {
+    run: toWorkItem(item!),
+    version,
+    // In the fold's order, so a late event is listed after the review moment it arrived behind.
+    events: orderEvents(rows.map((r) => ({ ...toRunEvent(r.event), userName: r.userName }))).map((o) => o.event),
+    reviewers: [...reviewers],
+    photos,
+    signOff: await signOffOf(db, runId),
+    packet: packet.pages.length ? { url: `/api/runs/${runId}/packet`, pages: packet.pages } : null,
+    keepOnCarts: packet.keepOnCarts,
+    state,
+  };
+}
+
+/** The run's offline packet as PDF bytes: only the pages its card version cites. */
+export async function getRunPacket({ actor, runId }: { actor: Actor; runId: string }): Promise<{ bytes: Uint8Array; hash: string }> {
+  const db = getDb();
+  const run = await loadRun(db, actor, runId);
+  const plan = await packetFor(db, await getVersionById(run.versionId, db));
+  if (!plan.pages.length) throw new AppError("not_found", "This card cites no manual pages.");
+  return { bytes: await packetBytes(db, plan), hash: plan.hash };
+}
