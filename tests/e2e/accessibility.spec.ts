@@ -1,6 +1,9 @@
 import { createRequire } from "node:module";
 import { expect, test, type Page } from "@playwright/test";
-import { SignInPage } from "./support/pages";
+import { CardEditorPage } from "./support/pages/card-editor";
+import { CartRunnerPage } from "./support/pages/cart-runner";
+import { ReviewPage } from "./support/pages/review";
+import { SignInPage } from "./support/pages/sign-in";
 
 const axePath = createRequire(import.meta.url).resolve("axe-core/axe.min.js");
 
@@ -54,7 +57,7 @@ test("the task card and calculator pages have no serious accessibility violation
   await expect(page.getByRole("heading", { level: 1, name: "Aileron control cable tension check" })).toBeVisible();
   expect(await seriousViolations(page), "card page").toEqual([]);
   await page.getByRole("link", { name: /^Edit/ }).click();
-  await expect(page.getByRole("heading", { level: 1, name: /Editing/ })).toBeVisible();
+  await expect(new CardEditorPage(page).heading(/Editing/)).toBeVisible();
   expect(await seriousViolations(page), "card editor").toEqual([]);
   for (const path of ["/calculators", "/calculators/rivets", "/calculators/bend", "/calculators/torque", "/calculators/penetrant", "/calculators/coil-shot", "/calculators/units", "/cards/new"]) {
     await page.goto(path);
@@ -71,7 +74,7 @@ test("the cart, review and records pages have no serious accessibility violation
   await expect(page.getByRole("link", { name: /Fluorescent penetrant/ })).toBeVisible();
   expect(await seriousViolations(page), "/cart").toEqual([]);
   await page.getByRole("link", { name: /Fluorescent penetrant/ }).click();
-  await expect(page.getByRole("heading", { level: 1, name: /Fluorescent penetrant/ })).toBeVisible();
+  await expect(new CartRunnerPage(page).heading(/Fluorescent penetrant/)).toBeVisible();
   expect(await seriousViolations(page), "/cart/run").toEqual([]);
   await page.goto("/records");
   await expect(page.getByRole("heading", { level: 1, name: "My training record" })).toBeVisible();
@@ -81,10 +84,11 @@ test("the cart, review and records pages have no serious accessibility violation
   const staffSignIn = new SignInPage(staff);
   await staffSignIn.open("/sign-in?next=%2Freview");
   await staffSignIn.signIn("instructor@hangarleaf.test");
-  await expect(staff.getByRole("heading", { level: 1, name: "Review" })).toBeVisible();
+  const review = new ReviewPage(staff);
+  await expect(review.listHeading()).toBeVisible();
   expect(await seriousViolations(staff), "/review").toEqual([]);
-  await staff.getByRole("link", { name: "Jordan Pike" }).first().click();
-  await expect(staff.getByRole("heading", { level: 2, name: "Your decision" })).toBeVisible();
+  await review.openRunOf("Jordan Pike");
+  await expect(review.decisionHeading()).toBeVisible();
   expect(await seriousViolations(staff), "review a run").toEqual([]);
   await staff.goto("/records");
   await staff.getByRole("link", { name: /AMT Day Cohort 2027/ }).click();

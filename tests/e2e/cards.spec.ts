@@ -3,23 +3,12 @@ import { mkdtemp, rm, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { promisify } from "node:util";
-import { expect, test, type Page } from "@playwright/test";
-import { SignInPage } from "./support/pages";
+import { expect, test } from "@playwright/test";
+import { CardEditorPage } from "./support/pages/card-editor";
+import { ManualReaderPage } from "./support/pages/manual-reader";
+import { SignInPage } from "./support/pages/sign-in";
 
 const run = promisify(execFile);
-
-/** The card editor: one group per step, a status line that says when the draft is saved. */
-class CardEditorPage {
-  constructor(private readonly page: Page) {}
-
-  step(n: number) {
-    return this.page.getByRole("group", { name: `Step ${n}`, exact: true });
-  }
-
-  async waitSaved() {
-    await expect(this.page.getByText(/saved at \d\d:\d\d/)).toBeVisible({ timeout: 15_000 });
-  }
-}
 
 test("an instructor builds a two-step card citing a page from the reader, publishes and prints it", async ({ page }) => {
   const title = `Magneto drop check ${Date.now()}`;
@@ -28,45 +17,37 @@ test("an instructor builds a two-step card citing a page from the reader, publis
   await signIn.signIn("instructor@hangarleaf.test");
   await page.getByRole("link", { name: "New task card" }).click();
   await expect(page.getByRole("heading", { level: 1, name: "New task card" })).toBeVisible();
-  await page.getByLabel("Title").fill(title);
-  await page.getByLabel("Curriculum subject").selectOption({ label: "Ignition systems" });
-  await page.getByRole("button", { name: /Make the draft/ }).click();
-  await expect(page.getByRole("heading", { level: 1 })).toContainText("Editing draft version 1");
-
   const editor = new CardEditorPage(page);
-  await page.getByLabel("ATA chapter").fill("74");
-  const first = editor.step(1);
-  await first.getByLabel("Instruction").fill("Run the engine at 1800 rpm and check the **magneto drop** on each magneto.");
-  await first.getByRole("button", { name: "+ CAUTION" }).click();
-  await first.getByLabel("Notice text").fill("Do not run the engine on one magneto longer than the check needs: the plugs foul.");
-  await first.getByLabel("The student records a measured value").check();
-  await first.getByLabel("What is measured").fill("Magneto drop");
-  await first.getByRole("combobox", { name: /^Unit/ }).selectOption("rpm");
-  await first.getByRole("textbox", { name: "Maximum" }).fill("125");
-  await page.getByRole("button", { name: "+ Add a step" }).click();
-  await editor.step(2).getByLabel("Instruction").fill("Record both drops and the difference on the card.");
+  await editor.makeDraft(title, "Ignition systems");
+  await expect(editor.heading()).toContainText("Editing draft version 1");
+
+  await editor.setAtaChapter("74");
+  await editor.writeInstruction(1, "Run the engine at 1800 rpm and check the **magneto drop** on each magneto.");
+  await editor.addNotice(1, "CAUTION", "Do not run the engine on one magneto longer than the check needs: the plugs foul.");
+  await editor.askForMeasurement(1, { label: "Magneto drop", unit: "rpm", max: "125" });
+  await editor.addStep();
+  await editor.writeInstruction(2, "Record both drops and the difference on the card.");
   await editor.waitSaved();
 
   // Cite while reading: from step 1 to the library, search, open the hit, put the page on the step.
-  await first.getByRole("button", { name: "Find it in the library…" }).click();
+  await editor.findInLibrary(1);
   await expect(page).toHaveURL(/\/library$/);
   await page.goto("/search?q=magneto%20drop%201800");
   // The demo trainer manual's current revision is its Rev 4.
   await page.getByRole("listbox", { name: "Search results" }).getByRole("option").filter({ hasText: "· Rev 4" }).first().click();
   await expect(page).toHaveURL(/\/library\/[0-9a-f-]+\/[0-9a-f-]+\/\d+/);
   const cited = Number(/\/(\d+)(\?|$)/.exec(page.url())?.[1]);
-  const panel = page.getByRole("region", { name: "Cite this page on a task card" });
-  await expect(panel).toContainText(title);
-  await expect(panel.getByLabel("Step")).toHaveValue(/.+/);
-  await panel.getByRole("button", { name: "Put this page on the step" }).click();
-  await expect(panel.getByText(`Page ${cited} is on step 1 of draft version 1.`)).toBeVisible();
-  await panel.getByRole("link", { name: "Back to the card" }).click();
+  const reader = new ManualReaderPage(page);
+  await expect(reader.citePanel()).toContainText(title);
+  await expect(reader.citeStep()).toHaveValue(/.+/);
+  await reader.putPageOnStep();
+  await expect(reader.citePanel().getByText(`Page ${cited} is on step 1 of draft version 1.`)).toBeVisible();
+  await reader.backToCard();
   await expect(page).toHaveURL(/\/cards\/[0-9a-f-]+\/edit$/);
 
   await expect(editor.step(1)).toContainText(`HT-20 Trainer Maintenance Manual, Rev 4, page ${cited}`);
-  await page.getByRole("tab", { name: "Preview as a student" }).click();
-  const preview = page.getByRole("article", { name: `Task card ${title}` });
-  const step1 = preview.getByRole("listitem", { name: "Step 1" });
+  await editor.previewAsStudent();
+  const step1 = editor.previewStep(title, 1);
   await expect(step1.getByRole("note", { name: /CAUTION/ })).toBeVisible();
   // The caution comes before the instruction it guards.
   const box = await step1.getByRole("note", { name: /CAUTION/ }).boundingBox();
@@ -78,7 +59,7 @@ test("an instructor builds a two-step card citing a page from the reader, publis
   await reading.fill("90");
   await expect(step1.getByText(/within limits/)).toBeVisible();
 
-  await page.getByRole("button", { name: "Publish" }).click();
+  await editor.publish();
   await expect(page).toHaveURL(/\/cards\/[0-9a-f-]+$/);
   await expect(page.getByRole("link", { name: /v1 · published/ })).toBeVisible();
   await expect(page.getByRole("link", { name: `HT-20 Trainer Maintenance Manual, Rev 4, page ${cited}` })).toBeVisible();

@@ -1,6 +1,8 @@
 import { randomUUID } from "node:crypto";
 import { expect, test } from "@playwright/test";
-import { AppShell, SignInPage, waitForMailTo } from "./support/pages";
+import { waitForMailTo } from "./support/outbox";
+import { AppShell } from "./support/pages/app-shell";
+import { SignInPage } from "./support/pages/sign-in";
 
 test("an admin invites a person; the mail's link sets a password that signs them in", async ({ page }) => {
   const email = `new-${randomUUID().slice(0, 8)}@test.hangarleaf.test`;

@@ -1,6 +1,6 @@
 import { expect, test } from "@playwright/test";
 import { makePdf } from "../support/pdf";
-import { SignInPage } from "./support/pages";
+import { SignInPage } from "./support/pages/sign-in";
 
 test("a librarian uploads a manual and watches it become ready", async ({ page }) => {
   const title = `Wheel Bearing Practice ${Date.now()}`;

@@ -1,5 +1,6 @@
 import { expect, test } from "@playwright/test";
-import { AppShell, SignInPage } from "./support/pages";
+import { AppShell } from "./support/pages/app-shell";
+import { SignInPage } from "./support/pages/sign-in";
 
 const roles = [
   { email: "student@hangarleaf.test", role: "Student", nav: ["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Records"] },

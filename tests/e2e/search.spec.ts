@@ -1,5 +1,6 @@
 import { expect, test } from "@playwright/test";
-import { SignInPage } from "./support/pages";
+import { ManualReaderPage } from "./support/pages/manual-reader";
+import { SignInPage } from "./support/pages/sign-in";
 
 test("a student searches with a typo, opens the hit and sees the word marked on the page", async ({ page }) => {
   const signIn = new SignInPage(page);
@@ -19,33 +20,32 @@ test("a student searches with a typo, opens the hit and sees the word marked on 
   await box.press("Enter");
 
   await expect(page).toHaveURL(/\/library\/[0-9a-f-]+\/[0-9a-f-]+\/\d+\?q=magento/);
-  await expect(page.getByRole("heading", { level: 1 })).toContainText("HT-20 Trainer Maintenance Manual · Rev 4");
+  const reader = new ManualReaderPage(page);
+  await expect(reader.heading()).toContainText("HT-20 Trainer Maintenance Manual · Rev 4");
   const page76 = Number(/\/(\d+)\?q=/.exec(page.url())?.[1]);
   // The reader draws that page and marks the word in its text layer.
-  const drawn = page.locator(`[data-page="${page76}"]`);
+  const drawn = reader.drawnPage(page76);
   await expect(drawn.locator("canvas")).toBeVisible();
   await expect(drawn.locator(".textLayer mark").first()).toHaveText(/magneto/i);
-  await expect(page.getByRole("textbox", { name: "Page" })).toHaveValue(String(page76));
+  await expect(reader.pageField()).toHaveValue(String(page76));
   // Keyboard: Page Down moves to the next page, and the address follows.
-  await page.getByLabel(/^PDF pages, page/).focus();
-  await page.keyboard.press("PageDown");
-  await expect(page.getByRole("textbox", { name: "Page" })).toHaveValue(String(page76 + 1));
+  await reader.focusPages();
+  await reader.pageDown();
+  await expect(reader.pageField()).toHaveValue(String(page76 + 1));
   await expect(page).toHaveURL(new RegExp(`/${page76 + 1}\\?q=`));
-  await page.keyboard.press("PageUp");
-  await expect(page.getByRole("textbox", { name: "Page" })).toHaveValue(String(page76));
+  await reader.pageUp();
+  await expect(reader.pageField()).toHaveValue(String(page76));
 
   // The same page as text, for reading aloud or a slow connection.
-  await page.getByText(/^Text of page/).click();
-  await expect(page.getByRole("article").locator("mark").first()).toHaveText(/magneto/i);
+  await reader.showPageText();
+  await expect(reader.pageText().locator("mark").first()).toHaveText(/magneto/i);
 
   // The strip of pages beside the reader jumps to a page.
-  await page.getByRole("navigation", { name: "Pages" }).getByRole("button", { name: "Page 3", exact: true }).click();
-  await expect(page.getByRole("textbox", { name: "Page" })).toHaveValue("3");
+  await reader.goToPage(3);
+  await expect(reader.pageField()).toHaveValue("3");
 
   // Search inside this manual only.
-  const inManual = page.getByRole("search", { name: "Search in this manual" });
-  await inManual.getByRole("textbox").fill("spark plug");
-  await inManual.getByRole("button", { name: "Search" }).click();
+  await reader.searchInManual("spark plug");
   await expect(page).toHaveURL(/\/search\?manual=[0-9a-f-]+&q=spark\+plug/);
   await expect(page.getByLabel("Manual")).toHaveValue(/[0-9a-f-]{36}/);
   await expect(page.getByRole("listbox", { name: "Search results" }).getByRole("heading")).toHaveText(["HT-20 Trainer Maintenance Manual"]);
@@ -61,9 +61,10 @@ test("a superseded page says so and links to the current revision", async ({ pag
   const href = await old.getByRole("link", { name: "Open PDF" }).getAttribute("href");
   const revisionId = /revisions\/([0-9a-f-]+)\/file/.exec(href ?? "")?.[1];
   const manualId = /library\/([0-9a-f-]+)/.exec(page.url())?.[1];
-  await page.goto(`/library/${manualId}/${revisionId}/5`);
-  await expect(page.getByRole("alert").filter({ hasText: "superseded" })).toContainText("This is Rev 3, a superseded revision.");
-  await page.getByRole("link", { name: /of the current revision, Rev 4/ }).click();
-  await expect(page.getByRole("heading", { level: 1 })).toContainText("Rev 4");
+  const reader = new ManualReaderPage(page);
+  await reader.open(manualId!, revisionId!, 5);
+  await expect(reader.supersededAlert()).toContainText("This is Rev 3, a superseded revision.");
+  await reader.openCurrentRevision("Rev 4");
+  await expect(reader.heading()).toContainText("Rev 4");
   await expect(page).toHaveURL(new RegExp(`/library/${manualId}/[0-9a-f-]+/5`));
 });
