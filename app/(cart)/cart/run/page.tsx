@@ -2,7 +2,7 @@
 
 import { useSyncExternalStore } from "react";
 import { useCart, useOnline } from "@/components/cart/cart-provider";
-import { Runner } from "@/components/cart/runner";
+import { Runner } from "@/components/cart/runner/runner";
 
 // /cart/run?id=… : the run is named in the query, so one precached page serves every run offline.
 export default function RunPage() {

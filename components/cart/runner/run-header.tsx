@@ -1,0 +1,66 @@
+import type { RunDetailDto } from "@/lib/contracts/runs";
+import type { RunEvent, RunStatus } from "@/lib/domain/runs/fold";
+
+const statusText: Record<string, string> = {
+  not_started: "Not started",
+  in_progress: "In progress",
+  submitted: "Handed in: waiting for your instructor",
+  returned: "Returned: see your instructor's comment",
+  signed_off: "Signed off",
+};
+
+/**
+ * The top of the run: the card's title and status, what the student must know before the steps
+ * (a newer version, the instructor's comment, the sign-off) and the lists to gather first.
+ */
+export function RunHeader({ detail, status, returned }: { detail: RunDetailDto; status: RunStatus; returned: RunEvent | undefined }) {
+  const version = detail.version;
+  return (
+    <>
+      <header className="flex flex-col gap-1">
+        <p className="text-sm font-bold uppercase tracking-wider text-ink-soft">Task card · version {version.number}</p>
+        <h1 className="text-3xl">{version.title}</h1>
+        <p className="text-ink-soft">
+          {[detail.run.dueOn ? `Due ${detail.run.dueOn}` : null, detail.run.note || null, version.estimatedMinutes ? `About ${version.estimatedMinutes} min` : null].filter(Boolean).join(" · ")}
+        </p>
+        <p>
+          <span data-testid="run-status" className={`badge text-base ${status === "signed_off" ? "bg-ok-pale text-ok" : status === "returned" ? "bg-danger-pale text-danger" : "bg-teal-pale text-teal-dark"}`}>
+            {statusText[status]}
+          </span>
+        </p>
+      </header>
+
+      {detail.run.newerVersion ? (
+        <p role="note" className="rounded-md border-4 border-dashed border-deck bg-teal-pale px-4 py-3 font-semibold">
+          Version {detail.run.newerVersion} of this card is published. This assignment uses version {version.number}, as it was given; ask your instructor before you switch.
+        </p>
+      ) : null}
+      {returned && status !== "signed_off" ? (
+        <div role="note" aria-label="Instructor's comment" className="rounded-md border-4 border-danger bg-danger-pale px-4 py-3">
+          <p className="font-bold">Returned by your instructor</p>
+          <p className="whitespace-pre-line text-lg">{String(returned.payload?.comment ?? "")}</p>
+        </div>
+      ) : null}
+      {detail.signOff ? (
+        <p role="note" className="rounded-md border-4 border-ok bg-ok-pale px-4 py-3 text-lg font-semibold">
+          Signed off by {detail.signOff.instructorName} on {detail.signOff.signedAt.slice(0, 10)}.{detail.signOff.comment ? ` “${detail.signOff.comment}”` : ""}
+        </p>
+      ) : null}
+
+      <div className="grid gap-3 sm:grid-cols-3">
+        {[["Protective equipment", version.protectiveEquipment], ["Tools", version.tools], ["Consumables", version.consumables]].map(([title, items]) =>
+          (items as string[]).length ? (
+            <section key={title as string} aria-label={title as string} className="panel">
+              <h2 className="text-lg font-bold">{title as string}</h2>
+              <ul className="ml-5 list-disc">
+                {(items as string[]).map((item) => (
+                  <li key={item}>{item}</li>
+                ))}
+              </ul>
+            </section>
+          ) : null,
+        )}
+      </div>
+    </>
+  );
+}
