@@ -1,6 +1,7 @@
 "use client";
 
 import { flexRender, type Table } from "@tanstack/react-table";
+import { EmptyRow, tableClassName } from "@/components/table";
 
 /**
  * The body of a TanStack table as Hangarleaf shows it: sortable headers as buttons (aria-sort says
@@ -9,7 +10,7 @@ import { flexRender, type Table } from "@tanstack/react-table";
 export function DataTable<T>({ table, empty, describedBy }: { table: Table<T>; empty: string; describedBy?: string }) {
   const rows = table.getRowModel().rows;
   return (
-    <table className="data-table" aria-describedby={describedBy}>
+    <table className={tableClassName} aria-describedby={describedBy}>
       <thead>
         {table.getHeaderGroups().map((group) => (
           <tr key={group.id}>
@@ -39,11 +40,7 @@ export function DataTable<T>({ table, empty, describedBy }: { table: Table<T>; e
             ))}
           </tr>
         ))}
-        {rows.length === 0 ? (
-          <tr>
-            <td colSpan={table.getVisibleLeafColumns().length}>{empty}</td>
-          </tr>
-        ) : null}
+        {rows.length === 0 ? <EmptyRow columns={table.getVisibleLeafColumns().length}>{empty}</EmptyRow> : null}
       </tbody>
     </table>
   );

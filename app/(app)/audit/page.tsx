@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { Table } from "@/components/table";
 import { listAuditEvents } from "@/lib/server/audit";
 import { requirePageUser } from "@/app/_adapters/session";
 import { auditQuerySchema, type AuditKind } from "@/lib/domain/validation/audit";
@@ -47,29 +48,17 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
       </form>
       <p className="text-ink-soft">The latest {filter.limit} entries that match, newest first. Entries cannot be edited.</p>
       <div className="panel overflow-x-auto">
-        <table className="data-table">
-          <thead>
-            <tr>
-              <th scope="col">When</th>
-              <th scope="col">Who</th>
-              <th scope="col">What</th>
-              <th scope="col">Details</th>
-            </tr>
-          </thead>
-          <tbody>
-            {events.map((e) => (
-              <tr key={e.id}>
-                <td className="whitespace-nowrap">{e.createdAt.toISOString().replace("T", " ").slice(0, 19)} UTC</td>
-                <td>{e.actorName ?? "—"}</td>
-                <td><code>{e.action}</code></td>
-                <td className="text-sm"><code>{JSON.stringify(e.details)}</code></td>
-              </tr>
-            ))}
-            {events.length === 0 ? (
-              <tr><td colSpan={4}>Nothing recorded that matches.</td></tr>
-            ) : null}
-          </tbody>
-        </table>
+        <Table
+          rows={events}
+          rowKey={(e) => e.id}
+          empty="Nothing recorded that matches."
+          columns={[
+            { header: "When", className: "whitespace-nowrap", cell: (e) => `${e.createdAt.toISOString().replace("T", " ").slice(0, 19)} UTC` },
+            { header: "Who", cell: (e) => e.actorName ?? "—" },
+            { header: "What", cell: (e) => <code>{e.action}</code> },
+            { header: "Details", className: "text-sm", cell: (e) => <code>{JSON.stringify(e.details)}</code> },
+          ]}
+        />
       </div>
     </div>
   );

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { Table } from "@/components/table";
 import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
 import { listClasses } from "@/lib/server/classes";
@@ -17,30 +18,23 @@ export default async function ClassesPage() {
       <section aria-labelledby="class-list" className="panel flex flex-col gap-3">
         <h2 id="class-list">{manages ? "All classes" : "Your classes"}</h2>
         {rows.length ? (
-          <table className="data-table">
-            <thead>
-              <tr>
-                <th scope="col">Class</th>
-                <th scope="col">Dates</th>
-                <th scope="col">Students</th>
-                <th scope="col">Staff</th>
-              </tr>
-            </thead>
-            <tbody>
-              {rows.map((c) => (
-                <tr key={c.id}>
-                  <td>
-                    <Link href={`/classes/${c.id}`} className="inline-flex min-h-11 items-center font-semibold">
-                      {c.name}
-                    </Link>
-                  </td>
-                  <td>{c.startsOn && c.endsOn ? `${c.startsOn} to ${c.endsOn}` : "—"}</td>
-                  <td>{c.students}</td>
-                  <td>{c.staff}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <Table
+            rows={rows}
+            rowKey={(c) => c.id}
+            columns={[
+              {
+                header: "Class",
+                cell: (c) => (
+                  <Link href={`/classes/${c.id}`} className="inline-flex min-h-11 items-center font-semibold">
+                    {c.name}
+                  </Link>
+                ),
+              },
+              { header: "Dates", cell: (c) => (c.startsOn && c.endsOn ? `${c.startsOn} to ${c.endsOn}` : "—") },
+              { header: "Students", cell: (c) => c.students },
+              { header: "Staff", cell: (c) => c.staff },
+            ]}
+          />
         ) : (
           <p>{manages ? "No class yet. Add the first one below." : "You are not in any class yet. An admin adds you."}</p>
         )}

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { Table } from "@/components/table";
 import { requirePageUser } from "@/app/_adapters/session";
 import type { RunStatus } from "@/lib/domain/runs/fold";
 import { listReviewQueue } from "@/lib/server/runs/queries";
@@ -34,39 +35,32 @@ export default async function ReviewPage({ searchParams }: { searchParams: Promi
         ))}
       </nav>
       <div className="panel overflow-x-auto">
-        <table className="data-table">
-          <thead>
-            <tr>
-              <th scope="col">Student</th>
-              <th scope="col">Task card</th>
-              <th scope="col">Subject</th>
-              <th scope="col">Due</th>
-              <th scope="col">Last change</th>
-            </tr>
-          </thead>
-          <tbody>
-            {runs.map((r) => (
-              <tr key={r.runId}>
-                <td>
-                  <Link href={`/review/${r.runId}`} className="inline-flex min-h-11 items-center font-semibold">
-                    {r.studentName}
-                  </Link>
-                </td>
-                <td>
+        <Table
+          rows={runs}
+          rowKey={(r) => r.runId}
+          empty="No runs here."
+          columns={[
+            {
+              header: "Student",
+              cell: (r) => (
+                <Link href={`/review/${r.runId}`} className="inline-flex min-h-11 items-center font-semibold">
+                  {r.studentName}
+                </Link>
+              ),
+            },
+            {
+              header: "Task card",
+              cell: (r) => (
+                <>
                   {r.title} <span className="text-ink-soft">v{r.versionNumber}</span>
-                </td>
-                <td>{r.subjectName ?? "—"}</td>
-                <td className={r.workStatus === "overdue" ? "font-bold text-danger" : ""}>{r.dueOn ?? "—"}</td>
-                <td className="whitespace-nowrap">{r.lastEventAt ? r.lastEventAt.slice(0, 16).replace("T", " ") : "—"}</td>
-              </tr>
-            ))}
-            {runs.length === 0 ? (
-              <tr>
-                <td colSpan={5}>No runs here.</td>
-              </tr>
-            ) : null}
-          </tbody>
-        </table>
+                </>
+              ),
+            },
+            { header: "Subject", cell: (r) => r.subjectName ?? "—" },
+            { header: "Due", className: (r) => (r.workStatus === "overdue" ? "font-bold text-danger" : ""), cell: (r) => r.dueOn ?? "—" },
+            { header: "Last change", className: "whitespace-nowrap", cell: (r) => (r.lastEventAt ? r.lastEventAt.slice(0, 16).replace("T", " ") : "—") },
+          ]}
+        />
       </div>
     </div>
   );

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Table } from "@/components/table";
 import { listUsers } from "@/lib/server/accounts";
 import { can, roleLabels } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
@@ -35,28 +36,16 @@ export default async function ClassPage({ params }: { params: Promise<{ id: stri
       <section aria-labelledby="members" className="panel flex flex-col gap-3">
         <h2 id="members">Members ({found.members.length})</h2>
         {found.members.length ? (
-          <table className="data-table">
-            <thead>
-              <tr>
-                <th scope="col">Name</th>
-                <th scope="col">Role</th>
-                <th scope="col">E-mail</th>
-                {manages ? <th scope="col">Actions</th> : null}
-              </tr>
-            </thead>
-            <tbody>
-              {found.members.map((m) => (
-                <tr key={m.id}>
-                  <td><strong>{m.name}</strong></td>
-                  <td>{roleLabels[m.role]}</td>
-                  <td>{m.email}</td>
-                  {manages ? (
-                    <td><RemoveMemberButton classId={found.id} userId={m.id} name={m.name} /></td>
-                  ) : null}
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <Table
+            rows={found.members}
+            rowKey={(m) => m.id}
+            columns={[
+              { header: "Name", cell: (m) => <strong>{m.name}</strong> },
+              { header: "Role", cell: (m) => roleLabels[m.role] },
+              { header: "E-mail", cell: (m) => m.email },
+              manages && { header: "Actions", cell: (m) => <RemoveMemberButton classId={found.id} userId={m.id} name={m.name} /> },
+            ]}
+          />
         ) : (
           <p>Nobody is in this class yet.</p>
         )}

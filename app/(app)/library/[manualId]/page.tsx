@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Table } from "@/components/table";
 import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
 import { getManual } from "@/lib/server/library/manuals";
@@ -55,56 +56,56 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
 
       <section aria-labelledby="history" className="panel flex flex-col gap-3 overflow-x-auto">
         <h2 id="history">Revisions</h2>
-        <table className="data-table">
-          <thead>
-            <tr>
-              <th scope="col">Revision</th>
-              <th scope="col">Date</th>
-              <th scope="col">State</th>
-              <th scope="col">Pages</th>
-              {manages ? <th scope="col">Uploaded by</th> : null}
-              <th scope="col">File</th>
-            </tr>
-          </thead>
-          <tbody>
-            {shown.map((r) => (
-              <tr key={r.id}>
-                <td>
+        <Table
+          rows={shown}
+          rowKey={(r) => r.id}
+          columns={[
+            {
+              header: "Revision",
+              cell: (r) => (
+                <>
                   <strong>{r.label}</strong>{" "}
                   {r.id === manual.currentRevisionId ? (
                     <span className="badge bg-ok-pale text-ok">Current</span>
                   ) : r.supersededAt ? (
                     <span className="badge bg-amber-pale text-ink">Superseded</span>
                   ) : null}
-                </td>
-                <td>{r.revisionDate}</td>
-                <td>
+                </>
+              ),
+            },
+            { header: "Date", cell: (r) => r.revisionDate },
+            {
+              header: "State",
+              cell: (r) => (
+                <>
                   {statusLabel[r.status]}
                   {r.status === "processing" ? ` (${r.pagesDone} of ${r.pageCount ?? "?"})` : ""}
                   {r.status === "failed" && r.error ? <span className="block text-sm text-danger">{r.error}</span> : null}
-                </td>
-                <td>{r.pageCount ?? "—"}</td>
-                {manages ? <td>{r.uploadedBy ?? "—"}</td> : null}
-                <td>
-                  {r.status === "ready" ? (
-                    <span className="flex flex-wrap gap-x-4">
-                      <a href={`/api/revisions/${r.id}/file`} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center">
-                        Open PDF
-                      </a>
-                      <Link href={`/library/${manual.id}/${r.id}/changes`} className="inline-flex min-h-11 items-center">
-                        What changed
-                      </Link>
-                    </span>
-                  ) : manages && r.status === "failed" ? (
-                    <RetryButton revisionId={r.id} label={r.label} />
-                  ) : (
-                    "—"
-                  )}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+                </>
+              ),
+            },
+            { header: "Pages", cell: (r) => r.pageCount ?? "—" },
+            manages && { header: "Uploaded by", cell: (r) => r.uploadedBy ?? "—" },
+            {
+              header: "File",
+              cell: (r) =>
+                r.status === "ready" ? (
+                  <span className="flex flex-wrap gap-x-4">
+                    <a href={`/api/revisions/${r.id}/file`} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center">
+                      Open PDF
+                    </a>
+                    <Link href={`/library/${manual.id}/${r.id}/changes`} className="inline-flex min-h-11 items-center">
+                      What changed
+                    </Link>
+                  </span>
+                ) : manages && r.status === "failed" ? (
+                  <RetryButton revisionId={r.id} label={r.label} />
+                ) : (
+                  "—"
+                ),
+            },
+          ]}
+        />
       </section>
 
       {manages ? (

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Table } from "@/components/table";
 import { requirePageUser } from "@/app/_adapters/session";
 import { getCard } from "@/lib/server/cards/read";
 import { getClassById, listClasses } from "@/lib/server/classes";
@@ -36,37 +37,19 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
       )}
       <section aria-label="Assignments of this card" className="panel overflow-x-auto">
         <h2>Given so far</h2>
-        <table className="data-table">
-          <thead>
-            <tr>
-              <th scope="col">Given</th>
-              <th scope="col">To</th>
-              <th scope="col">Version</th>
-              <th scope="col">Due</th>
-              <th scope="col">Note</th>
-              <th scope="col">Signed off / all</th>
-            </tr>
-          </thead>
-          <tbody>
-            {assignments.map((a) => (
-              <tr key={a.id}>
-                <td className="whitespace-nowrap">{a.createdAt.slice(0, 10)}</td>
-                <td>{a.className ?? "Chosen students"}</td>
-                <td>v{a.versionNumber}</td>
-                <td>{a.dueOn ?? "—"}</td>
-                <td>{a.note || "—"}</td>
-                <td>
-                  {a.counts.signed_off} / {Object.values(a.counts).reduce((x, y) => x + y, 0)}
-                </td>
-              </tr>
-            ))}
-            {assignments.length === 0 ? (
-              <tr>
-                <td colSpan={6}>Not assigned yet.</td>
-              </tr>
-            ) : null}
-          </tbody>
-        </table>
+        <Table
+          rows={assignments}
+          rowKey={(a) => a.id}
+          empty="Not assigned yet."
+          columns={[
+            { header: "Given", className: "whitespace-nowrap", cell: (a) => a.createdAt.slice(0, 10) },
+            { header: "To", cell: (a) => a.className ?? "Chosen students" },
+            { header: "Version", cell: (a) => `v${a.versionNumber}` },
+            { header: "Due", cell: (a) => a.dueOn ?? "—" },
+            { header: "Note", cell: (a) => a.note || "—" },
+            { header: "Signed off / all", cell: (a) => `${a.counts.signed_off} / ${Object.values(a.counts).reduce((x, y) => x + y, 0)}` },
+          ]}
+        />
       </section>
     </div>
   );

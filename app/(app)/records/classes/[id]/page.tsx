@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Table } from "@/components/table";
 import { requirePageUser } from "@/app/_adapters/session";
 import { isUuid } from "@/lib/server/http";
 import { classRecord } from "@/lib/server/runs/records";
@@ -52,35 +53,29 @@ export default async function ClassRecordPage({ params }: { params: Promise<{ id
       </section>
       <section aria-label="Students" className="panel overflow-x-auto">
         <h2>Students</h2>
-        <table className="data-table">
-          <thead>
-            <tr>
-              <th scope="col">Student</th>
-              {record.subjects.map((s) => (
-                <th key={s} scope="col">
-                  {s}
-                </th>
-              ))}
-              <th scope="col">Overdue</th>
-            </tr>
-          </thead>
-          <tbody>
-            {record.students.map((s) => (
-              <tr key={s.id}>
-                <td>
-                  <Link href={`/records/students/${s.id}`} className="inline-flex min-h-11 items-center font-semibold">
-                    {s.name}
-                  </Link>
-                </td>
-                {record.subjects.map((subject) => {
-                  const cell = s.bySubject[subject];
-                  return <td key={subject}>{cell ? `${cell.signedOff}/${cell.assigned}` : "—"}</td>;
-                })}
-                <td className={s.overdue ? "font-bold text-danger" : ""}>{s.overdue}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <Table
+          rows={record.students}
+          rowKey={(s) => s.id}
+          columns={[
+            {
+              header: "Student",
+              cell: (s) => (
+                <Link href={`/records/students/${s.id}`} className="inline-flex min-h-11 items-center font-semibold">
+                  {s.name}
+                </Link>
+              ),
+            },
+            ...record.subjects.map((subject) => ({
+              key: `subject:${subject}`,
+              header: subject,
+              cell: (s: (typeof record.students)[number]) => {
+                const cell = s.bySubject[subject];
+                return cell ? `${cell.signedOff}/${cell.assigned}` : "—";
+              },
+            })),
+            { header: "Overdue", className: (s) => (s.overdue ? "font-bold text-danger" : ""), cell: (s) => s.overdue },
+          ]}
+        />
       </section>
     </div>
   );

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Table } from "@/components/table";
 import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
 import { isUuid } from "@/lib/server/http";
@@ -52,30 +53,24 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
         {record.subjects.map((s) => (
           <div key={s.subjectName} className="panel overflow-x-auto">
             <h3 className="text-lg font-bold">{s.subjectName}</h3>
-            <table className="data-table">
-              <thead>
-                <tr>
-                  <th scope="col">Task card</th>
-                  <th scope="col">Signed off</th>
-                  <th scope="col">By</th>
-                  <th scope="col">Estimated</th>
-                  <th scope="col">Actual</th>
-                </tr>
-              </thead>
-              <tbody>
-                {s.signedOff.map((c) => (
-                  <tr key={c.runId}>
-                    <td>
+            <Table
+              rows={s.signedOff}
+              rowKey={(c) => c.runId}
+              columns={[
+                {
+                  header: "Task card",
+                  cell: (c) => (
+                    <>
                       {c.title} <span className="text-ink-soft">v{c.versionNumber}</span>
-                    </td>
-                    <td className="whitespace-nowrap">{c.signedAt.slice(0, 10)}</td>
-                    <td>{c.instructorName}</td>
-                    <td>{c.estimatedMinutes != null ? hours(c.estimatedMinutes) : "—"}</td>
-                    <td>{hours(c.actualMinutes)}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
+                    </>
+                  ),
+                },
+                { header: "Signed off", className: "whitespace-nowrap", cell: (c) => c.signedAt.slice(0, 10) },
+                { header: "By", cell: (c) => c.instructorName },
+                { header: "Estimated", cell: (c) => (c.estimatedMinutes != null ? hours(c.estimatedMinutes) : "—") },
+                { header: "Actual", cell: (c) => hours(c.actualMinutes) },
+              ]}
+            />
           </div>
         ))}
         {record.subjects.length === 0 ? <p className="hint">No task card is signed off yet.</p> : null}

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Table } from "@/components/table";
 import { requirePageUser } from "@/app/_adapters/session";
 import { AppError } from "@/lib/domain/errors";
 import { getManual, getReadableRevision } from "@/lib/server/library/manuals";
@@ -97,37 +98,25 @@ export default async function RevisionChangesPage({ params, searchParams }: { pa
                 {all ? "Show only what changed" : "Show every page"}
               </Link>
             </div>
-            <table className="data-table">
-              <thead>
-                <tr>
-                  <th scope="col">Page in {revision.label}</th>
-                  <th scope="col">State</th>
-                  <th scope="col">Page in {previous?.label ?? "the revision before"}</th>
-                  <th scope="col">Similarity</th>
-                  <th scope="col">Side by side</th>
-                </tr>
-              </thead>
-              <tbody>
-                {shown.map((p, i) => (
-                  <tr key={i}>
-                    <td>{p.newPage ?? "—"}</td>
-                    <td><span className={`badge ${statusStyle[p.status]}`}>{statusText[p.status]}</span></td>
-                    <td>{p.oldPage ?? "—"}</td>
-                    <td>{p.status === "changed" ? `${Math.round(p.similarity * 100)} %` : "—"}</td>
-                    <td>
-                      <Link href={compareLink(p.oldPage, p.newPage)} className="inline-flex min-h-11 items-center">
-                        Compare
-                      </Link>
-                    </td>
-                  </tr>
-                ))}
-                {shown.length === 0 ? (
-                  <tr>
-                    <td colSpan={5}>No page changed.</td>
-                  </tr>
-                ) : null}
-              </tbody>
-            </table>
+            <Table
+              rows={shown}
+              rowKey={(_, i) => i}
+              empty="No page changed."
+              columns={[
+                { header: `Page in ${revision.label}`, cell: (p) => p.newPage ?? "—" },
+                { header: "State", cell: (p) => <span className={`badge ${statusStyle[p.status]}`}>{statusText[p.status]}</span> },
+                { header: `Page in ${previous?.label ?? "the revision before"}`, cell: (p) => p.oldPage ?? "—" },
+                { header: "Similarity", cell: (p) => (p.status === "changed" ? `${Math.round(p.similarity * 100)} %` : "—") },
+                {
+                  header: "Side by side",
+                  cell: (p) => (
+                    <Link href={compareLink(p.oldPage, p.newPage)} className="inline-flex min-h-11 items-center">
+                      Compare
+                    </Link>
+                  ),
+                },
+              ]}
+            />
           </section>
         </>
       )}
