@@ -3,7 +3,7 @@ import {
   bigint, boolean, check, customType, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, real, text, timestamp, uniqueIndex, uuid,
   type AnyPgColumn,
 } from "drizzle-orm/pg-core";
-import { documentTypes, roles, runStatuses, userStatuses } from "@/lib/domain/vocabulary";
+import { documentTypes, revisionStatuses, roles, runStatuses, userStatuses } from "@/lib/domain/vocabulary";
 
 export const userRole = pgEnum("user_role", roles);
 export const userStatus = pgEnum("user_status", userStatuses);
@@ -110,7 +110,7 @@ export const auditEvents = pgTable(
 );
 
 export const documentType = pgEnum("document_type", documentTypes);
-export const revisionStatus = pgEnum("revision_status", ["queued", "processing", "ready", "failed"]);
+export const revisionStatus = pgEnum("revision_status", revisionStatuses);
 
 export const manuals = pgTable(
   "manuals",

@@ -3,24 +3,8 @@
 import MiniSearch from "minisearch";
 import { useEffect, useMemo, useState } from "react";
 import type { CartData } from "@/lib/client/cart/store";
-import type { WorkItemDto, WorkStatus } from "@/lib/contracts/runs";
-
-const label: Record<WorkStatus, string> = {
-  not_started: "Not started",
-  in_progress: "In progress",
-  returned: "Returned to you",
-  submitted: "Handed in",
-  signed_off: "Signed off",
-  overdue: "Overdue",
-};
-const tone: Record<WorkStatus, string> = {
-  not_started: "bg-panel text-ink border border-ink-soft",
-  in_progress: "bg-teal-pale text-teal-dark",
-  returned: "bg-danger-pale text-danger",
-  submitted: "bg-amber-pale text-ink",
-  signed_off: "bg-ok-pale text-ok",
-  overdue: "bg-danger text-white",
-};
+import { StatusBadge } from "@/components/status-badge";
+import type { WorkItemDto } from "@/lib/contracts/runs";
 
 interface Doc {
   id: string;
@@ -58,7 +42,7 @@ export function WorkList({ data, items, savedAt }: { data: CartData; items: Work
                     </span>
                     {w.newerVersion ? <span className="text-sm font-semibold text-ink">Version {w.newerVersion} is published; this assignment keeps version {w.versionNumber}.</span> : null}
                   </span>
-                  <span className={`badge text-base ${tone[w.workStatus]}`}>{label[w.workStatus]}</span>
+                  <StatusBadge kind="run" status={w.workStatus} className="text-base" />
                 </a>
               </li>
             ))}

@@ -19,5 +19,8 @@ export const documentTypes = [
 ] as const;
 export type DocumentType = (typeof documentTypes)[number];
 
+export const revisionStatuses = ["queued", "processing", "ready", "failed"] as const;
+export type RevisionStatus = (typeof revisionStatuses)[number];
+
 export const runStatuses = ["not_started", "in_progress", "submitted", "returned", "signed_off"] as const;
 export type RunStatus = (typeof runStatuses)[number];

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { StatusBadge } from "@/components/status-badge";
 import { Table } from "@/components/table";
 import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
@@ -7,12 +8,6 @@ import { listManuals } from "@/lib/server/library/manuals";
 import { documentTypeLabels } from "@/lib/domain/validation/library";
 
 export const metadata: Metadata = { title: "Library" };
-
-const statusText: Record<string, string> = {
-  queued: "Waiting to be read",
-  processing: "Being read",
-  failed: "Last upload failed",
-};
 
 export default async function LibraryPage() {
   const user = await requirePageUser("library:view", "/library");
@@ -50,12 +45,8 @@ export default async function LibraryPage() {
             { header: "Pages", cell: (m) => m.pageCount ?? "—" },
             manages && {
               header: "State",
-              cell: (m) =>
-                m.latestStatus && m.latestStatus !== "ready" ? (
-                  <span className={`badge ${m.latestStatus === "failed" ? "bg-danger-pale text-danger" : "bg-amber-pale text-ink"}`}>{statusText[m.latestStatus]}</span>
-                ) : (
-                  <span className="badge bg-ok-pale text-ok">Ready</span>
-                ),
+              // No revision yet shows as ready, as a manual with nothing waiting.
+              cell: (m) => <StatusBadge kind="revision" status={m.latestStatus ?? "ready"} screen="library" />,
             },
           ]}
         />

@@ -2,17 +2,14 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { Table } from "@/components/table";
 import { requirePageUser } from "@/app/_adapters/session";
+import { statusLabel } from "@/components/status-badge";
 import type { RunStatus } from "@/lib/domain/runs/fold";
 import { listReviewQueue } from "@/lib/server/runs/queries";
 
 export const metadata: Metadata = { title: "Review" };
 
-const tabs: { status: RunStatus; label: string }[] = [
-  { status: "submitted", label: "Waiting for sign-off" },
-  { status: "in_progress", label: "In progress" },
-  { status: "returned", label: "Returned" },
-  { status: "signed_off", label: "Signed off" },
-];
+const tabStatuses: RunStatus[] = ["submitted", "in_progress", "returned", "signed_off"];
+const tabs = tabStatuses.map((status) => ({ status, label: statusLabel("run", status, "review") }));
 
 export default async function ReviewPage({ searchParams }: { searchParams: Promise<{ status?: string }> }) {
   const user = await requirePageUser("runs:review", "/review");

@@ -1,13 +1,6 @@
+import { StatusBadge } from "@/components/status-badge";
 import type { RunDetailDto } from "@/lib/contracts/runs";
 import type { RunEvent, RunStatus } from "@/lib/domain/runs/fold";
-
-const statusText: Record<string, string> = {
-  not_started: "Not started",
-  in_progress: "In progress",
-  submitted: "Handed in: waiting for your instructor",
-  returned: "Returned: see your instructor's comment",
-  signed_off: "Signed off",
-};
 
 /**
  * The top of the run: the card's title and status, what the student must know before the steps
@@ -24,9 +17,7 @@ export function RunHeader({ detail, status, returned }: { detail: RunDetailDto; 
           {[detail.run.dueOn ? `Due ${detail.run.dueOn}` : null, detail.run.note || null, version.estimatedMinutes ? `About ${version.estimatedMinutes} min` : null].filter(Boolean).join(" · ")}
         </p>
         <p>
-          <span data-testid="run-status" className={`badge text-base ${status === "signed_off" ? "bg-ok-pale text-ok" : status === "returned" ? "bg-danger-pale text-danger" : "bg-teal-pale text-teal-dark"}`}>
-            {statusText[status]}
-          </span>
+          <StatusBadge kind="run" status={status} screen="run-page" className="text-base" data-testid="run-status" />
         </p>
       </header>
 

@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, desc, eq, sql } from "drizzle-orm";
 import { getDb } from "@/db";
 import { manuals, pages, revisions, users } from "@/db/schema";
-import type { DocumentType } from "@/lib/domain/vocabulary";
+import type { DocumentType, RevisionStatus } from "@/lib/domain/vocabulary";
 import { recordAudit } from "@/lib/server/audit";
 import { can, type Actor } from "@/lib/domain/access/permissions";
 import { AppError } from "@/lib/domain/errors";
@@ -167,7 +167,7 @@ export async function listManuals() {
       currentDate: current.revisionDate,
       pageCount: current.pageCount,
       // The newest upload's state, so a librarian sees work in progress and failures at a glance.
-      latestStatus: sql<string | null>`(select r.status from ${revisions} r where r.manual_id = ${manuals.id} order by r.created_at desc limit 1)`,
+      latestStatus: sql<RevisionStatus | null>`(select r.status from ${revisions} r where r.manual_id = ${manuals.id} order by r.created_at desc limit 1)`,
     })
     .from(manuals)
     .leftJoin(current, eq(current.id, manuals.currentRevisionId))

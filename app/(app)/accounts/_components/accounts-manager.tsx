@@ -6,22 +6,12 @@ import {
 } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import { DataTable } from "@/components/data-table";
+import { StatusBadge, statusLabel, statusesOf } from "@/components/status-badge";
 import { ApiError } from "@/lib/client/api";
 import { roleLabels, roles, type Role } from "@/lib/domain/access/permissions";
 import type { AccountDto } from "@/lib/contracts/accounts";
 import { CreateAccountForm } from "./create-account-form";
 import { useAccounts, useResendInvitation, useUpdateAccount } from "./use-accounts";
-
-const statusLabels: Record<AccountDto["status"], string> = {
-  active: "Active",
-  invited: "Invited",
-  deactivated: "Deactivated",
-};
-const statusStyle: Record<AccountDto["status"], string> = {
-  active: "bg-ok-pale text-ok",
-  invited: "bg-amber-pale text-ink",
-  deactivated: "bg-danger-pale text-danger",
-};
 
 const column = createColumnHelper<AccountDto>();
 
@@ -82,7 +72,7 @@ export function AccountsManager({ initialAccounts, currentUserId }: { initialAcc
       column.accessor("status", {
         header: "Status",
         filterFn: "equals",
-        cell: (info) => <span className={`badge ${statusStyle[info.getValue()]}`}>{statusLabels[info.getValue()]}</span>,
+        cell: (info) => <StatusBadge kind="account" status={info.getValue()} />,
       }),
       column.accessor((a) => a.classNames.join(", "), { id: "classes", header: "Classes", cell: (info) => info.getValue() || "—" }),
       column.accessor("lastSignInAt", {
@@ -196,8 +186,8 @@ export function AccountsManager({ initialAccounts, currentUserId }: { initialAcc
             <label htmlFor="accounts-status" className="label">Status</label>
             <select id="accounts-status" className="input" value={filterValue("status")} onChange={(e) => setFilter("status", e.target.value)}>
               <option value="">Any status</option>
-              {Object.entries(statusLabels).map(([value, label]) => (
-                <option key={value} value={value}>{label}</option>
+              {statusesOf("account").map((value) => (
+                <option key={value} value={value}>{statusLabel("account", value)}</option>
               ))}
             </select>
           </div>

@@ -7,15 +7,11 @@ import {
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { DataTable } from "@/components/data-table";
+import { StatusBadge, statusLabel } from "@/components/status-badge";
 import type { CardListStatus, CardSummaryDto, SubjectDto } from "@/lib/contracts/cards";
 import { useCardList } from "./use-cards";
 
 const column = createColumnHelper<CardSummaryDto>();
-const statusStyle: Record<CardListStatus, string> = {
-  published: "bg-ok-pale text-ok",
-  draft: "bg-amber-pale text-ink",
-  archived: "bg-line text-ink",
-};
 
 export function CardsTable({ initialCards, subjects, author }: { initialCards: CardSummaryDto[]; subjects: SubjectDto[]; author: boolean }) {
   const [status, setStatus] = useState<CardListStatus | "">("");
@@ -43,9 +39,9 @@ export function CardsTable({ initialCards, subjects, author }: { initialCards: C
         header: "State",
         cell: (info) => (
           <span className="flex flex-wrap gap-1">
-            <span className={`badge ${statusStyle[info.getValue()]}`}>
-              {info.getValue() === "published" ? `Published v${info.row.original.publishedNumber}` : info.getValue() === "draft" ? "Draft" : "Archived"}
-            </span>
+            <StatusBadge kind="card" status={info.getValue()}>
+              {info.getValue() === "published" ? `${statusLabel("card", "published")} v${info.row.original.publishedNumber}` : undefined}
+            </StatusBadge>
             {info.row.original.hasDraft ? <span className="badge bg-amber-pale text-ink">Draft v{info.row.original.latestNumber} open</span> : null}
             {info.row.original.openRechecks ? <span className="badge bg-danger-pale text-danger">Recheck {info.row.original.openRechecks}</span> : null}
           </span>

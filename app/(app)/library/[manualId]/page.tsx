@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { statusLabel } from "@/components/status-badge";
 import { Table } from "@/components/table";
 import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
@@ -13,8 +14,6 @@ import { isUuid } from "@/lib/server/http";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Manual" };
-
-const statusLabel = { queued: "Waiting to be read", processing: "Being read", ready: "Ready", failed: "Failed" } as const;
 
 export default async function ManualPage({ params }: { params: Promise<{ manualId: string }> }) {
   const { manualId } = await params;
@@ -78,7 +77,7 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
               header: "State",
               cell: (r) => (
                 <>
-                  {statusLabel[r.status]}
+                  {statusLabel("revision", r.status)}
                   {r.status === "processing" ? ` (${r.pagesDone} of ${r.pageCount ?? "?"})` : ""}
                   {r.status === "failed" && r.error ? <span className="block text-sm text-danger">{r.error}</span> : null}
                 </>

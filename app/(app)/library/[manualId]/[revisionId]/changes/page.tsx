@@ -1,32 +1,16 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { StatusBadge, statusLabel, statusesOf } from "@/components/status-badge";
 import { Table } from "@/components/table";
 import { requirePageUser } from "@/app/_adapters/session";
 import { AppError } from "@/lib/domain/errors";
 import { getManual, getReadableRevision } from "@/lib/server/library/manuals";
-import type { PageStatus } from "@/lib/domain/revisions/compare";
 import { getComparison, listRechecksOfRevision } from "@/lib/server/revisions/rechecks";
 import { isUuid } from "@/lib/server/http";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "What changed" };
-
-
-const statusText: Record<PageStatus, string> = {
-  unchanged: "Unchanged",
-  changed: "Changed",
-  moved: "Moved",
-  added: "Added",
-  removed: "Removed",
-};
-const statusStyle: Record<PageStatus, string> = {
-  unchanged: "bg-panel text-ink-soft",
-  changed: "bg-amber-pale text-ink",
-  moved: "bg-teal-pale text-teal-dark",
-  added: "bg-ok-pale text-ok",
-  removed: "bg-danger-pale text-danger",
-};
 
 /** The comparison of a revision with the one before it, as a list of the new revision's effective pages. */
 export default async function RevisionChangesPage({ params, searchParams }: { params: Promise<{ manualId: string; revisionId: string }>; searchParams: Promise<{ all?: string }> }) {
@@ -64,10 +48,10 @@ export default async function RevisionChangesPage({ params, searchParams }: { pa
       ) : (
         <>
           <ul className="flex flex-wrap gap-2" aria-label="Summary">
-            {(Object.keys(statusText) as PageStatus[]).map((s) => (
-              <li key={s} className={`badge ${statusStyle[s]} text-base`}>
-                {statusText[s]}: {comparison.summary[s]}
-              </li>
+            {statusesOf("page").map((s) => (
+              <StatusBadge key={s} as="li" kind="page" status={s} className="text-base">
+                {statusLabel("page", s)}: {comparison.summary[s]}
+              </StatusBadge>
             ))}
           </ul>
           <p className="text-ink-soft">
@@ -104,7 +88,7 @@ export default async function RevisionChangesPage({ params, searchParams }: { pa
               empty="No page changed."
               columns={[
                 { header: `Page in ${revision.label}`, cell: (p) => p.newPage ?? "—" },
-                { header: "State", cell: (p) => <span className={`badge ${statusStyle[p.status]}`}>{statusText[p.status]}</span> },
+                { header: "State", cell: (p) => <StatusBadge kind="page" status={p.status} /> },
                 { header: `Page in ${previous?.label ?? "the revision before"}`, cell: (p) => p.oldPage ?? "—" },
                 { header: "Similarity", cell: (p) => (p.status === "changed" ? `${Math.round(p.similarity * 100)} %` : "—") },
                 {
