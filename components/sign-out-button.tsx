@@ -2,9 +2,10 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { callApi } from "@/lib/client/api";
+import { call } from "@/lib/client/api";
 import { cartData, syncer } from "@/lib/client/cart/cart";
 import { forgetUser, lastUser, markSignOutPending } from "@/lib/client/cart/store";
+import { sessionApi } from "@/lib/contracts/endpoints/session";
 
 /**
  * Signing out on a shared cart: waiting changes are sent first when possible, then this user's
@@ -21,7 +22,7 @@ export function SignOutButton() {
       onClick={async () => {
         setBusy(true);
         // The account signing out, as the server knows it (offline: the one the cart opened for).
-        const user = await callApi<{ user: { id: string } }>("GET", "/api/session")
+        const user = await call(sessionApi.current)
           .then((r) => r.user)
           .catch(() => lastUser().catch(() => undefined));
         if (user) {
@@ -36,7 +37,7 @@ export function SignOutButton() {
         }
         // Offline the cookie cannot be ended now: the cart ends it before anything else next time
         // it reaches the server, so the next person never continues in this account.
-        await callApi("DELETE", "/api/session").catch(() => markSignOutPending());
+        await call(sessionApi.signOut).catch(() => markSignOutPending());
         router.replace("/sign-in");
         router.refresh();
       }}

@@ -88,3 +88,19 @@ export interface SubjectDto {
   id: string;
   name: string;
 }
+
+/** A citation a new revision touched, with its old page and the suggested new one. */
+export interface RecheckDto {
+  id: string;
+  stepId: string;
+  stepNumber: number;
+  stepText: string;
+  status: "changed" | "moved" | "removed";
+  manualId: string;
+  manualTitle: string;
+  old: { revisionId: string; label: string; page: number; text: string };
+  suggested: { revisionId: string; label: string; page: number | null; similarity: number; text: string | null; pageCount: number | null };
+}
+
+/** A card of 100 long steps is larger than the 64 KiB other bodies get. */
+export const cardBodyLimit = 512 * 1024;

@@ -1,3 +1,4 @@
+import type { PageChange, PageStatus } from "@/lib/domain/revisions/compare";
 // JSON shapes of the library shared by the API and the client components.
 export interface RevisionStatusDto {
   id: string;
@@ -10,4 +11,12 @@ export interface RevisionStatusDto {
   error: string | null;
   current: boolean;
   supersededAt: string | null;
+}
+
+/** A revision compared page by page with the ready one before it. */
+export interface ComparisonDto {
+  revisionId: string;
+  previousRevisionId: string | null;
+  pages: PageChange[];
+  summary: Record<PageStatus, number>;
 }

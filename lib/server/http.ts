@@ -101,18 +101,7 @@ export async function readJson<S extends z.ZodType>(
   return parseWith(schema, value);
 }
 
-const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
-/** Whether a path segment can be an id at all (pages answer notFound() when it cannot). */
-export function isUuid(value: string): boolean {
-  return uuidPattern.test(value);
-}
-
-/** A path id that is not a UUID cannot name anything: 404, not a database error. */
-export function idParam(value: string | undefined, what = "That record"): string {
-  if (!value || !uuidPattern.test(value)) throw new AppError("not_found", `${what} was not found.`);
-  return value.toLowerCase();
-}
+export { idParam, isUuid } from "@/lib/contracts/endpoint";
 
 /**
  * The client's address for throttling. server/web.mjs rewrites X-Forwarded-For on every request

@@ -1,17 +1,8 @@
-import { requireApiUser } from "@/app/_adapters/session";
-import { cardBodyLimit, listCards } from "@/lib/server/cards/read";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { createCard } from "@/lib/server/cards/draft";
-import { parseWith, readJson, route } from "@/lib/server/http";
-import { cardListQuerySchema, createCardSchema } from "@/lib/domain/validation/cards";
+import { listCards } from "@/lib/server/cards/read";
 
-export const GET = route(async (request) => {
-  const actor = await requireApiUser("cards:view");
-  const filters = parseWith(cardListQuerySchema, Object.fromEntries(new URL(request.url).searchParams));
-  return Response.json({ cards: await listCards({ actor, filters }) });
-});
+export const GET = handle(api.cards.list, async ({ actor, query }) => ({ cards: await listCards({ actor, filters: query }) }));
 
-export const POST = route(async (request) => {
-  const actor = await requireApiUser("cards:author");
-  const { content } = await readJson(request, createCardSchema, { maxBytes: cardBodyLimit });
-  return Response.json({ card: await createCard({ actor, content }) }, { status: 201 });
-});
+export const POST = handle(api.cards.create, async ({ actor, body: { content } }) => ({ card: await createCard({ actor, content }) }));

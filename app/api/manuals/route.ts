@@ -1,23 +1,22 @@
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { can } from "@/lib/domain/access/permissions";
-import { requireApiUser } from "@/app/_adapters/session";
+import { manualUploadSchema } from "@/lib/domain/validation/library";
 import { getEnv } from "@/lib/server/env";
-import { parseWith, route } from "@/lib/server/http";
+import { parseWith } from "@/lib/server/http";
 import { createManualWithRevision, listManuals } from "@/lib/server/library/manuals";
 import { withUploadedPdf } from "@/lib/server/library/upload";
 import { getStore } from "@/lib/server/storage";
-import { manualUploadSchema } from "@/lib/domain/validation/library";
 
-export const GET = route(async () => {
-  const actor = await requireApiUser("library:view");
+export const GET = handle(api.library.listManuals, async ({ actor }) => {
   // A manual with no ready revision yet is the library staff's business only.
   const rows = (await listManuals()).filter((m) => m.currentRevisionId || can(actor, "library:manage"));
-  return Response.json({ manuals: rows });
+  return { manuals: rows };
 });
 
 /** A new manual with its first revision: multipart, the PDF streamed to storage. */
-export const POST = route(async (request) => {
-  const actor = await requireApiUser("library:manage");
-  const created = await withUploadedPdf(request, { store: getStore(), limitBytes: getEnv().HL_UPLOAD_LIMIT_BYTES }, ({ revisionId, fields, file }) => {
+export const POST = handle(api.library.createManual, async ({ request, actor }) =>
+  withUploadedPdf(request, { store: getStore(), limitBytes: getEnv().HL_UPLOAD_LIMIT_BYTES }, ({ revisionId, fields, file }) => {
     const input = parseWith(manualUploadSchema, fields);
     return createManualWithRevision({
       actor,
@@ -26,6 +25,5 @@ export const POST = route(async (request) => {
       revision: { revisionLabel: input.revisionLabel, revisionDate: input.revisionDate },
       file,
     });
-  });
-  return Response.json(created, { status: 202 });
-});
+  }),
+);

@@ -1,8 +1,5 @@
-import { requireApiUser } from "@/app/_adapters/session";
-import { route } from "@/lib/server/http";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { listMyWork } from "@/lib/server/runs/queries";
 
-export const GET = route(async () => {
-  const actor = await requireApiUser("runs:do");
-  return Response.json({ work: await listMyWork({ actor }) }, { headers: { "Cache-Control": "private, no-store" } });
-});
+export const GET = handle(api.runs.myWork, async ({ actor }) => ({ work: await listMyWork({ actor }) }));

@@ -1,23 +1,22 @@
-import { verifySignIn } from "@/lib/server/auth/sign-in";
 import { endSession, getCurrentUser, startSession } from "@/app/_adapters/session";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { AppError } from "@/lib/domain/errors";
-import { clientAddress, readJson, route } from "@/lib/server/http";
-import { signInSchema } from "@/lib/domain/validation/accounts";
+import { verifySignIn } from "@/lib/server/auth/sign-in";
+import { clientAddress } from "@/lib/server/http";
 
-export const GET = route(async () => {
+export const GET = handle(api.session.current, async () => {
   const user = await getCurrentUser();
   if (!user) throw new AppError("unauthorized", "Nobody is signed in.");
-  return Response.json({ user });
+  return { user };
 });
 
-export const POST = route(async (request) => {
-  const input = await readJson(request, signInSchema);
-  const user = await verifySignIn({ ...input, address: clientAddress(request) });
+export const POST = handle(api.session.signIn, async ({ request, body }) => {
+  const user = await verifySignIn({ ...body, address: clientAddress(request) });
   await startSession(user);
-  return Response.json({ user: { id: user.id, email: user.email, name: user.name, role: user.role } });
+  return { user: { id: user.id, email: user.email, name: user.name, role: user.role } };
 });
 
-export const DELETE = route(async () => {
+export const DELETE = handle(api.session.signOut, async () => {
   await endSession();
-  return new Response(null, { status: 204 });
 });

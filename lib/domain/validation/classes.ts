@@ -3,7 +3,8 @@ import { calendarDay } from "@/lib/domain/validation/dates";
 
 const day = calendarDay();
 
-const optionalDay = z.union([z.literal(""), day]).optional().transform((v) => (v ? v : null));
+// null too: the form sends its own parsed output, where an empty day is already null.
+const optionalDay = z.union([z.literal(""), day]).nullish().transform((v) => (v ? v : null));
 
 export const classFieldsSchema = z.object({
   name: z.string({ error: "Enter a name." }).trim().min(1, "Enter a name.").max(120, "Use at most 120 characters."),

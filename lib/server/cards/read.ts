@@ -6,20 +6,8 @@ import { citationRechecks, curriculumSubjects, manuals, revisions, taskCards, ta
 import { type Actor } from "@/lib/domain/access/permissions";
 import type { CardDto, CardListStatus, CardSummaryDto, CardVersionDto, ReferenceDto, StepDto } from "@/lib/contracts/cards";
 import { AppError } from "@/lib/domain/errors";
-import { idParam } from "@/lib/server/http";
-import { sortNotices, stepSchema, versionNumberSchema } from "@/lib/domain/validation/cards";
+import { sortNotices, stepSchema } from "@/lib/domain/validation/cards";
 import { notFound, isAuthor, editsCard, coauthorsOf } from "@/lib/server/cards/access";
-
-/** A card of 100 long steps is larger than the 64 KiB other bodies get. */
-export const cardBodyLimit = 512 * 1024;
-
-/** The `[id]` and `[v]` of a version route; anything that cannot name a version is a 404. */
-export async function versionParams(params: Promise<{ id: string; v: string }>) {
-  const { id, v } = await params;
-  const parsed = versionNumberSchema.safeParse(v);
-  if (!parsed.success) throw new AppError("not_found", "That version of the task card was not found.");
-  return { cardId: idParam(id, "That task card"), number: parsed.data };
-}
 
 /** Card list rows. Students see published, unarchived cards as they were last published. */
 export async function listCards({

@@ -9,13 +9,11 @@ import type { Actor } from "@/lib/domain/access/permissions";
 import { applyToDraft } from "@/lib/server/cards/draft";
 import { AppError } from "@/lib/domain/errors";
 import type { PageChange, PageStatus } from "@/lib/domain/revisions/compare";
+import type { ComparisonDto } from "@/lib/contracts/library";
+import type { RecheckDto } from "@/lib/contracts/cards";
 
-export interface ComparisonDto {
-  revisionId: string;
-  previousRevisionId: string | null;
-  pages: PageChange[];
-  summary: Record<PageStatus, number>;
-}
+export type { ComparisonDto, RecheckDto };
+
 
 export async function getComparison({ revisionId }: { revisionId: string }): Promise<ComparisonDto> {
   const [row] = await getDb().select().from(revisionComparisons).where(eq(revisionComparisons.revisionId, revisionId));
@@ -42,17 +40,6 @@ export async function listRechecksOfRevision({ revisionId }: { revisionId: strin
     .orderBy(asc(taskCardVersions.title));
 }
 
-export interface RecheckDto {
-  id: string;
-  stepId: string;
-  stepNumber: number;
-  stepText: string;
-  status: "changed" | "moved" | "removed";
-  manualId: string;
-  manualTitle: string;
-  old: { revisionId: string; label: string; page: number; text: string };
-  suggested: { revisionId: string; label: string; page: number | null; similarity: number; text: string | null; pageCount: number | null };
-}
 
 async function pageText(revisionId: string, page: number | null) {
   if (!page) return null;

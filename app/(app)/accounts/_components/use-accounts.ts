@@ -1,9 +1,10 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { callApi } from "@/lib/client/api";
+import { call } from "@/lib/client/api";
 import type { AccountDto } from "@/lib/contracts/accounts";
 import type { CreateAccountInput } from "@/lib/domain/validation/accounts";
+import { accountsApi } from "@/lib/contracts/endpoints/accounts";
 
 // Every read and write of accounts from the browser goes through these hooks, under one key.
 export const accountsKey = ["accounts"] as const;
@@ -11,7 +12,7 @@ export const accountsKey = ["accounts"] as const;
 export function useAccounts(initialData: AccountDto[]) {
   return useQuery({
     queryKey: accountsKey,
-    queryFn: async () => (await callApi<{ users: AccountDto[] }>("GET", "/api/users")).users,
+    queryFn: async () => (await call(accountsApi.list)).users,
     initialData,
   });
 }
@@ -19,7 +20,7 @@ export function useAccounts(initialData: AccountDto[]) {
 export function useCreateAccount() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: async (input: CreateAccountInput) => (await callApi<{ user: AccountDto }>("POST", "/api/users", input)).user,
+    mutationFn: async (input: CreateAccountInput) => (await call(accountsApi.create, { body: input })).user,
     onSuccess: () => client.invalidateQueries({ queryKey: accountsKey }),
   });
 }
@@ -28,13 +29,13 @@ export function useUpdateAccount() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async ({ id, ...changes }: { id: string; role?: AccountDto["role"]; status?: "active" | "deactivated" }) =>
-      (await callApi<{ user: AccountDto }>("PATCH", `/api/users/${id}`, changes)).user,
+      (await call(accountsApi.update, { params: { id }, body: changes })).user,
     onSuccess: () => client.invalidateQueries({ queryKey: accountsKey }),
   });
 }
 
 export function useResendInvitation() {
   return useMutation({
-    mutationFn: async (id: string) => (await callApi<{ user: AccountDto }>("POST", `/api/users/${id}/invitation`)).user,
+    mutationFn: async (id: string) => (await call(accountsApi.resendInvitation, { params: { id } })).user,
   });
 }

@@ -2,7 +2,8 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
+import { runsApi } from "@/lib/contracts/endpoints/runs";
 
 interface Props {
   cardId: string;
@@ -30,13 +31,15 @@ export function AssignForm({ cardId, versions, classes, students }: Props) {
         setBusy(true);
         setResult(null);
         try {
-          const { assignment } = await callApi<{ assignment: { runs: number } }>("POST", "/api/assignments", {
-            cardId,
-            versionNumber,
-            classId: to === "class" ? classId || null : null,
-            studentIds: to === "students" ? [...chosen] : [],
-            dueOn,
-            note,
+          const { assignment } = await call(runsApi.createAssignment, {
+            body: {
+              cardId,
+              versionNumber,
+              classId: to === "class" ? classId || null : null,
+              studentIds: to === "students" ? [...chosen] : [],
+              dueOn,
+              note,
+            },
           });
           setResult({ ok: true, text: `Assigned: ${assignment.runs} ${assignment.runs === 1 ? "student has" : "students have"} it in their work.` });
           router.refresh();

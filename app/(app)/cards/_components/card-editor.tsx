@@ -5,12 +5,13 @@ import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { useFieldArray, useForm } from "react-hook-form";
 import { CardView } from "@/components/card-view";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
 import type { CardDto, CardVersionDto, SubjectDto } from "@/lib/contracts/cards";
 import { emptyStep, fromVersion, toContent, toPreview, type CardForm } from "./card-form";
 import { writeCitingTarget } from "@/lib/client/citing-target";
 import { StepEditor, type ManualOption } from "./step-editor";
 import { useSaveDraft } from "./use-cards";
+import { cardsApi } from "@/lib/contracts/endpoints/cards";
 
 type SaveState = { kind: "saved"; at: Date | null } | { kind: "unsaved" } | { kind: "saving" } | { kind: "error"; message: string; conflict: boolean };
 
@@ -106,7 +107,7 @@ export function CardEditor({ card, subjects, manuals, userId }: { card: CardDto;
     setPublishing(true);
     try {
       if (!(await saveNow())) return;
-      await callApi("POST", `/api/cards/${card.id}/publish`);
+      await call(cardsApi.publish, { params: { id: card.id } });
       writeCitingTarget(userId, null);
       router.push(`/cards/${card.id}`);
       router.refresh();

@@ -2,7 +2,8 @@
 
 import { useRouter } from "next/navigation";
 import { useState, type ReactNode } from "react";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
+import { cardsApi } from "@/lib/contracts/endpoints/cards";
 
 interface Item {
   id: string;
@@ -35,7 +36,7 @@ export function RecheckForm({ cardId, items }: { cardId: string; items: Item[] }
         const c = choices[i.id]!;
         return c.action === "relink" ? { id: i.id, action: c.action, page: Number(c.page) } : { id: i.id, action: c.action };
       });
-      await callApi("POST", `/api/cards/${cardId}/rechecks`, { decisions });
+      await call(cardsApi.applyRechecks, { params: { id: cardId }, body: { decisions } });
       router.push(`/cards/${cardId}/edit`);
       router.refresh();
     } catch (err) {

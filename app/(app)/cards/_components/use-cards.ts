@@ -1,9 +1,10 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { callApi } from "@/lib/client/api";
-import type { CardDto, CardListStatus, CardSummaryDto, CardVersionDto, SubjectDto } from "@/lib/contracts/cards";
+import { call } from "@/lib/client/api";
+import type { CardListStatus, CardSummaryDto, SubjectDto } from "@/lib/contracts/cards";
 import type { CardContentInput } from "@/lib/domain/validation/cards";
+import { cardsApi } from "@/lib/contracts/endpoints/cards";
 
 // Every read and write of task cards from the browser goes through these hooks, under one key.
 export const cardsKey = ["cards"] as const;
@@ -11,7 +12,7 @@ export const cardsKey = ["cards"] as const;
 export function useCardList(status: CardListStatus | "", initialData?: CardSummaryDto[]) {
   return useQuery({
     queryKey: [...cardsKey, "list", status],
-    queryFn: async () => (await callApi<{ cards: CardSummaryDto[] }>("GET", `/api/cards${status ? `?status=${status}` : ""}`)).cards,
+    queryFn: async () => (await call(cardsApi.list, { query: { status } })).cards,
     initialData: status === "" ? initialData : undefined,
   });
 }
@@ -19,7 +20,7 @@ export function useCardList(status: CardListStatus | "", initialData?: CardSumma
 export function useCard(id: string | null) {
   return useQuery({
     queryKey: [...cardsKey, "card", id],
-    queryFn: async () => (await callApi<{ card: CardDto }>("GET", `/api/cards/${id}`)).card,
+    queryFn: async () => (await call(cardsApi.get, { params: { id: id! } })).card,
     enabled: !!id,
   });
 }
@@ -27,7 +28,7 @@ export function useCard(id: string | null) {
 export function useCreateCard() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: async (content: CardContentInput) => (await callApi<{ card: CardDto }>("POST", "/api/cards", { content })).card,
+    mutationFn: async (content: CardContentInput) => (await call(cardsApi.create, { body: { content } })).card,
     onSuccess: () => client.invalidateQueries({ queryKey: cardsKey }),
   });
 }
@@ -35,7 +36,7 @@ export function useCreateCard() {
 export function useSaveDraft(cardId: string) {
   return useMutation({
     mutationFn: async ({ content, editCount }: { content: CardContentInput; editCount: number }) =>
-      (await callApi<{ version: CardVersionDto }>("PUT", `/api/cards/${cardId}/draft`, { content, editCount })).version,
+      (await call(cardsApi.saveDraft, { params: { id: cardId }, body: { content, editCount } })).version,
   });
 }
 
@@ -43,10 +44,10 @@ export function useCardAction(cardId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async (action: "publish" | "duplicate" | "archive" | "restore" | "discard") => {
-      if (action === "publish") return callApi<{ version: CardVersionDto }>("POST", `/api/cards/${cardId}/publish`);
-      if (action === "duplicate") return callApi<{ card: CardDto }>("POST", `/api/cards/${cardId}/duplicate`);
-      if (action === "discard") return callApi<null>("DELETE", `/api/cards/${cardId}/draft`);
-      return callApi<{ card: CardDto }>("POST", `/api/cards/${cardId}/archive`, { archived: action === "archive" });
+      if (action === "publish") return call(cardsApi.publish, { params: { id: cardId } });
+      if (action === "duplicate") return call(cardsApi.duplicate, { params: { id: cardId } });
+      if (action === "discard") return call(cardsApi.discardDraft, { params: { id: cardId } });
+      return call(cardsApi.archive, { params: { id: cardId }, body: { archived: action === "archive" } });
     },
     onSuccess: () => client.invalidateQueries({ queryKey: cardsKey }),
   });
@@ -56,7 +57,7 @@ export function useCitePage(cardId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async (input: { stepId: string; revisionId: string; page: number; quote: string }) =>
-      (await callApi<{ citation: { versionNumber: number; stepNumber: number; added: boolean } }>("POST", `/api/cards/${cardId}/draft/citations`, input)).citation,
+      (await call(cardsApi.citePage, { params: { id: cardId }, body: input })).citation,
     onSuccess: () => client.invalidateQueries({ queryKey: [...cardsKey, "card", cardId] }),
   });
 }
@@ -64,7 +65,7 @@ export function useCitePage(cardId: string) {
 export function useSubjects(initialData: SubjectDto[]) {
   return useQuery({
     queryKey: ["subjects"],
-    queryFn: async () => (await callApi<{ subjects: SubjectDto[] }>("GET", "/api/subjects")).subjects,
+    queryFn: async () => (await call(cardsApi.listSubjects)).subjects,
     initialData,
   });
 }
@@ -73,7 +74,7 @@ export function useSaveSubject() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async ({ id, name }: { id?: string; name: string }) =>
-      (await callApi<{ subject: SubjectDto }>(id ? "PATCH" : "POST", id ? `/api/subjects/${id}` : "/api/subjects", { name })).subject,
+      (await (id ? call(cardsApi.renameSubject, { params: { id }, body: { name } }) : call(cardsApi.createSubject, { body: { name } }))).subject,
     onSuccess: () => client.invalidateQueries({ queryKey: ["subjects"] }),
   });
 }
@@ -81,7 +82,7 @@ export function useSaveSubject() {
 export function useSetCoauthors(cardId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: async (userIds: string[]) => (await callApi<{ coauthors: { id: string; name: string }[] }>("PUT", `/api/cards/${cardId}/coauthors`, { userIds })).coauthors,
+    mutationFn: async (userIds: string[]) => (await call(cardsApi.setCoauthors, { params: { id: cardId }, body: { userIds } })).coauthors,
     onSuccess: () => client.invalidateQueries({ queryKey: cardsKey }),
   });
 }

@@ -7,8 +7,9 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { FormField } from "@/components/form-field";
 import { FormResult } from "@/components/form-result";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
 import { createClassSchema, type CreateClassInput } from "@/lib/domain/validation/classes";
+import { classesApi } from "@/lib/contracts/endpoints/classes";
 
 export function CreateClassForm() {
   const router = useRouter();
@@ -22,7 +23,7 @@ export function CreateClassForm() {
   const onSubmit = form.handleSubmit(async (values) => {
     setResult(null);
     try {
-      await callApi("POST", "/api/classes", values);
+      await call(classesApi.create, { body: values });
       setResult({ ok: true, message: `Class "${values.name}" added.` });
       form.reset();
       router.refresh();

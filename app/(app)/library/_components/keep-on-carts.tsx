@@ -2,7 +2,8 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
+import { libraryApi } from "@/lib/contracts/endpoints/library";
 
 /** A librarian's switch: carts store the whole current PDF of this manual, not only cited pages. */
 export function KeepOnCarts({ manualId, kept }: { manualId: string; kept: boolean }) {
@@ -20,7 +21,7 @@ export function KeepOnCarts({ manualId, kept }: { manualId: string; kept: boolea
           setBusy(true);
           setMessage(null);
           try {
-            await callApi("PUT", `/api/manuals/${manualId}/carts`, { keepOnCarts: !kept });
+            await call(libraryApi.keepOnCarts, { params: { id: manualId }, body: { keepOnCarts: !kept } });
             router.refresh();
           } catch (error) {
             setMessage(error instanceof ApiError ? error.message : "Not changed.");

@@ -2,7 +2,8 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
+import { libraryApi } from "@/lib/contracts/endpoints/library";
 
 export function RetryButton({ revisionId, label }: { revisionId: string; label: string }) {
   const router = useRouter();
@@ -17,7 +18,7 @@ export function RetryButton({ revisionId, label }: { revisionId: string; label: 
         onClick={async () => {
           setState({ busy: true });
           try {
-            await callApi("POST", `/api/revisions/${revisionId}/retry`);
+            await call(libraryApi.retryRevision, { params: { id: revisionId } });
             setState({ busy: false, message: "Queued again." });
             router.refresh();
           } catch (error) {

@@ -1,8 +1,8 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { callApi } from "@/lib/client/api";
-import type { RevisionStatusDto } from "@/lib/contracts/library";
+import { call } from "@/lib/client/api";
+import { libraryApi } from "@/lib/contracts/endpoints/library";
 
 export const revisionKey = (id: string) => ["revision", id] as const;
 
@@ -10,7 +10,7 @@ export const revisionKey = (id: string) => ["revision", id] as const;
 export function useRevisionStatus(id: string | null) {
   return useQuery({
     queryKey: revisionKey(id ?? "none"),
-    queryFn: () => callApi<RevisionStatusDto>("GET", `/api/revisions/${id}`),
+    queryFn: () => call(libraryApi.getRevision, { params: { id: id! } }),
     enabled: !!id,
     refetchInterval: (query) => {
       const status = query.state.data?.status;
@@ -22,7 +22,7 @@ export function useRevisionStatus(id: string | null) {
 export function useRetryRevision() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (id: string) => callApi<{ revisionId: string }>("POST", `/api/revisions/${id}/retry`),
+    mutationFn: (id: string) => call(libraryApi.retryRevision, { params: { id } }),
     onSuccess: (_data, id) => client.invalidateQueries({ queryKey: revisionKey(id) }),
   });
 }

@@ -2,7 +2,8 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
+import { runsApi } from "@/lib/contracts/endpoints/runs";
 import type { RunStatus } from "@/lib/domain/runs/fold";
 
 interface Point {
@@ -19,11 +20,11 @@ export function ReviewActions({ runId, status, inspectionPoints }: { runId: stri
   const [busy, setBusy] = useState(false);
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
   if (status === "signed_off") return null;
-  const send = async (path: string, body: unknown, done: string) => {
+  const send = async (action: () => Promise<unknown>, done: string) => {
     setBusy(true);
     setMessage(null);
     try {
-      await callApi("POST", `/api/runs/${runId}/${path}`, body);
+      await action();
       setMessage({ ok: true, text: done });
       setComment("");
       router.refresh();
@@ -44,7 +45,7 @@ export function ReviewActions({ runId, status, inspectionPoints }: { runId: stri
                 Step {p.number} bought off
               </span>
             ) : (
-              <button key={p.id} type="button" className="btn btn-secondary" disabled={busy || !p.checked} onClick={() => void send("buy-off", { stepId: p.id }, `Step ${p.number} bought off.`)}>
+              <button key={p.id} type="button" className="btn btn-secondary" disabled={busy || !p.checked} onClick={() => void send(() => call(runsApi.buyOff, { params: { id: runId }, body: { stepId: p.id } }), `Step ${p.number} bought off.`)}>
                 {p.checked ? `Buy off step ${p.number}` : `Step ${p.number}: not done yet`}
               </button>
             ),
@@ -56,10 +57,10 @@ export function ReviewActions({ runId, status, inspectionPoints }: { runId: stri
       </label>
       <textarea id="review-comment" className="input min-h-24" value={comment} maxLength={2000} onChange={(e) => setComment(e.target.value)} />
       <div className="flex flex-wrap gap-2">
-        <button type="button" className="btn btn-primary" disabled={busy || status !== "submitted"} onClick={() => void send("sign-off", { comment }, "Signed off.")}>
+        <button type="button" className="btn btn-primary" disabled={busy || status !== "submitted"} onClick={() => void send(() => call(runsApi.signOff, { params: { id: runId }, body: { comment } }), "Signed off.")}>
           Sign off
         </button>
-        <button type="button" className="btn btn-danger" disabled={busy || status !== "submitted" || !comment.trim()} onClick={() => void send("return", { comment }, "Returned to the student.")}>
+        <button type="button" className="btn btn-danger" disabled={busy || status !== "submitted" || !comment.trim()} onClick={() => void send(() => call(runsApi.returnRun, { params: { id: runId }, body: { comment } }), "Returned to the student.")}>
           Return with comment
         </button>
       </div>

@@ -6,8 +6,9 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { FormField } from "@/components/form-field";
 import { FormResult } from "@/components/form-result";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
 import { passwordResetRequestSchema } from "@/lib/domain/validation/accounts";
+import { sessionApi } from "@/lib/contracts/endpoints/session";
 
 export function ForgotPasswordForm() {
   const [result, setResult] = useState<{ ok: boolean; message: string } | null>(null);
@@ -19,7 +20,7 @@ export function ForgotPasswordForm() {
 
   const onSubmit = form.handleSubmit(async (values) => {
     try {
-      const { message } = await callApi<{ message: string }>("POST", "/api/password-resets", values);
+      const { message } = await call(sessionApi.requestReset, { body: values });
       setResult({ ok: true, message });
     } catch (error) {
       setResult({ ok: false, message: error instanceof ApiError ? error.message : "That did not work. Try again." });

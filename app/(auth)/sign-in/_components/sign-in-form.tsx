@@ -6,9 +6,10 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { FormField } from "@/components/form-field";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
 import { signInSchema, type SignInInput } from "@/lib/domain/validation/accounts";
 import { clearSignOutPending } from "@/lib/client/cart/store";
+import { sessionApi } from "@/lib/contracts/endpoints/session";
 
 export function SignInForm({ next }: { next: string }) {
   const router = useRouter();
@@ -19,7 +20,7 @@ export function SignInForm({ next }: { next: string }) {
   const onSubmit = form.handleSubmit(async (values) => {
     setProblem(null);
     try {
-      await callApi("POST", "/api/session", values);
+      await call(sessionApi.signIn, { body: values });
       // A new session replaces the one an offline sign-out could not end.
       await clearSignOutPending().catch(() => undefined);
       router.replace(next);

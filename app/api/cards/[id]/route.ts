@@ -1,11 +1,5 @@
-import { requireApiUser } from "@/app/_adapters/session";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { getCard } from "@/lib/server/cards/read";
-import { idParam, route } from "@/lib/server/http";
 
-type Context = { params: Promise<{ id: string }> };
-
-export const GET = route<Context>(async (_request, { params }) => {
-  const actor = await requireApiUser("cards:view");
-  const id = idParam((await params).id, "That task card");
-  return Response.json({ card: await getCard({ actor, id }) });
-});
+export const GET = handle(api.cards.get, async ({ actor, params: { id } }) => ({ card: await getCard({ actor, id }) }));

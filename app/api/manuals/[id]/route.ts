@@ -1,17 +1,14 @@
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { can } from "@/lib/domain/access/permissions";
-import { requireApiUser } from "@/app/_adapters/session";
 import { AppError } from "@/lib/domain/errors";
-import { idParam, route } from "@/lib/server/http";
 import { getManual } from "@/lib/server/library/manuals";
 
-type Context = { params: Promise<{ id: string }> };
-
-export const GET = route<Context>(async (_request, { params }) => {
-  const actor = await requireApiUser("library:view");
-  const manual = await getManual({ id: idParam((await params).id, "That manual") });
+export const GET = handle(api.library.getManual, async ({ actor, params: { id } }) => {
+  const manual = await getManual({ id });
   const staff = can(actor, "library:manage");
   if (!staff && !manual.currentRevisionId) throw new AppError("not_found", "That manual was not found.");
-  return Response.json({
+  return {
     ...manual,
     revisions: manual.revisions.filter((r) => staff || r.status === "ready").map((r) => ({
       id: r.id,
@@ -21,5 +18,5 @@ export const GET = route<Context>(async (_request, { params }) => {
       pageCount: r.pageCount,
       supersededAt: r.supersededAt,
     })),
-  });
+  };
 });

@@ -1,13 +1,10 @@
-import { requireApiUser } from "@/app/_adapters/session";
-import { idParam, route } from "@/lib/server/http";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { getRevision } from "@/lib/server/library/manuals";
 
-type Context = { params: Promise<{ id: string }> };
-
-export const GET = route<Context>(async (_request, { params }) => {
-  await requireApiUser("library:view");
-  const r = await getRevision({ id: idParam((await params).id, "That revision") });
-  return Response.json({
+export const GET = handle(api.library.getRevision, async ({ params: { id } }) => {
+  const r = await getRevision({ id });
+  return {
     id: r.id,
     manualId: r.manualId,
     label: r.label,
@@ -17,6 +14,6 @@ export const GET = route<Context>(async (_request, { params }) => {
     pageCount: r.pageCount,
     error: r.error,
     current: r.currentRevisionId === r.id,
-    supersededAt: r.supersededAt,
-  });
+    supersededAt: r.supersededAt?.toISOString() ?? null,
+  };
 });

@@ -1,12 +1,9 @@
-import { requireApiUser } from "@/app/_adapters/session";
-import { idParam, route } from "@/lib/server/http";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { getRunDetail } from "@/lib/server/runs/queries";
 
-type Context = { params: Promise<{ id: string }> };
-
 /** Everything a cart needs to run the card offline: the pinned version, its events, the packet's pages. */
-export const GET = route<Context>(async (_request, { params }) => {
-  const actor = await requireApiUser();
-  const { state: _state, ...detail } = await getRunDetail({ actor, runId: idParam((await params).id, "That run") });
-  return Response.json(detail, { headers: { "Cache-Control": "private, no-store" } });
+export const GET = handle(api.runs.get, async ({ actor, params: { id } }) => {
+  const { state: _state, ...detail } = await getRunDetail({ actor, runId: id });
+  return detail;
 });

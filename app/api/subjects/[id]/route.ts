@@ -1,13 +1,7 @@
-import { requireApiUser } from "@/app/_adapters/session";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { renameSubject } from "@/lib/server/cards/subjects";
-import { idParam, readJson, route } from "@/lib/server/http";
-import { subjectSchema } from "@/lib/domain/validation/cards";
 
-type Context = { params: Promise<{ id: string }> };
-
-export const PATCH = route<Context>(async (request, { params }) => {
-  const actor = await requireApiUser("subjects:manage");
-  const id = idParam((await params).id, "That subject");
-  const { name } = await readJson(request, subjectSchema);
-  return Response.json({ subject: await renameSubject({ actor, id, name }) });
-});
+export const PATCH = handle(api.cards.renameSubject, async ({ actor, params: { id }, body: { name } }) => ({
+  subject: await renameSubject({ actor, id, name }),
+}));

@@ -3,7 +3,8 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FormResult } from "@/components/form-result";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
+import { classesApi } from "@/lib/contracts/endpoints/classes";
 
 export function AddMembersForm({ classId, candidates }: { classId: string; candidates: { id: string; label: string }[] }) {
   const router = useRouter();
@@ -25,7 +26,7 @@ export function AddMembersForm({ classId, candidates }: { classId: string; candi
         }
         setBusy(true);
         try {
-          const { added } = await callApi<{ added: number }>("POST", `/api/classes/${classId}/members`, { userIds: chosen });
+          const { added } = await call(classesApi.addMembers, { params: { id: classId }, body: { userIds: chosen } });
           setResult({ ok: true, message: `${added} added to the class.` });
           setChosen([]);
           router.refresh();
@@ -71,7 +72,7 @@ export function RemoveMemberButton({ classId, userId, name }: { classId: string;
       onClick={async () => {
         setBusy(true);
         try {
-          await callApi("DELETE", `/api/classes/${classId}/members/${userId}`);
+          await call(classesApi.removeMember, { params: { id: classId, userId } });
           router.refresh();
         } catch (error) {
           window.alert(error instanceof ApiError ? error.message : "Not removed.");

@@ -6,8 +6,9 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { FormField } from "@/components/form-field";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
 import { setPasswordFormSchema } from "@/lib/domain/validation/accounts";
+import { sessionApi } from "@/lib/contracts/endpoints/session";
 
 export function SetPasswordForm({ token }: { token: string }) {
   const router = useRouter();
@@ -21,7 +22,7 @@ export function SetPasswordForm({ token }: { token: string }) {
   const onSubmit = form.handleSubmit(async ({ password }) => {
     setProblem(null);
     try {
-      await callApi("POST", "/api/password", { token, password });
+      await call(sessionApi.setPassword, { body: { token, password } });
       router.replace("/sign-in?password=set");
     } catch (error) {
       setProblem(error instanceof ApiError ? error.message : "That did not work. Try again.");

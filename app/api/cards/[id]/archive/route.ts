@@ -1,13 +1,7 @@
-import { requireApiUser } from "@/app/_adapters/session";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { setArchived } from "@/lib/server/cards/draft";
-import { idParam, readJson, route } from "@/lib/server/http";
-import { archiveSchema } from "@/lib/domain/validation/cards";
 
-type Context = { params: Promise<{ id: string }> };
-
-export const POST = route<Context>(async (request, { params }) => {
-  const actor = await requireApiUser("cards:author");
-  const cardId = idParam((await params).id, "That task card");
-  const { archived } = await readJson(request, archiveSchema);
-  return Response.json({ card: await setArchived({ actor, cardId, archived }) });
-});
+export const POST = handle(api.cards.archive, async ({ actor, params: { id }, body: { archived } }) => ({
+  card: await setArchived({ actor, cardId: id, archived }),
+}));

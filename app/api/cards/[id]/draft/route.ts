@@ -1,22 +1,12 @@
-import { requireApiUser } from "@/app/_adapters/session";
-import { cardBodyLimit } from "@/lib/server/cards/read";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { discardDraft, saveDraft } from "@/lib/server/cards/draft";
-import { idParam, readJson, route } from "@/lib/server/http";
-import { saveDraftSchema } from "@/lib/domain/validation/cards";
-
-type Context = { params: Promise<{ id: string }> };
 
 /** Saves the draft; on a published card this opens a new draft version. */
-export const PUT = route<Context>(async (request, { params }) => {
-  const actor = await requireApiUser("cards:author");
-  const cardId = idParam((await params).id, "That task card");
-  const { content, editCount } = await readJson(request, saveDraftSchema, { maxBytes: cardBodyLimit });
-  return Response.json({ version: await saveDraft({ actor, cardId, content, editCount }) });
-});
+export const PUT = handle(api.cards.saveDraft, async ({ actor, params: { id }, body: { content, editCount } }) => ({
+  version: await saveDraft({ actor, cardId: id, content, editCount }),
+}));
 
-export const DELETE = route<Context>(async (_request, { params }) => {
-  const actor = await requireApiUser("cards:author");
-  const cardId = idParam((await params).id, "That task card");
-  await discardDraft({ actor, cardId });
-  return new Response(null, { status: 204 });
+export const DELETE = handle(api.cards.discardDraft, async ({ actor, params: { id } }) => {
+  await discardDraft({ actor, cardId: id });
 });

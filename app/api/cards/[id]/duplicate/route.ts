@@ -1,11 +1,5 @@
-import { requireApiUser } from "@/app/_adapters/session";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { duplicateCard } from "@/lib/server/cards/draft";
-import { idParam, route } from "@/lib/server/http";
 
-type Context = { params: Promise<{ id: string }> };
-
-export const POST = route<Context>(async (_request, { params }) => {
-  const actor = await requireApiUser("cards:author");
-  const cardId = idParam((await params).id, "That task card");
-  return Response.json({ card: await duplicateCard({ actor, cardId }) }, { status: 201 });
-});
+export const POST = handle(api.cards.duplicate, async ({ actor, params: { id } }) => ({ card: await duplicateCard({ actor, cardId: id }) }));

@@ -1,13 +1,7 @@
-import { requireApiUser } from "@/app/_adapters/session";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { addClassMembers } from "@/lib/server/classes";
-import { idParam, readJson, route } from "@/lib/server/http";
-import { addMembersSchema } from "@/lib/domain/validation/classes";
 
-type Context = { params: Promise<{ id: string }> };
-
-export const POST = route<Context>(async (request, { params }) => {
-  const actor = await requireApiUser("classes:manage");
-  const classId = idParam((await params).id, "That class");
-  const { userIds } = await readJson(request, addMembersSchema);
-  return Response.json(await addClassMembers({ actor, classId, userIds }));
-});
+export const POST = handle(api.classes.addMembers, async ({ actor, params: { id }, body: { userIds } }) =>
+  addClassMembers({ actor, classId: id, userIds }),
+);

@@ -1,10 +1,5 @@
-import { requireApiUser } from "@/app/_adapters/session";
-import { idParam, route } from "@/lib/server/http";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { classRecord } from "@/lib/server/runs/records";
 
-type Context = { params: Promise<{ id: string }> };
-
-export const GET = route<Context>(async (_request, { params }) => {
-  const actor = await requireApiUser("records:view-all");
-  return Response.json(await classRecord({ actor, classId: idParam((await params).id, "That class") }));
-});
+export const GET = handle(api.runs.classRecord, async ({ actor, params: { id } }) => classRecord({ actor, classId: id }));

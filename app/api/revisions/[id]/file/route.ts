@@ -1,20 +1,17 @@
 import { Readable } from "node:stream";
-import { requireApiUser } from "@/app/_adapters/session";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { AppError } from "@/lib/domain/errors";
-import { idParam, route } from "@/lib/server/http";
 import { getReadableRevision } from "@/lib/server/library/manuals";
 import { parseRange } from "@/lib/domain/library/range";
 import { getStore } from "@/lib/server/storage";
 
-type Context = { params: Promise<{ id: string }> };
-
 /** The PDF, with single-range requests so a viewer can fetch page 700 without the rest. */
-export const GET = route<Context>(async (request, { params }) => {
-  const actor = await requireApiUser("library:view");
-  const revision = await getReadableRevision({ actor, id: idParam((await params).id, "That revision") });
+export const GET = handle(api.library.revisionFile, async ({ request, actor, params: { id }, query }) => {
+  const revision = await getReadableRevision({ actor, id });
   const store = getStore();
   // ?copy=reader: the packed copy made for the in-app reader, when there is one; else the upload.
-  const reader = new URL(request.url).searchParams.get("copy") === "reader" && revision.readerFileKey && revision.readerSizeBytes;
+  const reader = query.copy === "reader" && revision.readerFileKey && revision.readerSizeBytes;
   const fileKey = reader ? revision.readerFileKey! : revision.fileKey;
   const size = reader ? revision.readerSizeBytes! : revision.sizeBytes;
   const name = `${revision.manualTitle} ${revision.label}`.replace(/[^\w .-]+/g, "").trim() || "manual";

@@ -1,13 +1,5 @@
-import { requireApiUser } from "@/app/_adapters/session";
-import { idParam, readJson, route } from "@/lib/server/http";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { returnRun } from "@/lib/server/runs/review";
-import { returnRunSchema } from "@/lib/domain/validation/runs";
 
-type Context = { params: Promise<{ id: string }> };
-
-export const POST = route<Context>(async (request, { params }) => {
-  const actor = await requireApiUser("runs:review");
-  const runId = idParam((await params).id, "That run");
-  const { comment } = await readJson(request, returnRunSchema);
-  return Response.json(await returnRun({ actor, runId, comment }));
-});
+export const POST = handle(api.runs.returnRun, async ({ actor, params: { id }, body: { comment } }) => returnRun({ actor, runId: id, comment }));

@@ -1,22 +1,14 @@
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
 import { fileResponse } from "@/lib/server/file-response";
-import { requireApiUser } from "@/app/_adapters/session";
-import { idParam, isUuid, route } from "@/lib/server/http";
 import { readPhoto, storePhoto } from "@/lib/server/runs/photos";
 
-type Context = { params: Promise<{ id: string; photoId: string }> };
-
 /** The picture itself is the body (image/jpeg, image/png or image/webp, at most 8 MB); ?step= names the step. */
-export const PUT = route<Context>(async (request, { params }) => {
-  const actor = await requireApiUser();
-  const { id, photoId } = await params;
-  const step = new URL(request.url).searchParams.get("step") ?? "";
-  const photo = await storePhoto({ actor, runId: idParam(id, "That run"), photoId: idParam(photoId, "That photo"), stepId: isUuid(step) ? step : null, request });
-  return Response.json({ photo }, { status: 201 });
-});
+export const PUT = handle(api.runs.putPhoto, async ({ request, actor, params: { id, photoId }, query: { step } }) => ({
+  photo: await storePhoto({ actor, runId: id, photoId, stepId: step, request }),
+}));
 
-export const GET = route<Context>(async (_request, { params }) => {
-  const actor = await requireApiUser();
-  const { id, photoId } = await params;
-  const { body, size, contentType } = await readPhoto({ actor, runId: idParam(id, "That run"), photoId: idParam(photoId, "That photo") });
+export const GET = handle(api.runs.getPhoto, async ({ actor, params: { id, photoId } }) => {
+  const { body, size, contentType } = await readPhoto({ actor, runId: id, photoId });
   return fileResponse(body, { type: contentType, size });
 });

@@ -3,9 +3,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useEffect, useState } from "react";
-import { ApiError, callApi } from "@/lib/client/api";
+import { ApiError, call } from "@/lib/client/api";
 import { readCitingTarget, writeCitingTarget, type CitingTarget } from "@/lib/client/citing-target";
-import type { CardDto } from "@/lib/contracts/cards";
+import { cardsApi } from "@/lib/contracts/endpoints/cards";
 
 /** The page the reader shows now: it keeps the URL's last segment current while scrolling. */
 function currentPage(fallback: number): number {
@@ -34,12 +34,12 @@ export function CiteOnCard({ userId, revisionId, revisionLabel, superseded, init
   const cardKey = ["cards", "card", target?.cardId ?? null];
   const card = useQuery({
     queryKey: cardKey,
-    queryFn: async () => (await callApi<{ card: CardDto }>("GET", `/api/cards/${target!.cardId}`)).card,
+    queryFn: async () => (await call(cardsApi.get, { params: { id: target!.cardId } })).card,
     enabled: !!target,
   });
   const cite = useMutation({
     mutationFn: async (input: { stepId: string; revisionId: string; page: number; quote: string }) =>
-      (await callApi<{ citation: { stepNumber: number; added: boolean; versionNumber: number } }>("POST", `/api/cards/${target!.cardId}/draft/citations`, input)).citation,
+      (await call(cardsApi.citePage, { params: { id: target!.cardId }, body: input })).citation,
     onSuccess: () => client.invalidateQueries({ queryKey: cardKey }),
   });
 

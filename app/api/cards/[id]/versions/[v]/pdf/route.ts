@@ -1,15 +1,11 @@
-import { requireApiUser } from "@/app/_adapters/session";
-import { getCardVersion, versionParams } from "@/lib/server/cards/read";
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
+import { getCardVersion } from "@/lib/server/cards/read";
 import { fileResponse, fileSlug } from "@/lib/server/file-response";
-import { route } from "@/lib/server/http";
 import { renderCardPdf } from "@/lib/server/pdf/card-pdf";
 
-type Context = { params: Promise<{ id: string; v: string }> };
-
-export const GET = route<Context>(async (_request, { params }) => {
-  const actor = await requireApiUser("cards:view");
-  const { cardId, number } = await versionParams(params);
-  const version = await getCardVersion({ actor, cardId, number });
+export const GET = handle(api.cards.versionPdf, async ({ actor, params: { id, v } }) => {
+  const version = await getCardVersion({ actor, cardId: id, number: v });
   const bytes = await renderCardPdf(version);
   return fileResponse(bytes, { type: "application/pdf", filename: `${fileSlug(version.title, "task-card")}-v${version.number}.pdf` });
 });

@@ -1,0 +1,16 @@
+// The audit endpoints (lib/contracts/endpoint.ts says how one is declared).
+import { auditQuerySchema } from "@/lib/domain/validation/audit";
+import { endpoint, json } from "@/lib/contracts/endpoint";
+import type { JsonObject } from "@/lib/contracts/endpoint";
+
+export const auditApi = {
+  list: endpoint({
+    method: "GET",
+    path: "/api/audit",
+    access: "audit:view",
+    query: auditQuerySchema,
+    answer: json<{ events: JsonObject[] }>(),
+    who: "admin",
+    doc: `200 \`{ "events": [ … ] }\`, newest first; \`kind\`: \`accounts\`, \`classes\`, \`library\`, \`cards\`, \`assignments\`, \`runs\`; \`actor\` part of a name or e-mail; \`from\`, \`to\` dates (both days included); unreadable filters are ignored`,
+  }),
+};

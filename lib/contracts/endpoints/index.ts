@@ -1,0 +1,21 @@
+// Every endpoint, by feature, in the order the README's API table lists them.
+import type { Endpoint } from "@/lib/contracts/endpoint";
+import { accountsApi } from "@/lib/contracts/endpoints/accounts";
+import { auditApi } from "@/lib/contracts/endpoints/audit";
+import { cardsApi } from "@/lib/contracts/endpoints/cards";
+import { classesApi } from "@/lib/contracts/endpoints/classes";
+import { libraryApi } from "@/lib/contracts/endpoints/library";
+import { runsApi } from "@/lib/contracts/endpoints/runs";
+import { sessionApi } from "@/lib/contracts/endpoints/session";
+
+export const api = {
+  session: sessionApi,
+  accounts: accountsApi,
+  classes: classesApi,
+  audit: auditApi,
+  library: libraryApi,
+  cards: cardsApi,
+  runs: runsApi,
+};
+
+export const allEndpoints: Endpoint[] = Object.values(api).flatMap((group) => Object.values(group) as Endpoint[]);
