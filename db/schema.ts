@@ -348,27 +348,6 @@ export const citationRechecks = pgTable(
   ],
 );
 
-export type RevisionComparison = typeof revisionComparisons.$inferSelect;
-export type CitationRecheck = typeof citationRechecks.$inferSelect;
-
-export type CurriculumSubject = typeof curriculumSubjects.$inferSelect;
-export type TaskCard = typeof taskCards.$inferSelect;
-export type TaskCardVersion = typeof taskCardVersions.$inferSelect;
-export type NewTaskCardVersion = typeof taskCardVersions.$inferInsert;
-export type CardCitation = typeof cardCitations.$inferSelect;
-
-export type Manual = typeof manuals.$inferSelect;
-export type Revision = typeof revisions.$inferSelect;
-export type Page = typeof pages.$inferSelect;
-
-export type User = typeof users.$inferSelect;
-export type NewUser = typeof users.$inferInsert;
-export type Class = typeof classes.$inferSelect;
-export type NewClass = typeof classes.$inferInsert;
-export type ClassMember = typeof classMembers.$inferSelect;
-export type AccountToken = typeof accountTokens.$inferSelect;
-export type AuditEvent = typeof auditEvents.$inferSelect;
-
 // ---------------------------------------------------------------- assignments, runs, sign-off
 
 /** An instructor gives a published card version to a class or to students, with a due date. */
@@ -457,7 +436,3 @@ export const signOffs = pgTable("sign_offs", {
   comment: text("comment").notNull().default(""),
 });
 
-export type Assignment = typeof assignments.$inferSelect;
-export type Run = typeof runs.$inferSelect;
-export type RunEventRow = typeof runEvents.$inferSelect;
-export type SignOff = typeof signOffs.$inferSelect;

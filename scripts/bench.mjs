@@ -2,11 +2,10 @@
 // the same preparation as `npm test` (dependencies, PostgreSQL, PDF tools).
 import { rmSync } from "node:fs";
 import path from "node:path";
-import {
-  bin, buildIsStale, ensureChromium, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log, run, service, stopAll,
-  throwawayDatabase, tsx, tsxArgs, waitForHttp,
-  copyPdfAssets,
-} from "./lib.mjs";
+import { bin, log, run, tsx, tsxArgs } from "./steps/shell.mjs";
+import { ensureChromium, ensureNodeModules, ensurePdfTools, ensurePostgres, throwawayDatabase } from "./steps/provision.mjs";
+import { freePort, service, stopAll, waitForHttp } from "./steps/services.mjs";
+import { buildIsStale, copyPdfAssets } from "./steps/build.mjs";
 
 // Benchmarks that measure the API need the real web server.
 const needsWeb = new Set(["search", "reader", "sync"]);

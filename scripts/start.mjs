@@ -3,11 +3,10 @@
 //   --only-migrate  prepare the database and migrate, then stop (npm run db:migrate)
 //   --only-seed     prepare, migrate and seed, then stop (npm run db:seed)
 import path from "node:path";
-import {
-  assertPortFree, bin, buildIsStale, buildServiceWorker, dataDir, ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, localSecret, log,
-  run, startCluster, stopAll, supervise, tsx, tsxArgs, waitForHttp,
-  copyPdfAssets,
-} from "./lib.mjs";
+import { bin, dataDir, localSecret, log, run, tsx, tsxArgs } from "./steps/shell.mjs";
+import { ensureDatabase, ensureNodeModules, ensurePdfTools, ensurePostgres, startCluster } from "./steps/provision.mjs";
+import { assertPortFree, stopAll, supervise, waitForHttp } from "./steps/services.mjs";
+import { buildIsStale, buildServiceWorker, copyPdfAssets } from "./steps/build.mjs";
 
 const args = new Set(process.argv.slice(2));
 const dev = args.has("--dev");

@@ -4,11 +4,10 @@
 // those that need the build; the exit code is non-zero when any stage failed.
 import { existsSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
-import {
-  bin, ensureChromium, ensureNodeModules, ensurePdfTools, ensurePostgres, freePort, log,
-  run, runAsync, stopAll, supervise, throwawayDatabase, tsx, tsxArgs, waitForHttp,
-  buildServiceWorker, copyPdfAssets,
-} from "./lib.mjs";
+import { bin, log, run, runAsync, tsx, tsxArgs } from "./steps/shell.mjs";
+import { ensureChromium, ensureNodeModules, ensurePdfTools, ensurePostgres, throwawayDatabase } from "./steps/provision.mjs";
+import { freePort, stopAll, supervise, waitForHttp } from "./steps/services.mjs";
+import { buildServiceWorker, copyPdfAssets } from "./steps/build.mjs";
 
 const results = [];
 let cluster = null;

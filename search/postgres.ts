@@ -5,7 +5,7 @@
 import { sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db";
 import { getEnv } from "@/lib/server/env";
-import { createLru } from "@/lib/server/lru";
+import { LRUCache } from "lru-cache";
 import type { SearchEngine, SearchFilters, SearchHit, SearchResult } from "./engine";
 import { totalLimit } from "./engine";
 import { markEnd, markStart, snippetToHtml, type ParsedQuery, type QueryWord } from "./query";
@@ -149,9 +149,8 @@ export { revisionsInScope };
  * who may search (the library has no per-user visibility; if it gets some, the key must hold it).
  * HL_SEARCH_CACHE=off turns it off (bench:search measures both).
  */
-const answers = createLru<SearchResult>(500);
-/** Not needed for freshness (the generation is): it only lets old generations' answers go. */
-const answerLifetimeMs = 10 * 60_000;
+/** The lifetime is not needed for freshness (the generation is): it only lets old generations' answers go. */
+const answers = new LRUCache<string, SearchResult>({ max: 500, ttl: 10 * 60_000 });
 
 export async function searchGeneration(): Promise<number> {
   const rows = await getDb().execute<{ n: string }>(sql`select n from search_generation`);
@@ -235,7 +234,7 @@ export const postgresEngine: SearchEngine = {
     const kept = answers.get(key);
     if (kept) return kept;
     const answer = await searchNow(query, filters, page);
-    answers.set(key, Object.freeze(answer), Date.now() + answerLifetimeMs);
+    answers.set(key, Object.freeze(answer));
     return answer;
   },
 };

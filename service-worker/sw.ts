@@ -1,4 +1,4 @@
-// The service worker (bundled by scripts/lib.mjs → buildServiceWorker, served at /sw.js). Serwist
+// The service worker (bundled by scripts/steps/build.mjs → buildServiceWorker, served at /sw.js). Serwist
 // precaches the app shell, the cart pages, fonts and the pdf.js worker, so the cart opens after a
 // reload without network. API answers are never cached here: the cart keeps its data in
 // IndexedDB per user (lib/client/cart/store.ts). At start it sends waiting changes, as Safari has no
@@ -8,17 +8,18 @@ import { sessionUserId } from "@/lib/client/cart/cart";
 import { cartData, lastUser } from "@/lib/client/cart/store";
 import { syncOnce } from "@/lib/client/cart/sync";
 
-declare const __HL_PRECACHE__: PrecacheEntry[];
+// Written in by @serwist/build's injectManifest after `next build` (scripts/steps/build.mjs).
+declare const self: { __SW_MANIFEST: (PrecacheEntry | string)[] | undefined };
 
 interface WorkerScope {
   addEventListener(type: "activate" | "message", listener: (event: { data?: unknown; waitUntil?(p: Promise<unknown>): void }) => void): void;
 }
-const scope = self as unknown as WorkerScope;
+const scope = globalThis as unknown as WorkerScope;
 
 const isPage = (request: Request) => request.mode === "navigate";
 
 const serwist = new Serwist({
-  precacheEntries: __HL_PRECACHE__,
+  precacheEntries: self.__SW_MANIFEST,
   // /cart/run?id=… is the precached /cart/run shell; other parameters (such as Next's _rsc) are
   // different requests.
   precacheOptions: { cleanupOutdatedCaches: true, ignoreURLParametersMatching: [/^id$/, /^q$/] },

@@ -4,7 +4,7 @@
 // be kept until the seal expires. Whether the session still counts is not decided here: the user row
 // (status, session version) is read on every request, so a sign-out elsewhere, a changed password
 // or a deactivated account still ends the session at once.
-import { createLru } from "@/lib/server/lru";
+import { LRUCache } from "lru-cache";
 
 /** The expiry iron writes into a seal (milliseconds, sixth `*` part), or null when it has none. */
 export function sealExpiry(seal: string): number | null {
@@ -25,17 +25,23 @@ export function createSealCache<T extends object>(
   unseal: (seal: string) => Promise<T>,
   { max = 2000, isEmpty }: { max?: number; isEmpty: (data: T) => boolean },
 ): SealCache<T> {
-  const entries = createLru<T>(max);
+  // Each entry lives until its own seal's expiry, on the clock of the call (tests pass their own).
+  let clock = Date.now();
+  const entries = new LRUCache<string, T>({ max, perf: { now: () => clock }, ttlResolution: 0 });
   return {
     get size() {
       return entries.size;
     },
     async unseal(seal, now = Date.now()) {
-      const hit = entries.get(seal, now);
+      clock = now;
+      const hit = entries.get(seal);
       if (hit) return hit;
       const data = await unseal(seal);
       const expires = sealExpiry(seal);
-      if (!isEmpty(data) && expires !== null && expires > now) entries.set(seal, Object.freeze(data), expires);
+      clock = now;
+      // lru-cache counts an entry stale once its age passes its ttl; a seal is dead at its expiry,
+      // so the ttl ends a millisecond before it (and a seal that near its end is not kept).
+      if (!isEmpty(data) && expires !== null && expires - now > 1) entries.set(seal, Object.freeze(data), { ttl: expires - now - 1 });
       return data;
     },
   };
