@@ -4,6 +4,7 @@ import { getDb } from "@/db";
 import { users } from "@/db/schema";
 import { throttlePolicy } from "@/lib/domain/access/throttle";
 import { call, demo, fakeAddress, makeAccount, sessionCookie, signIn } from "../support/http";
+import { sessionCookieName } from "@/lib/server/auth/cookie";
 
 describe("signing in", () => {
   it("answers 200 with the user and a sealed, httpOnly, SameSite=Lax cookie", async () => {
@@ -11,7 +12,7 @@ describe("signing in", () => {
     const response = await call("POST", "/api/session", { json: { email: account.email.toUpperCase(), password: account.password } });
     expect(response.status).toBe(200);
     expect(await response.json()).toEqual({ user: { id: account.id, email: account.email, name: "Pat Rivera", role: "student" } });
-    const setCookie = response.headers.getSetCookie().find((c) => c.startsWith("hangarleaf_session="))!;
+    const setCookie = response.headers.getSetCookie().find((c) => c.startsWith(`${sessionCookieName}=`))!;
     expect(setCookie).toMatch(/HttpOnly/i);
     expect(setCookie).toMatch(/SameSite=Lax/i);
     expect(setCookie).not.toContain(account.id); // sealed, not readable
@@ -95,7 +96,7 @@ describe("signing in", () => {
     expect((await call("GET", "/api/session", { cookie })).status).toBe(200);
     const response = await call("DELETE", "/api/session", { cookie });
     expect(response.status).toBe(204);
-    const cleared = response.headers.getSetCookie().find((c) => c.startsWith("hangarleaf_session="));
+    const cleared = response.headers.getSetCookie().find((c) => c.startsWith(`${sessionCookieName}=`));
     expect(cleared).toMatch(/Max-Age=0|Expires=Thu, 01 Jan 1970/i);
     expect((await call("GET", "/api/session", { cookie })).status).toBe(401);
     expect((await call("GET", "/api/my-work", { cookie })).status).toBe(401);

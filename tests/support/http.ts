@@ -5,6 +5,7 @@ import { getDb } from "@/db";
 import { users } from "@/db/schema";
 import { hashPassword } from "@/lib/server/auth/password";
 import type { Role } from "@/lib/domain/access/permissions";
+import { sessionCookieName } from "@/lib/server/auth/cookie";
 
 export const baseUrl = process.env.HL_BASE_URL ?? "http://localhost:3000";
 export const outboxUrl = process.env.HL_OUTBOX_URL ?? "http://127.0.0.1:2526";
@@ -36,7 +37,7 @@ export async function call(method: string, path: string, options: CallOptions = 
 }
 
 export function sessionCookie(response: Response): string {
-  const cookie = response.headers.getSetCookie().find((c) => c.startsWith("hangarleaf_session="));
+  const cookie = response.headers.getSetCookie().find((c) => c.startsWith(`${sessionCookieName}=`));
   if (!cookie) throw new Error(`no session cookie in the answer (status ${response.status})`);
   return cookie.split(";")[0]!;
 }

@@ -1,4 +1,5 @@
 import { type Page } from "@playwright/test";
+import { escapeRegExp } from "@/lib/domain/escape";
 
 /**
  * The manual reader (/library/[manualId]/[revisionId]/[page]): the drawn pages, the page field,
@@ -86,8 +87,4 @@ export class ManualReaderPage {
   async backToCard() {
     await this.citePanel().getByRole("link", { name: "Back to the card" }).click();
   }
-}
-
-function escapeRegExp(text: string) {
-  return text.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
 }
