@@ -4,7 +4,18 @@ import reactHooks from "eslint-plugin-react-hooks";
 import tseslint from "typescript-eslint";
 
 export default tseslint.config(
-  { ignores: [".next/**", "node_modules/**", ".data/**", "db/migrations/**", "test-results/**", "next-env.d.ts", "public/pdf.worker.min.mjs", "public/standard_fonts/**"] },
+  {
+    ignores: [
+      ".next/**",
+      "node_modules/**",
+      ".data/**",
+      "db/migrations/**",
+      "test-results/**",
+      "next-env.d.ts",
+      "public/pdf.worker.min.mjs",
+      "public/standard_fonts/**",
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
@@ -30,41 +41,76 @@ export default tseslint.config(
   {
     files: ["components/**/*.{ts,tsx}", "app/**/_components/**/*.{ts,tsx}", "lib/client/**/*.ts", "service-worker/**/*.ts"],
     rules: {
-      "no-restricted-imports": ["error", {
-        patterns: [
-          { group: ["@/db", "@/db/*", "drizzle-orm", "drizzle-orm/*", "pg", "pg-boss"], message: "Browser code cannot reach the database: take the data from the API or a server component." },
-          { group: ["server-only", "next/headers", "@/lib/server/*", "@/app/_adapters/*", "@/search/*", "!@/search/query"], message: "A server-only module in browser code." },
-        ],
-      }],
+      "no-restricted-imports": [
+        "error",
+        {
+          patterns: [
+            {
+              group: ["@/db", "@/db/*", "drizzle-orm", "drizzle-orm/*", "pg", "pg-boss"],
+              message: "Browser code cannot reach the database: take the data from the API or a server component.",
+            },
+            {
+              group: ["server-only", "next/headers", "@/lib/server/*", "@/app/_adapters/*", "@/search/*", "!@/search/query"],
+              message: "A server-only module in browser code.",
+            },
+          ],
+        },
+      ],
     },
   },
   {
     files: ["lib/domain/**/*.ts", "lib/contracts/**/*.ts", "search/query.ts"],
     rules: {
-      "no-restricted-imports": ["error", {
-        patterns: [
-          { group: ["@/db", "@/db/*", "drizzle-orm", "drizzle-orm/*", "pg", "pg-boss", "node:*", "server-only"], message: "Pure domain code: no database and no I/O, so it is unit-tested without a server." },
-          { group: ["next", "next/*", "react", "react-dom", "react/*"], message: "Pure domain code: no framework." },
-          { group: ["@/lib/server/*", "@/lib/client/*", "@/app/*", "@/components/*", "@/search/*", "!@/search/query"], message: "Pure domain code imports only pure code (lib/domain, lib/contracts, search/query)." },
-        ],
-      }],
+      "no-restricted-imports": [
+        "error",
+        {
+          patterns: [
+            {
+              group: ["@/db", "@/db/*", "drizzle-orm", "drizzle-orm/*", "pg", "pg-boss", "node:*", "server-only"],
+              message: "Pure domain code: no database and no I/O, so it is unit-tested without a server.",
+            },
+            { group: ["next", "next/*", "react", "react-dom", "react/*"], message: "Pure domain code: no framework." },
+            {
+              group: ["@/lib/server/*", "@/lib/client/*", "@/app/*", "@/components/*", "@/search/*", "!@/search/query"],
+              message: "Pure domain code imports only pure code (lib/domain, lib/contracts, search/query).",
+            },
+          ],
+        },
+      ],
     },
   },
   {
     files: ["lib/server/**/*.ts", "search/**/*.ts", "worker/**/*.ts"],
     rules: {
-      "no-restricted-imports": ["error", {
-        patterns: [
-          { group: ["next", "next/*", "react", "react-dom", "react/*"], message: "Server code runs in the worker and the scripts too: Next belongs in app/_adapters." },
-          { group: ["@/lib/client/*", "@/app/*", "@/components/*"], message: "Server code does not import browser code or routing files." },
-        ],
-      }],
+      "no-restricted-imports": [
+        "error",
+        {
+          patterns: [
+            {
+              group: ["next", "next/*", "react", "react-dom", "react/*"],
+              message: "Server code runs in the worker and the scripts too: Next belongs in app/_adapters.",
+            },
+            {
+              group: ["@/lib/client/*", "@/app/*", "@/components/*"],
+              message: "Server code does not import browser code or routing files.",
+            },
+          ],
+        },
+      ],
     },
   },
   {
     files: ["scripts/**/*.mjs", "server/**/*.mjs"],
     languageOptions: {
-      globals: { console: "readonly", process: "readonly", fetch: "readonly", setTimeout: "readonly", setInterval: "readonly", clearInterval: "readonly", Buffer: "readonly" },
+      globals: {
+        console: "readonly",
+        process: "readonly",
+        fetch: "readonly",
+        setTimeout: "readonly",
+        setInterval: "readonly",
+        clearInterval: "readonly",
+        Buffer: "readonly",
+      },
     },
   },
 );

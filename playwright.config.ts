@@ -21,8 +21,13 @@ export default defineConfig({
     launchOptions: {
       executablePath: chromium,
       args: [
-        "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
-        "--disable-background-networking", "--disable-component-update", "--disable-sync",
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--no-first-run",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
       ],
     },
   },

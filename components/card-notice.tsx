@@ -19,7 +19,9 @@ const meaning: Record<NoticeKind, string> = {
 export function CardNotice({ kind, text }: { kind: NoticeKind; text: string }) {
   return (
     <div role="note" aria-label={`${noticeLabels[kind]}: ${meaning[kind]}`} className={`border-4 ${style[kind]} rounded-md px-4 py-3`}>
-      <p className={`text-center text-lg font-extrabold tracking-widest ${kind === "warning" ? "text-danger" : "text-ink"}`}>{noticeLabels[kind]}</p>
+      <p className={`text-center text-lg font-extrabold tracking-widest ${kind === "warning" ? "text-danger" : "text-ink"}`}>
+        {noticeLabels[kind]}
+      </p>
       <p className="whitespace-pre-line font-semibold">{text}</p>
     </div>
   );

@@ -38,7 +38,8 @@ export function CardView({ version }: { version: CardVersionDto }) {
     <article className="flex flex-col gap-5" aria-label={`Task card ${version.title}`}>
       <header className="flex flex-col gap-1">
         <p className="text-sm font-bold uppercase tracking-wider text-ink-soft">
-          Task card · version {version.number} · {version.status === "published" ? `published ${version.publishedAt?.slice(0, 10) ?? ""}` : "draft, not yet for use"}
+          Task card · version {version.number} ·{" "}
+          {version.status === "published" ? `published ${version.publishedAt?.slice(0, 10) ?? ""}` : "draft, not yet for use"}
         </p>
         <h2 className="text-2xl">{version.title || "Untitled task card"}</h2>
         {facts.length ? <p className="text-ink-soft">{facts.join(" · ")}</p> : null}
@@ -57,7 +58,11 @@ export function CardView({ version }: { version: CardVersionDto }) {
               {step.timerMinutes ? <span className="badge bg-teal-pale text-teal-dark">Timer {step.timerMinutes} min</span> : null}
             </div>
             {step.underRecheck ? (
-              <p role="note" aria-label="Recheck pending" className="rounded-md border-4 border-dashed border-deck bg-teal-pale px-4 py-3 font-semibold">
+              <p
+                role="note"
+                aria-label="Recheck pending"
+                className="rounded-md border-4 border-dashed border-deck bg-teal-pale px-4 py-3 font-semibold"
+              >
                 A newer revision of the manual changed a page this step cites. Your instructor is rechecking this step: work from the
                 current revision and ask your instructor before you go on.
               </p>
@@ -79,7 +84,10 @@ export function CardView({ version }: { version: CardVersionDto }) {
                 <ul className="flex flex-col gap-1">
                   {step.references.map((r) => (
                     <li key={`${r.revisionId}-${r.page}`} className="flex flex-wrap items-center gap-2">
-                      <Link href={`/library/${r.manualId}/${r.revisionId}/${r.page}${r.quote ? `?q=${encodeURIComponent(r.quote)}` : ""}`} className="inline-flex min-h-11 items-center font-semibold">
+                      <Link
+                        href={`/library/${r.manualId}/${r.revisionId}/${r.page}${r.quote ? `?q=${encodeURIComponent(r.quote)}` : ""}`}
+                        className="inline-flex min-h-11 items-center font-semibold"
+                      >
                         {r.manualTitle}, {r.revisionLabel}, page {r.page}
                       </Link>
                       {r.current ? null : <span className="badge bg-danger-pale text-danger">superseded revision</span>}
@@ -91,7 +99,9 @@ export function CardView({ version }: { version: CardVersionDto }) {
             ) : null}
             {step.calculator ? (
               <details className="rounded-md border-2 border-line p-3">
-                <summary className="min-h-11 cursor-pointer py-2 font-semibold">{calculators[step.calculator].title}: open the calculator</summary>
+                <summary className="min-h-11 cursor-pointer py-2 font-semibold">
+                  {calculators[step.calculator].title}: open the calculator
+                </summary>
                 <CalculatorPanel slug={step.calculator} headingLevel={4} />
               </details>
             ) : null}

@@ -13,13 +13,13 @@ function subscribe(onChange: () => void) {
 
 /** Always on screen: whether this laptop reaches the network. The cart runner adds its waiting changes here. */
 export function ConnectionStatus() {
-  const online = useSyncExternalStore(subscribe, () => navigator.onLine, () => true);
+  const online = useSyncExternalStore(
+    subscribe,
+    () => navigator.onLine,
+    () => true,
+  );
   return (
-    <span
-      role="status"
-      aria-live="polite"
-      className={`badge ${online ? "bg-ok-pale text-ok" : "bg-amber-pale text-ink"}`}
-    >
+    <span role="status" aria-live="polite" className={`badge ${online ? "bg-ok-pale text-ok" : "bg-amber-pale text-ink"}`}>
       {online ? "Online" : "Offline"}
     </span>
   );

@@ -19,7 +19,11 @@ export function DataTable<T>({ table, empty, describedBy }: { table: Table<T>; e
               return (
                 <th key={header.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}>
                   {header.column.getCanSort() ? (
-                    <button type="button" className="inline-flex min-h-11 items-center gap-1 font-bold uppercase" onClick={header.column.getToggleSortingHandler()}>
+                    <button
+                      type="button"
+                      className="inline-flex min-h-11 items-center gap-1 font-bold uppercase"
+                      onClick={header.column.getToggleSortingHandler()}
+                    >
                       {flexRender(header.column.columnDef.header, header.getContext())}
                       <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
                     </button>

@@ -5,7 +5,19 @@ import { judgeValue, type Limit } from "@/lib/domain/calc/limits";
 import { dimensionOf, unitLabel, unitsOf } from "@/lib/domain/calc/units";
 
 /** A measured value judged against its limits as it is typed, in any unit of the same kind. */
-export function LimitCheckField({ id, label, limit, value, onChange }: { id?: string; label: string; limit: Limit; value?: string; onChange?: (v: string) => void }) {
+export function LimitCheckField({
+  id,
+  label,
+  limit,
+  value,
+  onChange,
+}: {
+  id?: string;
+  label: string;
+  limit: Limit;
+  value?: string;
+  onChange?: (v: string) => void;
+}) {
   const ownId = useId();
   const inputId = id ?? ownId;
   const [own, setOwn] = useState("");
@@ -13,8 +25,7 @@ export function LimitCheckField({ id, label, limit, value, onChange }: { id?: st
   const dimension = dimensionOf(limit.unit);
   const other = dimension ? unitsOf(dimension).find((u) => u !== limit.unit) : undefined;
   const judgement = text.trim() ? judgeValue(text, limit) : null;
-  const tone =
-    judgement?.status === "in" ? "notice-ok" : judgement?.status === "out" ? "notice-error" : judgement ? "notice-error" : "";
+  const tone = judgement?.status === "in" ? "notice-ok" : judgement?.status === "out" ? "notice-error" : judgement ? "notice-error" : "";
   return (
     <div className="field">
       <label htmlFor={inputId} className="label">

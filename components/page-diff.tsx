@@ -4,7 +4,17 @@ import { diffWords } from "diff";
  * Two page texts side by side, the words that differ marked: struck through on the old page,
  * underlined on the new one. Rendered as text, never as HTML.
  */
-export function PageDiff({ oldTitle, newTitle, oldText, newText }: { oldTitle: string; newTitle: string; oldText: string; newText: string | null }) {
+export function PageDiff({
+  oldTitle,
+  newTitle,
+  oldText,
+  newText,
+}: {
+  oldTitle: string;
+  newTitle: string;
+  oldText: string;
+  newText: string | null;
+}) {
   const parts = newText === null ? [] : diffWords(oldText, newText);
   return (
     <div className="grid gap-4 md:grid-cols-2">
@@ -15,7 +25,9 @@ export function PageDiff({ oldTitle, newTitle, oldText, newText }: { oldTitle: s
             ? oldText
             : parts.map((p, i) =>
                 p.added ? null : p.removed ? (
-                  <del key={i} className="bg-danger-pale text-danger decoration-2">{p.value}</del>
+                  <del key={i} className="bg-danger-pale text-danger decoration-2">
+                    {p.value}
+                  </del>
                 ) : (
                   <span key={i}>{p.value}</span>
                 ),
@@ -30,7 +42,9 @@ export function PageDiff({ oldTitle, newTitle, oldText, newText }: { oldTitle: s
           <p className="whitespace-pre-line leading-relaxed">
             {parts.map((p, i) =>
               p.removed ? null : p.added ? (
-                <ins key={i} className="bg-ok-pale font-semibold text-ok decoration-2">{p.value}</ins>
+                <ins key={i} className="bg-ok-pale font-semibold text-ok decoration-2">
+                  {p.value}
+                </ins>
               ) : (
                 <span key={i}>{p.value}</span>
               ),

@@ -26,10 +26,14 @@ export function prefetchFirstRanges(url: string, size: number) {
   if (size <= 0) return;
   for (const [begin, end] of firstRanges(size)) {
     const k = key(url, begin, end);
-    if (!cache.has(k)) cache.set(k, fetchRange(url, begin, end).catch((error: unknown) => {
-      cache.delete(k);
-      throw error;
-    }));
+    if (!cache.has(k))
+      cache.set(
+        k,
+        fetchRange(url, begin, end).catch((error: unknown) => {
+          cache.delete(k);
+          throw error;
+        }),
+      );
   }
 }
 

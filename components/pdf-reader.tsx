@@ -30,8 +30,6 @@ if (typeof window !== "undefined") readerWorker();
 const gap = 16;
 const nearby = 2; // pages drawn above and below the visible ones
 
-
-
 export interface PdfReaderProps {
   fileUrl: string;
   /** Bytes of the file: with it, every read is an HTTP range request of our own. */
@@ -139,7 +137,13 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
     [fileUrl, fileSize],
   );
   const options = useMemo(
-    () => ({ disableAutoFetch: true, disableStream: true, rangeChunkSize: chunkSize, standardFontDataUrl: "/standard_fonts/", worker: readerWorker() }),
+    () => ({
+      disableAutoFetch: true,
+      disableStream: true,
+      rangeChunkSize: chunkSize,
+      standardFontDataUrl: "/standard_fonts/",
+      worker: readerWorker(),
+    }),
     [],
   );
   const pattern = useMemo(
@@ -230,7 +234,12 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
         <button type="button" className="btn btn-secondary btn-small" onClick={() => scrollToPage(current - 1)} disabled={current <= 1}>
           ← Previous page
         </button>
-        <button type="button" className="btn btn-secondary btn-small" onClick={() => scrollToPage(current + 1)} disabled={current >= pageCount}>
+        <button
+          type="button"
+          className="btn btn-secondary btn-small"
+          onClick={() => scrollToPage(current + 1)}
+          disabled={current >= pageCount}
+        >
           Next page →
         </button>
         <form
@@ -241,77 +250,115 @@ export function PdfReader({ fileUrl, fileSize, pageCount, initialPage, marks, pa
             if (Number.isInteger(n)) scrollToPage(n);
           }}
         >
-          <label htmlFor="reader-go" className="label">Page</label>
+          <label htmlFor="reader-go" className="label">
+            Page
+          </label>
           <input id="reader-go" className="input w-24" inputMode="numeric" value={goTo} onChange={(e) => setGoTo(e.target.value)} />
           <span>of {pageCount}</span>
-          <button type="submit" className="btn btn-secondary btn-small">Go</button>
+          <button type="submit" className="btn btn-secondary btn-small">
+            Go
+          </button>
         </form>
         <span className="ml-auto flex items-center gap-2">
-          <button type="button" className="btn btn-secondary btn-small" aria-label="Zoom out" onClick={() => { setFitWidth(false); setZoom((z) => Math.max(0.5, z - 0.25)); }}>−</button>
-          <span aria-live="polite" className="min-w-16 text-center">{fitWidth ? "Fit" : `${Math.round(zoom * 100)} %`}</span>
-          <button type="button" className="btn btn-secondary btn-small" aria-label="Zoom in" onClick={() => { setFitWidth(false); setZoom((z) => Math.min(3, z + 0.25)); }}>+</button>
-          <button type="button" className="btn btn-secondary btn-small" aria-pressed={fitWidth} onClick={() => setFitWidth(true)}>Fit width</button>
+          <button
+            type="button"
+            className="btn btn-secondary btn-small"
+            aria-label="Zoom out"
+            onClick={() => {
+              setFitWidth(false);
+              setZoom((z) => Math.max(0.5, z - 0.25));
+            }}
+          >
+            −
+          </button>
+          <span aria-live="polite" className="min-w-16 text-center">
+            {fitWidth ? "Fit" : `${Math.round(zoom * 100)} %`}
+          </span>
+          <button
+            type="button"
+            className="btn btn-secondary btn-small"
+            aria-label="Zoom in"
+            onClick={() => {
+              setFitWidth(false);
+              setZoom((z) => Math.min(3, z + 0.25));
+            }}
+          >
+            +
+          </button>
+          <button type="button" className="btn btn-secondary btn-small" aria-pressed={fitWidth} onClick={() => setFitWidth(true)}>
+            Fit width
+          </button>
         </span>
       </div>
-      {error ? <p className="notice-error" role="alert">{error}</p> : null}
+      {error ? (
+        <p className="notice-error" role="alert">
+          {error}
+        </p>
+      ) : null}
       <div className="flex gap-3">
-      {firstPainted ? <Thumbnails base={thumbnailBase} count={pageCount} current={current} onPick={scrollToPage} /> : <div aria-hidden="true" className="hidden w-36 shrink-0 lg:block" />}
-      <div
-        ref={scroller}
-        onScroll={onScroll}
-        tabIndex={0}
-        aria-label={`PDF pages, page ${current} of ${pageCount}`}
-        className="relative h-[75vh] min-w-0 flex-1 overflow-auto rounded border border-line bg-[#d9dde2] p-4"
-      >
-        <Document
-          file={file}
-          options={options}
-          loading={<p role="status">Opening the PDF…</p>}
-          onLoadError={() => setError("The PDF could not be opened. Check the connection and reload.")}
-          onLoadSuccess={async (doc) => {
-            const first = await doc.getPage(Math.min(initialPage, doc.numPages));
-            const viewport = first.getViewport({ scale: 1 });
-            setAspect(viewport.height / viewport.width);
-            if (!jumped.current) {
-              jumped.current = true;
-              requestAnimationFrame(() => scrollToPage(initialPage));
-            }
-          }}
+        {firstPainted ? (
+          <Thumbnails base={thumbnailBase} count={pageCount} current={current} onPick={scrollToPage} />
+        ) : (
+          <div aria-hidden="true" className="hidden w-36 shrink-0 lg:block" />
+        )}
+        <div
+          ref={scroller}
+          onScroll={onScroll}
+          tabIndex={0}
+          aria-label={`PDF pages, page ${current} of ${pageCount}`}
+          className="relative h-[75vh] min-w-0 flex-1 overflow-auto rounded border border-line bg-[#d9dde2] p-4"
         >
-          <div style={{ height: pageCount * (pageHeight + gap) }} className="relative">
-            {[...visible].filter((n) => firstPainted || n === current).map((n) => (
-              <div
-                key={n}
-                data-page={n}
-                className="absolute left-1/2 -translate-x-1/2 bg-white shadow"
-                style={{ top: (n - 1) * (pageHeight + gap), width: pageWidth, height: pageHeight }}
-              >
-                <Page
-                  pageNumber={n}
-                  width={pageWidth}
-                  renderAnnotationLayer={false}
-                  renderTextLayer
-                  // react-pdf puts this into the text layer as HTML: the PDF's text is escaped first.
-                  customTextRenderer={({ str }) => {
-                    const safe = escapeHtml(str);
-                    return pattern ? safe.replace(pattern, (m) => `<mark>${m}</mark>`) : safe;
-                  }}
-                  loading={<span className="sr-only">Drawing page {n}…</span>}
-                  onRenderSuccess={() => {
-                    afterNextPaint(() => {
-                      // The page asked for is on screen: a mark for bench:reader and any browser's
-                      // performance panel (a test polling the canvas notices it later).
-                      if (n === initialPage && !performance.getEntriesByName(pagePaintedMark).length) performance.mark(pagePaintedMark);
-                      setFirstPainted(true);
-                    });
-                  }}
-                  onRenderError={() => setFirstPainted(true)}
-                />
-              </div>
-            ))}
-          </div>
-        </Document>
-      </div>
+          <Document
+            file={file}
+            options={options}
+            loading={<p role="status">Opening the PDF…</p>}
+            onLoadError={() => setError("The PDF could not be opened. Check the connection and reload.")}
+            onLoadSuccess={async (doc) => {
+              const first = await doc.getPage(Math.min(initialPage, doc.numPages));
+              const viewport = first.getViewport({ scale: 1 });
+              setAspect(viewport.height / viewport.width);
+              if (!jumped.current) {
+                jumped.current = true;
+                requestAnimationFrame(() => scrollToPage(initialPage));
+              }
+            }}
+          >
+            <div style={{ height: pageCount * (pageHeight + gap) }} className="relative">
+              {[...visible]
+                .filter((n) => firstPainted || n === current)
+                .map((n) => (
+                  <div
+                    key={n}
+                    data-page={n}
+                    className="absolute left-1/2 -translate-x-1/2 bg-white shadow"
+                    style={{ top: (n - 1) * (pageHeight + gap), width: pageWidth, height: pageHeight }}
+                  >
+                    <Page
+                      pageNumber={n}
+                      width={pageWidth}
+                      renderAnnotationLayer={false}
+                      renderTextLayer
+                      // react-pdf puts this into the text layer as HTML: the PDF's text is escaped first.
+                      customTextRenderer={({ str }) => {
+                        const safe = escapeHtml(str);
+                        return pattern ? safe.replace(pattern, (m) => `<mark>${m}</mark>`) : safe;
+                      }}
+                      loading={<span className="sr-only">Drawing page {n}…</span>}
+                      onRenderSuccess={() => {
+                        afterNextPaint(() => {
+                          // The page asked for is on screen: a mark for bench:reader and any browser's
+                          // performance panel (a test polling the canvas notices it later).
+                          if (n === initialPage && !performance.getEntriesByName(pagePaintedMark).length) performance.mark(pagePaintedMark);
+                          setFirstPainted(true);
+                        });
+                      }}
+                      onRenderError={() => setFirstPainted(true)}
+                    />
+                  </div>
+                ))}
+            </div>
+          </Document>
+        </div>
       </div>
     </div>
   );

@@ -27,9 +27,16 @@ export function SignOutButton() {
           .catch(() => lastUser().catch(() => undefined));
         if (user) {
           const data = cartData(user.id);
-          await syncer(data).now().catch(() => null);
+          await syncer(data)
+            .now()
+            .catch(() => null);
           const waiting = (await data.pending()).length + (await data.pendingPhotos()).length;
-          if (waiting && !window.confirm(`${waiting} ${waiting === 1 ? "change has" : "changes have"} not reached the school yet. Signing out now deletes ${waiting === 1 ? "it" : "them"} from this laptop. Sign out anyway?`)) {
+          if (
+            waiting &&
+            !window.confirm(
+              `${waiting} ${waiting === 1 ? "change has" : "changes have"} not reached the school yet. Signing out now deletes ${waiting === 1 ? "it" : "them"} from this laptop. Sign out anyway?`,
+            )
+          ) {
             setBusy(false);
             return;
           }

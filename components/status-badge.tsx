@@ -31,8 +31,16 @@ const looks = {
   run: {
     not_started: { label: "Not started", tone: "bg-panel text-ink border border-ink-soft", on: { "run-page": { tone: teal } } },
     in_progress: { label: "In progress", tone: teal },
-    returned: { label: "Returned to you", tone: danger, on: { "run-page": { label: "Returned: see your instructor's comment" }, review: { label: "Returned" } } },
-    submitted: { label: "Handed in", tone: amber, on: { "run-page": { label: "Handed in: waiting for your instructor", tone: teal }, review: { label: "Waiting for sign-off" } } },
+    returned: {
+      label: "Returned to you",
+      tone: danger,
+      on: { "run-page": { label: "Returned: see your instructor's comment" }, review: { label: "Returned" } },
+    },
+    submitted: {
+      label: "Handed in",
+      tone: amber,
+      on: { "run-page": { label: "Handed in: waiting for your instructor", tone: teal }, review: { label: "Waiting for sign-off" } },
+    },
     signed_off: { label: "Signed off", tone: ok },
     overdue: { label: "Overdue", tone: "bg-danger text-white" },
   } satisfies Record<RunStatus | "overdue", Entry>,
@@ -84,7 +92,15 @@ export function statusesOf<K extends StatusKind>(kind: K): StatusOf<K>[] {
  * A status as a badge. `children` replace the label where a screen adds to it ("Published v3",
  * "Changed: 4"); `as="li"` for a list of badges.
  */
-export function StatusBadge<K extends StatusKind>({ kind, status, screen, as: Tag = "span", className, children, "data-testid": testId }: {
+export function StatusBadge<K extends StatusKind>({
+  kind,
+  status,
+  screen,
+  as: Tag = "span",
+  className,
+  children,
+  "data-testid": testId,
+}: {
   kind: K;
   status: StatusOf<K>;
   screen?: StatusScreen;

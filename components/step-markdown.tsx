@@ -24,7 +24,11 @@ export function StepMarkdown({ text }: { text: string }) {
         components={{
           a: ({ href, children }) =>
             href ? (
-              <a href={href} rel="noopener noreferrer nofollow" target={href.startsWith("/") || href.startsWith("#") ? undefined : "_blank"}>
+              <a
+                href={href}
+                rel="noopener noreferrer nofollow"
+                target={href.startsWith("/") || href.startsWith("#") ? undefined : "_blank"}
+              >
                 {children}
               </a>
             ) : (

@@ -29,7 +29,12 @@ export function EmptyRow({ columns, children }: { columns: number; children: Rea
  * `empty` a line saying so when there are no rows. A column given as false is left out, for
  * columns only some roles see.
  */
-export function Table<T>({ columns, rows, rowKey, empty }: {
+export function Table<T>({
+  columns,
+  rows,
+  rowKey,
+  empty,
+}: {
   columns: readonly (TableColumn<T> | false)[];
   rows: readonly T[];
   rowKey: (row: T, index: number) => string | number;

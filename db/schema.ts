@@ -1,6 +1,21 @@
 import { sql } from "drizzle-orm";
 import {
-  bigint, boolean, check, customType, date, index, integer, jsonb, pgEnum, pgTable, primaryKey, real, text, timestamp, uniqueIndex, uuid,
+  bigint,
+  boolean,
+  check,
+  customType,
+  date,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  primaryKey,
+  real,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
   type AnyPgColumn,
 } from "drizzle-orm/pg-core";
 import { documentTypes, revisionStatuses, roles, runStatuses, userStatuses } from "@/lib/domain/vocabulary";
@@ -11,7 +26,10 @@ export const tokenPurpose = pgEnum("token_purpose", ["invitation", "password_res
 
 const timestamps = {
   createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
-  updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow().$onUpdate(() => new Date()),
+  updatedAt: timestamp("updated_at", { withTimezone: true })
+    .notNull()
+    .defaultNow()
+    .$onUpdate(() => new Date()),
 };
 
 export const users = pgTable(
@@ -49,8 +67,12 @@ export const classes = pgTable(
 export const classMembers = pgTable(
   "class_members",
   {
-    classId: uuid("class_id").notNull().references(() => classes.id, { onDelete: "cascade" }),
-    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    classId: uuid("class_id")
+      .notNull()
+      .references(() => classes.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
     ...timestamps,
   },
   (t) => [primaryKey({ columns: [t.classId, t.userId] }), index("class_members_user_idx").on(t.userId)],
@@ -60,7 +82,9 @@ export const accountTokens = pgTable(
   "account_tokens",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
     purpose: tokenPurpose("purpose").notNull(),
     // Only the SHA-256 of the token is stored: a copy of the database opens no accounts.
     tokenHash: text("token_hash").notNull(),
@@ -79,7 +103,9 @@ export const userSessions = pgTable(
   "user_sessions",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
     ...timestamps,
   },
@@ -103,7 +129,10 @@ export const auditEvents = pgTable(
     action: text("action").notNull(),
     subjectType: text("subject_type").notNull(),
     subjectId: text("subject_id"),
-    details: jsonb("details").$type<Record<string, unknown>>().notNull().default(sql`'{}'::jsonb`),
+    details: jsonb("details")
+      .$type<Record<string, unknown>>()
+      .notNull()
+      .default(sql`'{}'::jsonb`),
     ...timestamps,
   },
   (t) => [index("audit_events_created_idx").on(t.createdAt)],
@@ -119,9 +148,15 @@ export const manuals = pgTable(
     title: text("title").notNull(),
     documentType: documentType("document_type").notNull(),
     // Models the document applies to (aircraft, engine, propeller or component), as written on it.
-    applicability: text("applicability").array().notNull().default(sql`'{}'::text[]`),
+    applicability: text("applicability")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     // ATA chapters the document covers, two digits ("05", "32", "74").
-    ataChapters: text("ata_chapters").array().notNull().default(sql`'{}'::text[]`),
+    ataChapters: text("ata_chapters")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     // Set only when a revision is ready; never points at a queued, processing or failed one.
     currentRevisionId: uuid("current_revision_id").references((): AnyPgColumn => revisions.id, { onDelete: "set null" }),
     // A librarian's choice: carts store the whole current PDF, not only the pages cards cite.
@@ -136,7 +171,9 @@ export const revisions = pgTable(
   "revisions",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    manualId: uuid("manual_id").notNull().references(() => manuals.id, { onDelete: "cascade" }),
+    manualId: uuid("manual_id")
+      .notNull()
+      .references(() => manuals.id, { onDelete: "cascade" }),
     label: text("label").notNull(),
     revisionDate: date("revision_date").notNull(),
     status: revisionStatus("status").notNull().default("queued"),
@@ -160,10 +197,7 @@ export const revisions = pgTable(
     supersededAt: timestamp("superseded_at", { withTimezone: true }),
     ...timestamps,
   },
-  (t) => [
-    uniqueIndex("revisions_manual_label_key").on(t.manualId, t.label),
-    index("revisions_status_idx").on(t.status),
-  ],
+  (t) => [uniqueIndex("revisions_manual_label_key").on(t.manualId, t.label), index("revisions_status_idx").on(t.status)],
 );
 
 const tsvector = customType<{ data: string }>({ dataType: () => "tsvector" });
@@ -171,7 +205,9 @@ const tsvector = customType<{ data: string }>({ dataType: () => "tsvector" });
 export const pages = pgTable(
   "pages",
   {
-    revisionId: uuid("revision_id").notNull().references(() => revisions.id, { onDelete: "cascade" }),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
     pageNumber: integer("page_number").notNull(),
     text: text("text").notNull(),
     // The first line of text on the page: running headings and titles, weighed higher by search.
@@ -239,8 +275,12 @@ export const taskCards = pgTable("task_cards", {
 export const cardCoauthors = pgTable(
   "card_coauthors",
   {
-    cardId: uuid("card_id").notNull().references(() => taskCards.id, { onDelete: "cascade" }),
-    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    cardId: uuid("card_id")
+      .notNull()
+      .references(() => taskCards.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
     ...timestamps,
   },
   (t) => [primaryKey({ columns: [t.cardId, t.userId] }), index("card_coauthors_user_idx").on(t.userId)],
@@ -254,19 +294,35 @@ export const taskCardVersions = pgTable(
   "task_card_versions",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    cardId: uuid("card_id").notNull().references(() => taskCards.id, { onDelete: "cascade" }),
+    cardId: uuid("card_id")
+      .notNull()
+      .references(() => taskCards.id, { onDelete: "cascade" }),
     number: integer("number").notNull(),
     status: cardVersionStatus("status").notNull().default("draft"),
     title: text("title").notNull(),
-    applicability: text("applicability").array().notNull().default(sql`'{}'::text[]`),
+    applicability: text("applicability")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     ataChapter: text("ata_chapter").notNull().default(""),
     subjectId: uuid("subject_id").references(() => curriculumSubjects.id, { onDelete: "restrict" }),
     estimatedMinutes: integer("estimated_minutes"),
-    tools: text("tools").array().notNull().default(sql`'{}'::text[]`),
-    consumables: text("consumables").array().notNull().default(sql`'{}'::text[]`),
-    protectiveEquipment: text("protective_equipment").array().notNull().default(sql`'{}'::text[]`),
+    tools: text("tools")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
+    consumables: text("consumables")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
+    protectiveEquipment: text("protective_equipment")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     // The ordered steps, as validated by lib/domain/validation/cards.ts (stepSchema).
-    steps: jsonb("steps").notNull().default(sql`'[]'::jsonb`),
+    steps: jsonb("steps")
+      .notNull()
+      .default(sql`'[]'::jsonb`),
     // Bumped on every save of a draft: a save made from an older copy is refused (409), so two
     // editors never overwrite each other without knowing.
     editCount: integer("edit_count").notNull().default(0),
@@ -278,7 +334,9 @@ export const taskCardVersions = pgTable(
   (t) => [
     uniqueIndex("task_card_versions_card_number_key").on(t.cardId, t.number),
     // At most one draft per card.
-    uniqueIndex("task_card_versions_one_draft_key").on(t.cardId).where(sql`status = 'draft'`),
+    uniqueIndex("task_card_versions_one_draft_key")
+      .on(t.cardId)
+      .where(sql`status = 'draft'`),
     index("task_card_versions_subject_idx").on(t.subjectId),
   ],
 );
@@ -291,11 +349,17 @@ export const cardCitations = pgTable(
   "card_citations",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    versionId: uuid("version_id").notNull().references(() => taskCardVersions.id, { onDelete: "cascade" }),
+    versionId: uuid("version_id")
+      .notNull()
+      .references(() => taskCardVersions.id, { onDelete: "cascade" }),
     stepId: uuid("step_id").notNull(),
     stepNumber: integer("step_number").notNull(),
-    manualId: uuid("manual_id").notNull().references(() => manuals.id, { onDelete: "restrict" }),
-    revisionId: uuid("revision_id").notNull().references(() => revisions.id, { onDelete: "restrict" }),
+    manualId: uuid("manual_id")
+      .notNull()
+      .references(() => manuals.id, { onDelete: "restrict" }),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "restrict" }),
     pageNumber: integer("page_number").notNull(),
     quote: text("quote").notNull().default(""),
     ...timestamps,
@@ -305,7 +369,9 @@ export const cardCitations = pgTable(
 
 /** A ready revision compared page by page with the one before it (lib/domain/revisions/compare.ts). */
 export const revisionComparisons = pgTable("revision_comparisons", {
-  revisionId: uuid("revision_id").primaryKey().references(() => revisions.id, { onDelete: "cascade" }),
+  revisionId: uuid("revision_id")
+    .primaryKey()
+    .references(() => revisions.id, { onDelete: "cascade" }),
   previousRevisionId: uuid("previous_revision_id").references(() => revisions.id, { onDelete: "cascade" }),
   // [{ status, oldPage, newPage, similarity }] in the order of the new revision's pages.
   pages: jsonb("pages").notNull(),
@@ -324,10 +390,18 @@ export const citationRechecks = pgTable(
   "citation_rechecks",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    revisionId: uuid("revision_id").notNull().references(() => revisions.id, { onDelete: "cascade" }),
-    previousRevisionId: uuid("previous_revision_id").notNull().references(() => revisions.id, { onDelete: "cascade" }),
-    cardId: uuid("card_id").notNull().references(() => taskCards.id, { onDelete: "cascade" }),
-    versionId: uuid("version_id").notNull().references(() => taskCardVersions.id, { onDelete: "cascade" }),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
+    previousRevisionId: uuid("previous_revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
+    cardId: uuid("card_id")
+      .notNull()
+      .references(() => taskCards.id, { onDelete: "cascade" }),
+    versionId: uuid("version_id")
+      .notNull()
+      .references(() => taskCardVersions.id, { onDelete: "cascade" }),
     stepId: uuid("step_id").notNull(),
     stepNumber: integer("step_number").notNull(),
     oldPage: integer("old_page").notNull(),
@@ -355,9 +429,13 @@ export const assignments = pgTable(
   "assignments",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    cardId: uuid("card_id").notNull().references(() => taskCards.id, { onDelete: "restrict" }),
+    cardId: uuid("card_id")
+      .notNull()
+      .references(() => taskCards.id, { onDelete: "restrict" }),
     // Pinned: a run always follows the version it was assigned, even after a newer one is published.
-    versionId: uuid("version_id").notNull().references(() => taskCardVersions.id, { onDelete: "restrict" }),
+    versionId: uuid("version_id")
+      .notNull()
+      .references(() => taskCardVersions.id, { onDelete: "restrict" }),
     classId: uuid("class_id").references(() => classes.id, { onDelete: "set null" }),
     dueOn: date("due_on", { mode: "string" }),
     note: text("note").notNull().default(""),
@@ -377,9 +455,15 @@ export const runs = pgTable(
   "runs",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    assignmentId: uuid("assignment_id").notNull().references(() => assignments.id, { onDelete: "restrict" }),
-    studentId: uuid("student_id").notNull().references(() => users.id, { onDelete: "restrict" }),
-    versionId: uuid("version_id").notNull().references(() => taskCardVersions.id, { onDelete: "restrict" }),
+    assignmentId: uuid("assignment_id")
+      .notNull()
+      .references(() => assignments.id, { onDelete: "restrict" }),
+    studentId: uuid("student_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    versionId: uuid("version_id")
+      .notNull()
+      .references(() => taskCardVersions.id, { onDelete: "restrict" }),
     status: runStatus("status").notNull().default("not_started"),
     startedAt: timestamp("started_at", { withTimezone: true }),
     submittedAt: timestamp("submitted_at", { withTimezone: true }),
@@ -398,11 +482,17 @@ export const runEvents = pgTable(
   "run_events",
   {
     id: uuid("id").primaryKey(),
-    runId: uuid("run_id").notNull().references(() => runs.id, { onDelete: "restrict" }),
-    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "restrict" }),
+    runId: uuid("run_id")
+      .notNull()
+      .references(() => runs.id, { onDelete: "restrict" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
     type: text("type").notNull(),
     stepId: uuid("step_id"),
-    payload: jsonb("payload").notNull().default(sql`'{}'::jsonb`),
+    payload: jsonb("payload")
+      .notNull()
+      .default(sql`'{}'::jsonb`),
     clientTime: timestamp("client_time", { withTimezone: true }).notNull(),
     serverTime: timestamp("server_time", { withTimezone: true }).notNull().defaultNow(),
   },
@@ -412,7 +502,9 @@ export const runEvents = pgTable(
 /** A photo of the work, stored through the object store; the id is made on the cart (idempotent upload). */
 export const runPhotos = pgTable("run_photos", {
   id: uuid("id").primaryKey(),
-  runId: uuid("run_id").notNull().references(() => runs.id, { onDelete: "restrict" }),
+  runId: uuid("run_id")
+    .notNull()
+    .references(() => runs.id, { onDelete: "restrict" }),
   stepId: uuid("step_id"),
   contentType: text("content_type").notNull(),
   bytes: integer("bytes").notNull(),
@@ -426,13 +518,19 @@ export const runPhotos = pgTable("run_photos", {
  */
 export const signOffs = pgTable("sign_offs", {
   id: uuid("id").primaryKey().defaultRandom(),
-  runId: uuid("run_id").notNull().unique().references(() => runs.id, { onDelete: "restrict" }),
-  instructorId: uuid("instructor_id").notNull().references(() => users.id, { onDelete: "restrict" }),
+  runId: uuid("run_id")
+    .notNull()
+    .unique()
+    .references(() => runs.id, { onDelete: "restrict" }),
+  instructorId: uuid("instructor_id")
+    .notNull()
+    .references(() => users.id, { onDelete: "restrict" }),
   signedAt: timestamp("signed_at", { withTimezone: true }).notNull().defaultNow(),
-  versionId: uuid("version_id").notNull().references(() => taskCardVersions.id, { onDelete: "restrict" }),
+  versionId: uuid("version_id")
+    .notNull()
+    .references(() => taskCardVersions.id, { onDelete: "restrict" }),
   // [{ revisionId, manualTitle, label, pages }] as cited by the version when it was signed off.
   revisionsCited: jsonb("revisions_cited").notNull(),
   actualMinutes: integer("actual_minutes").notNull().default(0),
   comment: text("comment").notNull().default(""),
 });
-

@@ -47,7 +47,12 @@ async function main() {
   const existing = await db
     .select({ email: users.email })
     .from(users)
-    .where(inArray(users.email, demoUsers.map((u) => u.email)));
+    .where(
+      inArray(
+        users.email,
+        demoUsers.map((u) => u.email),
+      ),
+    );
   const known = new Set(existing.map((u) => u.email));
   const missing = demoUsers.filter((u) => !known.has(u.email));
   if (missing.length) {
@@ -64,7 +69,10 @@ async function main() {
     const [row] = await db.select({ id: users.id }).from(users).where(eq(users.email, u.email));
     const memberships = u.classes.map((name) => classId.get(name)).filter((id): id is string => !!id);
     if (row && memberships.length) {
-      await db.insert(classMembers).values(memberships.map((id) => ({ classId: id, userId: row.id }))).onConflictDoNothing();
+      await db
+        .insert(classMembers)
+        .values(memberships.map((id) => ({ classId: id, userId: row.id })))
+        .onConflictDoNothing();
     }
   }
   console.log(missing.length ? `seeded ${missing.length} demo accounts` : "demo accounts already present");

@@ -7,18 +7,23 @@ import { comparePages, normalisePages } from "@/lib/domain/revisions/compare";
 
 const pagesCount = 2000;
 const syllables = ["ba", "ke", "lo", "mi", "nu", "ra", "so", "ti", "vu", "za", "pe", "do", "fi", "gu", "ha", "je", "co", "wy"];
-const vocabulary = Array.from({ length: 20_000 }, (_, k) => syllables[k % 18]! + syllables[Math.floor(k / 18) % 18]! + syllables[Math.floor(k / 324) % 18]! + (k % 7 ? "" : "n"));
+const vocabulary = Array.from(
+  { length: 20_000 },
+  (_, k) => syllables[k % 18]! + syllables[Math.floor(k / 18) % 18]! + syllables[Math.floor(k / 324) % 18]! + (k % 7 ? "" : "n"),
+);
 const common = ["the", "and", "check", "install", "remove", "torque", "inspect", "record", "step", "limits", "see", "figure"];
 let seed = 42;
-const random = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+const random = () => (seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31;
 
 function body(k: number): string {
   const words: string[] = [`SECTION ${k}`];
   const n = 150 + Math.floor(random() * 300); // 150–450 words, as the search benchmark
-  for (let i = 0; i < n; i++) words.push(random() < 0.5 ? common[Math.floor(random() * common.length)]! : vocabulary[Math.floor(random() * vocabulary.length)]!);
+  for (let i = 0; i < n; i++)
+    words.push(random() < 0.5 ? common[Math.floor(random() * common.length)]! : vocabulary[Math.floor(random() * vocabulary.length)]!);
   return words.join(" ");
 }
-const page = (n: number, text: string, label: string, date: string) => `BENCH MAINTENANCE MANUAL ${label} ${date}\nPage ${n}\n${text}\nEnd of page ${n}`;
+const page = (n: number, text: string, label: string, date: string) =>
+  `BENCH MAINTENANCE MANUAL ${label} ${date}\nPage ${n}\n${text}\nEnd of page ${n}`;
 
 const bodies = Array.from({ length: pagesCount }, (_, k) => body(k));
 const next = [...bodies];

@@ -15,7 +15,10 @@ import { closeDb } from "../db";
 import { getQueue } from "@/lib/server/jobs";
 import { ingestAndWait, storeManual } from "./bench-support";
 
-const words = "inspect torque safety wire cotter pin bearing race grease seal gasket cylinder magneto lead harness bracket rivet doubler skin stringer rib spar fitting bushing shim clamp hose fuel oil filter screen valve actuator cable pulley turnbuckle".split(" ");
+const words =
+  "inspect torque safety wire cotter pin bearing race grease seal gasket cylinder magneto lead harness bracket rivet doubler skin stringer rib spar fitting bushing shim clamp hose fuel oil filter screen valve actuator cable pulley turnbuckle".split(
+    " ",
+  );
 
 async function makeTextPdf(pages: number): Promise<Uint8Array> {
   const doc = await PDFDocument.create();

@@ -23,7 +23,10 @@ const pagesTotal = Number(process.env.BENCH_PAGES ?? 50_000);
 const seconds = Number(process.env.BENCH_SECONDS ?? 30);
 const clients = 8;
 
-const trade = "inspect torque safety wire cotter pin bearing race grease seal gasket cylinder magneto lead harness bracket rivet doubler skin stringer rib spar fitting bushing shim clamp hose fuel oil filter screen valve actuator cable pulley turnbuckle propeller blade spinner governor carburetor mixture throttle landing gear strut axle wheel brake disc caliper tire tube nitrogen pressure tension tensiometer rigging aileron elevator rudder flap trim tab hinge corrosion primer penetrant developer dwell ultraviolet crack indication".split(" ");
+const trade =
+  "inspect torque safety wire cotter pin bearing race grease seal gasket cylinder magneto lead harness bracket rivet doubler skin stringer rib spar fitting bushing shim clamp hose fuel oil filter screen valve actuator cable pulley turnbuckle propeller blade spinner governor carburetor mixture throttle landing gear strut axle wheel brake disc caliper tire tube nitrogen pressure tension tensiometer rigging aileron elevator rudder flap trim tab hinge corrosion primer penetrant developer dwell ultraviolet crack indication".split(
+    " ",
+  );
 
 async function loadPages() {
   const db = getDb();
@@ -65,9 +68,24 @@ async function loadPages() {
 }
 
 const mix = [
-  "magneto", "torque wrench", "cable tension", '"safety wire"', "tensiom", "carburetr", "prop governor",
-  "landing gear strut", "corrosion -primer", "bearing race grease", "penetrant dwell", "rivet doubler skin",
-  "brake disc caliper", "aileron rigging", "term1f0f", "term3ab1 term5d3", "fuel filter screen", "blade crack",
+  "magneto",
+  "torque wrench",
+  "cable tension",
+  '"safety wire"',
+  "tensiom",
+  "carburetr",
+  "prop governor",
+  "landing gear strut",
+  "corrosion -primer",
+  "bearing race grease",
+  "penetrant dwell",
+  "rivet doubler skin",
+  "brake disc caliper",
+  "aileron rigging",
+  "term1f0f",
+  "term3ab1 term5d3",
+  "fuel filter screen",
+  "blade crack",
 ];
 
 function percentile(values: number[], p: number): number {
@@ -78,10 +96,19 @@ function percentile(values: number[], p: number): number {
 async function signIn(): Promise<string> {
   const email = `bench-${randomUUID().slice(0, 8)}@test.hangarleaf.test`;
   const password = "bench-password-long";
-  await getDb().execute(sql`insert into users (email, name, role, status, password_hash) values (${email}, 'Bench', 'student', 'active', ${await hashPassword(password)})`);
+  await getDb().execute(
+    sql`insert into users (email, name, role, status, password_hash) values (${email}, 'Bench', 'student', 'active', ${await hashPassword(password)})`,
+  );
   // Both servers share the database and the session secret: one cookie serves both.
-  const response = await fetch(`${kept.url}/api/session`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ email, password }) });
-  return response.headers.getSetCookie().find((c) => c.startsWith("hangarleaf_session="))!.split(";")[0]!;
+  const response = await fetch(`${kept.url}/api/session`, {
+    method: "POST",
+    headers: { "content-type": "application/json" },
+    body: JSON.stringify({ email, password }),
+  });
+  return response.headers
+    .getSetCookie()
+    .find((c) => c.startsWith("hangarleaf_session="))!
+    .split(";")[0]!;
 }
 
 async function timeApi(server: Server, cookie: string, q: string): Promise<number> {

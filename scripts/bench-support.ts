@@ -14,7 +14,10 @@ export async function storeManual(title: string, bytes: Uint8Array): Promise<{ m
   const revisionId = randomUUID();
   const key = storageKeys.revisionFile(revisionId);
   await getStore().put(key, Readable.from(Buffer.from(bytes)));
-  const [manual] = await db.insert(manuals).values({ title: `${title} ${revisionId.slice(0, 8)}`, documentType: "handbook" }).returning({ id: manuals.id });
+  const [manual] = await db
+    .insert(manuals)
+    .values({ title: `${title} ${revisionId.slice(0, 8)}`, documentType: "handbook" })
+    .returning({ id: manuals.id });
   await db.insert(revisions).values({
     id: revisionId,
     manualId: manual!.id,
@@ -32,7 +35,10 @@ export async function ingestAndWait(revisionId: string): Promise<number> {
   const start = process.hrtime.bigint();
   await queueIngest({ revisionId });
   for (;;) {
-    const [row] = await getDb().select({ status: revisions.status, error: revisions.error }).from(revisions).where(eq(revisions.id, revisionId));
+    const [row] = await getDb()
+      .select({ status: revisions.status, error: revisions.error })
+      .from(revisions)
+      .where(eq(revisions.id, revisionId));
     if (row?.status === "ready") return Number(process.hrtime.bigint() - start) / 1e9;
     if (row?.status === "failed") throw new Error(`bench ingest failed: ${row.error}`);
     await new Promise((r) => setTimeout(r, 50));

@@ -21,14 +21,39 @@ const trials = 5;
 async function makeRun() {
   const db = getDb();
   const password = `bench-${randomUUID()}`;
-  const [student] = await db.insert(users).values({ email: `bench-${randomUUID().slice(0, 8)}@bench.test`, name: "Bench student", role: "student", status: "active", passwordHash: await hashPassword(password) }).returning();
+  const [student] = await db
+    .insert(users)
+    .values({
+      email: `bench-${randomUUID().slice(0, 8)}@bench.test`,
+      name: "Bench student",
+      role: "student",
+      status: "active",
+      passwordHash: await hashPassword(password),
+    })
+    .returning();
   const [card] = await db.insert(taskCards).values({}).returning();
-  const steps = Array.from({ length: 20 }, (_, i) => ({ id: randomUUID(), text: `Bench step ${i + 1}`, notices: [], references: [], measurement: null, calculator: null, inspectionPoint: false, timerMinutes: null }));
+  const steps = Array.from({ length: 20 }, (_, i) => ({
+    id: randomUUID(),
+    text: `Bench step ${i + 1}`,
+    notices: [],
+    references: [],
+    measurement: null,
+    calculator: null,
+    inspectionPoint: false,
+    timerMinutes: null,
+  }));
   const [version] = await db.insert(taskCardVersions).values({ cardId: card!.id, number: 1, title: "Bench card", steps }).returning();
-  await db.update(taskCardVersions).set({ status: "published", publishedAt: new Date() }).where(sql`id = ${version!.id}`);
+  await db
+    .update(taskCardVersions)
+    .set({ status: "published", publishedAt: new Date() })
+    .where(sql`id = ${version!.id}`);
   const [assignment] = await db.insert(assignments).values({ cardId: card!.id, versionId: version!.id }).returning();
   const [run] = await db.insert(runs).values({ assignmentId: assignment!.id, studentId: student!.id, versionId: version!.id }).returning();
-  const signIn = await fetch(`${base}/api/session`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ email: student!.email, password }) });
+  const signIn = await fetch(`${base}/api/session`, {
+    method: "POST",
+    headers: { "content-type": "application/json" },
+    body: JSON.stringify({ email: student!.email, password }),
+  });
   const cookie = signIn.headers.getSetCookie()[0]!.split(";")[0]!;
   return { runId: run!.id, cookie, stepIds: steps.map((s) => s.id) };
 }
@@ -62,28 +87,41 @@ async function flakyLink(target: string, share: number, seed: number) {
       req.socket.destroy();
       return;
     }
-    const upstream = http.request({ host: to.hostname, port: to.port, path: req.url, method: req.method, headers: req.headers }, (answer) => {
-      if (dropped) {
-        lostAnswers++;
-        answer.resume();
-        answer.on("end", () => res.socket?.destroy());
-        return;
-      }
-      res.writeHead(answer.statusCode ?? 502, answer.headers);
-      answer.pipe(res);
-    });
+    const upstream = http.request(
+      { host: to.hostname, port: to.port, path: req.url, method: req.method, headers: req.headers },
+      (answer) => {
+        if (dropped) {
+          lostAnswers++;
+          answer.resume();
+          answer.on("end", () => res.socket?.destroy());
+          return;
+        }
+        res.writeHead(answer.statusCode ?? 502, answer.headers);
+        answer.pipe(res);
+      },
+    );
     upstream.on("error", () => res.socket?.destroy());
     req.pipe(upstream);
   });
   await new Promise<void>((r) => server.listen(0, "127.0.0.1", r));
-  return { url: `http://127.0.0.1:${(server.address() as AddressInfo).port}`, stats: () => ({ lostRequests, lostAnswers, seen }), close: () => new Promise<void>((r) => server.close(() => r())) };
+  return {
+    url: `http://127.0.0.1:${(server.address() as AddressInfo).port}`,
+    stats: () => ({ lostRequests, lostAnswers, seen }),
+    close: () => new Promise<void>((r) => server.close(() => r())),
+  };
 }
 
 function memoryCart(runId: string, stepIds: string[], linkUrl: string, cookie: string) {
   const start = Date.now() - 3_600_000;
   let queue: PendingEvent[] = Array.from({ length: eventCount }, (_, i) => ({
     runId,
-    event: { id: randomUUID(), type: i % 2 ? "step.checked" : "note.added", stepId: stepIds[i % stepIds.length]!, payload: i % 2 ? {} : { text: `note ${i}` }, clientTime: new Date(start + i * 1000).toISOString() },
+    event: {
+      id: randomUUID(),
+      type: i % 2 ? "step.checked" : "note.added",
+      stepId: stepIds[i % stepIds.length]!,
+      payload: i % 2 ? {} : { text: `note ${i}` },
+      clientTime: new Date(start + i * 1000).toISOString(),
+    },
   }));
   const ids = queue.map((p) => p.event.id);
   const port: SyncPort = {
@@ -98,7 +136,11 @@ function memoryCart(runId: string, stepIds: string[], linkUrl: string, cookie: s
       throw new Error(`the server refused ${items.length} events: ${items[0]?.reason}`);
     },
     postEvents: async (id, events) => {
-      const response = await fetch(`${linkUrl}/api/runs/${id}/events`, { method: "POST", headers: { "content-type": "application/json", cookie }, body: JSON.stringify({ events }) });
+      const response = await fetch(`${linkUrl}/api/runs/${id}/events`, {
+        method: "POST",
+        headers: { "content-type": "application/json", cookie },
+        body: JSON.stringify({ events }),
+      });
       await response.arrayBuffer();
       return { status: response.status };
     },
@@ -108,7 +150,11 @@ function memoryCart(runId: string, stepIds: string[], linkUrl: string, cookie: s
 }
 
 async function stored(runId: string, ids: string[]) {
-  const rows = (await getDb().execute(sql`select count(*)::int as n, count(distinct id)::int as d, count(*) filter (where id::text = any(${`{${ids.join(",")}}`}::text[]))::int as ours from run_events where run_id = ${runId}`)).rows as [{ n: number; d: number; ours: number }];
+  const rows = (
+    await getDb().execute(
+      sql`select count(*)::int as n, count(distinct id)::int as d, count(*) filter (where id::text = any(${`{${ids.join(",")}}`}::text[]))::int as ours from run_events where run_id = ${runId}`,
+    )
+  ).rows as [{ n: number; d: number; ours: number }];
   return rows[0];
 }
 
@@ -125,7 +171,11 @@ async function trial(label: string, share: number, seed = 1) {
   console.log(
     `${label.padEnd(28)} ${seconds.toFixed(2).padStart(6)} s  stored ${counts.ours}/${eventCount}  duplicates ${duplicates}  passes ${result.passes}  left on the cart ${cart.left()}  requests ${link.stats().seen}: lost before the server ${link.stats().lostRequests}, answers lost ${link.stats().lostAnswers}`,
   );
-  return { seconds, lost: link.stats().lostRequests + link.stats().lostAnswers, ok: counts.ours === eventCount && duplicates === 0 && cart.left() === 0 };
+  return {
+    seconds,
+    lost: link.stats().lostRequests + link.stats().lostAnswers,
+    ok: counts.ours === eventCount && duplicates === 0 && cart.left() === 0,
+  };
 }
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
@@ -141,7 +191,9 @@ for (let t = 1; t <= trials; t++) {
 const cleanMedian = median(clean.map((c) => c.seconds));
 const flakyMedian = median(flaky.map((c) => c.seconds));
 const worst = Math.max(...flaky.map((c) => c.seconds));
-console.log(`clean link median ${cleanMedian.toFixed(2)} s (baseline); 30 % dropped median ${flakyMedian.toFixed(2)} s, worst ${worst.toFixed(2)} s, ratio ${(flakyMedian / cleanMedian).toFixed(2)}`);
+console.log(
+  `clean link median ${cleanMedian.toFixed(2)} s (baseline); 30 % dropped median ${flakyMedian.toFixed(2)} s, worst ${worst.toFixed(2)} s, ratio ${(flakyMedian / cleanMedian).toFixed(2)}`,
+);
 console.log(`requests lost in the dropped trials: ${flaky.map((f) => f.lost).join(", ")}`);
 const ok = [...clean, ...flaky].every((r) => r.ok);
 console.log(`goal: all 1,000 stored, 0 duplicates, ≤ 3 s — ${ok && worst <= 3 ? "met in every trial" : "NOT met"}`);

@@ -42,7 +42,12 @@ try {
     if (name === "search") {
       // A second server that keeps no answers, to measure the search itself beside the kept ones.
       const uncachedPort = await freePort();
-      const uncached = service("web-uncached", process.execPath, ["server/web.mjs"], { ...env, PORT: String(uncachedPort), NEXT_TELEMETRY_DISABLED: "1", HL_SEARCH_CACHE: "off" });
+      const uncached = service("web-uncached", process.execPath, ["server/web.mjs"], {
+        ...env,
+        PORT: String(uncachedPort),
+        NEXT_TELEMETRY_DISABLED: "1",
+        HL_SEARCH_CACHE: "off",
+      });
       env.HL_UNCACHED_PID = String(uncached.pid);
       env.HL_UNCACHED_URL = `http://127.0.0.1:${uncachedPort}`;
       await waitForHttp(`${env.HL_UNCACHED_URL}/api/health`);

@@ -59,9 +59,7 @@ try {
     SMTP_URL: process.env.SMTP_URL ?? `smtp://127.0.0.1:${smtpPort}`,
     ...(useFakeMail ? { HL_OUTBOX_URL: `http://127.0.0.1:${outboxPort}` } : {}),
     HL_STORAGE_DIR: process.env.HL_STORAGE_DIR ?? path.join(dataDir, "files"),
-    ...(useFakeS3
-      ? { S3_ENDPOINT: `http://127.0.0.1:${s3Port}`, S3_ACCESS_KEY_ID: "S3RVER", S3_SECRET_ACCESS_KEY: "S3RVER" }
-      : {}),
+    ...(useFakeS3 ? { S3_ENDPOINT: `http://127.0.0.1:${s3Port}`, S3_ACCESS_KEY_ID: "S3RVER", S3_SECRET_ACCESS_KEY: "S3RVER" } : {}),
     PORT: String(port),
   };
 
@@ -99,7 +97,9 @@ try {
   // the database go on serving.
   if (useFakeMail) {
     supervise("mail", bin("tsx"), tsxArgs("fakes/smtp.ts"), {
-      ...env, HL_SMTP_PORT: String(smtpPort), HL_OUTBOX_PORT: String(outboxPort),
+      ...env,
+      HL_SMTP_PORT: String(smtpPort),
+      HL_OUTBOX_PORT: String(outboxPort),
       HL_OUTBOX_FILE: path.join(dataDir, "outbox.jsonl"),
     });
   }

@@ -92,7 +92,11 @@ try {
     tsx("db/seed.ts", env); // twice: the seed must be idempotent (tests/integration/seed.test.ts checks)
   });
   await stage("typecheck", () => run(bin("tsc"), ["--noEmit"], { env }));
-  await stage("lint", () => run(bin("eslint"), ["--max-warnings", "0", "."], { env }));
+  await stage("lint", () => {
+    run(bin("eslint"), ["--max-warnings", "0", "."], { env });
+    // The formatter's line width (.prettierrc.json); `npx prettier --write .` fixes what this finds.
+    run(bin("prettier"), ["--check", "--log-level", "warn", "."], { env });
+  });
   copyPdfAssets();
   let built = await stage("build", () => run(bin("next"), ["build"], { env }));
   if (built) {
@@ -117,12 +121,14 @@ try {
 
     const vitestReport = path.join(reports, "vitest.json");
     await stage("unit and integration tests (vitest)", () =>
-      runAsync(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${vitestReport}`], { env: testEnv }));
+      runAsync(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${vitestReport}`], { env: testEnv }),
+    );
     vitest = readJson(vitestReport);
 
     const playwrightReport = path.join(reports, "playwright.json");
     await stage("end-to-end tests (Playwright, Chromium)", () =>
-      runAsync(bin("playwright"), ["test"], { env: { ...testEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport } }));
+      runAsync(bin("playwright"), ["test"], { env: { ...testEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport } }),
+    );
     playwright = readJson(playwrightReport);
   }
 

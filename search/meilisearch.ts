@@ -105,7 +105,11 @@ export function meilisearchEngine(options: { url: string; key?: string; index: s
     async setCurrentRevision(manualId, revisionId) {
       await configure();
       for (;;) {
-        const stale = await index.getDocuments({ filter: `manualId = ${quote(manualId)} AND current = true AND revisionId != ${quote(revisionId)}`, fields: ["id"], limit: 1000 });
+        const stale = await index.getDocuments({
+          filter: `manualId = ${quote(manualId)} AND current = true AND revisionId != ${quote(revisionId)}`,
+          fields: ["id"],
+          limit: 1000,
+        });
         if (!stale.results.length) break;
         await index.updateDocuments(stale.results.map((d) => ({ id: d.id, current: false }))).waitTask();
       }

@@ -86,7 +86,8 @@ async function revisionsInScope(filters: SearchFilters): Promise<string[]> {
   return rows.rows.map((r) => r.id);
 }
 
-const uuidTextList = (ids: string[]) => sql.raw(`array[${ids.map((id) => `'${id.replace(/[^0-9a-f-]/gi, "").toLowerCase()}'`).join(",")}]::text[]`);
+const uuidTextList = (ids: string[]) =>
+  sql.raw(`array[${ids.map((id) => `'${id.replace(/[^0-9a-f-]/gi, "").toLowerCase()}'`).join(",")}]::text[]`);
 
 /**
  * How many body matches are ranked at most. A word on more pages than this is ranked among the
@@ -160,20 +161,24 @@ export async function searchGeneration(): Promise<number> {
 }
 
 /** The uncached search: typo corrections and scope, then the ranked page of hits with snippets. */
-async function searchNow(query: ParsedQuery, filters: SearchFilters, { limit, offset }: { limit: number; offset: number }): Promise<SearchResult> {
+async function searchNow(
+  query: ParsedQuery,
+  filters: SearchFilters,
+  { limit, offset }: { limit: number; offset: number },
+): Promise<SearchResult> {
   const [tsquery, revisionIds] = await Promise.all([buildTsQuery(query), revisionsInScope(filters)]);
   if (!tsquery || !revisionIds.length) return { hits: [], total: 0, totalCapped: false };
   const rows = await getDb().execute<{
-      manual_id: string;
-      revision_id: string;
-      manual_title: string;
-      revision_label: string;
-      current: boolean;
-      page: number;
-      score: number;
-      matches: string;
-      snippet: string;
-    }>(sql`
+    manual_id: string;
+    revision_id: string;
+    manual_title: string;
+    revision_label: string;
+    current: boolean;
+    page: number;
+    score: number;
+    matches: string;
+    snippet: string;
+  }>(sql`
       with best as (${rankedSql(tsquery, revisionIds, { limit, offset, hasExclusions: query.excluded.length > 0 })})
       select b.revision_id, b.page_number as page, b.score, b.matches, m.id as manual_id, m.title as manual_title,
              r.label as revision_label, (m.current_revision_id = b.revision_id) as current,
@@ -215,7 +220,9 @@ export const postgresEngine: SearchEngine = {
     // autovacuum, some time later). A revision's thousands of new pages would slow every search
     // in the meantime (bench:search p95 2.6 s against 0.3 s merged), so they are merged now,
     // before the revision turns ready.
-    await getDb().execute(sql`select gin_clean_pending_list('pages_search_gin'::regclass), gin_clean_pending_list('pages_heading_gin'::regclass)`);
+    await getDb().execute(
+      sql`select gin_clean_pending_list('pages_search_gin'::regclass), gin_clean_pending_list('pages_heading_gin'::regclass)`,
+    );
   },
 
   async removeRevision(revisionId) {

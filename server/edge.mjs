@@ -8,13 +8,20 @@
 
 /** "::ffff:127.0.0.1" and "127.0.0.1" are the same peer. */
 export function normaliseAddress(address) {
-  const a = String(address ?? "").trim().toLowerCase();
+  const a = String(address ?? "")
+    .trim()
+    .toLowerCase();
   return a.startsWith("::ffff:") && a.includes(".") ? a.slice(7) : a;
 }
 
 /** HL_TRUSTED_PROXIES: addresses separated by commas or spaces. */
 export function parseTrustedProxies(value) {
-  return new Set(String(value ?? "").split(/[\s,]+/).map(normaliseAddress).filter(Boolean));
+  return new Set(
+    String(value ?? "")
+      .split(/[\s,]+/)
+      .map(normaliseAddress)
+      .filter(Boolean),
+  );
 }
 
 export function clientAddressOf(socketAddress, forwardedFor, trusted) {

@@ -12,7 +12,10 @@ import { syncOnce } from "@/lib/client/cart/sync";
 declare const self: { __SW_MANIFEST: (PrecacheEntry | string)[] | undefined };
 
 interface WorkerScope {
-  addEventListener(type: "activate" | "message", listener: (event: { data?: unknown; waitUntil?(p: Promise<unknown>): void }) => void): void;
+  addEventListener(
+    type: "activate" | "message",
+    listener: (event: { data?: unknown; waitUntil?(p: Promise<unknown>): void }) => void,
+  ): void;
 }
 const scope = globalThis as unknown as WorkerScope;
 

@@ -20,6 +20,7 @@ export const handlers: { [K in JobName]: (payload: JobPayload<K>) => Promise<voi
   },
   compareRevision: async (payload) => {
     const outcome = await compareRevision(payload);
-    if (outcome.flagged) console.log(`revision ${payload.revisionId}: ${outcome.flagged} citations to recheck, ${outcome.mailed} instructors told`);
+    if (outcome.flagged)
+      console.log(`revision ${payload.revisionId}: ${outcome.flagged} citations to recheck, ${outcome.mailed} instructors told`);
   },
 };

@@ -23,7 +23,12 @@ async function main() {
         // A payload that does not fit would fail the same way on every retry: to the dead letters.
         if (!parsed.success) {
           console.error(`${job.name} job ${item.id} has a malformed payload; moved to ${deadLetterQueue}`, parsed.error.issues);
-          await boss.send(deadLetterQueue, { queue: job.name, jobId: item.id, data: item.data, issues: parsed.error.issues.map((i) => i.message) });
+          await boss.send(deadLetterQueue, {
+            queue: job.name,
+            jobId: item.id,
+            data: item.data,
+            issues: parsed.error.issues.map((i) => i.message),
+          });
           continue;
         }
         await handle(parsed.data);
@@ -36,7 +41,10 @@ async function main() {
   const sweep = async () => {
     for (const stale of await findStaleRevisions()) {
       if (stale.attempts >= maxAttempts) {
-        await failRevision({ id: stale.id, reason: `Reading this revision stopped ${stale.attempts} times without finishing. Try again, or upload the file again.` });
+        await failRevision({
+          id: stale.id,
+          reason: `Reading this revision stopped ${stale.attempts} times without finishing. Try again, or upload the file again.`,
+        });
         console.log(`revision ${stale.id}: failed after ${stale.attempts} interrupted attempts`);
       } else {
         await queueIngest({ revisionId: stale.id });

@@ -32,7 +32,9 @@ export default async function HomePage() {
         <section aria-labelledby="my-work" className="panel flex flex-wrap items-center gap-4">
           <h2 id="my-work" className="mr-auto">
             My work: {open.length} to do
-            {open.some((w) => w.workStatus === "overdue") ? <span className="text-danger"> · {open.filter((w) => w.workStatus === "overdue").length} overdue</span> : null}
+            {open.some((w) => w.workStatus === "overdue") ? (
+              <span className="text-danger"> · {open.filter((w) => w.workStatus === "overdue").length} overdue</span>
+            ) : null}
             {open.some((w) => w.status === "returned") ? ` · ${open.filter((w) => w.status === "returned").length} returned to you` : null}
           </h2>
           <Link href="/cart" className="btn btn-primary text-lg">
@@ -69,7 +71,12 @@ export default async function HomePage() {
             {myClasses.map((c) => (
               <li key={c.id} className="text-lg">
                 <strong>{c.name}</strong>
-                {c.startsOn && c.endsOn ? <span className="text-ink-soft"> · {c.startsOn} to {c.endsOn}</span> : null}
+                {c.startsOn && c.endsOn ? (
+                  <span className="text-ink-soft">
+                    {" "}
+                    · {c.startsOn} to {c.endsOn}
+                  </span>
+                ) : null}
               </li>
             ))}
           </ul>

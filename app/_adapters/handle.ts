@@ -30,14 +30,17 @@ export function handle<E extends Endpoint>(
   fn: (call: Call<E, ActorOf<E>>) => Promise<Result<E>>,
 ): (request: Request, context: { params: Segments }) => Promise<Response> {
   return route<{ params: Segments }>(async (request, context) => {
-    const actor = (endpoint.access === "public" ? null : await requireApiUser(endpoint.access === "signed-in" ? undefined : endpoint.access)) as ActorOf<E>;
+    const actor = (
+      endpoint.access === "public" ? null : await requireApiUser(endpoint.access === "signed-in" ? undefined : endpoint.access)
+    ) as ActorOf<E>;
     const raw = context?.params ? await context.params : {};
     const params: Record<string, unknown> = {};
     for (const [name, parse] of Object.entries(endpoint.params)) params[name] = parse(String(raw[name] ?? ""));
     const query = endpoint.query
       ? parseWith(endpoint.query as z.ZodType, Object.fromEntries(new URL(request.url).searchParams))
       : undefined;
-    const body = endpoint.body?.kind === "json" ? await readJson(request, endpoint.body.schema, { maxBytes: endpoint.body.maxBytes }) : undefined;
+    const body =
+      endpoint.body?.kind === "json" ? await readJson(request, endpoint.body.schema, { maxBytes: endpoint.body.maxBytes }) : undefined;
     const result = await fn({ request, actor, params: params as ParamsOf<E>, query: query as QueryOf<E>, body: body as BodyOf<E> });
     if (result instanceof Response) return result;
     if (result === undefined || endpoint.answer.kind === "none") return new Response(null, { status: 204, headers: endpoint.headers });

@@ -20,7 +20,15 @@ function TextWithLinks({ text }: { text: string }) {
   const parts = text.split(/(https?:\/\/[^\s<>"]+)/g);
   return (
     <p className="whitespace-pre-wrap break-words">
-      {parts.map((part, i) => (/^https?:\/\//.test(part) ? <a key={i} href={part}>{part}</a> : part))}
+      {parts.map((part, i) =>
+        /^https?:\/\//.test(part) ? (
+          <a key={i} href={part}>
+            {part}
+          </a>
+        ) : (
+          part
+        ),
+      )}
     </p>
   );
 }
@@ -50,10 +58,14 @@ export default async function OutboxPage() {
       <main id="main" className="mx-auto flex max-w-4xl flex-col gap-5 px-4 py-8">
         <h1>Outbox</h1>
         <p className="notice-ok">
-          Local use only: these are the mails Hangarleaf sent to its stand-in mail server. A real installation sends
-          through the school&apos;s SMTP server and has no outbox page.
+          Local use only: these are the mails Hangarleaf sent to its stand-in mail server. A real installation sends through the
+          school&apos;s SMTP server and has no outbox page.
         </p>
-        {problem ? <p className="notice-error" role="alert">{problem}</p> : null}
+        {problem ? (
+          <p className="notice-error" role="alert">
+            {problem}
+          </p>
+        ) : null}
         {!problem && messages.length === 0 ? <p>No mail sent yet.</p> : null}
         <ol className="flex flex-col gap-4">
           {messages.map((m) => (

@@ -9,7 +9,9 @@ export const dynamic = "force-dynamic";
 export async function GET() {
   try {
     const code = await readFile(path.join(process.cwd(), ".next", "hangarleaf-sw.js"), "utf8");
-    return new Response(code, { headers: { "Content-Type": "text/javascript; charset=utf-8", "Cache-Control": "no-cache", "Service-Worker-Allowed": "/" } });
+    return new Response(code, {
+      headers: { "Content-Type": "text/javascript; charset=utf-8", "Cache-Control": "no-cache", "Service-Worker-Allowed": "/" },
+    });
   } catch {
     return new Response("// no service worker in this build (next dev)\n", { status: 404, headers: { "Content-Type": "text/javascript" } });
   }

@@ -18,9 +18,20 @@ export function BendCalculator() {
   const dimensions = dims.split(",").map((s) => num(s));
   const ok = t !== null && r !== null && a !== null && dimensions.every((d) => d !== null) && dimensions.length >= 2;
   const pattern = ok
-    ? attempt(() => flatPattern({ thickness: t, radius: r, dimensions: dimensions as number[], bends: Array(dimensions.length - 1).fill(a) as number[] }))
-    : { value: null, error: dims.trim() && !dimensions.every((d) => d !== null) ? "List the outside dimensions as numbers separated by commas." : null };
-  const check = t !== null && r !== null ? attempt(() => checkBendRadius({ thickness: t, radius: r, temper })) : { value: null, error: null };
+    ? attempt(() =>
+        flatPattern({
+          thickness: t,
+          radius: r,
+          dimensions: dimensions as number[],
+          bends: Array(dimensions.length - 1).fill(a) as number[],
+        }),
+      )
+    : {
+        value: null,
+        error: dims.trim() && !dimensions.every((d) => d !== null) ? "List the outside dimensions as numbers separated by commas." : null,
+      };
+  const check =
+    t !== null && r !== null ? attempt(() => checkBendRadius({ thickness: t, radius: r, temper })) : { value: null, error: null };
 
   const rows: [string, string, string?][] = [];
   if (check.value && check.value.low !== null && check.value.high !== null) {
@@ -28,14 +39,20 @@ export function BendCalculator() {
     rows.push([
       "Minimum bend radius",
       `${formatNumber(check.value.low, 4, "up")} in; use ${formatNumber(check.value.high, 4, "up")} in unless the drawing says otherwise`,
-      check.value.tableThickness !== null ? `AC 43.13-1B Table 4-6, ${temper}, row ${check.value.tableThickness} in` : `AC 43.13-1B Table 4-6, ${temper}`,
+      check.value.tableThickness !== null
+        ? `AC 43.13-1B Table 4-6, ${temper}, row ${check.value.tableThickness} in`
+        : `AC 43.13-1B Table 4-6, ${temper}`,
     ]);
   }
   if (pattern.value && a !== null) {
     const k = kFactor(a);
     rows.push(["K factor", formatNumber(k, 5), `tan(${angle}° ÷ 2)`]);
     rows.push(["Setback", `${formatNumber(pattern.value.setbacks[0]!, 4)} in`, `${formatNumber(k, 5)} × (${radius} + ${thickness})`]);
-    rows.push(["Bend allowance", `${formatNumber(pattern.value.allowances[0]!, 4)} in`, `(0.01743 × ${radius} + 0.0078 × ${thickness}) × ${angle}`]);
+    rows.push([
+      "Bend allowance",
+      `${formatNumber(pattern.value.allowances[0]!, 4)} in`,
+      `(0.01743 × ${radius} + 0.0078 × ${thickness}) × ${angle}`,
+    ]);
     rows.push(["Flats", pattern.value.flats.map((f) => `${formatNumber(f, 4)} in`).join(", ")]);
     rows.push(["Developed (flat) length", `${formatNumber(pattern.value.developedLength, 4)} in`, "Σ flats + Σ bend allowances"]);
   }
@@ -48,13 +65,31 @@ export function BendCalculator() {
         <NumberField label="Sheet thickness (T)" unit="in" value={thickness} onChange={setThickness} />
         <NumberField label="Inside bend radius (R)" unit="in" value={radius} onChange={setRadius} />
         <NumberField label="Bend angle" unit="degrees" value={angle} onChange={setAngle} />
-        <SelectField label="Alloy and temper" value={temper} onChange={setTemper} options={[["2024-T3", "2024-T3"], ["2024-O", "2024-O (annealed)"]]} />
+        <SelectField
+          label="Alloy and temper"
+          value={temper}
+          onChange={setTemper}
+          options={[
+            ["2024-T3", "2024-T3"],
+            ["2024-O", "2024-O (annealed)"],
+          ]}
+        />
         <div className="sm:col-span-2">
-          <NumberFieldText label="Outside dimensions, in order (in)" hint="Comma-separated, one more than the bends: 1, 2, 1 for a U-channel." value={dims} onChange={setDims} />
+          <NumberFieldText
+            label="Outside dimensions, in order (in)"
+            hint="Comma-separated, one more than the bends: 1, 2, 1 for a U-channel."
+            value={dims}
+            onChange={setDims}
+          />
         </div>
       </div>
       {check.value?.status === "ok" ? <p className="notice-ok">{check.value.message}</p> : null}
-      <Results rows={rows} warnings={warnings} error={check.error ?? pattern.error} notes={["Between two gauges of the table, the thicker gauge's row is used: its radii are the safer ones."]} />
+      <Results
+        rows={rows}
+        warnings={warnings}
+        error={check.error ?? pattern.error}
+        notes={["Between two gauges of the table, the thicker gauge's row is used: its radii are the safer ones."]}
+      />
     </div>
   );
 }

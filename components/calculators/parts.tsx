@@ -4,7 +4,19 @@ import { useId, type ReactNode } from "react";
 import { parseNumber } from "@/lib/domain/calc/units";
 
 /** A number field that takes decimals and shop fractions ("0.040", "1/8", "1 1/4"). */
-export function NumberField({ label, value, onChange, unit, hint }: { label: string; value: string; onChange: (v: string) => void; unit?: string; hint?: string }) {
+export function NumberField({
+  label,
+  value,
+  onChange,
+  unit,
+  hint,
+}: {
+  label: string;
+  value: string;
+  onChange: (v: string) => void;
+  unit?: string;
+  hint?: string;
+}) {
   const id = useId();
   const bad = value.trim() !== "" && parseNumber(value) === null;
   return (
@@ -13,7 +25,11 @@ export function NumberField({ label, value, onChange, unit, hint }: { label: str
         {label}
         {unit ? <span className="font-normal text-ink-soft"> ({unit})</span> : null}
       </label>
-      {hint ? <span id={`${id}-hint`} className="hint">{hint}</span> : null}
+      {hint ? (
+        <span id={`${id}-hint`} className="hint">
+          {hint}
+        </span>
+      ) : null}
       <input
         id={id}
         className="input max-w-48 text-lg"
@@ -31,14 +47,28 @@ export function NumberField({ label, value, onChange, unit, hint }: { label: str
   );
 }
 
-export function SelectField<T extends string>({ label, value, onChange, options }: { label: string; value: T; onChange: (v: T) => void; options: [T, string][] }) {
+export function SelectField<T extends string>({
+  label,
+  value,
+  onChange,
+  options,
+}: {
+  label: string;
+  value: T;
+  onChange: (v: T) => void;
+  options: [T, string][];
+}) {
   const id = useId();
   return (
     <div className="field">
-      <label htmlFor={id} className="label">{label}</label>
+      <label htmlFor={id} className="label">
+        {label}
+      </label>
       <select id={id} className="input w-full max-w-md" value={value} onChange={(e) => onChange(e.target.value as T)}>
         {options.map(([v, text]) => (
-          <option key={v} value={v}>{text}</option>
+          <option key={v} value={v}>
+            {text}
+          </option>
         ))}
       </select>
     </div>
@@ -48,16 +78,30 @@ export function SelectField<T extends string>({ label, value, onChange, options 
 export const num = (v: string): number | null => (v.trim() === "" ? null : parseNumber(v));
 
 /** The result rows, with what went wrong first, then the warnings, then notes that go with the result. */
-export function Results({ rows, warnings = [], notes = [], error }: { rows: [string, ReactNode, string?][]; warnings?: string[]; notes?: string[]; error?: string | null }) {
+export function Results({
+  rows,
+  warnings = [],
+  notes = [],
+  error,
+}: {
+  rows: [string, ReactNode, string?][];
+  warnings?: string[];
+  notes?: string[];
+  error?: string | null;
+}) {
   return (
     <div aria-live="polite" className="flex flex-col gap-2">
       {error ? <p className="notice-error">{error}</p> : null}
       {warnings.map((w) => (
-        <p key={w} className="notice-error">{w}</p>
+        <p key={w} className="notice-error">
+          {w}
+        </p>
       ))}
       {rows.length
         ? notes.map((n) => (
-            <p key={n} className="border-l-[6px] border-ink-soft bg-panel px-3 py-2">{n}</p>
+            <p key={n} className="border-l-[6px] border-ink-soft bg-panel px-3 py-2">
+              {n}
+            </p>
           ))
         : null}
       {rows.length ? (

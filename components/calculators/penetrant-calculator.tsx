@@ -24,10 +24,20 @@ export function PenetrantCalculator() {
     const r = result.value;
     // Near an edge of the window, enough digits to show which side the part is on (39.99 °F, not 40).
     const edge = r.temperatureF < (penetrantWindowF.min + penetrantWindowF.max) / 2 ? penetrantWindowF.min : penetrantWindowF.max;
-    rows.push(["Part temperature", `${formatAgainst(r.temperatureF, edge, 4)} °F`, `tests are done from ${penetrantWindowF.min} to ${penetrantWindowF.max} °F`]);
+    rows.push([
+      "Part temperature",
+      `${formatAgainst(r.temperatureF, edge, 4)} °F`,
+      `tests are done from ${penetrantWindowF.min} to ${penetrantWindowF.max} °F`,
+    ]);
     if (r.allowed && r.dwellMinutes !== null) {
       rows.push(["Rule", r.rule]);
-      rows.push(["Penetrant dwell", `${formatNumber(r.dwellMinutes, 3)} min`, r.shortestMinutes !== null && r.shortestMinutes < r.dwellMinutes ? `may be as short as ${formatNumber(r.shortestMinutes, 3)} min` : undefined]);
+      rows.push([
+        "Penetrant dwell",
+        `${formatNumber(r.dwellMinutes, 3)} min`,
+        r.shortestMinutes !== null && r.shortestMinutes < r.dwellMinutes
+          ? `may be as short as ${formatNumber(r.shortestMinutes, 3)} min`
+          : undefined,
+      ]);
       const w = developmentWindows[developer];
       rows.push([
         "Development time",
@@ -42,14 +52,30 @@ export function PenetrantCalculator() {
       <div className="grid gap-3 sm:grid-cols-2">
         <NumberField label="Dwell the procedure specifies" unit="min" value={specified} onChange={setSpecified} />
         <NumberField label="Part temperature" value={temperature} onChange={setTemperature} />
-        <SelectField label="Temperature unit" value={unit} onChange={setUnit} options={[["°F", "°F"], ["°C", "°C"]]} />
+        <SelectField
+          label="Temperature unit"
+          value={unit}
+          onChange={setUnit}
+          options={[
+            ["°F", "°F"],
+            ["°C", "°C"],
+          ]}
+        />
         <SelectField
           label="Developer form"
           value={developer}
           onChange={setDeveloper}
           options={Object.entries(developmentWindows).map(([k, v]) => [k as DeveloperForm, v.label])}
         />
-        <SelectField label="Looking for service-induced flaws (fatigue, stress corrosion)?" value={service} onChange={setService} options={[["no", "No"], ["yes", "Yes"]]} />
+        <SelectField
+          label="Looking for service-induced flaws (fatigue, stress corrosion)?"
+          value={service}
+          onChange={setService}
+          options={[
+            ["no", "No"],
+            ["yes", "Yes"],
+          ]}
+        />
       </div>
       <Results rows={rows} warnings={warnings} error={result.error} />
     </div>

@@ -2,15 +2,24 @@
 
 import { useState } from "react";
 import {
-  chooseRivetDiameter, fractionOfInch, headStyles, rivetLayout, rivetLength, rivetMaterials, rivetPartNumber, rivetsForSplice,
-  type HeadStyle, type RivetMaterial,
+  chooseRivetDiameter,
+  fractionOfInch,
+  headStyles,
+  rivetLayout,
+  rivetLength,
+  rivetMaterials,
+  rivetPartNumber,
+  rivetsForSplice,
+  type HeadStyle,
+  type RivetMaterial,
 } from "@/lib/domain/calc/rivets";
 import { formatNumber } from "@/lib/domain/calc/units";
 import { CardNotice } from "../card-notice";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 
 // A minimum is shown rounded up and a maximum rounded down, so the text never allows more than the rule.
-const inch = (v: number, rounding: "up" | "down" | "nearest" = "nearest") => `${formatNumber(v, 4, rounding)} in${fractionOfInch(v) ? ` (${fractionOfInch(v)})` : ""}`;
+const inch = (v: number, rounding: "up" | "down" | "nearest" = "nearest") =>
+  `${formatNumber(v, 4, rounding)} in${fractionOfInch(v) ? ` (${fractionOfInch(v)})` : ""}`;
 const range = (low: number, high: number) => `${formatNumber(low, 4, "up")} to ${formatNumber(high, 4, "down")} in`;
 
 export function RivetCalculator() {
@@ -37,21 +46,45 @@ export function RivetCalculator() {
   const w = num(width);
   const p = num(perInch);
   const r = num(rows);
-  const splice = w !== null && p !== null && r !== null ? attempt(() => rivetsForSplice({ width: w, rivetsPerInch: p, factor: Number(factor), rows: r })) : { value: null, error: null };
+  const splice =
+    w !== null && p !== null && r !== null
+      ? attempt(() => rivetsForSplice({ width: w, rivetsPerInch: p, factor: Number(factor), rows: r }))
+      : { value: null, error: null };
 
   const results: [string, string, string?][] = [];
   if (choice.value) {
-    results.push(["Diameter range", `${formatNumber(choice.value.minimum, 4, "up")} to ${formatNumber(choice.value.target, 4)} in`, `t to 3 × ${thickest} (NAVEDTRA 14018)`]);
-    if (d) results.push(["Rivet diameter", inch(d), d === choice.value.suggested ? "next size at or above 3 t (AC 43.13-1B 4-58g)" : "your choice"]);
+    results.push([
+      "Diameter range",
+      `${formatNumber(choice.value.minimum, 4, "up")} to ${formatNumber(choice.value.target, 4)} in`,
+      `t to 3 × ${thickest} (NAVEDTRA 14018)`,
+    ]);
+    if (d)
+      results.push([
+        "Rivet diameter",
+        inch(d),
+        d === choice.value.suggested ? "next size at or above 3 t (AC 43.13-1B 4-58g)" : "your choice",
+      ]);
   }
   if (length.value && d) {
     const standard = length.value.lengthSixteenths / 16;
-    results.push(["Rivet length", `${formatNumber(length.value.length, 4, "up")} in → ${fractionOfInch(standard) ?? formatNumber(standard, 4)} in`, `${grip} + 1.5 × ${formatNumber(d, 4)}, next standard length up`]);
-    results.push(["Part number", rivetPartNumber({ head, material, diameter: d, lengthSixteenths: length.value.lengthSixteenths }), "diameter in 32nds, length in 16ths"]);
+    results.push([
+      "Rivet length",
+      `${formatNumber(length.value.length, 4, "up")} in → ${fractionOfInch(standard) ?? formatNumber(standard, 4)} in`,
+      `${grip} + 1.5 × ${formatNumber(d, 4)}, next standard length up`,
+    ]);
+    results.push([
+      "Part number",
+      rivetPartNumber({ head, material, diameter: d, lengthSixteenths: length.value.lengthSixteenths }),
+      "diameter in 32nds, length in 16ths",
+    ]);
   }
   if (layout.value) {
     const l = layout.value;
-    results.push(["Edge distance", range(l.edgeDistance[0], l.edgeDistance[1]), head === "MS20426" ? "2.5 D countersunk to 4 D" : "2 D to 4 D"]);
+    results.push([
+      "Edge distance",
+      range(l.edgeDistance[0], l.edgeDistance[1]),
+      head === "MS20426" ? "2.5 D countersunk to 4 D" : "2 D to 4 D",
+    ]);
     results.push(["Pitch", `at least ${inch(l.minimumPitch, "up")}; usually ${range(l.usualPitch[0], l.usualPitch[1])}`, "3 D; 4–8 D"]);
     results.push([
       "Row spacing (transverse pitch)",
@@ -60,7 +93,11 @@ export function RivetCalculator() {
     ]);
   }
   if (splice.value) {
-    results.push(["Rivets for the splice", `${splice.value.required} (${splice.value.perRow} per row)`, `⌈${width} × ${perInch}⌉ = ${splice.value.fromTable}, × ${factor}`]);
+    results.push([
+      "Rivets for the splice",
+      `${splice.value.required} (${splice.value.perRow} per row)`,
+      `⌈${width} × ${perInch}⌉ = ${splice.value.fromTable}, × ${factor}`,
+    ]);
   }
 
   return (
@@ -78,21 +115,43 @@ export function RivetCalculator() {
           ]}
         />
         <NumberField label="Pitch you lay out" unit="in" hint="Leave empty for the usual 4–8 D." value={pitch} onChange={setPitch} />
-        <SelectField label="Head" value={head} onChange={setHead} options={Object.entries(headStyles).map(([k, v]) => [k as HeadStyle, `${k}, ${v}`])} />
-        <SelectField label="Material" value={material} onChange={setMaterial} options={Object.entries(rivetMaterials).map(([k, v]) => [k as RivetMaterial, `${k}, ${v}`])} />
+        <SelectField
+          label="Head"
+          value={head}
+          onChange={setHead}
+          options={Object.entries(headStyles).map(([k, v]) => [k as HeadStyle, `${k}, ${v}`])}
+        />
+        <SelectField
+          label="Material"
+          value={material}
+          onChange={setMaterial}
+          options={Object.entries(rivetMaterials).map(([k, v]) => [k as RivetMaterial, `${k}, ${v}`])}
+        />
       </div>
       {material !== "AD" ? (
-        <CardNotice kind="caution" text={`${material} rivets are heat-treated (icebox) rivets: drive them within the time the approved data gives after they leave the refrigerator, or heat-treat them again.`} />
+        <CardNotice
+          kind="caution"
+          text={`${material} rivets are heat-treated (icebox) rivets: drive them within the time the approved data gives after they leave the refrigerator, or heat-treat them again.`}
+        />
       ) : null}
       <fieldset className="grid gap-3 rounded-md border border-line p-3 sm:grid-cols-2">
         <legend className="px-1 font-semibold">Rivets for a splice</legend>
         <NumberField label="Width of the splice" unit="in" value={width} onChange={setWidth} />
-        <NumberField label="Rivets per inch of width" hint="From AC 43.13-1B Table 4-10 for this sheet and rivet." value={perInch} onChange={setPerInch} />
+        <NumberField
+          label="Rivets per inch of width"
+          hint="From AC 43.13-1B Table 4-10 for this sheet and rivet."
+          value={perInch}
+          onChange={setPerInch}
+        />
         <SelectField
           label="Kind of joint"
           value={factor}
           onChange={setFactor}
-          options={[["1", "Full table value"], ["0.75", "Single-lap sheet splice: 75 %"], ["0.6", "Intermediate frame: 60 %"]]}
+          options={[
+            ["1", "Full table value"],
+            ["0.75", "Single-lap sheet splice: 75 %"],
+            ["0.6", "Intermediate frame: 60 %"],
+          ]}
         />
         <NumberField label="Rows" value={rows} onChange={setRows} />
       </fieldset>

@@ -5,7 +5,11 @@ import { adapterWarnings, appliedTorque, wrenchSetting, type AdapterDirection } 
 import { convert, formatNumber } from "@/lib/domain/calc/units";
 import { attempt, num, NumberField, Results, SelectField } from "./parts";
 
-const torqueUnits: [string, string][] = [["in-lb", "in-lb"], ["ft-lb", "ft-lb"], ["N·m", "N·m"]];
+const torqueUnits: [string, string][] = [
+  ["in-lb", "in-lb"],
+  ["ft-lb", "ft-lb"],
+  ["N·m", "N·m"],
+];
 
 export function TorqueCalculator() {
   const [desired, setDesired] = useState("300");
@@ -17,11 +21,21 @@ export function TorqueCalculator() {
   const ta = num(desired);
   const l = num(lever);
   const a = num(adapter);
-  const setting = ta !== null && l !== null && a !== null ? attempt(() => wrenchSetting({ desired: ta, lever: l, adapter: a, direction })) : { value: null, error: null };
+  const setting =
+    ta !== null && l !== null && a !== null
+      ? attempt(() => wrenchSetting({ desired: ta, lever: l, adapter: a, direction }))
+      : { value: null, error: null };
   const rows: [string, string, string?][] = [];
   if (setting.value !== null && ta !== null && l !== null && a !== null) {
-    rows.push(["Set the wrench to", `${formatNumber(setting.value, 4)} ${unit}`, `${desired} × ${lever} ÷ (${lever} ${direction === "lengthens" ? "+" : "−"} ${adapter})`]);
-    rows.push(["Check: applied at that setting", `${formatNumber(appliedTorque({ setting: setting.value, lever: l, adapter: a, direction }), 4)} ${unit}`]);
+    rows.push([
+      "Set the wrench to",
+      `${formatNumber(setting.value, 4)} ${unit}`,
+      `${desired} × ${lever} ÷ (${lever} ${direction === "lengthens" ? "+" : "−"} ${adapter})`,
+    ]);
+    rows.push([
+      "Check: applied at that setting",
+      `${formatNumber(appliedTorque({ setting: setting.value, lever: l, adapter: a, direction }), 4)} ${unit}`,
+    ]);
     for (const [other] of torqueUnits.filter(([u]) => u !== unit)) {
       rows.push([`Setting in ${other}`, `${formatNumber(convert(setting.value, unit, other), 4)} ${other}`]);
     }
@@ -37,7 +51,10 @@ export function TorqueCalculator() {
           label="The adapter"
           value={direction}
           onChange={setDirection}
-          options={[["lengthens", "points away from the handle (lengthens)"], ["shortens", "points back toward the handle (shortens)"]]}
+          options={[
+            ["lengthens", "points away from the handle (lengthens)"],
+            ["shortens", "points back toward the handle (shortens)"],
+          ]}
         />
       </div>
       <Results

@@ -47,14 +47,23 @@ function subscribeOnline(onChange: () => void) {
   };
 }
 
-export const useOnline = () => useSyncExternalStore(subscribeOnline, () => navigator.onLine, () => true);
+export const useOnline = () =>
+  useSyncExternalStore(
+    subscribeOnline,
+    () => navigator.onLine,
+    () => true,
+  );
 
 /** How many changes wait to be sent, kept current as they are queued and sent. */
 export function useWaiting(data: CartData | null): number {
   const [count, setCount] = useState(0);
   useEffect(() => {
     if (!data) return;
-    const read = () => void Promise.all([data.pending(), data.pendingPhotos()]).then(([e, p]) => setCount(e.length + p.length), () => setCount(0));
+    const read = () =>
+      void Promise.all([data.pending(), data.pendingPhotos()]).then(
+        ([e, p]) => setCount(e.length + p.length),
+        () => setCount(0),
+      );
     read();
     return data.onChange(read);
   }, [data]);

@@ -9,8 +9,14 @@ export function CartStatus() {
   const waiting = useWaiting(data);
   return (
     <div className="flex items-center gap-3">
-      <span role="status" aria-live="polite" data-testid="cart-status" className={`badge text-base ${online ? "bg-ok-pale text-ok" : "bg-amber-pale text-ink"}`}>
-        {online ? "Online" : "Offline"} · {waiting === 0 ? "all changes sent" : `${waiting} ${waiting === 1 ? "change waits" : "changes wait"} to be sent`}
+      <span
+        role="status"
+        aria-live="polite"
+        data-testid="cart-status"
+        className={`badge text-base ${online ? "bg-ok-pale text-ok" : "bg-amber-pale text-ink"}`}
+      >
+        {online ? "Online" : "Offline"} ·{" "}
+        {waiting === 0 ? "all changes sent" : `${waiting} ${waiting === 1 ? "change waits" : "changes wait"} to be sent`}
       </span>
       {user ? <span className="font-semibold">{user.name}</span> : null}
     </div>

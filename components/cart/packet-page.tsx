@@ -37,7 +37,12 @@ export default function PacketPage({ file, page, label }: { file: Blob; page: nu
         </button>
       </div>
       <div ref={box} className="overflow-auto rounded-md border-2 border-line bg-white" aria-label={label}>
-        <Document file={file} loading={<p role="status">Opening the page…</p>} error={<p className="notice-error">This page could not be opened.</p>} options={options}>
+        <Document
+          file={file}
+          loading={<p role="status">Opening the page…</p>}
+          error={<p className="notice-error">This page could not be opened.</p>}
+          options={options}
+        >
           <Page pageNumber={page} width={width * zoom} renderAnnotationLayer={false} />
         </Document>
       </div>

@@ -59,7 +59,13 @@ class Writer {
     const size = options.size ?? 10.5;
     const indent = options.indent ?? 0;
     for (const line of wrap(value, font, size, width - indent)) {
-      this.page.drawText(line, { x: margin + indent, y: this.y - size, size, font, color: rgb(options.color ?? 0, options.color ?? 0, options.color ?? 0) });
+      this.page.drawText(line, {
+        x: margin + indent,
+        y: this.y - size,
+        size,
+        font,
+        color: rgb(options.color ?? 0, options.color ?? 0, options.color ?? 0),
+      });
       this.y -= size * 1.45;
     }
   }
@@ -151,7 +157,9 @@ export async function renderManualPdf(manual: DemoManual, revision: { label: str
       w.text("If a result is outside the limits, stop and use this table before going on.");
       w.gap();
       for (const [item] of section.limits ?? [["Result of the procedure", ""]]) {
-        w.text(`${item} out of limits: check the measuring tool and its calibration date, measure again, then report to the instructor.`, { indent: 6 });
+        w.text(`${item} out of limits: check the measuring tool and its calibration date, measure again, then report to the instructor.`, {
+          indent: 6,
+        });
         w.gap(4);
       }
       w.text("Do not adjust beyond the limits to make a reading fit. Record the reading as found.", { indent: 6 });

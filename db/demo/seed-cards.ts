@@ -63,7 +63,10 @@ const rev3 = demoRevisions.trainerFirst.label;
 // first step says so with a NOTE. The trade's rules the cards follow (head height measured, timing
 // approached in the direction of rotation, no backing off a torqued nut, weight taken up first) are
 // common practice; the penetrant timers are what the penetrant calculator gives for the procedure.
-const inventedNote = (what: string) => ({ kind: "note" as const, text: `Demo card: ${what} come from an invented demo manual, not from any aircraft's data. The manufacturer's data, your instructor, local rules and licensed sign-off come first.` });
+const inventedNote = (what: string) => ({
+  kind: "note" as const,
+  text: `Demo card: ${what} come from an invented demo manual, not from any aircraft's data. The manufacturer's data, your instructor, local rules and licensed sign-off come first.`,
+});
 
 /** The penetrant procedure's dwell (51-61-02, invented: 10 minutes minimum) at room temperature. */
 const penetrantTimes = penetrantDwell({ specifiedMinutes: 10, temperature: 70, developer: "nonaqueous" });
@@ -76,16 +79,30 @@ export const demoCards: DemoCard[] = [
     ataChapter: "51",
     applicability: ["Shop practice panel"],
     estimatedMinutes: 240,
-    tools: ["Micrometer, 0-1 in", "Rivet gun and bucking bar", "No. 30 drill and reamer", "Cleco fasteners", "Rivet gauge, diameter and height", "Deburring tool"],
+    tools: [
+      "Micrometer, 0-1 in",
+      "Rivet gun and bucking bar",
+      "No. 30 drill and reamer",
+      "Cleco fasteners",
+      "Rivet gauge, diameter and height",
+      "Deburring tool",
+    ],
     // 51-50-00: the doubler is one gauge thicker than the 0.032 in skin, so 0.040 in is the thickest sheet;
     // 3 × 0.040 = 0.120 in → 1/8 in (AD4) rivets, No. 30 drill (51-20-00).
-    consumables: ["MS20470AD4 rivets, length from the rivet calculator", "2024-T3 sheet, 0.032 in (skin) and 0.040 in (doubler)", "Layout fluid"],
+    consumables: [
+      "MS20470AD4 rivets, length from the rivet calculator",
+      "2024-T3 sheet, 0.032 in (skin) and 0.040 in (doubler)",
+      "Layout fluid",
+    ],
     protectiveEquipment: ["Safety glasses", "Hearing protection"],
     steps: [
       {
         text: "Measure the thickness of the **thickest sheet** of the joint, the 0.040 in doubler, with the micrometer. Record the reading.",
         notices: [inventedNote("the sheet thicknesses and the head-size limits on this card")],
-        refs: [{ manual: sheetMetal, label: rev1, code: "51-10-00" }, { manual: sheetMetal, label: rev1, code: "51-50-00" }],
+        refs: [
+          { manual: sheetMetal, label: rev1, code: "51-10-00" },
+          { manual: sheetMetal, label: rev1, code: "51-50-00" },
+        ],
         // ± 0.002 in: an invented shop tolerance.
         measurement: { label: "Thickest sheet (doubler)", unit: "in", nominal: 0.04, tolerance: 0.002 },
       },
@@ -98,7 +115,10 @@ export const demoCards: DemoCard[] = [
         text: "Lay out two rows of rivets on the doubler, rows about 75 % of the pitch apart. Measure the edge distance of the first rivet.",
         // 1/8 in rivet: 2 D = 0.25 in to 4 D = 0.5 in (51-10-00).
         measurement: { label: "Edge distance, first rivet (1/8 in rivet)", unit: "in", min: 0.25, max: 0.5 },
-        refs: [{ manual: sheetMetal, label: rev1, code: "51-50-00" }, { manual: sheetMetal, label: rev1, code: "51-10-00", part: "limits", quote: "Maximum edge distance" }],
+        refs: [
+          { manual: sheetMetal, label: rev1, code: "51-50-00" },
+          { manual: sheetMetal, label: rev1, code: "51-10-00", part: "limits", quote: "Maximum edge distance" },
+        ],
       },
       {
         text: "Drill pilot holes, ream to size and deburr both sides.",
@@ -140,7 +160,10 @@ export const demoCards: DemoCard[] = [
       {
         text: "Remove paint from the area with chemical stripper, clean with solvent and let the part dry. Measure the part temperature.",
         notices: [
-          { kind: "warning", text: "Solvents, strippers and penetrants are flammable and harm skin and eyes. Work in the ventilated booth with gloves and glasses on." },
+          {
+            kind: "warning",
+            text: "Solvents, strippers and penetrants are flammable and harm skin and eyes. Work in the ventilated booth with gloves and glasses on.",
+          },
           { kind: "caution", text: "Never sand, blast or scrape the paint off: smeared metal closes the cracks the test must find." },
           inventedNote("the dwell and development times and the temperature window"),
         ],
@@ -187,7 +210,10 @@ export const demoCards: DemoCard[] = [
       {
         text: "Make sure the magnetos are grounded and the ignition switch is off. Remove one spark plug from each cylinder.",
         notices: [
-          { kind: "warning", text: "Treat every propeller as live. A magneto with a broken ground lead fires when the propeller turns. Stand clear of the arc." },
+          {
+            kind: "warning",
+            text: "Treat every propeller as live. A magneto with a broken ground lead fires when the propeller turns. Stand clear of the arc.",
+          },
           inventedNote("the timing and its tolerance"),
         ],
         refs: [{ manual: trainer, label: rev3, code: "74-10-00" }],
@@ -198,7 +224,12 @@ export const demoCards: DemoCard[] = [
       },
       {
         text: "With the timing light on the left magneto, turn the crankshaft opposite to its rotation well back from the mark, then forward **in the direction of rotation only** until the points open. Read the timing.",
-        notices: [{ kind: "note", text: "If you pass the mark, go back well past it and come forward again. A reading taken while turning backward is wrong: gear backlash moves it." }],
+        notices: [
+          {
+            kind: "note",
+            text: "If you pass the mark, go back well past it and come forward again. A reading taken while turning backward is wrong: gear backlash moves it.",
+          },
+        ],
         refs: [{ manual: trainer, label: rev3, code: "74-10-00", part: "limits", quote: "Ignition timing" }],
         measurement: { label: "Ignition timing, left magneto", unit: "deg", nominal: 25, tolerance: 1 },
         inspectionPoint: true,
@@ -254,7 +285,10 @@ export const demoCards: DemoCard[] = [
       {
         text: "Jack the aircraft at the marked jack points until both main wheels are clear of the floor. Install the jack locks.",
         notices: [
-          { kind: "warning", text: "An aircraft that slips off a jack can crush you. Use the marked jack points, raise evenly, lock the jacks, and never put any part of your body under the aircraft while it is being raised." },
+          {
+            kind: "warning",
+            text: "An aircraft that slips off a jack can crush you. Use the marked jack points, raise evenly, lock the jacks, and never put any part of your body under the aircraft while it is being raised.",
+          },
           inventedNote("the axle nut torque"),
         ],
         refs: [{ manual: trainer, label: rev3, code: "32-10-00" }],
@@ -267,7 +301,10 @@ export const demoCards: DemoCard[] = [
       {
         text: "Torque the axle nut inside the range and line up the next slot with the cotter-pin hole without leaving the range. Install a new cotter pin.",
         notices: [
-          { kind: "caution", text: "Never back a torqued nut off, or go past the maximum, to line up the hole. If no slot lines up inside the range, tell the instructor: a different washer or nut is needed." },
+          {
+            kind: "caution",
+            text: "Never back a torqued nut off, or go past the maximum, to line up the hole. If no slot lines up inside the range, tell the instructor: a different washer or nut is needed.",
+          },
           { kind: "caution", text: "Never reuse a cotter pin." },
         ],
         refs: [{ manual: trainer, label: rev3, code: "32-10-00", part: "limits", quote: "Axle nut torque" }],
@@ -289,7 +326,10 @@ export const demoCards: DemoCard[] = [
       {
         text: "Make sure the magnetos are off and grounded, then block the aircraft so that it cannot move.",
         notices: [
-          { kind: "warning", text: "Treat every propeller as live: a magneto with a broken ground lead fires when the propeller turns. Stand clear of the arc." },
+          {
+            kind: "warning",
+            text: "Treat every propeller as live: a magneto with a broken ground lead fires when the propeller turns. Stand clear of the arc.",
+          },
           inventedNote("the track limit"),
         ],
         refs: [{ manual: trainer, label: rev3, code: "61-20-00" }],
@@ -309,15 +349,28 @@ export const demoCards: DemoCard[] = [
     ataChapter: "71",
     applicability: ["TF-400"],
     estimatedMinutes: 480,
-    tools: ["Engine hoist and sling rated for the engine weight", "Transport stand", "Tail stand", "Torque wrench, 20-100 ft-lb, calibrated", "Line caps and plugs", "Connector caps"],
+    tools: [
+      "Engine hoist and sling rated for the engine weight",
+      "Transport stand",
+      "Tail stand",
+      "Torque wrench, 20-100 ft-lb, calibrated",
+      "Line caps and plugs",
+      "Connector caps",
+    ],
     consumables: ["Approved fuel drain container", "Tags", "Circuit breaker collars", "New cotter pins"],
     protectiveEquipment: ["Safety shoes", "Gloves", "Safety glasses"],
     steps: [
       {
         text: "Install the tail stand. Disconnect the battery, open the circuit breakers and tag them, and open the ignition exciter breaker.",
         notices: [
-          { kind: "warning", text: "The ignition exciter stores a lethal charge. Open its circuit breaker and wait 5 minutes before you touch an igniter lead." },
-          { kind: "warning", text: "Without the engine's weight the centre of gravity moves aft and the aircraft can sit on its tail: the tail stand goes in before the engine comes off." },
+          {
+            kind: "warning",
+            text: "The ignition exciter stores a lethal charge. Open its circuit breaker and wait 5 minutes before you touch an igniter lead.",
+          },
+          {
+            kind: "warning",
+            text: "Without the engine's weight the centre of gravity moves aft and the aircraft can sit on its tail: the tail stand goes in before the engine comes off.",
+          },
           inventedNote("the engine weight, the waiting time and the mount bolt torque"),
         ],
         refs: [{ manual: turbine, label: rev1, code: "71-00-10" }],
@@ -327,7 +380,10 @@ export const demoCards: DemoCard[] = [
         text: "Close the fuel shutoff valve and drain the lines. Tag, disconnect and cap every electrical connector, line and fitting.",
         notices: [
           { kind: "warning", text: "Fuel vapour ignites. Drain into an approved container and keep extinguishers at the work area." },
-          { kind: "caution", text: "Cap each connector as it comes apart: water and dirt in an open connector make faults that are hard to find." },
+          {
+            kind: "caution",
+            text: "Cap each connector as it comes apart: water and dirt in an open connector make faults that are hard to find.",
+          },
         ],
         refs: [{ manual: turbine, label: rev1, code: "71-00-10" }],
       },
@@ -357,10 +413,18 @@ export const demoCards: DemoCard[] = [
 ];
 
 export async function seedCards(db: Db): Promise<number> {
-  await db.insert(curriculumSubjects).values(demoSubjects.map((name) => ({ name }))).onConflictDoNothing();
+  await db
+    .insert(curriculumSubjects)
+    .values(demoSubjects.map((name) => ({ name })))
+    .onConflictDoNothing();
   const subjects = new Map((await db.select().from(curriculumSubjects)).map((s) => [s.name, s.id]));
   const people = new Map(
-    (await db.select({ id: users.id, email: users.email }).from(users).where(inArray(users.email, [...new Set(demoCards.map((c) => c.owner))]))).map((u) => [u.email, u.id]),
+    (
+      await db
+        .select({ id: users.id, email: users.email })
+        .from(users)
+        .where(inArray(users.email, [...new Set(demoCards.map((c) => c.owner))]))
+    ).map((u) => [u.email, u.id]),
   );
   const revisionRows = await db
     .select({ id: revisions.id, manualId: revisions.manualId, label: revisions.label, title: manuals.title })
@@ -374,13 +438,20 @@ export async function seedCards(db: Db): Promise<number> {
 
   let added = 0;
   for (const card of demoCards) {
-    const [exists] = await db.select({ id: taskCardVersions.id }).from(taskCardVersions).where(and(eq(taskCardVersions.title, card.title), eq(taskCardVersions.number, 1)));
+    const [exists] = await db
+      .select({ id: taskCardVersions.id })
+      .from(taskCardVersions)
+      .where(and(eq(taskCardVersions.title, card.title), eq(taskCardVersions.number, 1)));
     if (exists) continue;
     const steps = card.steps.map((s) => ({
       id: randomUUID(),
       text: s.text,
       notices: s.notices ?? [],
-      references: (s.refs ?? []).map((r) => ({ revisionId: revisionOf(r).id, page: sectionPage(manualByPrefix(r.manual), r.code, r.part), quote: r.quote ?? "" })),
+      references: (s.refs ?? []).map((r) => ({
+        revisionId: revisionOf(r).id,
+        page: sectionPage(manualByPrefix(r.manual), r.code, r.part),
+        quote: r.quote ?? "",
+      })),
       measurement: s.measurement ?? null,
       calculator: s.calculator ?? null,
       inspectionPoint: s.inspectionPoint ?? false,
@@ -418,7 +489,10 @@ export async function seedCards(db: Db): Promise<number> {
       );
       if (citations.length) await tx.insert(cardCitations).values(citations);
       // Citations go in while the version is a draft: once published, the database freezes both.
-      await tx.update(taskCardVersions).set({ status: "published", publishedAt: new Date(), publishedBy: ownerId }).where(eq(taskCardVersions.id, version!.id));
+      await tx
+        .update(taskCardVersions)
+        .set({ status: "published", publishedAt: new Date(), publishedBy: ownerId })
+        .where(eq(taskCardVersions.id, version!.id));
     });
     added++;
   }

@@ -10,7 +10,13 @@ import { getStore, storageKeys } from "@/lib/server/storage";
 import { demoManuals, demoRevisions, secondRevisionOfTrainer, type DemoManual } from "./manual-content";
 import { renderManualPdf } from "./manual-pdf";
 
-async function storeRevision(db: Db, manualId: string, manual: DemoManual, revision: { label: string; date: string }, uploadedBy: string | null) {
+async function storeRevision(
+  db: Db,
+  manualId: string,
+  manual: DemoManual,
+  revision: { label: string; date: string },
+  uploadedBy: string | null,
+) {
   const bytes = await renderManualPdf(manual, revision);
   const revisionId = randomUUID();
   const key = storageKeys.revisionFile(revisionId);
@@ -40,7 +46,13 @@ export async function seedLibrary(db: Db): Promise<number> {
       const ata = [...new Set(manual.chapters.map((c) => c.ata))].sort();
       const [row] = await db
         .insert(manuals)
-        .values({ title: manual.title, documentType: manual.documentType, applicability: manual.applicability, ataChapters: ata, createdBy: by })
+        .values({
+          title: manual.title,
+          documentType: manual.documentType,
+          applicability: manual.applicability,
+          ataChapters: ata,
+          createdBy: by,
+        })
         .returning({ id: manuals.id });
       manualId = row!.id;
       const isTrainer = manual.title.startsWith("HT-20");

@@ -108,27 +108,50 @@ export async function seedRuns(db: Db): Promise<number> {
       .where(and(eq(taskCardVersions.title, a.card), eq(taskCardVersions.number, 1), eq(taskCardVersions.status, "published")));
     const by = people.get(a.by);
     if (!version || !by) continue;
-    const [exists] = await db.select({ id: assignments.id }).from(assignments).where(and(eq(assignments.versionId, version.id), eq(assignments.note, a.note)));
+    const [exists] = await db
+      .select({ id: assignments.id })
+      .from(assignments)
+      .where(and(eq(assignments.versionId, version.id), eq(assignments.note, a.note)));
     if (exists) continue;
     const [klass] = a.className ? await db.select({ id: classes.id }).from(classes).where(eq(classes.name, a.className)) : [];
     const studentEmails = a.students ?? [...people.values()].filter((p) => p.role === "student").map((p) => p.email);
     // The class's students, as assignment to a class does it in lib/server/runs/assign.ts.
     const members = klass
-      ? (await db.select({ email: users.email }).from(classMembers).innerJoin(users, eq(users.id, classMembers.userId)).where(and(eq(classMembers.classId, klass.id), eq(users.role, "student")))).map((r) => r.email)
+      ? (
+          await db
+            .select({ email: users.email })
+            .from(classMembers)
+            .innerJoin(users, eq(users.id, classMembers.userId))
+            .where(and(eq(classMembers.classId, klass.id), eq(users.role, "student")))
+        ).map((r) => r.email)
       : studentEmails;
     const steps = (version.steps as unknown[]).map((s) => stepSchema.parse(s));
     const cited = await revisionsCited(db, steps);
     await db.transaction(async (tx) => {
       const [row] = await tx
         .insert(assignments)
-        .values({ cardId: version.cardId, versionId: version.id, classId: klass?.id ?? null, dueOn: day(a.dueInDays), note: a.note, assignedBy: by.id })
+        .values({
+          cardId: version.cardId,
+          versionId: version.id,
+          classId: klass?.id ?? null,
+          dueOn: day(a.dueInDays),
+          note: a.note,
+          assignedBy: by.id,
+        })
         .returning({ id: assignments.id });
       for (const email of members) {
         const student = people.get(email)!;
         const progress = a.progress[email] ?? "none";
         const events = eventsFor(steps, progress, student.id, by.id);
         const state = foldRun(
-          events.map((e) => ({ id: e.id!, type: e.type as never, userId: e.userId, stepId: e.stepId ?? null, payload: e.payload as Record<string, unknown>, clientTime: (e.clientTime as Date).toISOString() })),
+          events.map((e) => ({
+            id: e.id!,
+            type: e.type as never,
+            userId: e.userId,
+            stepId: e.stepId ?? null,
+            payload: e.payload as Record<string, unknown>,
+            clientTime: (e.clientTime as Date).toISOString(),
+          })),
           steps.map((s) => ({ id: s.id, inspectionPoint: s.inspectionPoint, measurement: s.measurement, timerMinutes: s.timerMinutes })),
           new Set([by.id]),
         );
@@ -146,7 +169,8 @@ export async function seedRuns(db: Db): Promise<number> {
           })
           .returning({ id: runs.id });
         // The demo's carts were online: each event reached the server as it was made.
-        if (events.length) await tx.insert(runEvents).values(events.map((e) => ({ ...e, serverTime: e.clientTime as Date, runId: run!.id })));
+        if (events.length)
+          await tx.insert(runEvents).values(events.map((e) => ({ ...e, serverTime: e.clientTime as Date, runId: run!.id })));
         if (progress === "signed_off") {
           await tx.insert(signOffs).values({
             runId: run!.id,
@@ -163,4 +187,3 @@ export async function seedRuns(db: Db): Promise<number> {
   }
   return added;
 }
-

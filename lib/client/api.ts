@@ -28,13 +28,21 @@ export async function callApi<T>(method: string, path: string, body?: unknown): 
   const data: unknown = await response.json().catch(() => null);
   if (!response.ok) {
     const error = (data as { error?: { code?: string; message?: string; fields?: FieldErrors } } | null)?.error;
-    throw new ApiError(response.status, error?.code ?? "unknown", error?.message ?? `The server answered ${response.status}.`, error?.fields);
+    throw new ApiError(
+      response.status,
+      error?.code ?? "unknown",
+      error?.message ?? `The server answered ${response.status}.`,
+      error?.fields,
+    );
   }
   return data as T;
 }
 
 type Filled<E> = keyof ParamsOf<E> extends never ? { params?: undefined } : { params: { [K in keyof ParamsOf<E>]: string | number } };
-type WithQuery<E> = QueryInputOf<E> extends undefined ? { query?: undefined } : { query?: Partial<Record<keyof NonNullable<QueryInputOf<E>>, string | number | boolean | undefined>> };
+type WithQuery<E> =
+  QueryInputOf<E> extends undefined
+    ? { query?: undefined }
+    : { query?: Partial<Record<keyof NonNullable<QueryInputOf<E>>, string | number | boolean | undefined>> };
 type WithBody<E> = BodyInputOf<E> extends undefined ? { body?: undefined } : { body: BodyInputOf<E> };
 export type CallInput<E> = Filled<E> & WithQuery<E> & WithBody<E>;
 
@@ -42,8 +50,15 @@ export type CallInput<E> = Filled<E> & WithQuery<E> & WithBody<E>;
  * Calls a declared endpoint (lib/contracts/endpoints): the path filled in from `params`, the query
  * from `query` (empty values left out), the body as JSON; the answer typed as the endpoint says.
  */
-export function call<E extends Endpoint>(endpoint: E, ...[input]: keyof CallInput<E> extends never ? [] : [CallInput<E>?]): Promise<AnswerOf<E>> {
-  const { params, query, body } = (input ?? {}) as { params?: Record<string, string | number>; query?: Record<string, unknown>; body?: unknown };
+export function call<E extends Endpoint>(
+  endpoint: E,
+  ...[input]: keyof CallInput<E> extends never ? [] : [CallInput<E>?]
+): Promise<AnswerOf<E>> {
+  const { params, query, body } = (input ?? {}) as {
+    params?: Record<string, string | number>;
+    query?: Record<string, unknown>;
+    body?: unknown;
+  };
   let path = pathOf(endpoint.path, params ?? {});
   const search = new URLSearchParams();
   for (const [key, value] of Object.entries(query ?? {})) if (value !== undefined && value !== "") search.set(key, String(value));

@@ -31,27 +31,32 @@ export function idParam(value: string | undefined, what = "That record"): string
 }
 
 /** A UUID segment; `what` words the 404 ("That task card was not found."). */
-export const uuidSegment = (what: string): ParamParser<string> => (raw) => idParam(raw, what);
+export const uuidSegment =
+  (what: string): ParamParser<string> =>
+  (raw) =>
+    idParam(raw, what);
 
 /** A whole-number segment within [min, max]; anything else is a 404 worded with `what`. */
-export const numberSegment = (what: string, { min = 1, max = 100_000 } = {}): ParamParser<number> => (raw) => {
-  const n = /^\d{1,9}$/.test(raw) ? Number(raw) : NaN;
-  if (!Number.isInteger(n) || n < min || n > max) throw new AppError("not_found", `${what} was not found.`);
-  return n;
-};
+export const numberSegment =
+  (what: string, { min = 1, max = 100_000 } = {}): ParamParser<number> =>
+  (raw) => {
+    const n = /^\d{1,9}$/.test(raw) ? Number(raw) : NaN;
+    if (!Number.isInteger(n) || n < min || n > max) throw new AppError("not_found", `${what} was not found.`);
+    return n;
+  };
 
 /** A segment checked by a zod schema, refused like a bad field (422) rather than as missing. */
-export const schemaSegment = <S extends z.ZodType>(schema: S): ParamParser<z.output<S>> => (raw) => {
-  const result = schema.safeParse(raw);
-  if (!result.success) throw new AppError("invalid", result.error.issues[0]?.message ?? "That value cannot be read.");
-  return result.data;
-};
+export const schemaSegment =
+  <S extends z.ZodType>(schema: S): ParamParser<z.output<S>> =>
+  (raw) => {
+    const result = schema.safeParse(raw);
+    if (!result.success) throw new AppError("invalid", result.error.issues[0]?.message ?? "That value cannot be read.");
+    return result.data;
+  };
 
 /** How the request carries its body. JSON is parsed with the schema; the others are read by the handler. */
 export type BodySpec<S extends z.ZodType = z.ZodType> =
-  | { kind: "json"; schema: S; maxBytes?: number }
-  | { kind: "multipart" }
-  | { kind: "binary" };
+  { kind: "json"; schema: S; maxBytes?: number } | { kind: "multipart" } | { kind: "binary" };
 
 /** What a successful answer is: JSON of type T, a file, or nothing (204). */
 export type Answer<T> = { kind: "json"; type?: T } | { kind: "file"; type?: never } | { kind: "none"; type?: never };
@@ -125,16 +130,25 @@ export function endpoint<
   };
 }
 
-export type AnswerOf<E> = E extends Endpoint<string, Record<string, ParamParser<unknown>>, z.ZodType | undefined, BodySpec | undefined, infer R> ? R : never;
+export type AnswerOf<E> =
+  E extends Endpoint<string, Record<string, ParamParser<unknown>>, z.ZodType | undefined, BodySpec | undefined, infer R> ? R : never;
 export type ParamsOf<E> = E extends Endpoint<string, infer Params> ? { [K in keyof Params]: ReturnType<Params[K]> } : never;
-export type QueryOf<E> = E extends Endpoint<string, Record<string, ParamParser<unknown>>, infer Q> ? (Q extends z.ZodType ? z.output<Q> : undefined) : never;
-export type QueryInputOf<E> = E extends Endpoint<string, Record<string, ParamParser<unknown>>, infer Q> ? (Q extends z.ZodType ? z.input<Q> : undefined) : never;
-export type BodyOf<E> = E extends Endpoint<string, Record<string, ParamParser<unknown>>, z.ZodType | undefined, infer B>
-  ? B extends { kind: "json"; schema: infer S extends z.ZodType } ? z.output<S> : undefined
-  : never;
-export type BodyInputOf<E> = E extends Endpoint<string, Record<string, ParamParser<unknown>>, z.ZodType | undefined, infer B>
-  ? B extends { kind: "json"; schema: infer S extends z.ZodType } ? z.input<S> : undefined
-  : never;
+export type QueryOf<E> =
+  E extends Endpoint<string, Record<string, ParamParser<unknown>>, infer Q> ? (Q extends z.ZodType ? z.output<Q> : undefined) : never;
+export type QueryInputOf<E> =
+  E extends Endpoint<string, Record<string, ParamParser<unknown>>, infer Q> ? (Q extends z.ZodType ? z.input<Q> : undefined) : never;
+export type BodyOf<E> =
+  E extends Endpoint<string, Record<string, ParamParser<unknown>>, z.ZodType | undefined, infer B>
+    ? B extends { kind: "json"; schema: infer S extends z.ZodType }
+      ? z.output<S>
+      : undefined
+    : never;
+export type BodyInputOf<E> =
+  E extends Endpoint<string, Record<string, ParamParser<unknown>>, z.ZodType | undefined, infer B>
+    ? B extends { kind: "json"; schema: infer S extends z.ZodType }
+      ? z.input<S>
+      : undefined
+    : never;
 
 /** The path with its `:name` segments filled in (each encoded). */
 export function pathOf(path: string, params: Record<string, string | number>): string {
@@ -149,5 +163,9 @@ export function pathOf(path: string, params: Record<string, string | number>): s
 export function shownPath(e: Endpoint): string {
   const path = e.path.replace(/:(\w+)/g, "{$1}");
   const shape = (e.query as unknown as { shape?: Record<string, unknown> } | undefined)?.shape;
-  return shape ? `${path}?${Object.keys(shape).map((k) => `${k}=`).join("&")}` : path;
+  return shape
+    ? `${path}?${Object.keys(shape)
+        .map((k) => `${k}=`)
+        .join("&")}`
+    : path;
 }

@@ -90,7 +90,15 @@ export interface StudentRecordDto {
   student: { id: string; name: string; email: string };
   subjects: {
     subjectName: string;
-    signedOff: { runId: string; title: string; versionNumber: number; signedAt: string; instructorName: string; estimatedMinutes: number | null; actualMinutes: number }[];
+    signedOff: {
+      runId: string;
+      title: string;
+      versionNumber: number;
+      signedAt: string;
+      instructorName: string;
+      estimatedMinutes: number | null;
+      actualMinutes: number;
+    }[];
   }[];
   open: WorkItemDto[];
   returned: WorkItemDto[];

@@ -12,7 +12,11 @@ const safeMethods = new Set(["GET", "HEAD", "OPTIONS"]);
  */
 export function crossOriginRefusal(request: { method: string; headers: Headers }, appOrigin: string): AppError | null {
   if (safeMethods.has(request.method.toUpperCase())) return null;
-  const refused = () => new AppError("forbidden", "This request did not come from Hangarleaf's own pages, so it was refused. Open the app and try again there.");
+  const refused = () =>
+    new AppError(
+      "forbidden",
+      "This request did not come from Hangarleaf's own pages, so it was refused. Open the app and try again there.",
+    );
   const site = request.headers.get("sec-fetch-site");
   if (site) return site === "same-origin" || site === "none" ? null : refused();
   const origin = request.headers.get("origin");

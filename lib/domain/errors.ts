@@ -36,11 +36,7 @@ export class AppError extends Error {
   readonly fields?: FieldErrors;
   readonly retryAfterSeconds?: number;
 
-  constructor(
-    code: ErrorCode,
-    message?: string,
-    options: { cause?: unknown; fields?: FieldErrors; retryAfterSeconds?: number } = {},
-  ) {
+  constructor(code: ErrorCode, message?: string, options: { cause?: unknown; fields?: FieldErrors; retryAfterSeconds?: number } = {}) {
     super(message ?? defaultMessages[code], { cause: options.cause });
     this.name = "AppError";
     this.code = code;

@@ -27,7 +27,9 @@ export async function listUsers() {
   const rows = await getDb()
     .select({
       ...publicColumns,
-      classNames: sql<string[]>`coalesce(array_agg(${classes.name} order by ${classes.name}) filter (where ${classes.id} is not null), '{}')`,
+      classNames: sql<
+        string[]
+      >`coalesce(array_agg(${classes.name} order by ${classes.name}) filter (where ${classes.id} is not null), '{}')`,
     })
     .from(users)
     .leftJoin(classMembers, eq(classMembers.userId, users.id))
@@ -218,7 +220,13 @@ export async function setPasswordWithToken({ token, password }: { token: string;
   const passwordHash = await hashPassword(password);
   return getDb().transaction(async (tx) => {
     const [found] = await tx
-      .select({ id: accountTokens.id, userId: accountTokens.userId, purpose: accountTokens.purpose, expiresAt: accountTokens.expiresAt, usedAt: accountTokens.usedAt })
+      .select({
+        id: accountTokens.id,
+        userId: accountTokens.userId,
+        purpose: accountTokens.purpose,
+        expiresAt: accountTokens.expiresAt,
+        usedAt: accountTokens.usedAt,
+      })
       .from(accountTokens)
       .where(eq(accountTokens.tokenHash, hashLinkToken(token)))
       .for("update");
@@ -227,7 +235,10 @@ export async function setPasswordWithToken({ token, password }: { token: string;
     }
     const [user] = await tx.select({ status: users.status }).from(users).where(eq(users.id, found.userId)).for("update");
     if (!user || user.status === "deactivated") throw new AppError("invalid", badLink, { fields: { token: badLink } });
-    await tx.update(accountTokens).set({ usedAt: sql`now()` }).where(and(eq(accountTokens.userId, found.userId), isNull(accountTokens.usedAt)));
+    await tx
+      .update(accountTokens)
+      .set({ usedAt: sql`now()` })
+      .where(and(eq(accountTokens.userId, found.userId), isNull(accountTokens.usedAt)));
     const [updated] = await tx
       .update(users)
       .set({ passwordHash, status: "active", sessionVersion: sql`${users.sessionVersion} + 1` })

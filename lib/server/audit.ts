@@ -4,7 +4,6 @@ import { getDb } from "@/db";
 import { auditEvents, users } from "@/db/schema";
 import { auditKinds, type AuditKind } from "@/lib/domain/validation/audit";
 
-
 export interface AuditEntry {
   actorId: string | null;
   action: string;
@@ -23,7 +22,6 @@ export async function recordAudit(tx: Tx | Db, entry: AuditEntry): Promise<void>
     details: entry.details ?? {},
   });
 }
-
 
 export interface AuditFilter {
   limit?: number;

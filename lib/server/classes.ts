@@ -28,11 +28,7 @@ export async function listClasses({ actor }: { actor: Actor }) {
     .from(classes)
     .leftJoin(classMembers, eq(classMembers.classId, classes.id))
     .leftJoin(users, eq(users.id, classMembers.userId))
-    .where(
-      seesAll
-        ? undefined
-        : sql`exists (select 1 from ${classMembers} m where m.class_id = ${classes.id} and m.user_id = ${actor.id})`,
-    )
+    .where(seesAll ? undefined : sql`exists (select 1 from ${classMembers} m where m.class_id = ${classes.id} and m.user_id = ${actor.id})`)
     .groupBy(classes.id)
     .orderBy(asc(classes.name));
   return rows;
@@ -66,7 +62,13 @@ export async function createClass({
     return await getDb().transaction(async (tx) => {
       const [created] = await tx.insert(classes).values(input).returning();
       if (!created) throw new AppError("internal");
-      await recordAudit(tx, { actorId: actor.id, action: "class.created", subjectType: "class", subjectId: created.id, details: { name: created.name } });
+      await recordAudit(tx, {
+        actorId: actor.id,
+        action: "class.created",
+        subjectType: "class",
+        subjectId: created.id,
+        details: { name: created.name },
+      });
       return created;
     });
   } catch (error) {
@@ -121,7 +123,13 @@ export async function addClassMembers({ actor, classId, userIds }: { actor: Acto
       .onConflictDoNothing()
       .returning({ userId: classMembers.userId });
     if (added.length) {
-      await recordAudit(tx, { actorId: actor.id, action: "class.members_added", subjectType: "class", subjectId: classId, details: { userIds: added.map((a) => a.userId) } });
+      await recordAudit(tx, {
+        actorId: actor.id,
+        action: "class.members_added",
+        subjectType: "class",
+        subjectId: classId,
+        details: { userIds: added.map((a) => a.userId) },
+      });
     }
     return { added: added.length };
   });
@@ -134,7 +142,13 @@ export async function removeClassMember({ actor, classId, userId }: { actor: Act
       .where(and(eq(classMembers.classId, classId), eq(classMembers.userId, userId)))
       .returning({ userId: classMembers.userId });
     if (!removed.length) throw new AppError("not_found", "That person is not in this class.");
-    await recordAudit(tx, { actorId: actor.id, action: "class.member_removed", subjectType: "class", subjectId: classId, details: { userId } });
+    await recordAudit(tx, {
+      actorId: actor.id,
+      action: "class.member_removed",
+      subjectType: "class",
+      subjectId: classId,
+      details: { userId },
+    });
     return { removed: 1 };
   });
 }

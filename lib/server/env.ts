@@ -24,10 +24,17 @@ const envSchema = z.object({
   // Search: PostgreSQL unless a Meilisearch server is named.
   MEILI_URL: z.url().optional(),
   MEILI_KEY: z.string().optional(),
-  MEILI_INDEX: z.string().regex(/^[\w-]+$/).default("hangarleaf-pages"),
+  MEILI_INDEX: z
+    .string()
+    .regex(/^[\w-]+$/)
+    .default("hangarleaf-pages"),
   // Answers kept in the web server's memory until the library changes (search/postgres.ts).
   HL_SEARCH_CACHE: z.enum(["on", "off"]).default("on"),
-  HL_UPLOAD_LIMIT_BYTES: z.coerce.number().int().positive().default(1024 ** 3),
+  HL_UPLOAD_LIMIT_BYTES: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(1024 ** 3),
 });
 
 export type Env = z.infer<typeof envSchema>;

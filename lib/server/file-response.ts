@@ -4,7 +4,12 @@ import { Readable } from "node:stream";
 
 /** A name safe in a Content-Disposition header and on any file system: letters, digits and dashes. */
 export function fileSlug(text: string, fallback: string): string {
-  return text.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || fallback;
+  return (
+    text
+      .replace(/[^A-Za-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "")
+      .slice(0, 60) || fallback
+  );
 }
 
 export interface FileOptions {
@@ -30,6 +35,7 @@ export function fileResponse(body: Uint8Array | string | Readable | ReadableStre
   if (options.filename) headers["Content-Disposition"] = `${options.download ? "attachment" : "inline"}; filename="${options.filename}"`;
   if (options.size !== undefined) headers["Content-Length"] = String(options.size);
   if (options.etag) headers.ETag = `"${options.etag}"`;
-  const payload = body instanceof Readable ? (Readable.toWeb(body) as ReadableStream) : body instanceof Uint8Array ? Buffer.from(body) : body;
+  const payload =
+    body instanceof Readable ? (Readable.toWeb(body) as ReadableStream) : body instanceof Uint8Array ? Buffer.from(body) : body;
   return new Response(payload, { status: options.status ?? 200, headers });
 }

@@ -19,10 +19,7 @@ export function buildIsStale() {
   };
   const sources = ["app", "components", "lib", "db", "search", "public"].map((d) => path.join(root, d));
   const files = ["package-lock.json", "next.config.ts", "proxy.ts", "postcss.config.mjs"].map((f) => path.join(root, f));
-  const mtimes = [
-    ...sources.filter(existsSync).map(newest),
-    ...files.filter(existsSync).map((f) => statSync(f).mtimeMs),
-  ];
+  const mtimes = [...sources.filter(existsSync).map(newest), ...files.filter(existsSync).map((f) => statSync(f).mtimeMs)];
   return mtimes.some((m) => m > built);
 }
 

@@ -101,10 +101,24 @@ export async function startCluster({ bin, home, port }) {
 
   if (!existsSync(path.join(data, "PG_VERSION"))) {
     log(`creating a PostgreSQL cluster in ${data}`);
-    run(...asPostgres(path.join(bin, "initdb"), [
-      "-D", data, "-U", "postgres", "-E", "UTF8", "--no-locale",
-      "--auth-host=scram-sha-256", "--auth-local=peer", `--pwfile=${passwordFile}`,
-    ], { stdio: ["ignore", "ignore", "inherit"] }));
+    run(
+      ...asPostgres(
+        path.join(bin, "initdb"),
+        [
+          "-D",
+          data,
+          "-U",
+          "postgres",
+          "-E",
+          "UTF8",
+          "--no-locale",
+          "--auth-host=scram-sha-256",
+          "--auth-local=peer",
+          `--pwfile=${passwordFile}`,
+        ],
+        { stdio: ["ignore", "ignore", "inherit"] },
+      ),
+    );
   }
 
   const pgCtl = path.join(bin, "pg_ctl");
@@ -115,7 +129,11 @@ export async function startCluster({ bin, home, port }) {
   let startedHere = false;
   if (!status.ok) {
     log(`starting PostgreSQL on 127.0.0.1:${port} (log: ${path.join(home, "postgres.log")})`);
-    run(...asPostgres(pgCtl, ["start", "-w", "-t", "60", "-D", data, "-l", path.join(home, "postgres.log"), "-o", serverOptions], { stdio: ["ignore", "ignore", "inherit"] }));
+    run(
+      ...asPostgres(pgCtl, ["start", "-w", "-t", "60", "-D", data, "-l", path.join(home, "postgres.log"), "-o", serverOptions], {
+        stdio: ["ignore", "ignore", "inherit"],
+      }),
+    );
     startedHere = true;
   } else {
     log(`PostgreSQL is already running for ${data}`);
@@ -126,7 +144,11 @@ export async function startCluster({ bin, home, port }) {
     if (!startedHere || stoppingAll) return;
     if (capture(...asPostgres(pgCtl, ["status", "-D", data])).ok) return;
     log("PostgreSQL stopped unexpectedly; starting it again");
-    spawnSync(...asPostgres(pgCtl, ["start", "-w", "-t", "60", "-D", data, "-l", path.join(home, "postgres.log"), "-o", serverOptions], { stdio: "ignore" }));
+    spawnSync(
+      ...asPostgres(pgCtl, ["start", "-w", "-t", "60", "-D", data, "-l", path.join(home, "postgres.log"), "-o", serverOptions], {
+        stdio: "ignore",
+      }),
+    );
   }, 5000);
   watchdog.unref();
   const stop = () => {

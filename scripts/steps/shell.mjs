@@ -7,7 +7,6 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 
-
 export const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..", "..");
 
 export const dataDir = path.join(root, ".data");
@@ -35,7 +34,9 @@ export function runAsync(command, args, options = {}) {
   return new Promise((resolve, reject) => {
     const child = spawn(command, args, { stdio: "inherit", cwd: root, ...options });
     child.on("error", reject);
-    child.on("exit", (code, signal) => (code === 0 ? resolve() : reject(new Error(`${command} ${args.join(" ")} exited with ${code ?? signal}`))));
+    child.on("exit", (code, signal) =>
+      code === 0 ? resolve() : reject(new Error(`${command} ${args.join(" ")} exited with ${code ?? signal}`)),
+    );
   });
 }
 

@@ -10,7 +10,16 @@ const axePath = createRequire(import.meta.url).resolve("axe-core/axe.min.js");
 async function seriousViolations(page: Page) {
   await page.addScriptTag({ path: axePath });
   const results = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (context: Document, options: object) => Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }> } }).axe;
+    const axe = (
+      window as unknown as {
+        axe: {
+          run: (
+            context: Document,
+            options: object,
+          ) => Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }>;
+        };
+      }
+    ).axe;
     return axe.run(document, { resultTypes: ["violations"] });
   });
   return results.violations
@@ -59,7 +68,16 @@ test("the task card and calculator pages have no serious accessibility violation
   await page.getByRole("link", { name: /^Edit/ }).click();
   await expect(new CardEditorPage(page).heading(/Editing/)).toBeVisible();
   expect(await seriousViolations(page), "card editor").toEqual([]);
-  for (const path of ["/calculators", "/calculators/rivets", "/calculators/bend", "/calculators/torque", "/calculators/penetrant", "/calculators/coil-shot", "/calculators/units", "/cards/new"]) {
+  for (const path of [
+    "/calculators",
+    "/calculators/rivets",
+    "/calculators/bend",
+    "/calculators/torque",
+    "/calculators/penetrant",
+    "/calculators/coil-shot",
+    "/calculators/units",
+    "/cards/new",
+  ]) {
     await page.goto(path);
     await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
     expect(await seriousViolations(page), path).toEqual([]);

@@ -25,7 +25,10 @@ test("a librarian uploads a manual and watches it become ready", async ({ page }
   await form.getByRole("button", { name: "Upload manual" }).click();
 
   await expect(form.getByText(/Uploaded: .* of /)).toBeVisible();
-  await expect(form.getByRole("status").filter({ hasText: "is ready" })).toContainText("Rev 1 is ready: 3 pages, now the current revision", { timeout: 30_000 });
+  await expect(form.getByRole("status").filter({ hasText: "is ready" })).toContainText(
+    "Rev 1 is ready: 3 pages, now the current revision",
+    { timeout: 30_000 },
+  );
   await form.getByRole("link", { name: "Open the manual" }).click();
   await expect(page.getByRole("heading", { level: 1, name: title })).toBeVisible();
   await expect(page.getByRole("row").filter({ hasText: "Rev 1" })).toContainText("Current");
@@ -39,7 +42,9 @@ test("an upload that is not a PDF is refused in plain words", async ({ page }) =
   await form.getByLabel("Title").fill(`Not a manual ${Date.now()}`);
   await form.getByLabel("Revision label").fill("Rev 1");
   await form.getByLabel("Revision date").fill("2026-11-20");
-  await form.getByLabel("PDF file").setInputFiles({ name: "notes.pdf", mimeType: "application/pdf", buffer: Buffer.from("shopping list\n".repeat(200)) });
+  await form
+    .getByLabel("PDF file")
+    .setInputFiles({ name: "notes.pdf", mimeType: "application/pdf", buffer: Buffer.from("shopping list\n".repeat(200)) });
   await form.getByRole("button", { name: "Upload manual" }).click();
   await expect(form.getByRole("alert").filter({ hasText: /./ })).toHaveText("That file is not a PDF. Upload the manual as a PDF file.");
 });

@@ -3,10 +3,22 @@ import { AppShell } from "./support/pages/app-shell";
 import { SignInPage } from "./support/pages/sign-in";
 
 const roles = [
-  { email: "student@hangarleaf.test", role: "Student", nav: ["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Records"] },
+  {
+    email: "student@hangarleaf.test",
+    role: "Student",
+    nav: ["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Records"],
+  },
   { email: "librarian@hangarleaf.test", role: "Librarian", nav: ["Home", "Search", "Library", "Task cards", "Calculators"] },
-  { email: "instructor@hangarleaf.test", role: "Instructor", nav: ["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records"] },
-  { email: "admin@hangarleaf.test", role: "Admin", nav: ["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records", "Accounts", "Audit log", "Outbox"] },
+  {
+    email: "instructor@hangarleaf.test",
+    role: "Instructor",
+    nav: ["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records"],
+  },
+  {
+    email: "admin@hangarleaf.test",
+    role: "Admin",
+    nav: ["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records", "Accounts", "Audit log", "Outbox"],
+  },
 ];
 
 for (const { email, role, nav } of roles) {

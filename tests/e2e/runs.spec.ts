@@ -23,7 +23,9 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   const subjects = (await (await instructor.get("/api/subjects")).json()) as { subjects: { id: string; name: string }[] };
   const subject = subjects.subjects.find((s) => s.name === "Flight controls") ?? subjects.subjects[0]!;
   // The demo's own manual: the integration tests leave manuals of their own in the same database.
-  const manuals = (await (await instructor.get("/api/manuals")).json()) as { manuals: { id: string; title: string; currentRevisionId: string | null }[] };
+  const manuals = (await (await instructor.get("/api/manuals")).json()) as {
+    manuals: { id: string; title: string; currentRevisionId: string | null }[];
+  };
   const revisionId = manuals.manuals.find((m) => m.title === "HT-20 Trainer Maintenance Manual" && m.currentRevisionId)!.currentRevisionId!;
   const title = `Rudder cable tension ${Date.now()}`;
   const stepIds = [crypto.randomUUID(), crypto.randomUUID()];
@@ -97,14 +99,19 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   await context.setOffline(false);
   await page.evaluate(() => window.dispatchEvent(new Event("online")));
   await expect(runner.cartStatus()).toContainText("all changes sent", { timeout: 20_000 });
-  const events = async () => ((await (await instructor.get(`/api/runs/${runId}`)).json()) as { events: { id: string; type: string }[] }).events;
+  const events = async () =>
+    ((await (await instructor.get(`/api/runs/${runId}`)).json()) as { events: { id: string; type: string }[] }).events;
   let stored = await events();
   expect(stored.map((e) => e.type).sort()).toEqual(["note.added", "step.checked", "step.checked", "value.recorded", "value.recorded"]);
   expect(new Set(stored.map((e) => e.id)).size).toBe(5);
 
   await runner.handIn();
   await expect(runner.runStatus()).toContainText("Handed in");
-  await expect.poll(async () => ((await (await instructor.get(`/api/runs/${runId}`)).json()) as { run: { status: string } }).run.status, { timeout: 20_000 }).toBe("submitted");
+  await expect
+    .poll(async () => ((await (await instructor.get(`/api/runs/${runId}`)).json()) as { run: { status: string } }).run.status, {
+      timeout: 20_000,
+    })
+    .toBe("submitted");
 
   // The instructor returns it from the review screen.
   const reviewerContext = await browser.newContext();
@@ -126,7 +133,11 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   await runner.handIn();
   await expect(runner.runStatus()).toContainText("Handed in");
   // The badge can still say "all changes sent" from before the click: ask the server instead.
-  await expect.poll(async () => ((await (await instructor.get(`/api/runs/${runId}`)).json()) as { run: { status: string } }).run.status, { timeout: 20_000 }).toBe("submitted");
+  await expect
+    .poll(async () => ((await (await instructor.get(`/api/runs/${runId}`)).json()) as { run: { status: string } }).run.status, {
+      timeout: 20_000,
+    })
+    .toBe("submitted");
 
   await reviewer.reload();
   await review.signOff();

@@ -53,7 +53,10 @@ const only = (allowed: Partial<Record<Role | "anonymous", number>>, denied = 403
   ...allowed,
 });
 const all = (status: number): Record<Role | "anonymous", number> =>
-  Object.fromEntries(["anonymous", "student", "instructor", "librarian", "admin"].map((w) => [w, status])) as Record<Role | "anonymous", number>;
+  Object.fromEntries(["anonymous", "student", "instructor", "librarian", "admin"].map((w) => [w, status])) as Record<
+    Role | "anonymous",
+    number
+  >;
 
 export const accessMatrix: Row[] = [
   { method: "GET", route: "/api/health", path: () => "/api/health", expect: all(200) },
@@ -70,9 +73,27 @@ export const accessMatrix: Row[] = [
   { method: "POST", route: "/api/password", path: () => "/api/password", json: {}, expect: all(422) },
   { method: "GET", route: "/api/classes", path: () => "/api/classes", expect: only({ instructor: 200, admin: 200 }) },
   { method: "POST", route: "/api/classes", path: () => "/api/classes", json: {}, expect: only({ admin: 422 }) },
-  { method: "GET", route: "/api/classes/[id]", path: (i) => `/api/classes/${i.dayClassId}`, expect: only({ instructor: 200, admin: 200 }), cross: { otherInstructor: 404 } },
-  { method: "PATCH", route: "/api/classes/[id]", path: (i) => `/api/classes/${i.dayClassId}`, json: { name: "" }, expect: only({ admin: 422 }) },
-  { method: "POST", route: "/api/classes/[id]/members", path: (i) => `/api/classes/${i.dayClassId}/members`, json: { userIds: [] }, expect: only({ admin: 422 }) },
+  {
+    method: "GET",
+    route: "/api/classes/[id]",
+    path: (i) => `/api/classes/${i.dayClassId}`,
+    expect: only({ instructor: 200, admin: 200 }),
+    cross: { otherInstructor: 404 },
+  },
+  {
+    method: "PATCH",
+    route: "/api/classes/[id]",
+    path: (i) => `/api/classes/${i.dayClassId}`,
+    json: { name: "" },
+    expect: only({ admin: 422 }),
+  },
+  {
+    method: "POST",
+    route: "/api/classes/[id]/members",
+    path: (i) => `/api/classes/${i.dayClassId}/members`,
+    json: { userIds: [] },
+    expect: only({ admin: 422 }),
+  },
   {
     method: "DELETE",
     route: "/api/classes/[id]/members/[userId]",
@@ -85,54 +106,217 @@ export const accessMatrix: Row[] = [
   // A JSON body where multipart is needed: the allowed roles get as far as the 415.
   { method: "POST", route: "/api/manuals", path: () => "/api/manuals", json: {}, expect: only({ librarian: 415, admin: 415 }) },
   { method: "GET", route: "/api/manuals/[id]", path: (i) => `/api/manuals/${i.manualId}`, expect: { ...all(200), anonymous: 401 } },
-  { method: "POST", route: "/api/manuals/[id]/revisions", path: (i) => `/api/manuals/${i.manualId}/revisions`, json: {}, expect: only({ librarian: 415, admin: 415 }) },
+  {
+    method: "POST",
+    route: "/api/manuals/[id]/revisions",
+    path: (i) => `/api/manuals/${i.manualId}/revisions`,
+    json: {},
+    expect: only({ librarian: 415, admin: 415 }),
+  },
   { method: "GET", route: "/api/revisions/[id]", path: (i) => `/api/revisions/${i.revisionId}`, expect: { ...all(200), anonymous: 401 } },
-  { method: "POST", route: "/api/revisions/[id]/retry", path: (i) => `/api/revisions/${i.nobody}/retry`, expect: only({ librarian: 404, admin: 404 }) },
-  { method: "GET", route: "/api/revisions/[id]/file", path: (i) => `/api/revisions/${i.revisionId}/file`, expect: { ...all(200), anonymous: 401 } },
-  { method: "GET", route: "/api/revisions/[id]/pages/[n]", path: (i) => `/api/revisions/${i.revisionId}/pages/1`, expect: { ...all(200), anonymous: 401 } },
+  {
+    method: "POST",
+    route: "/api/revisions/[id]/retry",
+    path: (i) => `/api/revisions/${i.nobody}/retry`,
+    expect: only({ librarian: 404, admin: 404 }),
+  },
+  {
+    method: "GET",
+    route: "/api/revisions/[id]/file",
+    path: (i) => `/api/revisions/${i.revisionId}/file`,
+    expect: { ...all(200), anonymous: 401 },
+  },
+  {
+    method: "GET",
+    route: "/api/revisions/[id]/pages/[n]",
+    path: (i) => `/api/revisions/${i.revisionId}/pages/1`,
+    expect: { ...all(200), anonymous: 401 },
+  },
   {
     method: "GET",
     route: "/api/revisions/[id]/pages/[n]/thumbnail",
     path: (i) => `/api/revisions/${i.nobody}/pages/1/thumbnail`,
     expect: { ...all(404), anonymous: 401 },
   },
-  { method: "GET", route: "/api/revisions/[id]/changes", path: (i) => `/api/revisions/${i.nobody}/changes`, expect: { ...all(404), anonymous: 401 } },
-  { method: "GET", route: "/api/cards/[id]/rechecks", path: (i) => `/api/cards/${i.cardId}/rechecks`, expect: only({ instructor: 200, admin: 200 }) },
-  { method: "POST", route: "/api/cards/[id]/rechecks", path: (i) => `/api/cards/${i.cardId}/rechecks`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  {
+    method: "GET",
+    route: "/api/revisions/[id]/changes",
+    path: (i) => `/api/revisions/${i.nobody}/changes`,
+    expect: { ...all(404), anonymous: 401 },
+  },
+  {
+    method: "GET",
+    route: "/api/cards/[id]/rechecks",
+    path: (i) => `/api/cards/${i.cardId}/rechecks`,
+    expect: only({ instructor: 200, admin: 200 }),
+  },
+  {
+    method: "POST",
+    route: "/api/cards/[id]/rechecks",
+    path: (i) => `/api/cards/${i.cardId}/rechecks`,
+    json: {},
+    expect: only({ instructor: 422, admin: 422 }),
+  },
   { method: "GET", route: "/api/subjects", path: () => "/api/subjects", expect: { ...all(200), anonymous: 401 } },
   { method: "POST", route: "/api/subjects", path: () => "/api/subjects", json: {}, expect: only({ admin: 422 }) },
-  { method: "PATCH", route: "/api/subjects/[id]", path: (i) => `/api/subjects/${i.nobody}`, json: { name: "Nobody's subject" }, expect: only({ admin: 404 }) },
+  {
+    method: "PATCH",
+    route: "/api/subjects/[id]",
+    path: (i) => `/api/subjects/${i.nobody}`,
+    json: { name: "Nobody's subject" },
+    expect: only({ admin: 404 }),
+  },
   { method: "GET", route: "/api/cards", path: () => "/api/cards", expect: { ...all(200), anonymous: 401 } },
   { method: "POST", route: "/api/cards", path: () => "/api/cards", json: {}, expect: only({ instructor: 422, admin: 422 }) },
   { method: "GET", route: "/api/cards/[id]", path: (i) => `/api/cards/${i.cardId}`, expect: { ...all(200), anonymous: 401 } },
-  { method: "PUT", route: "/api/cards/[id]/draft", path: (i) => `/api/cards/${i.cardId}/draft`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
-  { method: "DELETE", route: "/api/cards/[id]/draft", path: (i) => `/api/cards/${i.nobody}/draft`, expect: only({ instructor: 404, admin: 404 }) },
-  { method: "POST", route: "/api/cards/[id]/draft/citations", path: (i) => `/api/cards/${i.cardId}/draft/citations`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
-  { method: "POST", route: "/api/cards/[id]/publish", path: (i) => `/api/cards/${i.nobody}/publish`, expect: only({ instructor: 404, admin: 404 }) },
-  { method: "POST", route: "/api/cards/[id]/duplicate", path: (i) => `/api/cards/${i.nobody}/duplicate`, expect: only({ instructor: 404, admin: 404 }) },
-  { method: "POST", route: "/api/cards/[id]/archive", path: (i) => `/api/cards/${i.cardId}/archive`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
-  { method: "GET", route: "/api/cards/[id]/versions/[v]", path: (i) => `/api/cards/${i.cardId}/versions/1`, expect: { ...all(200), anonymous: 401 } },
-  { method: "PATCH", route: "/api/cards/[id]/versions/[v]", path: (i) => `/api/cards/${i.cardId}/versions/1`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
-  { method: "GET", route: "/api/cards/[id]/versions/[v]/pdf", path: (i) => `/api/cards/${i.cardId}/versions/1/pdf`, expect: { ...all(200), anonymous: 401 } },
+  {
+    method: "PUT",
+    route: "/api/cards/[id]/draft",
+    path: (i) => `/api/cards/${i.cardId}/draft`,
+    json: {},
+    expect: only({ instructor: 422, admin: 422 }),
+  },
+  {
+    method: "DELETE",
+    route: "/api/cards/[id]/draft",
+    path: (i) => `/api/cards/${i.nobody}/draft`,
+    expect: only({ instructor: 404, admin: 404 }),
+  },
+  {
+    method: "POST",
+    route: "/api/cards/[id]/draft/citations",
+    path: (i) => `/api/cards/${i.cardId}/draft/citations`,
+    json: {},
+    expect: only({ instructor: 422, admin: 422 }),
+  },
+  {
+    method: "POST",
+    route: "/api/cards/[id]/publish",
+    path: (i) => `/api/cards/${i.nobody}/publish`,
+    expect: only({ instructor: 404, admin: 404 }),
+  },
+  {
+    method: "POST",
+    route: "/api/cards/[id]/duplicate",
+    path: (i) => `/api/cards/${i.nobody}/duplicate`,
+    expect: only({ instructor: 404, admin: 404 }),
+  },
+  {
+    method: "POST",
+    route: "/api/cards/[id]/archive",
+    path: (i) => `/api/cards/${i.cardId}/archive`,
+    json: {},
+    expect: only({ instructor: 422, admin: 422 }),
+  },
+  {
+    method: "GET",
+    route: "/api/cards/[id]/versions/[v]",
+    path: (i) => `/api/cards/${i.cardId}/versions/1`,
+    expect: { ...all(200), anonymous: 401 },
+  },
+  {
+    method: "PATCH",
+    route: "/api/cards/[id]/versions/[v]",
+    path: (i) => `/api/cards/${i.cardId}/versions/1`,
+    json: {},
+    expect: only({ instructor: 422, admin: 422 }),
+  },
+  {
+    method: "GET",
+    route: "/api/cards/[id]/versions/[v]/pdf",
+    path: (i) => `/api/cards/${i.cardId}/versions/1/pdf`,
+    expect: { ...all(200), anonymous: 401 },
+  },
   { method: "GET", route: "/api/assignments", path: () => "/api/assignments", expect: only({ instructor: 200, admin: 200 }) },
   { method: "POST", route: "/api/assignments", path: () => "/api/assignments", json: {}, expect: only({ instructor: 422, admin: 422 }) },
   { method: "GET", route: "/api/my-work", path: () => "/api/my-work", expect: only({ student: 200 }) },
   { method: "GET", route: "/api/review", path: () => "/api/review", expect: only({ instructor: 200, admin: 200 }) },
   // A run is seen by its student and by reviewers; anyone else is told it does not exist.
-  { method: "GET", route: "/api/runs/[id]", path: (i) => `/api/runs/${i.runId}`, expect: { anonymous: 401, student: 200, instructor: 200, librarian: 404, admin: 200 }, cross: { otherInstructor: 404, otherStudent: 404 } },
-  { method: "POST", route: "/api/runs/[id]/events", path: (i) => `/api/runs/${i.runId}/events`, json: {}, expect: { ...all(422), anonymous: 401 } },
-  { method: "GET", route: "/api/runs/[id]/packet", path: (i) => `/api/runs/${i.runId}/packet`, expect: { anonymous: 401, student: 200, instructor: 200, librarian: 404, admin: 200 }, cross: { otherInstructor: 404, otherStudent: 404 } },
-  { method: "PUT", route: "/api/runs/[id]/photos/[photoId]", path: (i) => `/api/runs/${i.nobody}/photos/${i.nobody}`, expect: { ...all(404), anonymous: 401 } },
-  { method: "GET", route: "/api/runs/[id]/photos/[photoId]", path: (i) => `/api/runs/${i.runId}/photos/${i.nobody}`, expect: { anonymous: 401, student: 404, instructor: 404, librarian: 404, admin: 404 } },
+  {
+    method: "GET",
+    route: "/api/runs/[id]",
+    path: (i) => `/api/runs/${i.runId}`,
+    expect: { anonymous: 401, student: 200, instructor: 200, librarian: 404, admin: 200 },
+    cross: { otherInstructor: 404, otherStudent: 404 },
+  },
+  {
+    method: "POST",
+    route: "/api/runs/[id]/events",
+    path: (i) => `/api/runs/${i.runId}/events`,
+    json: {},
+    expect: { ...all(422), anonymous: 401 },
+  },
+  {
+    method: "GET",
+    route: "/api/runs/[id]/packet",
+    path: (i) => `/api/runs/${i.runId}/packet`,
+    expect: { anonymous: 401, student: 200, instructor: 200, librarian: 404, admin: 200 },
+    cross: { otherInstructor: 404, otherStudent: 404 },
+  },
+  {
+    method: "PUT",
+    route: "/api/runs/[id]/photos/[photoId]",
+    path: (i) => `/api/runs/${i.nobody}/photos/${i.nobody}`,
+    expect: { ...all(404), anonymous: 401 },
+  },
+  {
+    method: "GET",
+    route: "/api/runs/[id]/photos/[photoId]",
+    path: (i) => `/api/runs/${i.runId}/photos/${i.nobody}`,
+    expect: { anonymous: 401, student: 404, instructor: 404, librarian: 404, admin: 404 },
+  },
   // A step that is no inspection point: the run's own reviewers get as far as the 422.
-  { method: "POST", route: "/api/runs/[id]/buy-off", path: (i) => `/api/runs/${i.runId}/buy-off`, json: { stepId: "00000000-0000-4000-8000-00000000abcd" }, expect: only({ instructor: 422, admin: 422 }), cross: { otherInstructor: 404 } },
-  { method: "POST", route: "/api/runs/[id]/return", path: (i) => `/api/runs/${i.runId}/return`, json: {}, expect: only({ instructor: 422, admin: 422 }) },
-  { method: "POST", route: "/api/runs/[id]/sign-off", path: (i) => `/api/runs/${i.nobody}/sign-off`, json: {}, expect: only({ instructor: 404, admin: 404 }) },
-  { method: "GET", route: "/api/records/students/[id]", path: (i) => `/api/records/students/${i.studentId}`, expect: only({ student: 200, instructor: 200, admin: 200 }), cross: { otherInstructor: 404, otherStudent: 404 } },
-  { method: "GET", route: "/api/records/classes/[id]", path: (i) => `/api/records/classes/${i.dayClassId}`, expect: only({ instructor: 200, admin: 200 }), cross: { otherInstructor: 404 } },
+  {
+    method: "POST",
+    route: "/api/runs/[id]/buy-off",
+    path: (i) => `/api/runs/${i.runId}/buy-off`,
+    json: { stepId: "00000000-0000-4000-8000-00000000abcd" },
+    expect: only({ instructor: 422, admin: 422 }),
+    cross: { otherInstructor: 404 },
+  },
+  {
+    method: "POST",
+    route: "/api/runs/[id]/return",
+    path: (i) => `/api/runs/${i.runId}/return`,
+    json: {},
+    expect: only({ instructor: 422, admin: 422 }),
+  },
+  {
+    method: "POST",
+    route: "/api/runs/[id]/sign-off",
+    path: (i) => `/api/runs/${i.nobody}/sign-off`,
+    json: {},
+    expect: only({ instructor: 404, admin: 404 }),
+  },
+  {
+    method: "GET",
+    route: "/api/records/students/[id]",
+    path: (i) => `/api/records/students/${i.studentId}`,
+    expect: only({ student: 200, instructor: 200, admin: 200 }),
+    cross: { otherInstructor: 404, otherStudent: 404 },
+  },
+  {
+    method: "GET",
+    route: "/api/records/classes/[id]",
+    path: (i) => `/api/records/classes/${i.dayClassId}`,
+    expect: only({ instructor: 200, admin: 200 }),
+    cross: { otherInstructor: 404 },
+  },
   // Only the owner (or an admin) names co-authors; the demo card is the evening instructor's.
-  { method: "PUT", route: "/api/cards/[id]/coauthors", path: (i) => `/api/cards/${i.cardId}/coauthors`, json: { userIds: [] }, expect: only({ admin: 200 }) },
-  { method: "PUT", route: "/api/manuals/[id]/carts", path: (i) => `/api/manuals/${i.manualId}/carts`, json: {}, expect: only({ librarian: 422, admin: 422 }) },
+  {
+    method: "PUT",
+    route: "/api/cards/[id]/coauthors",
+    path: (i) => `/api/cards/${i.cardId}/coauthors`,
+    json: { userIds: [] },
+    expect: only({ admin: 200 }),
+  },
+  {
+    method: "PUT",
+    route: "/api/manuals/[id]/carts",
+    path: (i) => `/api/manuals/${i.manualId}/carts`,
+    json: {},
+    expect: only({ librarian: 422, admin: 422 }),
+  },
 ];
 
 const cookies: Partial<Record<Who, string>> = {};
@@ -150,14 +334,22 @@ beforeAll(async () => {
   cookies.otherStudent = await signIn(otherStudent.email, otherStudent.password);
   credentials.otherInstructor = otherInstructor;
   credentials.otherStudent = otherStudent;
-  const [own] = await getDb().insert(classes).values({ name: `Other class ${otherStudent.id.slice(0, 8)}` }).returning({ id: classes.id });
-  await getDb().insert(classMembers).values([otherInstructor, otherStudent].map((a) => ({ classId: own!.id, userId: a.id })));
+  const [own] = await getDb()
+    .insert(classes)
+    .values({ name: `Other class ${otherStudent.id.slice(0, 8)}` })
+    .returning({ id: classes.id });
+  await getDb()
+    .insert(classMembers)
+    .values([otherInstructor, otherStudent].map((a) => ({ classId: own!.id, userId: a.id })));
   const [admin] = await getDb().select({ id: users.id }).from(users).where(eq(users.email, demo.admin));
   const [day] = await getDb().select({ id: classes.id }).from(classes).where(eq(classes.name, "AMT Day Cohort 2027"));
   // A demo manual once the worker has read it (the seed queues it just before the tests).
   let manual: { id: string; currentRevisionId: string | null } | undefined;
   for (let i = 0; i < 240 && !manual?.currentRevisionId; i++) {
-    [manual] = await getDb().select({ id: manuals.id, currentRevisionId: manuals.currentRevisionId }).from(manuals).where(eq(manuals.title, "SM-4 Magneto Overhaul Manual"));
+    [manual] = await getDb()
+      .select({ id: manuals.id, currentRevisionId: manuals.currentRevisionId })
+      .from(manuals)
+      .where(eq(manuals.title, "SM-4 Magneto Overhaul Manual"));
     if (!manual?.currentRevisionId) await new Promise((r) => setTimeout(r, 500));
   }
   const [card] = await getDb()

@@ -48,10 +48,16 @@ describe("accounts", () => {
 
   it("creates an account with a first password, and refuses a second one for the same e-mail", async () => {
     const email = newEmail();
-    const first = await call("POST", "/api/users", { cookie: admin, json: { name: "Lee Ortiz", email, role: "student", password: "first-password-ok" } });
+    const first = await call("POST", "/api/users", {
+      cookie: admin,
+      json: { name: "Lee Ortiz", email, role: "student", password: "first-password-ok" },
+    });
     expect(first.status).toBe(201);
     await signIn(email, "first-password-ok");
-    const second = await call("POST", "/api/users", { cookie: admin, json: { name: "Lee Again", email: email.toUpperCase(), role: "admin" } });
+    const second = await call("POST", "/api/users", {
+      cookie: admin,
+      json: { name: "Lee Again", email: email.toUpperCase(), role: "admin" },
+    });
     expect(second.status).toBe(409);
     const [row] = await getDb().select({ name: users.name, role: users.role }).from(users).where(eq(users.email, email));
     expect(row).toEqual({ name: "Lee Ortiz", role: "student" }); // nothing stored was lost
@@ -66,14 +72,18 @@ describe("accounts", () => {
 
   it("changes a role and ends that person's session", async () => {
     const email = newEmail();
-    const created = (await (await call("POST", "/api/users", { cookie: admin, json: { name: "Rae Kim", email, role: "student", password: "a-good-password" } })).json()) as { user: { id: string } };
+    const created = (await (
+      await call("POST", "/api/users", { cookie: admin, json: { name: "Rae Kim", email, role: "student", password: "a-good-password" } })
+    ).json()) as { user: { id: string } };
     const cookie = await signIn(email, "a-good-password");
     const patched = await call("PATCH", `/api/users/${created.user.id}`, { cookie: admin, json: { role: "librarian" } });
     expect(patched.status).toBe(200);
     expect(((await patched.json()) as { user: { role: string } }).user.role).toBe("librarian");
     expect((await call("GET", "/api/session", { cookie })).status).toBe(401);
     const fresh = await signIn(email, "a-good-password");
-    expect(((await (await call("GET", "/api/session", { cookie: fresh })).json()) as { user: { role: string } }).user.role).toBe("librarian");
+    expect(((await (await call("GET", "/api/session", { cookie: fresh })).json()) as { user: { role: string } }).user.role).toBe(
+      "librarian",
+    );
   });
 
   it("keeps an admin from locking themself out", async () => {
@@ -86,15 +96,20 @@ describe("accounts", () => {
 
   it("resends an invitation, and the older link stops working", async () => {
     const email = newEmail();
-    const created = (await (await call("POST", "/api/users", { cookie: admin, json: { name: "Ash Penn", email, role: "student" } })).json()) as { user: { id: string } };
+    const created = (await (
+      await call("POST", "/api/users", { cookie: admin, json: { name: "Ash Penn", email, role: "student" } })
+    ).json()) as { user: { id: string } };
     const firstToken = new URL(linkIn((await waitForMail(email, /invited/i)).text)).pathname.split("/").pop()!;
     const resent = await call("POST", `/api/users/${created.user.id}/invitation`, { cookie: admin });
     expect(resent.status).toBe(202);
     await expect
-      .poll(async () => {
-        const { messages } = (await (await fetch(`${process.env.HL_OUTBOX_URL}/messages`)).json()) as { messages: { to: string[] }[] };
-        return messages.filter((m) => m.to.includes(email)).length;
-      }, { timeout: 20_000 })
+      .poll(
+        async () => {
+          const { messages } = (await (await fetch(`${process.env.HL_OUTBOX_URL}/messages`)).json()) as { messages: { to: string[] }[] };
+          return messages.filter((m) => m.to.includes(email)).length;
+        },
+        { timeout: 20_000 },
+      )
       .toBe(2);
     expect((await call("POST", "/api/password", { json: { token: firstToken, password: "first-link-password" } })).status).toBe(422);
   });

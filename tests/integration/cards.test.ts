@@ -64,14 +64,19 @@ beforeAll(async () => {
   admin = await signIn(demo.admin);
   const librarian = await account("librarian");
   const pdf = await makePdf(["Cable tension page one", "Aileron cable tension 30 to 40 lb", "Turnbuckle safety clips"]);
-  const answer = await upload("/api/manuals", librarian, {
-    title: uniqueTitle("Cards test manual"),
-    documentType: "maintenance_manual",
-    applicability: "HT-20",
-    ataChapters: "27",
-    revisionLabel: "Rev 1",
-    revisionDate: "2026-01-10",
-  }, { bytes: pdf });
+  const answer = await upload(
+    "/api/manuals",
+    librarian,
+    {
+      title: uniqueTitle("Cards test manual"),
+      documentType: "maintenance_manual",
+      applicability: "HT-20",
+      ataChapters: "27",
+      revisionLabel: "Rev 1",
+      revisionDate: "2026-01-10",
+    },
+    { bytes: pdf },
+  );
   expect(answer.status).toBe(202);
   const { revisionId: id } = (await answer.json()) as { revisionId: string };
   expect((await waitForRevision(librarian, id)).status).toBe("ready");
@@ -100,7 +105,10 @@ describe("task cards", () => {
     const before = card.draft!;
     const bad = await call("PUT", `/api/cards/${card.id}/draft`, {
       cookie: instructor,
-      json: { content: content({ title: before.title, steps: [step({ references: [{ revisionId, page: 99 }] })] }), editCount: before.editCount },
+      json: {
+        content: content({ title: before.title, steps: [step({ references: [{ revisionId, page: 99 }] })] }),
+        editCount: before.editCount,
+      },
     });
     expect(bad.status).toBe(422);
     expect(((await bad.json()) as { error: { message: string } }).error.message).toMatch(/page 99 .* has 3 pages/);
@@ -133,15 +141,34 @@ describe("task cards", () => {
       expect(Object.keys(body.error.fields ?? {}).join(" ")).toMatch(field);
     }
     // The step is named in people's numbering.
-    const inverted = await call("POST", "/api/cards", { cookie: instructor, json: { content: content({ steps: [step(), step({ measurement: { label: "Gap", unit: "in", min: 2, max: 1 } })] }) } });
-    expect(((await inverted.json()) as { error: { fields: Record<string, string> } }).error.fields.steps).toBe("Step 2: The minimum is above the maximum.");
-    const unknownSubject = await call("POST", "/api/cards", { cookie: instructor, json: { content: content({ subjectId: randomUUID() }) } });
+    const inverted = await call("POST", "/api/cards", {
+      cookie: instructor,
+      json: { content: content({ steps: [step(), step({ measurement: { label: "Gap", unit: "in", min: 2, max: 1 } })] }) },
+    });
+    expect(((await inverted.json()) as { error: { fields: Record<string, string> } }).error.fields.steps).toBe(
+      "Step 2: The minimum is above the maximum.",
+    );
+    const unknownSubject = await call("POST", "/api/cards", {
+      cookie: instructor,
+      json: { content: content({ subjectId: randomUUID() }) },
+    });
     expect(unknownSubject.status).toBe(422);
-    const notJson = await call("POST", "/api/cards", { cookie: instructor, body: "title=x", headers: { "content-type": "application/x-www-form-urlencoded" } });
+    const notJson = await call("POST", "/api/cards", {
+      cookie: instructor,
+      body: "title=x",
+      headers: { "content-type": "application/x-www-form-urlencoded" },
+    });
     expect(notJson.status).toBe(415);
-    const broken = await call("POST", "/api/cards", { cookie: instructor, body: "{\"content\":", headers: { "content-type": "application/json" } });
+    const broken = await call("POST", "/api/cards", {
+      cookie: instructor,
+      body: '{"content":',
+      headers: { "content-type": "application/json" },
+    });
     expect(broken.status).toBe(400);
-    const huge = await call("POST", "/api/cards", { cookie: instructor, json: { content: content({ steps: [step({ text: "x".repeat(600 * 1024) })] }) } });
+    const huge = await call("POST", "/api/cards", {
+      cookie: instructor,
+      json: { content: content({ steps: [step({ text: "x".repeat(600 * 1024) })] }) },
+    });
     expect(huge.status).toBe(413);
   });
 
@@ -166,37 +193,58 @@ describe("task cards", () => {
       json: { content: content({ title: "Changed after publishing" }) },
     });
     expect(patch.status).toBe(409);
-    const stored = ((await (await call("GET", `/api/cards/${card.id}/versions/1`, { cookie: instructor })).json()) as { version: CardVersionDto }).version;
+    const stored = (
+      (await (await call("GET", `/api/cards/${card.id}/versions/1`, { cookie: instructor })).json()) as { version: CardVersionDto }
+    ).version;
     expect(stored.title).toBe(version.title);
     expect(stored.steps).toEqual(version.steps);
 
     // Below the API: the trigger refuses an update, a delete and a change to the citations.
     const db = getDb();
-    await expect(db.update(taskCardVersions).set({ title: "sneaky" }).where(eq(taskCardVersions.id, version.id))).rejects.toMatchObject({ cause: { code: "HLF01" } });
-    await expect(db.delete(taskCardVersions).where(eq(taskCardVersions.id, version.id))).rejects.toMatchObject({ cause: { code: "HLF01" } });
-    await expect(db.update(cardCitations).set({ pageNumber: 3 }).where(eq(cardCitations.versionId, version.id))).rejects.toMatchObject({ cause: { code: "HLF01" } });
-    await expect(db.execute(sql`insert into card_citations (version_id, step_id, step_number, manual_id, revision_id, page_number)
-      select ${version.id}, step_id, 9, manual_id, revision_id, 1 from card_citations where version_id = ${version.id} limit 1`)).rejects.toMatchObject({ cause: { code: "HLF01" } });
+    await expect(db.update(taskCardVersions).set({ title: "sneaky" }).where(eq(taskCardVersions.id, version.id))).rejects.toMatchObject({
+      cause: { code: "HLF01" },
+    });
+    await expect(db.delete(taskCardVersions).where(eq(taskCardVersions.id, version.id))).rejects.toMatchObject({
+      cause: { code: "HLF01" },
+    });
+    await expect(db.update(cardCitations).set({ pageNumber: 3 }).where(eq(cardCitations.versionId, version.id))).rejects.toMatchObject({
+      cause: { code: "HLF01" },
+    });
+    await expect(
+      db.execute(sql`insert into card_citations (version_id, step_id, step_number, manual_id, revision_id, page_number)
+      select ${version.id}, step_id, 9, manual_id, revision_id, 1 from card_citations where version_id = ${version.id} limit 1`),
+    ).rejects.toMatchObject({ cause: { code: "HLF01" } });
   });
 
   it("editing a published card opens draft version 2 and leaves version 1 as it was", async () => {
     const card = await createCard();
     await call("POST", `/api/cards/${card.id}/publish`, { cookie: instructor });
-    const v1 = ((await (await call("GET", `/api/cards/${card.id}/versions/1`, { cookie: instructor })).json()) as { version: CardVersionDto }).version;
+    const v1 = (
+      (await (await call("GET", `/api/cards/${card.id}/versions/1`, { cookie: instructor })).json()) as { version: CardVersionDto }
+    ).version;
     const save = await call("PUT", `/api/cards/${card.id}/draft`, {
       cookie: instructor,
-      json: { content: content({ title: v1.title, steps: [...v1.steps.map(stripRefs), step({ text: "Safety the turnbuckles." })] }), editCount: v1.editCount },
+      json: {
+        content: content({ title: v1.title, steps: [...v1.steps.map(stripRefs), step({ text: "Safety the turnbuckles." })] }),
+        editCount: v1.editCount,
+      },
     });
     expect(save.status).toBe(200);
     const draft = ((await save.json()) as { version: CardVersionDto }).version;
     expect(draft).toMatchObject({ number: 2, status: "draft" });
     expect(draft.steps).toHaveLength(2);
     const after = ((await (await call("GET", `/api/cards/${card.id}`, { cookie: instructor })).json()) as { card: CardDto }).card;
-    expect(after.versions.map((v) => [v.number, v.status])).toEqual([[1, "published"], [2, "draft"]]);
+    expect(after.versions.map((v) => [v.number, v.status])).toEqual([
+      [1, "published"],
+      [2, "draft"],
+    ]);
     expect(after.published!.steps).toHaveLength(1);
 
     // A save from the copy loaded before that one is refused rather than overwriting it.
-    const stale = await call("PUT", `/api/cards/${card.id}/draft`, { cookie: instructor, json: { content: content(), editCount: draft.editCount - 1 } });
+    const stale = await call("PUT", `/api/cards/${card.id}/draft`, {
+      cookie: instructor,
+      json: { content: content(), editCount: draft.editCount - 1 },
+    });
     expect(stale.status).toBe(409);
 
     // Students see version 1 only.
@@ -214,14 +262,26 @@ describe("task cards", () => {
   it("cites a page while reading: once, into the chosen step of the draft", async () => {
     const card = await createCard(content({ steps: [step(), step({ text: "Second step" })] }));
     const target = card.draft!.steps[1]!.id;
-    const first = await call("POST", `/api/cards/${card.id}/draft/citations`, { cookie: instructor, json: { stepId: target, revisionId, page: 3, quote: "safety clips" } });
+    const first = await call("POST", `/api/cards/${card.id}/draft/citations`, {
+      cookie: instructor,
+      json: { stepId: target, revisionId, page: 3, quote: "safety clips" },
+    });
     expect(first.status).toBe(201);
     expect(await first.json()).toMatchObject({ citation: { stepNumber: 2, added: true } });
-    const again = await call("POST", `/api/cards/${card.id}/draft/citations`, { cookie: instructor, json: { stepId: target, revisionId, page: 3 } });
+    const again = await call("POST", `/api/cards/${card.id}/draft/citations`, {
+      cookie: instructor,
+      json: { stepId: target, revisionId, page: 3 },
+    });
     expect(again.status).toBe(200);
-    const beyond = await call("POST", `/api/cards/${card.id}/draft/citations`, { cookie: instructor, json: { stepId: target, revisionId, page: 4 } });
+    const beyond = await call("POST", `/api/cards/${card.id}/draft/citations`, {
+      cookie: instructor,
+      json: { stepId: target, revisionId, page: 4 },
+    });
     expect(beyond.status).toBe(422);
-    const wrongStep = await call("POST", `/api/cards/${card.id}/draft/citations`, { cookie: instructor, json: { stepId: randomUUID(), revisionId, page: 1 } });
+    const wrongStep = await call("POST", `/api/cards/${card.id}/draft/citations`, {
+      cookie: instructor,
+      json: { stepId: randomUUID(), revisionId, page: 1 },
+    });
     expect(wrongStep.status).toBe(422);
     const after = ((await (await call("GET", `/api/cards/${card.id}`, { cookie: instructor })).json()) as { card: CardDto }).card;
     expect(after.draft!.steps[1]!.references.map((r) => [r.page, r.quote])).toEqual([[3, "safety clips"]]);
@@ -266,9 +326,13 @@ describe("task cards", () => {
     await call("POST", `/api/cards/${card.id}/publish`, { cookie: instructor });
     const archived = await call("POST", `/api/cards/${card.id}/archive`, { cookie: instructor, json: { archived: true } });
     expect(archived.status).toBe(200);
-    const ids = ((await (await call("GET", "/api/cards", { cookie: instructor })).json()) as { cards: CardSummaryDto[] }).cards.map((c) => c.id);
+    const ids = ((await (await call("GET", "/api/cards", { cookie: instructor })).json()) as { cards: CardSummaryDto[] }).cards.map(
+      (c) => c.id,
+    );
     expect(ids).not.toContain(card.id);
-    const inArchive = ((await (await call("GET", "/api/cards?status=archived", { cookie: instructor })).json()) as { cards: CardSummaryDto[] }).cards;
+    const inArchive = (
+      (await (await call("GET", "/api/cards?status=archived", { cookie: instructor })).json()) as { cards: CardSummaryDto[] }
+    ).cards;
     expect(inArchive.find((c) => c.id === card.id)?.status).toBe("archived");
     expect((await call("GET", `/api/cards/${card.id}`, { cookie: student })).status).toBe(404);
     // A pinned published version stays readable (an assignment may hold it).
@@ -285,7 +349,11 @@ describe("task cards", () => {
         steps: [
           step({
             text: "Torque the **mount bolts** ≤ 45 ft-lb in sequence.",
-            notices: [{ kind: "note", text: "Clean dry threads." }, { kind: "caution", text: "Do not exceed the torque." }, { kind: "warning", text: "Support the engine." }],
+            notices: [
+              { kind: "note", text: "Clean dry threads." },
+              { kind: "caution", text: "Do not exceed the torque." },
+              { kind: "warning", text: "Support the engine." },
+            ],
             references: [{ revisionId, page: 2, quote: "" }],
             measurement: { label: "Mount bolt torque", unit: "ft-lb", min: 40, max: 45 },
             inspectionPoint: true,

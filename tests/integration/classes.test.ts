@@ -17,7 +17,10 @@ describe("classes", () => {
   it("refuses a second class of the same name and one that ends before it starts", async () => {
     const made = await newClass();
     expect((await call("POST", "/api/classes", { cookie: admin, json: { name: made.name } })).status).toBe(409);
-    const backwards = await call("POST", "/api/classes", { cookie: admin, json: { name: `${made.name} b`, startsOn: "2027-01-01", endsOn: "2026-01-01" } });
+    const backwards = await call("POST", "/api/classes", {
+      cookie: admin,
+      json: { name: `${made.name} b`, startsOn: "2027-01-01", endsOn: "2026-01-01" },
+    });
     expect(backwards.status).toBe(422);
     expect(((await backwards.json()) as { error: { fields: Record<string, string> } }).error.fields).toHaveProperty("endsOn");
     const patch = await call("PATCH", `/api/classes/${made.id}`, { cookie: admin, json: { endsOn: "2020-01-01" } });
@@ -29,17 +32,26 @@ describe("classes", () => {
     const teacher = await makeAccount("instructor");
     const other = await makeAccount("instructor");
     const learner = await makeAccount("student");
-    const added = await call("POST", `/api/classes/${made.id}/members`, { cookie: admin, json: { userIds: [teacher.id, learner.id, learner.id] } });
+    const added = await call("POST", `/api/classes/${made.id}/members`, {
+      cookie: admin,
+      json: { userIds: [teacher.id, learner.id, learner.id] },
+    });
     expect(added.status).toBe(200);
     expect(await added.json()).toEqual({ added: 2 });
     // Adding again changes nothing.
-    expect(await (await call("POST", `/api/classes/${made.id}/members`, { cookie: admin, json: { userIds: [learner.id] } })).json()).toEqual({ added: 0 });
+    expect(
+      await (await call("POST", `/api/classes/${made.id}/members`, { cookie: admin, json: { userIds: [learner.id] } })).json(),
+    ).toEqual({ added: 0 });
 
     const teacherCookie = await signIn(teacher.email, teacher.password);
-    const list = (await (await call("GET", "/api/classes", { cookie: teacherCookie })).json()) as { classes: { id: string; students: number; staff: number }[] };
+    const list = (await (await call("GET", "/api/classes", { cookie: teacherCookie })).json()) as {
+      classes: { id: string; students: number; staff: number }[];
+    };
     expect(list.classes.map((c) => c.id)).toEqual([made.id]);
     expect(list.classes[0]).toMatchObject({ students: 1, staff: 1 });
-    const detail = (await (await call("GET", `/api/classes/${made.id}`, { cookie: teacherCookie })).json()) as { class: { members: { id: string }[] } };
+    const detail = (await (await call("GET", `/api/classes/${made.id}`, { cookie: teacherCookie })).json()) as {
+      class: { members: { id: string }[] };
+    };
     expect(detail.class.members.map((m) => m.id).sort()).toEqual([teacher.id, learner.id].sort());
 
     const otherCookie = await signIn(other.email, other.password);

@@ -34,7 +34,10 @@ describe("uploading a manual", () => {
     const { manualId, revisionId } = (await response.json()) as { manualId: string; revisionId: string };
     const done = await waitForRevision(librarian, revisionId);
     expect(done).toMatchObject({ status: "ready", pageCount: 3, pagesDone: 3, current: true, manualId });
-    const manual = (await (await call("GET", `/api/manuals/${manualId}`, { cookie: student })).json()) as { currentRevisionId: string; applicability: string[] };
+    const manual = (await (await call("GET", `/api/manuals/${manualId}`, { cookie: student })).json()) as {
+      currentRevisionId: string;
+      applicability: string[];
+    };
     expect(manual.currentRevisionId).toBe(revisionId);
     expect(manual.applicability).toEqual(["HT-20"]);
   });
@@ -48,7 +51,10 @@ describe("uploading a manual", () => {
   });
 
   it("sniffs the content: a text file named .pdf is 415", async () => {
-    const response = await upload("/api/manuals", librarian, fields(), { bytes: new TextEncoder().encode("just words, no PDF here\n".repeat(100)), name: "looks.pdf" });
+    const response = await upload("/api/manuals", librarian, fields(), {
+      bytes: new TextEncoder().encode("just words, no PDF here\n".repeat(100)),
+      name: "looks.pdf",
+    });
     expect(response.status).toBe(415);
     expect((await errorOf(response)).fields).toHaveProperty("file");
   });
@@ -67,7 +73,12 @@ describe("uploading a manual", () => {
   });
 
   it("names missing and invalid fields with 422", async () => {
-    const response = await upload("/api/manuals", librarian, { documentType: "novel", revisionDate: "2026-02-31", ataChapters: "3A" }, { bytes: pdf });
+    const response = await upload(
+      "/api/manuals",
+      librarian,
+      { documentType: "novel", revisionDate: "2026-02-31", ataChapters: "3A" },
+      { bytes: pdf },
+    );
     expect(response.status).toBe(422);
     const error = await errorOf(response);
     expect(Object.keys(error.fields ?? {}).sort()).toEqual(["ataChapters", "documentType", "revisionDate", "revisionLabel", "title"]);
@@ -92,10 +103,20 @@ describe("uploading a manual", () => {
     expect(first.status).toBe(202);
     const { manualId } = (await first.json()) as { manualId: string };
     expect((await upload("/api/manuals", librarian, fields(title), { bytes: pdf })).status).toBe(409);
-    const again = await upload(`/api/manuals/${manualId}/revisions`, librarian, { revisionLabel: "Rev 1", revisionDate: "2026-11-01" }, { bytes: pdf });
+    const again = await upload(
+      `/api/manuals/${manualId}/revisions`,
+      librarian,
+      { revisionLabel: "Rev 1", revisionDate: "2026-11-01" },
+      { bytes: pdf },
+    );
     expect(again.status).toBe(409);
     expect((await errorOf(again)).fields).toHaveProperty("revisionLabel");
-    const missing = await upload("/api/manuals/00000000-0000-4000-8000-000000000001/revisions", librarian, { revisionLabel: "X", revisionDate: "2026-11-01" }, { bytes: pdf });
+    const missing = await upload(
+      "/api/manuals/00000000-0000-4000-8000-000000000001/revisions",
+      librarian,
+      { revisionLabel: "X", revisionDate: "2026-11-01" },
+      { bytes: pdf },
+    );
     expect(missing.status).toBe(404);
   });
 });
@@ -106,14 +127,22 @@ describe("ingest failures and atomicity", () => {
     const { manualId, revisionId: goodId } = (await first.json()) as { manualId: string; revisionId: string };
     await waitForRevision(librarian, goodId);
 
-    const second = await upload(`/api/manuals/${manualId}/revisions`, librarian, { revisionLabel: "Rev 2", revisionDate: "2026-12-01" }, { bytes: encrypt(pdf) });
+    const second = await upload(
+      `/api/manuals/${manualId}/revisions`,
+      librarian,
+      { revisionLabel: "Rev 2", revisionDate: "2026-12-01" },
+      { bytes: encrypt(pdf) },
+    );
     expect(second.status).toBe(202);
     const { revisionId: lockedId } = (await second.json()) as { revisionId: string };
     const failed = await waitForRevision(librarian, lockedId);
     expect(failed.status).toBe("failed");
     expect(failed.error).toMatch(/password/i);
 
-    const manual = (await (await call("GET", `/api/manuals/${manualId}`, { cookie: student })).json()) as { currentRevisionId: string; revisions: { id: string }[] };
+    const manual = (await (await call("GET", `/api/manuals/${manualId}`, { cookie: student })).json()) as {
+      currentRevisionId: string;
+      revisions: { id: string }[];
+    };
     expect(manual.currentRevisionId).toBe(goodId);
     expect(manual.revisions.map((r) => r.id)).toEqual([goodId]); // the failed one is the librarian's business
     expect((await call("GET", `/api/revisions/${lockedId}/pages/1`, { cookie: librarian })).status).toBe(404);
@@ -141,10 +170,18 @@ describe("ingest failures and atomicity", () => {
     const first = await upload("/api/manuals", librarian, fields(), { bytes: pdf });
     const { manualId, revisionId: oldId } = (await first.json()) as { manualId: string; revisionId: string };
     await waitForRevision(librarian, oldId);
-    const next = await upload(`/api/manuals/${manualId}/revisions`, librarian, { revisionLabel: "Rev 2", revisionDate: "2026-12-01" }, { bytes: await makePdf(["new one", "new two"]) });
+    const next = await upload(
+      `/api/manuals/${manualId}/revisions`,
+      librarian,
+      { revisionLabel: "Rev 2", revisionDate: "2026-12-01" },
+      { bytes: await makePdf(["new one", "new two"]) },
+    );
     const { revisionId: newId } = (await next.json()) as { revisionId: string };
     expect(await waitForRevision(librarian, newId)).toMatchObject({ status: "ready", current: true, pageCount: 2 });
-    const old = (await (await call("GET", `/api/revisions/${oldId}`, { cookie: student })).json()) as { current: boolean; supersededAt: string | null };
+    const old = (await (await call("GET", `/api/revisions/${oldId}`, { cookie: student })).json()) as {
+      current: boolean;
+      supersededAt: string | null;
+    };
     expect(old.current).toBe(false);
     expect(old.supersededAt).not.toBeNull();
     expect((await call("GET", `/api/revisions/${oldId}/pages/1`, { cookie: student })).status).toBe(200);

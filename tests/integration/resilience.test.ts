@@ -20,7 +20,12 @@ describe.skipIf(!process.env.HL_PIDS_DIR)("the job worker killed during an inges
     const librarian = await signIn(demo.librarian);
     // Pages without a text layer go through OCR one by one: slow enough to be caught half way.
     const texts = Array.from({ length: 14 }, () => "");
-    const response = await upload("/api/manuals", librarian, { title: uniqueTitle("Killed worker"), documentType: "handbook", revisionLabel: "Rev 1", revisionDate: "2026-10-01" }, { bytes: await makePdf(texts) });
+    const response = await upload(
+      "/api/manuals",
+      librarian,
+      { title: uniqueTitle("Killed worker"), documentType: "handbook", revisionLabel: "Rev 1", revisionDate: "2026-10-01" },
+      { bytes: await makePdf(texts) },
+    );
     expect(response.status).toBe(202);
     const { revisionId } = (await response.json()) as { revisionId: string };
 
@@ -43,7 +48,10 @@ describe.skipIf(!process.env.HL_PIDS_DIR)("the job worker killed during an inges
     expect(done.status).toBe("ready");
     expect(done.pageCount).toBe(14);
     expect(workerPid()).not.toBe(before);
-    const [{ n }] = (await getDb().select({ n: sql<number>`count(*)`.mapWith(Number) }).from(pages).where(eq(pages.revisionId, revisionId))) as [{ n: number }];
+    const [{ n }] = (await getDb()
+      .select({ n: sql<number>`count(*)`.mapWith(Number) })
+      .from(pages)
+      .where(eq(pages.revisionId, revisionId))) as [{ n: number }];
     expect(n).toBe(14);
     const [row] = await getDb().select({ attempts: revisions.attempts }).from(revisions).where(eq(revisions.id, revisionId));
     expect(row!.attempts).toBeGreaterThanOrEqual(2);
@@ -58,7 +66,9 @@ describe("a job whose payload cannot be read", () => {
     const deadline = Date.now() + 30_000;
     let found = 0;
     while (!found && Date.now() < deadline) {
-      const rows = await getDb().execute<{ n: number }>(sql`select count(*)::int as n from pgboss.job where name = ${deadLetterQueue} and data->>'jobId' = ${id}`);
+      const rows = await getDb().execute<{ n: number }>(
+        sql`select count(*)::int as n from pgboss.job where name = ${deadLetterQueue} and data->>'jobId' = ${id}`,
+      );
       found = rows.rows[0]?.n ?? 0;
       if (!found) await new Promise((r) => setTimeout(r, 300));
     }

@@ -26,7 +26,10 @@ let librarian: string;
 let student: string;
 
 async function cardId(title: string) {
-  const [row] = await getDb().select({ id: taskCardVersions.cardId }).from(taskCardVersions).where(and(eq(taskCardVersions.title, title), eq(taskCardVersions.number, 1)));
+  const [row] = await getDb()
+    .select({ id: taskCardVersions.cardId })
+    .from(taskCardVersions)
+    .where(and(eq(taskCardVersions.title, title), eq(taskCardVersions.number, 1)));
   return row!.id;
 }
 
@@ -41,7 +44,10 @@ beforeAll(async () => {
   rev4 = ids.find((r) => r.label === demoRevisions.trainerSecond.label)!.id;
   // The comparison job runs in the worker a moment after Rev 4 (and Rev 3) are read.
   for (let i = 0; i < 300; i++) {
-    const [row] = await db.select({ previous: revisionComparisons.previousRevisionId }).from(revisionComparisons).where(eq(revisionComparisons.revisionId, rev4));
+    const [row] = await db
+      .select({ previous: revisionComparisons.previousRevisionId })
+      .from(revisionComparisons)
+      .where(eq(revisionComparisons.revisionId, rev4));
     if (row?.previous === rev3) break;
     await new Promise((r) => setTimeout(r, 500));
   }
@@ -63,17 +69,28 @@ describe("revision impact", () => {
     expect(body.summary).toEqual({ unchanged: 50, changed: 1, moved: 34, added: 5, removed: 5 });
     expect(body.pages.filter((p) => p.status === "added").map((p) => p.newPage)).toEqual(sectionPages(second, "12-40-00"));
     expect(body.pages.filter((p) => p.status === "removed").map((p) => p.oldPage)).toEqual(sectionPages(first, "61-20-00"));
-    expect(body.pages.find((p) => p.status === "changed")).toMatchObject({ oldPage: before("32-10-00", "limits"), newPage: after("32-10-00", "limits") });
+    expect(body.pages.find((p) => p.status === "changed")).toMatchObject({
+      oldPage: before("32-10-00", "limits"),
+      newPage: after("32-10-00", "limits"),
+    });
     expect(body.pages.find((p) => p.oldPage === before("27-10-00"))).toMatchObject({ status: "moved", newPage: after("27-10-00") });
     expect(body.pages.find((p) => p.oldPage === before("74-10-00"))).toMatchObject({ status: "unchanged", newPage: before("74-10-00") });
     // The first revision has nothing before it.
-    const firstOne = (await (await call("GET", `/api/revisions/${rev3}/changes`, { cookie: librarian })).json()) as { previousRevisionId: string | null };
+    const firstOne = (await (await call("GET", `/api/revisions/${rev3}/changes`, { cookie: librarian })).json()) as {
+      previousRevisionId: string | null;
+    };
     expect(firstOne.previousRevisionId).toBeNull();
   });
 
   it("flags exactly the expected cards and steps, with the expected suggestions", async () => {
     const rows = await getDb()
-      .select({ title: taskCardVersions.title, step: citationRechecks.stepNumber, status: citationRechecks.status, old: citationRechecks.oldPage, suggested: citationRechecks.suggestedPage })
+      .select({
+        title: taskCardVersions.title,
+        step: citationRechecks.stepNumber,
+        status: citationRechecks.status,
+        old: citationRechecks.oldPage,
+        suggested: citationRechecks.suggestedPage,
+      })
       .from(citationRechecks)
       .innerJoin(taskCardVersions, eq(taskCardVersions.id, citationRechecks.versionId))
       .where(eq(citationRechecks.revisionId, rev4));
@@ -106,7 +123,9 @@ describe("revision impact", () => {
     const mail = await waitForMail(demo.instructor, /HT-20 Trainer Maintenance Manual Rev 4: 2 task cards to recheck/, 60);
     expect(mail.text).toContain("Aileron control cable tension check");
     expect(mail.text).toContain("Main landing gear inspection on jacks");
-    expect(mail.text).toMatch(new RegExp(`Step 3: page ${before("32-10-00", "limits")} of Rev 3 changed; suggested page ${after("32-10-00", "limits")} of Rev 4`));
+    expect(mail.text).toMatch(
+      new RegExp(`Step 3: page ${before("32-10-00", "limits")} of Rev 3 changed; suggested page ${after("32-10-00", "limits")} of Rev 4`),
+    );
     expect(mail.text).toMatch(/\/cards\/[0-9a-f-]+\/recheck/);
     expect(mail.text).not.toContain("Propeller track check");
     const other = await waitForMail("instructor2@hangarleaf.test", /HT-20 Trainer Maintenance Manual Rev 4: a task card to recheck/, 60);
@@ -116,51 +135,78 @@ describe("revision impact", () => {
 
   it("shows students a notice on the flagged steps, and the author a recheck that makes a new draft", async () => {
     const id = await cardId("Propeller track check");
-    const v1 = ((await (await call("GET", `/api/cards/${id}/versions/1`, { cookie: student })).json()) as { version: CardVersionDto }).version;
+    const v1 = ((await (await call("GET", `/api/cards/${id}/versions/1`, { cookie: student })).json()) as { version: CardVersionDto })
+      .version;
     expect(v1.steps.map((s) => s.underRecheck)).toEqual([true, true]);
     const untouched = await cardId("Magneto-to-engine timing check");
-    const magneto = ((await (await call("GET", `/api/cards/${untouched}/versions/1`, { cookie: student })).json()) as { version: CardVersionDto }).version;
+    const magneto = (
+      (await (await call("GET", `/api/cards/${untouched}/versions/1`, { cookie: student })).json()) as { version: CardVersionDto }
+    ).version;
     expect(magneto.steps.every((s) => !s.underRecheck)).toBe(true);
 
     expect((await call("GET", `/api/cards/${id}/rechecks`, { cookie: student })).status).toBe(403);
-    const list = (await (await call("GET", `/api/cards/${id}/rechecks`, { cookie: propellerOwner })).json()) as { rechecks: { id: string; stepNumber: number; old: { text: string }; suggested: { page: number | null } }[] };
+    const list = (await (await call("GET", `/api/cards/${id}/rechecks`, { cookie: propellerOwner })).json()) as {
+      rechecks: { id: string; stepNumber: number; old: { text: string }; suggested: { page: number | null } }[];
+    };
     expect(list.rechecks.map((r) => r.stepNumber)).toEqual([1, 2]);
     expect(list.rechecks[0]!.old.text).toContain("61-20-00");
 
     // Accepting a suggestion that does not exist, or a page past the end, is refused and changes nothing.
     const [one, two] = list.rechecks;
-    const noSuggestion = await call("POST", `/api/cards/${id}/rechecks`, { cookie: propellerOwner, json: { decisions: [{ id: one!.id, action: "accept" }] } });
+    const noSuggestion = await call("POST", `/api/cards/${id}/rechecks`, {
+      cookie: propellerOwner,
+      json: { decisions: [{ id: one!.id, action: "accept" }] },
+    });
     expect(noSuggestion.status).toBe(422);
-    const pastEnd = await call("POST", `/api/cards/${id}/rechecks`, { cookie: propellerOwner, json: { decisions: [{ id: one!.id, action: "relink", page: 5000 }] } });
+    const pastEnd = await call("POST", `/api/cards/${id}/rechecks`, {
+      cookie: propellerOwner,
+      json: { decisions: [{ id: one!.id, action: "relink", page: 5000 }] },
+    });
     expect(pastEnd.status).toBe(422);
     expect(((await (await call("GET", `/api/cards/${id}`, { cookie: propellerOwner })).json()) as { card: CardDto }).card.draft).toBeNull();
 
     const propellerInspection = after("61-10-00");
     const done = await call("POST", `/api/cards/${id}/rechecks`, {
       cookie: propellerOwner,
-      json: { decisions: [{ id: one!.id, action: "relink", page: propellerInspection }, { id: two!.id, action: "drop" }] },
+      json: {
+        decisions: [
+          { id: one!.id, action: "relink", page: propellerInspection },
+          { id: two!.id, action: "drop" },
+        ],
+      },
     });
     expect(done.status).toBe(200);
     const draft = ((await done.json()) as { version: CardVersionDto }).version;
     expect(draft).toMatchObject({ number: 2, status: "draft" });
     expect(draft.steps[0]!.references.map((r) => [r.revisionId, r.page])).toEqual([[rev4, propellerInspection]]);
     expect(draft.steps[1]!.references).toEqual([]);
-    const twice = await call("POST", `/api/cards/${id}/rechecks`, { cookie: propellerOwner, json: { decisions: [{ id: two!.id, action: "drop" }] } });
+    const twice = await call("POST", `/api/cards/${id}/rechecks`, {
+      cookie: propellerOwner,
+      json: { decisions: [{ id: two!.id, action: "drop" }] },
+    });
     expect(twice.status).toBe(409);
 
     // Until version 2 is published, students still see the notice on version 1.
-    const stillFlagged = ((await (await call("GET", `/api/cards/${id}/versions/1`, { cookie: student })).json()) as { version: CardVersionDto }).version;
+    const stillFlagged = (
+      (await (await call("GET", `/api/cards/${id}/versions/1`, { cookie: student })).json()) as { version: CardVersionDto }
+    ).version;
     expect(stillFlagged.steps.map((s) => s.underRecheck)).toEqual([true, true]);
-    expect((await (await call("GET", `/api/cards/${id}/rechecks`, { cookie: propellerOwner })).json()) as { rechecks: unknown[] }).toEqual({ rechecks: [] });
+    expect((await (await call("GET", `/api/cards/${id}/rechecks`, { cookie: propellerOwner })).json()) as { rechecks: unknown[] }).toEqual({
+      rechecks: [],
+    });
     expect((await call("POST", `/api/cards/${id}/publish`, { cookie: propellerOwner })).status).toBe(200);
-    const v2 = ((await (await call("GET", `/api/cards/${id}/versions/2`, { cookie: student })).json()) as { version: CardVersionDto }).version;
+    const v2 = ((await (await call("GET", `/api/cards/${id}/versions/2`, { cookie: student })).json()) as { version: CardVersionDto })
+      .version;
     expect(v2.steps.every((s) => !s.underRecheck)).toBe(true);
   });
 
   it("moves a card's unchanged citations of the old revision along when its others are rechecked", async () => {
     const id = await cardId("Aileron control cable tension check");
     const list = (await (await call("GET", `/api/cards/${id}/rechecks`, { cookie: instructor })).json()) as { rechecks: { id: string }[] };
-    const response = await call("POST", `/api/cards/${id}/rechecks`, { cookie: instructor, json: { decisions: list.rechecks.map((r) => ({ id: r.id, action: "accept" })) } });
+    const response = await call("POST", `/api/cards/${id}/rechecks`, {
+      cookie: instructor,
+      json: { decisions: list.rechecks.map((r) => ({ id: r.id, action: "accept" })) },
+    });
     expect(response.status).toBe(200);
     const draft = ((await response.json()) as { version: CardVersionDto }).version;
     expect(draft.steps.map((s) => s.references.map((r) => `${r.revisionLabel} p${r.page}`))).toEqual([

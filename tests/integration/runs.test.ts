@@ -32,7 +32,14 @@ const stepIds = [randomUUID(), randomUUID(), randomUUID()];
 // Cart clocks: the work happened during the last hour, the fixes after the instructor's return.
 const hourAgo = Date.now() - 3_600_000;
 const at = (minute: number) => new Date(hourAgo + minute * 60_000).toISOString();
-const event = (type: string, over: Record<string, unknown> = {}) => ({ id: randomUUID(), type, clientTime: at(0), stepId: null, payload: {}, ...over });
+const event = (type: string, over: Record<string, unknown> = {}) => ({
+  id: randomUUID(),
+  type,
+  clientTime: at(0),
+  stepId: null,
+  payload: {},
+  ...over,
+});
 
 async function assign(json: Record<string, unknown>, cookie = instructor) {
   return call("POST", "/api/assignments", { cookie, json: { cardId: card.id, ...json } });
@@ -72,7 +79,10 @@ beforeAll(async () => {
   // The instructor reviews the students of their own classes only (lib/server/runs/scope.ts).
   const ownClass = await call("POST", "/api/classes", { cookie: admin, json: { name: uniqueTitle("Runs home class") } });
   const ownClassId = ((await ownClass.json()) as { class: { id: string } }).class.id;
-  await call("POST", `/api/classes/${ownClassId}/members`, { cookie: admin, json: { userIds: [teacher.id, ...students.map((s) => s.id)] } });
+  await call("POST", `/api/classes/${ownClassId}/members`, {
+    cookie: admin,
+    json: { userIds: [teacher.id, ...students.map((s) => s.id)] },
+  });
   const [revision] = await getDb()
     .select({ id: revisions.id })
     .from(revisions)
@@ -88,7 +98,15 @@ beforeAll(async () => {
     subjectId: subject!.id,
     estimatedMinutes: 45,
     steps: [
-      { id: stepIds[0], text: "Measure the cable tension.", references: [{ revisionId, page: 5 }, { revisionId, page: 2 }], measurement: { label: "Tension", unit: "lb", min: 30, max: 40 } },
+      {
+        id: stepIds[0],
+        text: "Measure the cable tension.",
+        references: [
+          { revisionId, page: 5 },
+          { revisionId, page: 2 },
+        ],
+        measurement: { label: "Tension", unit: "lb", min: 30, max: 40 },
+      },
       { id: stepIds[1], text: "Instructor checks the safety wire.", inspectionPoint: true, references: [{ revisionId, page: 5 }] },
       { id: stepIds[2], text: "Let the sealant cure.", timerMinutes: 1 },
     ],
@@ -104,24 +122,40 @@ describe("assigning", () => {
   it("refuses what cannot be assigned, with the field named", async () => {
     const nobody = await assign({});
     expect(nobody.status).toBe(422);
-    expect(((await nobody.json()) as { error: { fields: Record<string, string> } }).error.fields.classId).toMatch(/class or at least one student/);
+    expect(((await nobody.json()) as { error: { fields: Record<string, string> } }).error.fields.classId).toMatch(
+      /class or at least one student/,
+    );
     const teacher = await makeAccount("instructor");
     const notStudent = await assign({ studentIds: [teacher.id] });
     expect(notStudent.status).toBe(422);
     expect((await assign({ studentIds: [students[0]!.id], dueOn: "18/12/2026" })).status).toBe(422);
     expect((await assign({ studentIds: [students[0]!.id], versionNumber: 7 })).status).toBe(422);
-    expect((await call("POST", "/api/assignments", { cookie: instructor, json: { cardId: randomUUID(), studentIds: [students[0]!.id] } })).status).toBe(422);
+    expect(
+      (await call("POST", "/api/assignments", { cookie: instructor, json: { cardId: randomUUID(), studentIds: [students[0]!.id] } }))
+        .status,
+    ).toBe(422);
     // An instructor cannot assign to a class they are not in, and learns nothing of it.
-    const klass = await call("POST", "/api/classes", { cookie: admin, json: { name: uniqueTitle("Run class"), startsOn: "2026-09-01", endsOn: "2027-06-30" } });
+    const klass = await call("POST", "/api/classes", {
+      cookie: admin,
+      json: { name: uniqueTitle("Run class"), startsOn: "2026-09-01", endsOn: "2027-06-30" },
+    });
     const classId = ((await klass.json()) as { class: { id: string } }).class.id;
     expect((await assign({ classId })).status).toBe(422);
-    expect((await call("POST", "/api/assignments", { cookie: students[0]!.cookie, json: { cardId: card.id, studentIds: [students[0]!.id] } })).status).toBe(403);
+    expect(
+      (await call("POST", "/api/assignments", { cookie: students[0]!.cookie, json: { cardId: card.id, studentIds: [students[0]!.id] } }))
+        .status,
+    ).toBe(403);
   });
 
   it("gives a class's students a run each, and shows each student only their own work", async () => {
-    const klass = await call("POST", "/api/classes", { cookie: admin, json: { name: uniqueTitle("Run class"), startsOn: "2026-09-01", endsOn: "2027-06-30" } });
+    const klass = await call("POST", "/api/classes", {
+      cookie: admin,
+      json: { name: uniqueTitle("Run class"), startsOn: "2026-09-01", endsOn: "2027-06-30" },
+    });
     const classId = ((await klass.json()) as { class: { id: string } }).class.id;
-    expect((await call("POST", `/api/classes/${classId}/members`, { cookie: admin, json: { userIds: students.map((s) => s.id) } })).status).toBe(200);
+    expect(
+      (await call("POST", `/api/classes/${classId}/members`, { cookie: admin, json: { userIds: students.map((s) => s.id) } })).status,
+    ).toBe(200);
     const made = await assign({ classId, dueOn: "2026-01-05" }, admin);
     expect(made.status).toBe(201);
     expect(((await made.json()) as { assignment: { runs: number } }).assignment.runs).toBe(2);
@@ -135,7 +169,10 @@ describe("assigning", () => {
     expect((await call("GET", `/api/runs/${item.runId}`, { cookie: students[1]!.cookie })).status).toBe(404);
     expect((await call("GET", `/api/runs/${item.runId}`, { cookie: librarian })).status).toBe(404);
     expect((await send(students[1]!.cookie, item.runId, [event("step.checked", { stepId: stepIds[0] })])).status).toBe(404);
-    const audit = await getDb().select().from(auditEvents).where(and(eq(auditEvents.action, "assignment.created"), eq(auditEvents.actorId, (await me(admin)))));
+    const audit = await getDb()
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.action, "assignment.created"), eq(auditEvents.actorId, await me(admin))));
     expect(audit.length).toBeGreaterThan(0);
   });
 });
@@ -161,15 +198,28 @@ describe("events from the cart", () => {
     const again = await send(cookie, runId, batch);
     expect(await again.json()).toMatchObject({ stored: 0, duplicates: 4 });
     // Five carts' worth of retries at once: the run's row lock makes exactly one of them store.
-    const more = [event("step.checked", { stepId: stepIds[1], clientTime: at(5) }), event("timer.started", { stepId: stepIds[2], clientTime: at(6), payload: { minutes: 1 } })];
+    const more = [
+      event("step.checked", { stepId: stepIds[1], clientTime: at(5) }),
+      event("timer.started", { stepId: stepIds[2], clientTime: at(6), payload: { minutes: 1 } }),
+    ];
     const answers = await Promise.all(Array.from({ length: 5 }, () => send(cookie, runId, [...batch, ...more])));
     const stored = await Promise.all(answers.map(async (a) => ((await a.json()) as { stored: number }).stored));
     expect(stored.reduce((a, b) => a + b, 0)).toBe(2);
     const [{ n }] = (await getDb().execute(sql`select count(*)::int as n from run_events where run_id = ${runId}`)).rows as [{ n: number }];
     expect(n).toBe(6);
     const detail = await runOf(cookie, runId);
-    expect(detail.events.map((e) => e.type)).toEqual(["step.checked", "value.recorded", "value.recorded", "note.added", "step.checked", "timer.started"]);
-    expect(detail.packet!.pages.map((p) => [p.page, p.packetPage])).toEqual([[5, 1], [2, 2]]);
+    expect(detail.events.map((e) => e.type)).toEqual([
+      "step.checked",
+      "value.recorded",
+      "value.recorded",
+      "note.added",
+      "step.checked",
+      "timer.started",
+    ]);
+    expect(detail.packet!.pages.map((p) => [p.page, p.packetPage])).toEqual([
+      [5, 1],
+      [2, 2],
+    ]);
     expect(detail.version.number).toBe(1);
   });
 
@@ -222,12 +272,33 @@ describe("review and sign-off", () => {
     expect(((await early.json()) as { error: { message: string } }).error.message).toMatch(/inspection point at step 2/);
     expect((await call("POST", `/api/runs/${runId}/return`, { cookie: instructor, json: { comment: "" } })).status).toBe(422);
     expect((await call("POST", `/api/runs/${runId}/return`, { cookie, json: { comment: "x" } })).status).toBe(403);
-    expect((await call("POST", `/api/runs/${runId}/return`, { cookie: instructor, json: { comment: "44 lb is out of limits. Adjust and measure again." } })).status).toBe(200);
+    expect(
+      (
+        await call("POST", `/api/runs/${runId}/return`, {
+          cookie: instructor,
+          json: { comment: "44 lb is out of limits. Adjust and measure again." },
+        })
+      ).status,
+    ).toBe(200);
     let detail = await runOf(cookie, runId);
     expect(detail.run.status).toBe("returned");
-    expect(detail.events.at(-1)).toMatchObject({ type: "run.returned", payload: { comment: "44 lb is out of limits. Adjust and measure again." } });
+    expect(detail.events.at(-1)).toMatchObject({
+      type: "run.returned",
+      payload: { comment: "44 lb is out of limits. Adjust and measure again." },
+    });
 
-    expect((await send(cookie, runId, [event("value.recorded", { stepId: stepIds[0], clientTime: new Date(Date.now() + 1000).toISOString(), payload: { value: "36 lb" } }), event("run.submitted", { clientTime: new Date(Date.now() + 2000).toISOString() })])).status).toBe(200);
+    expect(
+      (
+        await send(cookie, runId, [
+          event("value.recorded", {
+            stepId: stepIds[0],
+            clientTime: new Date(Date.now() + 1000).toISOString(),
+            payload: { value: "36 lb" },
+          }),
+          event("run.submitted", { clientTime: new Date(Date.now() + 2000).toISOString() }),
+        ])
+      ).status,
+    ).toBe(200);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: instructor, json: { stepId: stepIds[0] } })).status).toBe(422);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: instructor, json: { stepId: stepIds[1] } })).status).toBe(200);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: instructor, json: { stepId: stepIds[1] } })).status).toBe(409);
@@ -245,11 +316,16 @@ describe("review and sign-off", () => {
 
     detail = await runOf(cookie, runId);
     expect(detail.signOff).toMatchObject({ versionNumber: 1, comment: "Good work.", revisionsCited: [{ revisionId, pages: [2, 5] }] });
-    const audit = await getDb().select().from(auditEvents).where(and(eq(auditEvents.action, "run.signed_off"), eq(auditEvents.subjectId, runId)));
+    const audit = await getDb()
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.action, "run.signed_off"), eq(auditEvents.subjectId, runId)));
     expect(audit).toHaveLength(1);
 
     // The database itself keeps the sign-off and the events as they are.
-    await expect(getDb().update(signOffs).set({ comment: "changed" }).where(eq(signOffs.runId, runId))).rejects.toMatchObject({ cause: { code: "HLF02" } });
+    await expect(getDb().update(signOffs).set({ comment: "changed" }).where(eq(signOffs.runId, runId))).rejects.toMatchObject({
+      cause: { code: "HLF02" },
+    });
     await expect(getDb().delete(signOffs).where(eq(signOffs.runId, runId))).rejects.toMatchObject({ cause: { code: "HLF02" } });
     await expect(getDb().delete(runEvents).where(eq(runEvents.runId, runId))).rejects.toMatchObject({ cause: { code: "HLF02" } });
     const [someone] = detail.events;
@@ -275,7 +351,10 @@ describe("review and sign-off", () => {
 
   it("keeps a run on its pinned version when a newer one is published, and says so", async () => {
     const runId = await newRun();
-    const draft = await call("PUT", `/api/cards/${card.id}/draft`, { cookie: instructor, json: { content: { ...contentOf(card), estimatedMinutes: 50 } } });
+    const draft = await call("PUT", `/api/cards/${card.id}/draft`, {
+      cookie: instructor,
+      json: { content: { ...contentOf(card), estimatedMinutes: 50 } },
+    });
     expect(draft.status).toBe(200);
     expect((await call("POST", `/api/cards/${card.id}/publish`, { cookie: instructor })).status).toBe(200);
     const item = (await myWork(students[0]!.cookie)).find((w) => w.runId === runId)!;
@@ -293,7 +372,11 @@ function contentOf(c: CardDto) {
     ataChapter: v.ataChapter,
     subjectId: v.subjectId,
     estimatedMinutes: v.estimatedMinutes,
-    steps: v.steps.map((s) => ({ ...s, references: s.references.map((r) => ({ revisionId: r.revisionId, page: r.page, quote: r.quote })), underRecheck: undefined })),
+    steps: v.steps.map((s) => ({
+      ...s,
+      references: s.references.map((r) => ({ revisionId: r.revisionId, page: r.page, quote: r.quote })),
+      underRecheck: undefined,
+    })),
   };
 }
 
@@ -315,8 +398,13 @@ describe("the offline packet and photos", () => {
     expect(answer.status).toBe(200);
     const bytes = new Uint8Array(await answer.arrayBuffer());
     expect((await PDFDocument.load(bytes)).getPageCount()).toBe(2);
-    const [page5] = (await getDb().execute(sql`select text from pages where revision_id = ${revisionId} and page_number = 5`)).rows as [{ text: string }];
-    const firstWords = page5.text.split(/\s+/).filter((w) => w.length > 5).slice(0, 3);
+    const [page5] = (await getDb().execute(sql`select text from pages where revision_id = ${revisionId} and page_number = 5`)).rows as [
+      { text: string },
+    ];
+    const firstWords = page5.text
+      .split(/\s+/)
+      .filter((w) => w.length > 5)
+      .slice(0, 3);
     const text = (await pdfText(bytes)).split("\f")[0]!;
     for (const w of firstWords) expect(text).toContain(w);
     expect((await call("GET", `/api/runs/${runId}/packet`, { cookie: students[1]!.cookie })).status).toBe(404);
@@ -328,7 +416,11 @@ describe("the offline packet and photos", () => {
     const png = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR4nGNgYGD4DwABBAEAwS2OUAAAAABJRU5ErkJggg==", "base64");
     const photoId = randomUUID();
     const put = (id: string, body: Uint8Array, type = "image/png", who = cookie) =>
-      call("PUT", `/api/runs/${runId}/photos/${id}?step=${stepIds[0]}`, { cookie: who, body: Buffer.from(body), headers: { "content-type": type } });
+      call("PUT", `/api/runs/${runId}/photos/${id}?step=${stepIds[0]}`, {
+        cookie: who,
+        body: Buffer.from(body),
+        headers: { "content-type": type },
+      });
     expect((await put(photoId, png)).status).toBe(201);
     expect((await put(photoId, png)).status).toBe(201);
     expect((await put(randomUUID(), Buffer.from("<svg onload=alert(1)>"), "image/png")).status).toBe(415);
@@ -346,19 +438,32 @@ describe("keep on carts and the audit log's filters", () => {
   it("lists a kept manual's current file for the cart, and only while it is kept", async () => {
     const runId = await newRun();
     const [row] = await getDb().select({ manualId: revisions.manualId }).from(revisions).where(eq(revisions.id, revisionId));
-    expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: librarian, json: { keepOnCarts: "yes" } })).status).toBe(422);
-    expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: instructor, json: { keepOnCarts: true } })).status).toBe(403);
+    expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: librarian, json: { keepOnCarts: "yes" } })).status).toBe(
+      422,
+    );
+    expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: instructor, json: { keepOnCarts: true } })).status).toBe(
+      403,
+    );
     expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: librarian, json: { keepOnCarts: true } })).status).toBe(200);
     try {
-      expect((await runOf(students[0]!.cookie, runId)).keepOnCarts).toEqual([expect.objectContaining({ revisionId, url: `/api/revisions/${revisionId}/file` })]);
+      expect((await runOf(students[0]!.cookie, runId)).keepOnCarts).toEqual([
+        expect.objectContaining({ revisionId, url: `/api/revisions/${revisionId}/file` }),
+      ]);
     } finally {
-      expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: librarian, json: { keepOnCarts: false } })).status).toBe(200);
+      expect((await call("PUT", `/api/manuals/${row!.manualId}/carts`, { cookie: librarian, json: { keepOnCarts: false } })).status).toBe(
+        200,
+      );
     }
     expect((await runOf(students[0]!.cookie, runId)).keepOnCarts).toEqual([]);
   });
 
   it("filters the audit log by kind, person and date", async () => {
-    const get = async (query: string) => ((await (await call("GET", `/api/audit?${query}`, { cookie: admin })).json()) as { events: { action: string; actorName: string | null; createdAt: string }[] }).events;
+    const get = async (query: string) =>
+      (
+        (await (await call("GET", `/api/audit?${query}`, { cookie: admin })).json()) as {
+          events: { action: string; actorName: string | null; createdAt: string }[];
+        }
+      ).events;
     const runsOnly = await get("kind=runs&limit=50");
     expect(runsOnly.length).toBeGreaterThan(0);
     expect(runsOnly.every((e) => e.action.startsWith("run."))).toBe(true);

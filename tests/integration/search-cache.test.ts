@@ -83,7 +83,9 @@ describe("kept search answers", () => {
     expect((await search()).hits[0]?.manualTitle).toBe(title("B"));
     await db.execute(sql`update revisions set label = 'Rev 1A' where id = ${revisionId}`);
     expect((await search()).hits[0]?.revisionLabel).toBe("Rev 1A");
-    await db.execute(sql`insert into pages (revision_id, page_number, heading, text) values (${revisionId}, 3, 'MORE', ${`A third ${word}.`})`);
+    await db.execute(
+      sql`insert into pages (revision_id, page_number, heading, text) values (${revisionId}, 3, 'MORE', ${`A third ${word}.`})`,
+    );
     expect((await search()).hits.map((h) => h.page).sort()).toEqual([1, 2, 3]);
     await db.execute(sql`delete from pages where revision_id = ${revisionId} and page_number = 3`);
     expect((await search()).hits.map((h) => h.page).sort()).toEqual([1, 2]);
@@ -108,7 +110,9 @@ describe("kept search answers", () => {
 
   it("the web server's answers follow a change too", async () => {
     const cookie = await signIn(demo.student);
-    const ask = async () => ((await (await call("GET", `/api/search?q=${word}&manual=${manualId}`, { cookie })).json()) as { hits: { manualTitle: string }[] }).hits[0]?.manualTitle;
+    const ask = async () =>
+      ((await (await call("GET", `/api/search?q=${word}&manual=${manualId}`, { cookie })).json()) as { hits: { manualTitle: string }[] })
+        .hits[0]?.manualTitle;
     await ask();
     await getDb().execute(sql`update manuals set title = ${title("D")} where id = ${manualId}`);
     expect(await ask()).toBe(title("D"));

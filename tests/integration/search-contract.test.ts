@@ -10,7 +10,12 @@ import { makePdf, uniqueTitle, upload, waitForRevision } from "../support/librar
 
 const engines: [string, SearchEngine | null][] = [
   ["postgres", postgresEngine],
-  ["meilisearch", process.env.MEILI_URL ? meilisearchEngine({ url: process.env.MEILI_URL, key: process.env.MEILI_KEY, index: "hangarleaf-contract" }) : null],
+  [
+    "meilisearch",
+    process.env.MEILI_URL
+      ? meilisearchEngine({ url: process.env.MEILI_URL, key: process.env.MEILI_KEY, index: "hangarleaf-contract" })
+      : null,
+  ],
 ];
 if (!process.env.MEILI_URL) console.log("search contract: Meilisearch run skipped (no MEILI_URL set; no Meilisearch server here)");
 
@@ -32,10 +37,27 @@ let secondId = "";
 
 beforeAll(async () => {
   const librarian = await signIn(demo.librarian);
-  const first = await upload("/api/manuals", librarian, { title: uniqueTitle("Search contract"), documentType: "school_procedure", applicability: "ZX-1", ataChapters: "29", revisionLabel: "Rev 1", revisionDate: "2026-01-01" }, { bytes: await makePdf(firstRevision) });
+  const first = await upload(
+    "/api/manuals",
+    librarian,
+    {
+      title: uniqueTitle("Search contract"),
+      documentType: "school_procedure",
+      applicability: "ZX-1",
+      ataChapters: "29",
+      revisionLabel: "Rev 1",
+      revisionDate: "2026-01-01",
+    },
+    { bytes: await makePdf(firstRevision) },
+  );
   ({ manualId, revisionId: firstId } = (await first.json()) as { manualId: string; revisionId: string });
   expect((await waitForRevision(librarian, firstId)).status).toBe("ready");
-  const second = await upload(`/api/manuals/${manualId}/revisions`, librarian, { revisionLabel: "Rev 2", revisionDate: "2026-06-01" }, { bytes: await makePdf(firstRevision.slice(0, 8)) });
+  const second = await upload(
+    `/api/manuals/${manualId}/revisions`,
+    librarian,
+    { revisionLabel: "Rev 2", revisionDate: "2026-06-01" },
+    { bytes: await makePdf(firstRevision.slice(0, 8)) },
+  );
   ({ revisionId: secondId } = (await second.json()) as { revisionId: string });
   expect((await waitForRevision(librarian, secondId)).status).toBe("ready");
 }, 120_000);

@@ -28,7 +28,15 @@ describe("demo seed", () => {
     const rows = await getDb()
       .select({ title: taskCardVersions.title, status: taskCardVersions.status })
       .from(taskCardVersions)
-      .where(and(inArray(taskCardVersions.title, demoCards.map((c) => c.title)), eq(taskCardVersions.number, 1)));
+      .where(
+        and(
+          inArray(
+            taskCardVersions.title,
+            demoCards.map((c) => c.title),
+          ),
+          eq(taskCardVersions.number, 1),
+        ),
+      );
     expect(rows.map((r) => r.title).sort()).toEqual(demoCards.map((c) => c.title).sort());
     expect(rows.every((r) => r.status === "published")).toBe(true);
     expect(demoSubjects.length).toBeGreaterThanOrEqual(4);

@@ -24,8 +24,14 @@ describe("signing in", () => {
 
   it("gives a wrong password and an unknown e-mail the same answer", async () => {
     const account = await makeAccount("student");
-    const wrong = await call("POST", "/api/session", { json: { email: account.email, password: "not-the-password" }, headers: fakeAddress() });
-    const unknown = await call("POST", "/api/session", { json: { email: "nobody-here@hangarleaf.test", password: "whatever-it-is" }, headers: fakeAddress() });
+    const wrong = await call("POST", "/api/session", {
+      json: { email: account.email, password: "not-the-password" },
+      headers: fakeAddress(),
+    });
+    const unknown = await call("POST", "/api/session", {
+      json: { email: "nobody-here@hangarleaf.test", password: "whatever-it-is" },
+      headers: fakeAddress(),
+    });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(await wrong.json()).toEqual(await unknown.json());
@@ -43,14 +49,18 @@ describe("signing in", () => {
     expect(Number(blocked.headers.get("retry-after"))).toBeGreaterThan(0);
     expect(((await blocked.json()) as { error: { code: string } }).error.code).toBe("rate_limited");
     // A stranger's wrong passwords do not lock the account: its owner signs in from their own place.
-    expect((await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: fakeAddress() })).status).toBe(200);
+    expect(
+      (await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: fakeAddress() })).status,
+    ).toBe(200);
   });
 
   it("lets no more than the free attempts through when many are sent at once", async () => {
     const account = await makeAccount("student");
     const guesser = fakeAddress();
     const answers = await Promise.all(
-      Array.from({ length: 30 }, (_, i) => call("POST", "/api/session", { json: { email: account.email, password: `guess-${i}-wrong` }, headers: guesser })),
+      Array.from({ length: 30 }, (_, i) =>
+        call("POST", "/api/session", { json: { email: account.email, password: `guess-${i}-wrong` }, headers: guesser }),
+      ),
     );
     const checked = answers.filter((a) => a.status === 401).length;
     expect(checked).toBeLessThanOrEqual(throttlePolicy.pair.free);
@@ -60,11 +70,13 @@ describe("signing in", () => {
   it("throttles password-reset requests per address and per account", async () => {
     const address = fakeAddress();
     const ask = (email: string, headers = address) => call("POST", "/api/password-resets", { json: { email }, headers });
-    for (let i = 0; i < throttlePolicy.resetAccount.free; i++) expect((await ask("reset-flood@hangarleaf.test", fakeAddress())).status).toBe(202);
+    for (let i = 0; i < throttlePolicy.resetAccount.free; i++)
+      expect((await ask("reset-flood@hangarleaf.test", fakeAddress())).status).toBe(202);
     const tooMany = await ask("reset-flood@hangarleaf.test", fakeAddress());
     expect(tooMany.status).toBe(429);
     expect(Number(tooMany.headers.get("retry-after"))).toBeGreaterThan(0);
-    for (let i = 0; i < throttlePolicy.resetAddress.free; i++) expect((await ask(`reset-${i}-${Date.now()}@hangarleaf.test`)).status).toBe(202);
+    for (let i = 0; i < throttlePolicy.resetAddress.free; i++)
+      expect((await ask(`reset-${i}-${Date.now()}@hangarleaf.test`)).status).toBe(202);
     expect((await ask(`reset-last-${Date.now()}@hangarleaf.test`)).status).toBe(429);
   });
 
@@ -77,7 +89,9 @@ describe("signing in", () => {
     const blocked = await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: address });
     expect(blocked.status).toBe(429);
     // The same account from another address is not held up by that address.
-    expect((await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: fakeAddress() })).status).toBe(200);
+    expect(
+      (await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: fakeAddress() })).status,
+    ).toBe(200);
   });
 
   it("ends the session of an account that is deactivated", async () => {
@@ -87,7 +101,9 @@ describe("signing in", () => {
     const patch = await call("PATCH", `/api/users/${account.id}`, { cookie: admin, json: { status: "deactivated" } });
     expect(patch.status).toBe(200);
     expect((await call("GET", "/api/session", { cookie })).status).toBe(401);
-    expect((await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: fakeAddress() })).status).toBe(401);
+    expect(
+      (await call("POST", "/api/session", { json: { email: account.email, password: account.password }, headers: fakeAddress() })).status,
+    ).toBe(401);
   });
 
   it("signs out, and the old cookie replayed afterwards is refused", async () => {
@@ -105,7 +121,9 @@ describe("signing in", () => {
   });
 
   it("refuses bodies that are not JSON, too large or incomplete", async () => {
-    expect((await call("POST", "/api/session", { body: "email=a", headers: { "content-type": "application/x-www-form-urlencoded" } })).status).toBe(415);
+    expect(
+      (await call("POST", "/api/session", { body: "email=a", headers: { "content-type": "application/x-www-form-urlencoded" } })).status,
+    ).toBe(415);
     expect((await call("POST", "/api/session", { body: "{not json", headers: { "content-type": "application/json" } })).status).toBe(400);
     expect((await call("POST", "/api/session", { json: { email: "a@b.test", password: "x".repeat(70_000) } })).status).toBe(413);
     const missing = await call("POST", "/api/session", { json: { email: "a@b.test" } });

@@ -20,7 +20,18 @@ async function text(stream: Readable): Promise<string> {
 const endpoint = process.env.HL_TEST_S3_ENDPOINT;
 const stores: [string, () => ObjectStore][] = [
   ["disk", () => diskStore(mkdtempSync(path.join(tmpdir(), "hl-store-")))],
-  ["s3", () => s3Store({ bucket: "hangarleaf", endpoint, region: "us-east-1", accessKeyId: "S3RVER", secretAccessKey: "S3RVER", forcePathStyle: true })],
+  [
+    "s3",
+    () =>
+      s3Store({
+        bucket: "hangarleaf",
+        endpoint,
+        region: "us-east-1",
+        accessKeyId: "S3RVER",
+        secretAccessKey: "S3RVER",
+        forcePathStyle: true,
+      }),
+  ],
 ];
 
 describe.each(stores)("%s storage", (kind, make) => {

@@ -29,7 +29,14 @@ const person = async (role: "instructor" | "student") => {
   const a = await makeAccount(role);
   return { id: a.id, cookie: await signIn(a.email, a.password) };
 };
-const event = (type: string, clientTime: string, over: Record<string, unknown> = {}) => ({ id: randomUUID(), type, clientTime, stepId: null, payload: {}, ...over });
+const event = (type: string, clientTime: string, over: Record<string, unknown> = {}) => ({
+  id: randomUUID(),
+  type,
+  clientTime,
+  stepId: null,
+  payload: {},
+  ...over,
+});
 const send = (cookie: string, runId: string, events: unknown[]) => call("POST", `/api/runs/${runId}/events`, { cookie, json: { events } });
 const ago = (seconds: number) => new Date(Date.now() - seconds * 1000).toISOString();
 
@@ -48,15 +55,30 @@ async function newRun(student = learner, by = teacher): Promise<string> {
 }
 
 beforeAll(async () => {
-  [teacher, learner, otherTeacher, otherLearner, coauthor] = [await person("instructor"), await person("student"), await person("instructor"), await person("student"), await person("instructor")];
+  [teacher, learner, otherTeacher, otherLearner, coauthor] = [
+    await person("instructor"),
+    await person("student"),
+    await person("instructor"),
+    await person("student"),
+    await person("instructor"),
+  ];
   admin = await signIn(demo.admin);
   const classOf = async (people: Person[]) => {
-    const [row] = await getDb().insert(classes).values({ name: uniqueTitle("Trust class") }).returning({ id: classes.id });
-    await getDb().insert(classMembers).values(people.map((p) => ({ classId: row!.id, userId: p.id })));
+    const [row] = await getDb()
+      .insert(classes)
+      .values({ name: uniqueTitle("Trust class") })
+      .returning({ id: classes.id });
+    await getDb()
+      .insert(classMembers)
+      .values(people.map((p) => ({ classId: row!.id, userId: p.id })));
   };
   await classOf([teacher, learner]);
   await classOf([otherTeacher, otherLearner]);
-  const [revision] = await getDb().select({ id: revisions.id }).from(revisions).where(and(eq(revisions.status, "ready"), sql`${revisions.pageCount} >= 3`)).limit(1);
+  const [revision] = await getDb()
+    .select({ id: revisions.id })
+    .from(revisions)
+    .where(and(eq(revisions.status, "ready"), sql`${revisions.pageCount} >= 3`))
+    .limit(1);
   const [subject] = await getDb().select().from(curriculumSubjects).limit(1);
   const content = {
     title: uniqueTitle("Trust card"),
@@ -65,7 +87,13 @@ beforeAll(async () => {
     subjectId: subject!.id,
     estimatedMinutes: 30,
     steps: [
-      { id: stepIds[0], text: "Measure the cable tension.", references: [{ revisionId: revision!.id, page: 2 }], measurement: { label: "Tension", unit: "lb", min: 30, max: 40 }, inspectionPoint: true },
+      {
+        id: stepIds[0],
+        text: "Measure the cable tension.",
+        references: [{ revisionId: revision!.id, page: 2 }],
+        measurement: { label: "Tension", unit: "lb", min: 30, max: 40 },
+        inspectionPoint: true,
+      },
       { id: stepIds[1], text: "Safety the turnbuckle.", references: [] },
       { id: stepIds[2], text: "Tidy the work area.", references: [] },
     ],
@@ -80,10 +108,19 @@ beforeAll(async () => {
 describe("a signed record cannot be bent by a cart's clock", () => {
   it("keeps a bought-off reading when a back-dated change arrives after the buy-off", async () => {
     const runId = await newRun();
-    expect((await send(learner.cookie, runId, [event("value.recorded", ago(60), { stepId: stepIds[0], payload: { value: "35 lb" } }), event("step.checked", ago(50), { stepId: stepIds[0] })])).status).toBe(200);
+    expect(
+      (
+        await send(learner.cookie, runId, [
+          event("value.recorded", ago(60), { stepId: stepIds[0], payload: { value: "35 lb" } }),
+          event("step.checked", ago(50), { stepId: stepIds[0] }),
+        ])
+      ).status,
+    ).toBe(200);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: teacher.cookie, json: { stepId: stepIds[0] } })).status).toBe(200);
     // Stamped a second before the buy-off, sent after it: in limits would turn out of limits.
-    expect((await send(learner.cookie, runId, [event("value.recorded", ago(1), { stepId: stepIds[0], payload: { value: "55 lb" } })])).status).toBe(200);
+    expect(
+      (await send(learner.cookie, runId, [event("value.recorded", ago(1), { stepId: stepIds[0], payload: { value: "55 lb" } })])).status,
+    ).toBe(200);
     const shown = await detail(teacher.cookie, runId);
     const sneaked = shown.events.at(-1)!;
     expect(sneaked.payload).toMatchObject({ value: "55 lb" });
@@ -105,7 +142,14 @@ describe("a signed record cannot be bent by a cart's clock", () => {
     ];
     expect((await send(learner.cookie, runId, work)).status).toBe(200);
     // Back-dated before the hand-in, sent after it.
-    expect((await send(learner.cookie, runId, [event("step.unchecked", ago(285), { stepId: stepIds[1] }), event("value.recorded", ago(295), { stepId: stepIds[0], payload: { value: "20 lb" } })])).status).toBe(200);
+    expect(
+      (
+        await send(learner.cookie, runId, [
+          event("step.unchecked", ago(285), { stepId: stepIds[1] }),
+          event("value.recorded", ago(295), { stepId: stepIds[0], payload: { value: "20 lb" } }),
+        ])
+      ).status,
+    ).toBe(200);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: teacher.cookie, json: { stepId: stepIds[0] } })).status).toBe(200);
     // The back-dated uncheck would have made the sign-off refuse "step 2 is not done".
     expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: teacher.cookie, json: { comment: "ok" } })).status).toBe(200);
@@ -118,7 +162,9 @@ describe("a signed record cannot be bent by a cart's clock", () => {
   it("bounds working time by what the server saw, not by a batch of back-dated stamps", async () => {
     const runId = await newRun();
     // 400 events stamped 20 minutes apart over the past five days, all sent now after a minute of work.
-    const backDated = Array.from({ length: 400 }, (_, i) => event("note.added", ago(i * 1200 + 5), { stepId: stepIds[2], payload: { text: `n${i}` } }));
+    const backDated = Array.from({ length: 400 }, (_, i) =>
+      event("note.added", ago(i * 1200 + 5), { stepId: stepIds[2], payload: { text: `n${i}` } }),
+    );
     const honest = [
       event("value.recorded", ago(50), { stepId: stepIds[0], payload: { value: "35 lb" } }),
       event("step.checked", ago(40), { stepId: stepIds[0] }),
@@ -153,7 +199,9 @@ describe("a signed record cannot be bent by a cart's clock", () => {
 describe("instructors act on their own classes; authors own their cards", () => {
   it("answers 404 to another class's instructor for every run route and record, and lists nothing of it", async () => {
     const runId = await newRun();
-    expect((await send(learner.cookie, runId, [event("step.checked", ago(5), { stepId: stepIds[0] }), event("run.submitted", ago(4))])).status).toBe(200);
+    expect(
+      (await send(learner.cookie, runId, [event("step.checked", ago(5), { stepId: stepIds[0] }), event("run.submitted", ago(4))])).status,
+    ).toBe(200);
     const them = otherTeacher.cookie;
     expect((await call("GET", `/api/runs/${runId}`, { cookie: them })).status).toBe(404);
     expect((await call("GET", `/api/runs/${runId}/packet`, { cookie: them })).status).toBe(404);
@@ -169,7 +217,9 @@ describe("instructors act on their own classes; authors own their cards", () => 
       const queue = ((await (await call("GET", `/api/review?status=${status}`, { cookie: them })).json()) as { runs: WorkItemDto[] }).runs;
       expect(queue.some((r) => r.studentId === learner.id)).toBe(false);
     }
-    const assignments = ((await (await call("GET", `/api/assignments?card=${card.id}`, { cookie: them })).json()) as { assignments: unknown[] }).assignments;
+    const assignments = (
+      (await (await call("GET", `/api/assignments?card=${card.id}`, { cookie: them })).json()) as { assignments: unknown[] }
+    ).assignments;
     expect(assignments).toEqual([]);
     // Assigning another class's student one by one is refused like assigning a stranger.
     const refused = await call("POST", "/api/assignments", { cookie: them, json: { cardId: card.id, studentIds: [learner.id] } });
@@ -194,16 +244,29 @@ describe("instructors act on their own classes; authors own their cards", () => 
   });
 
   it("lets only the owner, named co-authors and an admin change a card; others may duplicate it", async () => {
-    const draft = { content: { ...card.published!, title: `${card.published!.title} (edited)`, steps: card.published!.steps.map((s) => ({ ...s, references: s.references.map((r) => ({ revisionId: r.revisionId, page: r.page })) })) } };
+    const draft = {
+      content: {
+        ...card.published!,
+        title: `${card.published!.title} (edited)`,
+        steps: card.published!.steps.map((s) => ({
+          ...s,
+          references: s.references.map((r) => ({ revisionId: r.revisionId, page: r.page })),
+        })),
+      },
+    };
     const stranger = otherTeacher.cookie;
     expect((await call("PUT", `/api/cards/${card.id}/draft`, { cookie: stranger, json: draft })).status).toBe(403);
     expect((await call("POST", `/api/cards/${card.id}/archive`, { cookie: stranger, json: { archived: true } })).status).toBe(403);
     expect((await call("POST", `/api/cards/${card.id}/publish`, { cookie: stranger })).status).toBe(403);
-    expect((await call("PUT", `/api/cards/${card.id}/coauthors`, { cookie: stranger, json: { userIds: [otherTeacher.id] } })).status).toBe(403);
+    expect((await call("PUT", `/api/cards/${card.id}/coauthors`, { cookie: stranger, json: { userIds: [otherTeacher.id] } })).status).toBe(
+      403,
+    );
     expect((await call("GET", `/api/cards/${card.id}`, { cookie: stranger })).status).toBe(200);
     expect((await call("POST", `/api/cards/${card.id}/duplicate`, { cookie: stranger })).status).toBe(201);
     // The owner names a co-author, who then may edit; a student cannot be named.
-    expect((await call("PUT", `/api/cards/${card.id}/coauthors`, { cookie: teacher.cookie, json: { userIds: [learner.id] } })).status).toBe(422);
+    expect((await call("PUT", `/api/cards/${card.id}/coauthors`, { cookie: teacher.cookie, json: { userIds: [learner.id] } })).status).toBe(
+      422,
+    );
     const named = await call("PUT", `/api/cards/${card.id}/coauthors`, { cookie: teacher.cookie, json: { userIds: [coauthor.id] } });
     expect(named.status).toBe(200);
     expect(((await named.json()) as { coauthors: { id: string }[] }).coauthors.map((c) => c.id)).toEqual([coauthor.id]);
@@ -221,12 +284,24 @@ describe("requests that cannot harm", () => {
     expect(refused.status).toBe(403);
     expect(((await refused.json()) as { error: { code: string; message: string } }).error).toMatchObject({ code: "forbidden" });
     expect((await call("DELETE", "/api/session", { cookie: learner.cookie, headers: cross })).status).toBe(403);
-    expect((await call("POST", `/api/cards/${card.id}/duplicate`, { cookie: teacher.cookie, headers: { origin: "https://elsewhere.example" } })).status).toBe(403);
+    expect(
+      (await call("POST", `/api/cards/${card.id}/duplicate`, { cookie: teacher.cookie, headers: { origin: "https://elsewhere.example" } }))
+        .status,
+    ).toBe(403);
     const form = new FormData();
     form.append("title", "x");
-    expect((await call("POST", "/api/manuals", { cookie: await signIn(demo.librarian), body: form, headers: { origin: "null" } })).status).toBe(403);
+    expect(
+      (await call("POST", "/api/manuals", { cookie: await signIn(demo.librarian), body: form, headers: { origin: "null" } })).status,
+    ).toBe(403);
     // The app's own pages pass; so does a client that is no browser (it sends neither header).
-    expect((await call("POST", `/api/cards/${card.id}/duplicate`, { cookie: teacher.cookie, headers: { origin: baseUrl, "sec-fetch-site": "same-origin" } })).status).toBe(201);
+    expect(
+      (
+        await call("POST", `/api/cards/${card.id}/duplicate`, {
+          cookie: teacher.cookie,
+          headers: { origin: baseUrl, "sec-fetch-site": "same-origin" },
+        })
+      ).status,
+    ).toBe(201);
     expect((await call("GET", "/api/session", { cookie: learner.cookie, headers: cross })).status).toBe(200);
   });
 
@@ -241,7 +316,12 @@ describe("requests that cannot harm", () => {
       },
     });
     const started = Date.now();
-    const answer = await fetch(`${baseUrl}/api/session`, { method: "POST", headers: { "content-type": "application/json" }, body, duplex: "half" } as RequestInit).catch(() => null);
+    const answer = await fetch(`${baseUrl}/api/session`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body,
+      duplex: "half",
+    } as RequestInit).catch(() => null);
     // The server answers 413 once 64 KiB have passed (the client may see the connection closed
     // instead while it is still sending); it never waits for, or keeps, the rest.
     if (answer) expect(answer.status).toBe(413);
@@ -256,12 +336,26 @@ describe("requests that cannot harm", () => {
       expect(body.error.message).toBeTypeOf("string");
     };
     await shape(await call("POST", "/api/session", { json: { email: "a\u0000@b.test", password: "x" } }), 422);
-    await shape(await call("POST", "/api/session", { body: '{"email":"\\ud800@b.test","password":"x"}', headers: { "content-type": "application/json" } }), 422);
+    await shape(
+      await call("POST", "/api/session", {
+        body: '{"email":"\\ud800@b.test","password":"x"}',
+        headers: { "content-type": "application/json" },
+      }),
+      422,
+    );
     const deep = `{"events":${"[".repeat(5000)}${"]".repeat(5000)}}`;
-    const nested = await call("POST", `/api/runs/${randomUUID()}/events`, { cookie: learner.cookie, body: deep, headers: { "content-type": "application/json" } });
+    const nested = await call("POST", `/api/runs/${randomUUID()}/events`, {
+      cookie: learner.cookie,
+      body: deep,
+      headers: { "content-type": "application/json" },
+    });
     expect([400, 422]).toContain(nested.status);
     const deepObject = `{"content":${'{"a":'.repeat(3000)}1${"}".repeat(3000)}}`;
-    const cardBody = await call("POST", "/api/cards", { cookie: teacher.cookie, body: deepObject, headers: { "content-type": "application/json" } });
+    const cardBody = await call("POST", "/api/cards", {
+      cookie: teacher.cookie,
+      body: deepObject,
+      headers: { "content-type": "application/json" },
+    });
     expect([400, 422]).toContain(cardBody.status);
     await shape(await call("GET", "/api/search?q=%00", { cookie: learner.cookie }), 400);
     await shape(await call("GET", "/api/search?q=%E0%A4%A", { cookie: learner.cookie }), 400);

@@ -19,10 +19,16 @@ export function encrypt(pdf: Uint8Array): Uint8Array {
   }
 }
 
-export async function upload(path: string, cookie: string | undefined, fields: Record<string, string>, file?: { bytes: Uint8Array; name?: string; type?: string }) {
+export async function upload(
+  path: string,
+  cookie: string | undefined,
+  fields: Record<string, string>,
+  file?: { bytes: Uint8Array; name?: string; type?: string },
+) {
   const form = new FormData();
   for (const [k, v] of Object.entries(fields)) form.append(k, v);
-  if (file) form.append("file", new Blob([new Uint8Array(file.bytes)], { type: file.type ?? "application/pdf" }), file.name ?? "manual.pdf");
+  if (file)
+    form.append("file", new Blob([new Uint8Array(file.bytes)], { type: file.type ?? "application/pdf" }), file.name ?? "manual.pdf");
   return call("POST", path, { cookie, body: form });
 }
 

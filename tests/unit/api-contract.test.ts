@@ -19,16 +19,23 @@ function routeFiles(dir: string): string[] {
 
 /** app/api/cards/[id]/versions/[v]/route.ts → /api/cards/:id/versions/:v */
 const pathOfFile = (file: string) =>
-  "/" + path.relative(path.join(root, "app"), path.dirname(file)).split(path.sep).map((s) => s.replace(/^\[(\w+)\]$/, ":$1")).join("/");
+  "/" +
+  path
+    .relative(path.join(root, "app"), path.dirname(file))
+    .split(path.sep)
+    .map((s) => s.replace(/^\[(\w+)\]$/, ":$1"))
+    .join("/");
 
 const served = routeFiles(path.join(root, "app/api")).flatMap((file) => {
   const source = readFileSync(file, "utf8");
-  return [...source.matchAll(/export (?:const|async function) (GET|POST|PUT|PATCH|DELETE)\b(?: = handle\(api\.(\w+)\.(\w+)\b)?/g)].map((m) => ({
-    file: path.relative(root, file),
-    method: m[1]!,
-    path: pathOfFile(file),
-    endpoint: m[2] && m[3] ? (api as Record<string, Record<string, (typeof allEndpoints)[number]>>)[m[2]]?.[m[3]] : undefined,
-  }));
+  return [...source.matchAll(/export (?:const|async function) (GET|POST|PUT|PATCH|DELETE)\b(?: = handle\(api\.(\w+)\.(\w+)\b)?/g)].map(
+    (m) => ({
+      file: path.relative(root, file),
+      method: m[1]!,
+      path: pathOfFile(file),
+      endpoint: m[2] && m[3] ? (api as Record<string, Record<string, (typeof allEndpoints)[number]>>)[m[2]]?.[m[3]] : undefined,
+    }),
+  );
 });
 
 describe("the API contract", () => {

@@ -18,11 +18,15 @@ describe("calculator panels", () => {
   it("every panel puts the manufacturer's data, the instructor, local rules and licensed sign-off first, and shows its notices", () => {
     for (const slug of calculatorSlugs) {
       const shown = text(slug);
-      expect(shown, slug).toMatch(/manufacturer's current data, your instructor, the school's and local rules, and the sign-off of a licensed technician come first/);
+      expect(shown, slug).toMatch(
+        /manufacturer's current data, your instructor, the school's and local rules, and the sign-off of a licensed technician come first/,
+      );
       for (const notice of calculators[slug].notices) expect(shown, slug).toContain(notice.text);
       const kinds = [...shown.matchAll(/\b(WARNING|CAUTION|NOTE)\b(?= [A-Z])/g)].map((m) => m[1]);
       expect(kinds, slug).toHaveLength(calculators[slug].notices.length);
-      expect(kinds, `${slug}: warnings, then cautions, then notes`).toEqual([...kinds].sort((a, b) => ["WARNING", "CAUTION", "NOTE"].indexOf(a!) - ["WARNING", "CAUTION", "NOTE"].indexOf(b!)));
+      expect(kinds, `${slug}: warnings, then cautions, then notes`).toEqual(
+        [...kinds].sort((a, b) => ["WARNING", "CAUTION", "NOTE"].indexOf(a!) - ["WARNING", "CAUTION", "NOTE"].indexOf(b!)),
+      );
     }
   });
 

@@ -7,7 +7,14 @@ import { AppError } from "@/lib/domain/errors";
 import { bendAllowance, checkBendRadius, flatPattern, kFactor, setback } from "@/lib/domain/calc/bend";
 import { coilShotCurrent, penetrantDwell, penetrantWindowF } from "@/lib/domain/calc/ndt";
 import {
-  chooseRivetDiameter, fractionOfInch, parseRivetPartNumber, rivetLayout, rivetLength, rivetPartNumber, rivetsForSplice, substituteWith2117,
+  chooseRivetDiameter,
+  fractionOfInch,
+  parseRivetPartNumber,
+  rivetLayout,
+  rivetLength,
+  rivetPartNumber,
+  rivetsForSplice,
+  substituteWith2117,
 } from "@/lib/domain/calc/rivets";
 import { adapterWarnings, appliedTorque, wrenchSetting } from "@/lib/domain/calc/torque";
 import { convert, formatNumber } from "@/lib/domain/calc/units";
@@ -64,7 +71,9 @@ describe("rivet length", () => {
     expect(length.length).toBeCloseTo(0.2515, 6); // REFERENCES: computed
     // "nearest standard length greater" (TM 10-5410-229-13&P): 0.0015 in over 4/16 is 9/32, never 4/16.
     expect(length.lengthSixteenths).toBe(4.5);
-    expect(rivetPartNumber({ head: "MS20470", material: "AD", diameter: 1 / 8, lengthSixteenths: length.lengthSixteenths })).toBe("MS20470AD4-4.5");
+    expect(rivetPartNumber({ head: "MS20470", material: "AD", diameter: 1 / 8, lengthSixteenths: length.lengthSixteenths })).toBe(
+      "MS20470AD4-4.5",
+    );
   });
 
   it("a length exactly on a standard step keeps it (worked by hand: 0.0625 + 0.1875 = 0.25 in → 4/16)", () => {
@@ -253,7 +262,10 @@ describe("torque wrench with an extension", () => {
     expect(wrenchSetting({ desired: 300, lever: 10, adapter: 2, direction: "shortens" })).toBeCloseTo(375, 9);
   });
   it("refuses an adapter that shortens the lever past half (common practice): 9.9 in on 10 in would ask 100 × the torque", () => {
-    refused(() => wrenchSetting({ desired: 300, lever: 10, adapter: 9.9, direction: "shortens" }), /half the wrench length \(5 in of 10 in\)/);
+    refused(
+      () => wrenchSetting({ desired: 300, lever: 10, adapter: 9.9, direction: "shortens" }),
+      /half the wrench length \(5 in of 10 in\)/,
+    );
     refused(() => wrenchSetting({ desired: 300, lever: 10, adapter: 10, direction: "shortens" }), /half the wrench/);
     refused(() => wrenchSetting({ desired: 300, lever: 10, adapter: 12, direction: "shortens" }), /half the wrench/);
     // Exactly half: twice the torque (300 × 10 ÷ 5 = 600, worked by hand) is still given.
@@ -381,7 +393,10 @@ describe("magnetic-particle coil shot", () => {
 
   it("ASTM E1444 (from memory): high fill factor or cable wrap, NI = 35,000 ÷ (L/D + 2); 2 × 10 in bar, 5 turns → 1000 A (worked by hand)", () => {
     expect(coilShotCurrent({ length: 10, diameter: 2, turns: 5, arrangement: "high-fill" }).amperes).toBeCloseTo(1000, 9);
-    expect(coilShotCurrent({ length: 10, diameter: 2, turns: 5, arrangement: "high-fill", coilDiameter: 2.5 }).fillFactor).toBeCloseTo(1.5625, 9);
+    expect(coilShotCurrent({ length: 10, diameter: 2, turns: 5, arrangement: "high-fill", coilDiameter: 2.5 }).fillFactor).toBeCloseTo(
+      1.5625,
+      9,
+    );
   });
 
   it("refuses a fill factor the chosen formula does not cover", () => {

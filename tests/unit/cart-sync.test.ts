@@ -21,7 +21,11 @@ function fakeCart(count: number, answer: (runId: string, ids: string[], call: nu
     removePhoto: async () => undefined,
     refused: async (items) => void refused.push(...items.map((i) => i.id)),
     postEvents: async (runId, events) => {
-      const result = answer(runId, events.map((e) => e.id), calls++);
+      const result = answer(
+        runId,
+        events.map((e) => e.id),
+        calls++,
+      );
       if (result === "lost") throw new TypeError("fetch failed");
       if (result.status === 200) events.forEach((e) => stored.add(e.id));
       return result;

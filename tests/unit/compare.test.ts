@@ -4,7 +4,38 @@ import { diffArrays } from "diff";
 import { describe, expect, it } from "vitest";
 import { comparePages, normalisePages, suggestPage, type Comparison } from "@/lib/domain/revisions/compare";
 
-const words = ["magneto", "timing", "breaker", "points", "rotor", "cable", "tension", "turnbuckle", "rigging", "brake", "lining", "axle", "nut", "torque", "cotter", "pin", "propeller", "blade", "nick", "spinner", "fuel", "sump", "drain", "oil", "filter", "gasket", "seal", "bearing", "hub", "strut"];
+const words = [
+  "magneto",
+  "timing",
+  "breaker",
+  "points",
+  "rotor",
+  "cable",
+  "tension",
+  "turnbuckle",
+  "rigging",
+  "brake",
+  "lining",
+  "axle",
+  "nut",
+  "torque",
+  "cotter",
+  "pin",
+  "propeller",
+  "blade",
+  "nick",
+  "spinner",
+  "fuel",
+  "sump",
+  "drain",
+  "oil",
+  "filter",
+  "gasket",
+  "seal",
+  "bearing",
+  "hub",
+  "strut",
+];
 
 /** A page of a made-up manual: running header with page number, label and date, then body text. */
 function page(n: number, body: string, label = "Rev 3", date = "2025-06-01") {
@@ -19,7 +50,10 @@ function random() {
 
 // Like a manual: common trade words on every page, and words that say what a page is about.
 const syllables = ["ba", "ke", "lo", "mi", "nu", "ra", "so", "ti", "vu", "za", "pe", "do", "fi", "gu", "ha"];
-const rare = Array.from({ length: 4000 }, (_, k) => syllables[k % 15]! + syllables[Math.floor(k / 15) % 15]! + syllables[Math.floor(k / 225) % 15]! + "x");
+const rare = Array.from(
+  { length: 4000 },
+  (_, k) => syllables[k % 15]! + syllables[Math.floor(k / 15) % 15]! + syllables[Math.floor(k / 225) % 15]! + "x",
+);
 
 function body(k: number) {
   const out: string[] = [`Section ${k}.`];
@@ -81,7 +115,12 @@ describe("page comparison", () => {
   });
 
   it("calls pages inserted in the middle added, and the pages after them moved", () => {
-    const inserted = [...bodies.slice(0, 10), "Brake fluid servicing. Fill the reservoir with the approved fluid only.", "Bleed the brakes from the bottom up.", ...bodies.slice(10)];
+    const inserted = [
+      ...bodies.slice(0, 10),
+      "Brake fluid servicing. Fill the reservoir with the approved fluid only.",
+      "Bleed the brakes from the bottom up.",
+      ...bodies.slice(10),
+    ];
     const newRev = render(inserted, "Rev 4", "2026-03-15");
     const result = comparePages(oldRev, newRev, { labels });
     expect(pagesWith(result, "added", "newPage")).toEqual([11, 12]);
@@ -125,7 +164,13 @@ describe("page comparison", () => {
 
   it("suggests the moved page, the changed page, or the best match for a removed one", () => {
     // Page 31 is withdrawn and its text folded into page 30; page 12 moves down one.
-    const next = [...bodies.slice(0, 10), "Inserted page about oil filters and gaskets only.", ...bodies.slice(10, 29), `${bodies[29]} ${bodies[30]}`, ...bodies.slice(31)];
+    const next = [
+      ...bodies.slice(0, 10),
+      "Inserted page about oil filters and gaskets only.",
+      ...bodies.slice(10, 29),
+      `${bodies[29]} ${bodies[30]}`,
+      ...bodies.slice(31),
+    ];
     const newRev = render(next, "Rev 4", "2026-03-15");
     const result = comparePages(oldRev, newRev, { labels });
     expect(suggestPage(result, 12)).toEqual({ page: 13, similarity: 1, status: "moved" });
@@ -140,13 +185,21 @@ describe("page comparison", () => {
     // A page whose text went nowhere gets no suggestion.
     const gone = [...bodies.slice(0, 40), ...bodies.slice(41)];
     const lost = render(gone, "Rev 4", "2026-03-15");
-    expect(suggestPage(comparePages(oldRev, lost, { labels }), 41, { oldTexts: oldRev, newTexts: lost, labels })).toMatchObject({ status: "removed", page: null });
+    expect(suggestPage(comparePages(oldRev, lost, { labels }), 41, { oldTexts: oldRev, newTexts: lost, labels })).toMatchObject({
+      status: "removed",
+      page: null,
+    });
   });
 
   it("does not pair pages that share only a template's fixed sentences", () => {
-    const template = "Record each step, the value measured where there is one, and your initials. Check the measuring tool and its calibration date.";
+    const template =
+      "Record each step, the value measured where there is one, and your initials. Check the measuring tool and its calibration date.";
     const old = [...bodies.slice(0, 20).map((b) => `${template} ${b}`), `${template} propeller track pointer blade tip`];
-    const renewed = [...bodies.slice(0, 5).map((b) => `${template} ${b}`), `${template} brake fluid reservoir bleed`, ...bodies.slice(5, 20).map((b) => `${template} ${b}`)];
+    const renewed = [
+      ...bodies.slice(0, 5).map((b) => `${template} ${b}`),
+      `${template} brake fluid reservoir bleed`,
+      ...bodies.slice(5, 20).map((b) => `${template} ${b}`),
+    ];
     const result = comparePages(render(old, "Rev 3", "2025-06-01"), render(renewed, "Rev 4", "2026-03-15"), { labels });
     expect(result.summary).toMatchObject({ changed: 0, added: 1, removed: 1 });
   });

@@ -20,7 +20,8 @@ const section = (manualPrefix: string, code: string) => {
   return manual.chapters.flatMap((c) => c.sections).find((s) => s.code === code)!;
 };
 const limit = (manualPrefix: string, code: string, item: string) => section(manualPrefix, code).limits!.find(([k]) => k === item)![1];
-const allText = (c: (typeof demoCards)[number]) => c.steps.map((s) => [s.text, ...(s.notices ?? []).map((n) => n.text)].join(" ")).join(" ");
+const allText = (c: (typeof demoCards)[number]) =>
+  c.steps.map((s) => [s.text, ...(s.notices ?? []).map((n) => n.text)].join(" ")).join(" ");
 
 describe("demo cards", () => {
   it("pass the editor's schema, as the seed parses them", () => {
@@ -32,7 +33,15 @@ describe("demo cards", () => {
           id: randomUUID(),
           text: s.text,
           notices: s.notices ?? [],
-          references: (s.refs ?? []).map((r) => ({ revisionId: randomUUID(), page: sectionPage(demoManuals.find((m) => m.title.startsWith(r.manual))!, r.code, r.part), quote: r.quote ?? "" })),
+          references: (s.refs ?? []).map((r) => ({
+            revisionId: randomUUID(),
+            page: sectionPage(
+              demoManuals.find((m) => m.title.startsWith(r.manual))!,
+              r.code,
+              r.part,
+            ),
+            quote: r.quote ?? "",
+          })),
           measurement: s.measurement ?? null,
           calculator: s.calculator ?? null,
           inspectionPoint: s.inspectionPoint ?? false,
@@ -44,15 +53,24 @@ describe("demo cards", () => {
   });
 
   it("say on their first step that their values are invented", () => {
-    for (const c of demoCards) expect(c.steps[0]!.notices?.some((n) => n.kind === "note" && /invented/.test(n.text)), c.title).toBe(true);
+    for (const c of demoCards)
+      expect(
+        c.steps[0]!.notices?.some((n) => n.kind === "note" && /invented/.test(n.text)),
+        c.title,
+      ).toBe(true);
   });
 
   it("keep the citations the revision-impact test expects (HT-20 cards: steps and pages)", () => {
-    const parts = (title: string) => card(title).steps.map((s) => (s.refs ?? []).map((r) => `${r.code} ${r.part ?? "procedure"}`).join(", "));
+    const parts = (title: string) =>
+      card(title).steps.map((s) => (s.refs ?? []).map((r) => `${r.code} ${r.part ?? "procedure"}`).join(", "));
     expect(parts("Aileron control cable tension check")).toEqual(["27-10-00 procedure", "27-10-00 limits", "27-10-00 procedure"]);
     expect(parts("Main landing gear inspection on jacks")).toEqual(["32-10-00 procedure", "32-10-00 procedure", "32-10-00 limits"]);
     expect(parts("Propeller track check")).toEqual(["61-20-00 procedure", "61-20-00 limits"]);
-    expect(card("Magneto-to-engine timing check").steps.flatMap((s) => s.refs ?? []).every((r) => r.code === "74-10-00")).toBe(true);
+    expect(
+      card("Magneto-to-engine timing check")
+        .steps.flatMap((s) => s.refs ?? [])
+        .every((r) => r.code === "74-10-00"),
+    ).toBe(true);
   });
 
   it("penetrant: one temperature window in the calculator, the procedure and the card; timers as the calculator says", () => {
@@ -99,7 +117,8 @@ describe("demo cards", () => {
 
   it("no card or manual page backs a torqued nut off to line up a hole (AC 43.13-1B par. 7-37 ff.)", () => {
     // Every sentence that speaks of backing a nut off, or of the nearest slot, forbids it.
-    const backsOff = (text: string) => text.split(/[.;:]/).filter((sentence) => /\bback\b.*\boff\b|nearest slot/i.test(sentence) && !/never/i.test(sentence));
+    const backsOff = (text: string) =>
+      text.split(/[.;:]/).filter((sentence) => /\bback\b.*\boff\b|nearest slot/i.test(sentence) && !/never/i.test(sentence));
     for (const c of demoCards) expect(backsOff(allText(c)), c.title).toEqual([]);
     const trainer = demoManuals.find((m) => m.title.startsWith("HT-20"))!;
     for (const manual of [...demoManuals, secondRevisionOfTrainer(trainer)]) {

@@ -7,8 +7,14 @@ import { createClassSchema } from "@/lib/domain/validation/classes";
 
 describe("AppError", () => {
   it.each([
-    ["unauthorized", 401], ["forbidden", 403], ["not_found", 404], ["conflict", 409],
-    ["payload_too_large", 413], ["unsupported_media_type", 415], ["invalid", 422], ["rate_limited", 429],
+    ["unauthorized", 401],
+    ["forbidden", 403],
+    ["not_found", 404],
+    ["conflict", 409],
+    ["payload_too_large", 413],
+    ["unsupported_media_type", 415],
+    ["invalid", 422],
+    ["rate_limited", 429],
   ] as const)("%s answers %i with the error body", async (code, status) => {
     const response = new AppError(code, "Plain words.").toResponse();
     expect(response.status).toBe(status);
@@ -57,7 +63,13 @@ describe("validation at the boundary", () => {
 
 describe("mail", () => {
   it("escapes names in the HTML part", () => {
-    const mail = invitationMail({ to: "a@b.test", name: "<script>x</script>", invitedBy: "A & B", link: "http://x/set-password/t", role: "Student" });
+    const mail = invitationMail({
+      to: "a@b.test",
+      name: "<script>x</script>",
+      invitedBy: "A & B",
+      link: "http://x/set-password/t",
+      role: "Student",
+    });
     expect(mail.html).not.toContain("<script>");
     expect(mail.html).toContain("&lt;script&gt;");
     expect(mail.html).toContain("A &amp; B");

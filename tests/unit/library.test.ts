@@ -52,7 +52,9 @@ describe("Range header (RFC 9110, 14.1.2)", () => {
 
 describe("storage keys", () => {
   it("are made from ids only", () => {
-    expect(storageKeys.revisionFile("0aa5cf27-6c0b-424e-b431-d3f47cae8afe")).toBe("revisions/0aa5cf27-6c0b-424e-b431-d3f47cae8afe/document.pdf");
+    expect(storageKeys.revisionFile("0aa5cf27-6c0b-424e-b431-d3f47cae8afe")).toBe(
+      "revisions/0aa5cf27-6c0b-424e-b431-d3f47cae8afe/document.pdf",
+    );
   });
 
   it.each(["../etc/passwd", "/abs", "revisions/../../x", "Revisions/A", "a//b", ""])("refuse %j", (key) => {
@@ -70,7 +72,13 @@ describe("upload fields", () => {
   });
 
   it("names each bad field", () => {
-    const result = manualUploadSchema.safeParse({ title: "", documentType: "novel", ataChapters: "3A", revisionLabel: "", revisionDate: "31/01/2026" });
+    const result = manualUploadSchema.safeParse({
+      title: "",
+      documentType: "novel",
+      ataChapters: "3A",
+      revisionLabel: "",
+      revisionDate: "31/01/2026",
+    });
     expect(result.success).toBe(false);
     const fields = new Set(result.error!.issues.map((i) => String(i.path[0])));
     expect(fields).toEqual(new Set(["title", "documentType", "ataChapters", "revisionLabel", "revisionDate"]));

@@ -64,7 +64,18 @@ describe("permissions", () => {
     expect(labels("student")).toEqual(["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Records"]);
     expect(labels("librarian")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators"]);
     expect(labels("instructor")).toEqual(["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records"]);
-    expect(labels("admin")).toEqual(["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records", "Accounts", "Audit log"]);
+    expect(labels("admin")).toEqual([
+      "Home",
+      "Search",
+      "Library",
+      "Task cards",
+      "Review",
+      "Calculators",
+      "Classes",
+      "Records",
+      "Accounts",
+      "Audit log",
+    ]);
     expect(labels("admin", true)).toContain("Outbox");
     expect(labels("student", true)).not.toContain("Outbox");
   });

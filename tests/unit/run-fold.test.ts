@@ -11,7 +11,13 @@ const instructor = "instructor-1";
 const instructors = new Set([instructor]);
 let n = 0;
 const at = (minute: number) => `2026-12-01T10:${String(minute).padStart(2, "0")}:00.000Z`;
-const ev = (type: RunEvent["type"], minute: number, extra: Partial<RunEvent> = {}): RunEvent => ({ id: `e${String(++n).padStart(3, "0")}`, type, userId: student, clientTime: at(minute), ...extra });
+const ev = (type: RunEvent["type"], minute: number, extra: Partial<RunEvent> = {}): RunEvent => ({
+  id: `e${String(++n).padStart(3, "0")}`,
+  type,
+  userId: student,
+  clientTime: at(minute),
+  ...extra,
+});
 
 const story: RunEvent[] = [
   ev("value.recorded", 1, { stepId: "s1", payload: { value: "80 in-lb" } }),
@@ -94,7 +100,11 @@ describe("run event fold", () => {
     expect(state.steps.s1!.value?.judgement.status).toBe("out");
     expect(state.status).toBe("returned");
     expect(state.returnedComment).toBe("Torque is high: redo step 1.");
-    const resumed = foldRun([...story.slice(0, 1), ev("run.returned", 3, { userId: instructor }), ev("step.checked", 4, { stepId: "s1" })], steps, instructors);
+    const resumed = foldRun(
+      [...story.slice(0, 1), ev("run.returned", 3, { userId: instructor }), ev("step.checked", 4, { stepId: "s1" })],
+      steps,
+      instructors,
+    );
     expect(resumed.status).toBe("in_progress");
   });
 
@@ -141,7 +151,11 @@ describe("a cart's clock cannot bend what was reviewed", () => {
 
   it("keeps a bought-off value when a back-dated change arrives after the buy-off", () => {
     const s1ip: CardStepForRun[] = [{ ...steps[0]!, inspectionPoint: true }, steps[2]!];
-    const before = live([ev("value.recorded", 1, { stepId: "s1", payload: { value: "60 in-lb" } }), ev("step.checked", 2, { stepId: "s1" }), ev("inspection.bought_off", 5, { stepId: "s1", userId: instructor })]);
+    const before = live([
+      ev("value.recorded", 1, { stepId: "s1", payload: { value: "60 in-lb" } }),
+      ev("step.checked", 2, { stepId: "s1" }),
+      ev("inspection.bought_off", 5, { stepId: "s1", userId: instructor }),
+    ]);
     const sneaked = got(ev("value.recorded", 3, { stepId: "s1", payload: { value: "95 in-lb" } }), 8); // stamped before the buy-off, sent after it
     const state = foldRun([...before, sneaked], s1ip, instructors);
     expect(state.steps.s1!.value!.text).toBe("60 in-lb");
@@ -151,7 +165,11 @@ describe("a cart's clock cannot bend what was reviewed", () => {
   });
 
   it("keeps a handed-in run as handed in when a back-dated change arrives after the hand-in", () => {
-    const handedIn = live([ev("value.recorded", 1, { stepId: "s1", payload: { value: "60 in-lb" } }), ev("step.checked", 2, { stepId: "s1" }), ev("run.submitted", 3)]);
+    const handedIn = live([
+      ev("value.recorded", 1, { stepId: "s1", payload: { value: "60 in-lb" } }),
+      ev("step.checked", 2, { stepId: "s1" }),
+      ev("run.submitted", 3),
+    ]);
     const sneaked = got(ev("value.recorded", 2, { stepId: "s1", payload: { value: "40 in-lb" } }), 9);
     const state = foldRun([...handedIn, sneaked], steps, instructors);
     expect(state.status).toBe("submitted");
@@ -160,7 +178,12 @@ describe("a cart's clock cannot bend what was reviewed", () => {
   });
 
   it("changes nothing after a sign-off, whatever the stamp", () => {
-    const signed = live([...story.slice(0, 7), ev("run.submitted", 17), ev("inspection.bought_off", 18, { stepId: "s2", userId: instructor }), ev("run.signed_off", 25, { userId: instructor })]);
+    const signed = live([
+      ...story.slice(0, 7),
+      ev("run.submitted", 17),
+      ev("inspection.bought_off", 18, { stepId: "s2", userId: instructor }),
+      ev("run.signed_off", 25, { userId: instructor }),
+    ]);
     const sneaked = got(ev("step.unchecked", 4, { stepId: "s1" }), 40);
     const state = foldRun([...signed, sneaked], steps, instructors);
     expect(state.status).toBe("signed_off");
@@ -178,8 +201,16 @@ describe("a cart's clock cannot bend what was reviewed", () => {
   it("folds an honest offline session sent late exactly as if it had been sent live", () => {
     const work = story.filter((e) => e.type !== "inspection.bought_off" && e.type !== "run.submitted");
     const asLive = foldRun(live(work), steps, instructors);
-    const allAtOnce = foldRun(work.map((e) => got(e, 59)), steps, instructors); // one batch an hour later
-    const inTwoLateBatches = foldRun(work.map((e, i) => got(e, i < 3 ? 40 : 45)), steps, instructors);
+    const allAtOnce = foldRun(
+      work.map((e) => got(e, 59)),
+      steps,
+      instructors,
+    ); // one batch an hour later
+    const inTwoLateBatches = foldRun(
+      work.map((e, i) => got(e, i < 3 ? 40 : 45)),
+      steps,
+      instructors,
+    );
     for (const s of [allAtOnce, inTwoLateBatches]) {
       expect(s.steps).toEqual(asLive.steps);
       expect(s.status).toBe(asLive.status);
@@ -195,7 +226,11 @@ describe("a cart's clock cannot bend what was reviewed", () => {
   });
 
   it("does not hand a returned run in again with a hand-in made before the return", () => {
-    const returned = live([ev("step.checked", 1, { stepId: "s1" }), ev("run.submitted", 2), ev("run.returned", 5, { userId: instructor, payload: { comment: "Redo" } })]);
+    const returned = live([
+      ev("step.checked", 1, { stepId: "s1" }),
+      ev("run.submitted", 2),
+      ev("run.returned", 5, { userId: instructor, payload: { comment: "Redo" } }),
+    ]);
     const oldHandIn = got(ev("run.submitted", 3), 9); // a second cart's, offline, sent after the return
     const state = foldRun([...returned, oldHandIn], steps, instructors);
     expect(state.status).toBe("returned");
@@ -214,7 +249,16 @@ describe("a cart's clock cannot bend what was reviewed", () => {
   it("gives the same state for any listing order of the same received events (property)", () => {
     let x = 7;
     const rand = (k: number) => ((x = (x * 1103515245 + 12345) % 2 ** 31), x % k);
-    const types = ["step.checked", "step.unchecked", "value.recorded", "note.added", "run.submitted", "inspection.bought_off", "run.returned", "run.signed_off"] as const;
+    const types = [
+      "step.checked",
+      "step.unchecked",
+      "value.recorded",
+      "note.added",
+      "run.submitted",
+      "inspection.bought_off",
+      "run.returned",
+      "run.signed_off",
+    ] as const;
     for (let trial = 0; trial < 200; trial++) {
       const list: RunEvent[] = [];
       for (let i = 0, count = 3 + rand(12); i < count; i++) {
@@ -222,7 +266,11 @@ describe("a cart's clock cannot bend what was reviewed", () => {
         const reviewer = type === "inspection.bought_off" || type === "run.returned" || type === "run.signed_off";
         list.push(
           got(
-            ev(type, rand(50), { userId: reviewer ? instructor : student, stepId: type.startsWith("run.") ? null : ["s1", "s2", "s3"][rand(3)]!, payload: { value: `${50 + rand(30)} in-lb`, text: "n" } }),
+            ev(type, rand(50), {
+              userId: reviewer ? instructor : student,
+              stepId: type.startsWith("run.") ? null : ["s1", "s2", "s3"][rand(3)]!,
+              payload: { value: `${50 + rand(30)} in-lb`, text: "n" },
+            }),
             rand(8) * 7, // a handful of batches
           ),
         );

@@ -35,7 +35,7 @@ describe("CSV", () => {
     expect(csvCell("plain")).toBe("plain");
     expect(csvCell('say "hi", then')).toBe('"say ""hi"", then"');
     expect(csvCell("two\nlines")).toBe('"two\nlines"');
-    expect(csvCell("=HYPERLINK(\"http://x\")")).toBe('"\'=HYPERLINK(""http://x"")"');
+    expect(csvCell('=HYPERLINK("http://x")')).toBe('"\'=HYPERLINK(""http://x"")"');
     expect(csvCell("+1")).toBe("'+1");
     expect(csvCell("-2")).toBe("'-2");
     expect(csvCell("@SUM(A1)")).toBe("'@SUM(A1)");
@@ -80,7 +80,10 @@ describe("working time bounded by what the server saw", () => {
   });
 
   it("does not count a stamp after its receipt (a fast clock)", () => {
-    const fast = [{ clientTime: t(0), serverTime: t(0) }, { clientTime: t(600), serverTime: t(6) }];
+    const fast = [
+      { clientTime: t(0), serverTime: t(0) },
+      { clientTime: t(600), serverTime: t(6) },
+    ];
     expect(workingMinutes(fast, { assignedAt: t(-1) })).toBe(6);
   });
 });

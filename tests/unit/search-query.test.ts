@@ -5,7 +5,10 @@ import { expansionsOf, isEmptyQuery, markEnd, markStart, parseQuery, snippetToHt
 describe("parseQuery", () => {
   it("takes words, the last one as a prefix while typing", () => {
     const q = parseQuery("Magneto tim");
-    expect(q.words.map((w) => [w.text, w.prefix])).toEqual([["magneto", false], ["tim", true]]);
+    expect(q.words.map((w) => [w.text, w.prefix])).toEqual([
+      ["magneto", false],
+      ["tim", true],
+    ]);
     expect(parseQuery("magneto tim ").words.every((w) => !w.prefix)).toBe(true);
   });
 

@@ -27,7 +27,11 @@ describe("sign-in throttling policy", () => {
   });
 
   it("keeps accounts and addresses apart", () => {
-    expect(throttleKeys("a@b.test", "127.0.0.1")).toEqual({ pair: "pair:a@b.test|127.0.0.1", account: "account:a@b.test", address: "address:127.0.0.1" });
+    expect(throttleKeys("a@b.test", "127.0.0.1")).toEqual({
+      pair: "pair:a@b.test|127.0.0.1",
+      account: "account:a@b.test",
+      address: "address:127.0.0.1",
+    });
   });
 
   it("cannot be turned into a lock-out: the account's own count waits a minute at most", () => {

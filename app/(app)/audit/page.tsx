@@ -24,27 +24,39 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
       <h1>Audit log</h1>
       <form method="get" className="panel grid gap-3 sm:grid-cols-5 sm:items-end" aria-label="Filter the audit log">
         <div className="field">
-          <label htmlFor="audit-kind" className="label">What</label>
+          <label htmlFor="audit-kind" className="label">
+            What
+          </label>
           <select id="audit-kind" name="kind" className="input" defaultValue={filter.kind ?? ""}>
             <option value="">Everything</option>
             {Object.entries(kindLabels).map(([value, label]) => (
-              <option key={value} value={value}>{label}</option>
+              <option key={value} value={value}>
+                {label}
+              </option>
             ))}
           </select>
         </div>
         <div className="field">
-          <label htmlFor="audit-actor" className="label">Who (name or e-mail)</label>
+          <label htmlFor="audit-actor" className="label">
+            Who (name or e-mail)
+          </label>
           <input id="audit-actor" name="actor" className="input" defaultValue={filter.actor ?? ""} />
         </div>
         <div className="field">
-          <label htmlFor="audit-from" className="label">From</label>
+          <label htmlFor="audit-from" className="label">
+            From
+          </label>
           <input id="audit-from" name="from" type="date" className="input" defaultValue={filter.from ?? ""} />
         </div>
         <div className="field">
-          <label htmlFor="audit-to" className="label">To</label>
+          <label htmlFor="audit-to" className="label">
+            To
+          </label>
           <input id="audit-to" name="to" type="date" className="input" defaultValue={filter.to ?? ""} />
         </div>
-        <button type="submit" className="btn btn-primary">Show</button>
+        <button type="submit" className="btn btn-primary">
+          Show
+        </button>
       </form>
       <p className="text-ink-soft">The latest {filter.limit} entries that match, newest first. Entries cannot be edited.</p>
       <div className="panel overflow-x-auto">
@@ -53,7 +65,11 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
           rowKey={(e) => e.id}
           empty="Nothing recorded that matches."
           columns={[
-            { header: "When", className: "whitespace-nowrap", cell: (e) => `${e.createdAt.toISOString().replace("T", " ").slice(0, 19)} UTC` },
+            {
+              header: "When",
+              className: "whitespace-nowrap",
+              cell: (e) => `${e.createdAt.toISOString().replace("T", " ").slice(0, 19)} UTC`,
+            },
             { header: "Who", cell: (e) => e.actorName ?? "—" },
             { header: "What", cell: (e) => <code>{e.action}</code> },
             { header: "Details", className: "text-sm", cell: (e) => <code>{JSON.stringify(e.details)}</code> },

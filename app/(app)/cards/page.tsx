@@ -17,10 +17,14 @@ export default async function CardsPage() {
       <div className="flex flex-wrap items-center gap-3">
         <h1 className="mr-auto">Task cards</h1>
         {can(user, "subjects:manage") ? (
-          <Link href="/cards/subjects" className="btn btn-secondary">Curriculum subjects</Link>
+          <Link href="/cards/subjects" className="btn btn-secondary">
+            Curriculum subjects
+          </Link>
         ) : null}
         {author ? (
-          <Link href="/cards/new" className="btn btn-primary">New task card</Link>
+          <Link href="/cards/new" className="btn btn-primary">
+            New task card
+          </Link>
         ) : null}
       </div>
       <p className="text-ink-soft">

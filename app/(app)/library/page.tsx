@@ -23,7 +23,9 @@ export default async function LibraryPage() {
           </Link>
         ) : null}
       </div>
-      <p className="text-ink-soft">Every manual shows its current revision. Older revisions stay readable from the manual&apos;s page, marked superseded.</p>
+      <p className="text-ink-soft">
+        Every manual shows its current revision. Older revisions stay readable from the manual&apos;s page, marked superseded.
+      </p>
       <div className="panel overflow-x-auto">
         <Table
           rows={rows}

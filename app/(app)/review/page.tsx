@@ -26,7 +26,12 @@ export default async function ReviewPage({ searchParams }: { searchParams: Promi
       </div>
       <nav aria-label="Runs by status" className="flex flex-wrap gap-2">
         {tabs.map((t) => (
-          <Link key={t.status} href={`/review?status=${t.status}`} aria-current={t.status === status ? "page" : undefined} className={`btn ${t.status === status ? "btn-primary" : "btn-secondary"}`}>
+          <Link
+            key={t.status}
+            href={`/review?status=${t.status}`}
+            aria-current={t.status === status ? "page" : undefined}
+            className={`btn ${t.status === status ? "btn-primary" : "btn-secondary"}`}
+          >
             {t.label}
           </Link>
         ))}
@@ -55,7 +60,11 @@ export default async function ReviewPage({ searchParams }: { searchParams: Promi
             },
             { header: "Subject", cell: (r) => r.subjectName ?? "—" },
             { header: "Due", className: (r) => (r.workStatus === "overdue" ? "font-bold text-danger" : ""), cell: (r) => r.dueOn ?? "—" },
-            { header: "Last change", className: "whitespace-nowrap", cell: (r) => (r.lastEventAt ? r.lastEventAt.slice(0, 16).replace("T", " ") : "—") },
+            {
+              header: "Last change",
+              className: "whitespace-nowrap",
+              cell: (r) => (r.lastEventAt ? r.lastEventAt.slice(0, 16).replace("T", " ") : "—"),
+            },
           ]}
         />
       </div>

@@ -33,7 +33,11 @@ export default function MyWorkPage() {
     <div className="flex flex-col gap-4">
       <h1 className="text-3xl">My work</h1>
       {problem && !online ? <p className="notice-error">{problem}</p> : null}
-      {work === undefined ? <p role="status">Loading…</p> : <WorkList data={data} items={work?.items ?? []} savedAt={work?.savedAt ?? null} />}
+      {work === undefined ? (
+        <p role="status">Loading…</p>
+      ) : (
+        <WorkList data={data} items={work?.items ?? []} savedAt={work?.savedAt ?? null} />
+      )}
     </div>
   );
 }

@@ -6,4 +6,6 @@ export const GET = handle(api.runs.listAssignments, async ({ actor, query }) => 
   assignments: await listAssignments({ actor, cardId: query.card }),
 }));
 
-export const POST = handle(api.runs.createAssignment, async ({ actor, body }) => ({ assignment: await createAssignment({ actor, input: body }) }));
+export const POST = handle(api.runs.createAssignment, async ({ actor, body }) => ({
+  assignment: await createAssignment({ actor, input: body }),
+}));

@@ -7,7 +7,9 @@ export const GET = handle(api.library.search, async ({ query: params }) => {
   const started = performance.now();
   const query = parseQuery(params.q);
   if (isEmptyQuery(query)) {
-    throw new AppError("invalid", "Type a word to search for (not only excluded words or punctuation).", { fields: { q: "No word to search for." } });
+    throw new AppError("invalid", "Type a word to search for (not only excluded words or punctuation).", {
+      fields: { q: "No word to search for." },
+    });
   }
   const result = await getSearchEngine().search(
     query,

@@ -4,4 +4,6 @@ import { createSubject, listSubjects } from "@/lib/server/cards/subjects";
 
 export const GET = handle(api.cards.listSubjects, async () => ({ subjects: await listSubjects() }));
 
-export const POST = handle(api.cards.createSubject, async ({ actor, body: { name } }) => ({ subject: await createSubject({ actor, name }) }));
+export const POST = handle(api.cards.createSubject, async ({ actor, body: { name } }) => ({
+  subject: await createSubject({ actor, name }),
+}));

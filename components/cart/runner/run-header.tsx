@@ -14,7 +14,13 @@ export function RunHeader({ detail, status, returned }: { detail: RunDetailDto; 
         <p className="text-sm font-bold uppercase tracking-wider text-ink-soft">Task card · version {version.number}</p>
         <h1 className="text-3xl">{version.title}</h1>
         <p className="text-ink-soft">
-          {[detail.run.dueOn ? `Due ${detail.run.dueOn}` : null, detail.run.note || null, version.estimatedMinutes ? `About ${version.estimatedMinutes} min` : null].filter(Boolean).join(" · ")}
+          {[
+            detail.run.dueOn ? `Due ${detail.run.dueOn}` : null,
+            detail.run.note || null,
+            version.estimatedMinutes ? `About ${version.estimatedMinutes} min` : null,
+          ]
+            .filter(Boolean)
+            .join(" · ")}
         </p>
         <p>
           <StatusBadge kind="run" status={status} screen="run-page" className="text-base" data-testid="run-status" />
@@ -23,7 +29,8 @@ export function RunHeader({ detail, status, returned }: { detail: RunDetailDto; 
 
       {detail.run.newerVersion ? (
         <p role="note" className="rounded-md border-4 border-dashed border-deck bg-teal-pale px-4 py-3 font-semibold">
-          Version {detail.run.newerVersion} of this card is published. This assignment uses version {version.number}, as it was given; ask your instructor before you switch.
+          Version {detail.run.newerVersion} of this card is published. This assignment uses version {version.number}, as it was given; ask
+          your instructor before you switch.
         </p>
       ) : null}
       {returned && status !== "signed_off" ? (
@@ -34,12 +41,17 @@ export function RunHeader({ detail, status, returned }: { detail: RunDetailDto; 
       ) : null}
       {detail.signOff ? (
         <p role="note" className="rounded-md border-4 border-ok bg-ok-pale px-4 py-3 text-lg font-semibold">
-          Signed off by {detail.signOff.instructorName} on {detail.signOff.signedAt.slice(0, 10)}.{detail.signOff.comment ? ` “${detail.signOff.comment}”` : ""}
+          Signed off by {detail.signOff.instructorName} on {detail.signOff.signedAt.slice(0, 10)}.
+          {detail.signOff.comment ? ` “${detail.signOff.comment}”` : ""}
         </p>
       ) : null}
 
       <div className="grid gap-3 sm:grid-cols-3">
-        {[["Protective equipment", version.protectiveEquipment], ["Tools", version.tools], ["Consumables", version.consumables]].map(([title, items]) =>
+        {[
+          ["Protective equipment", version.protectiveEquipment],
+          ["Tools", version.tools],
+          ["Consumables", version.consumables],
+        ].map(([title, items]) =>
           (items as string[]).length ? (
             <section key={title as string} aria-label={title as string} className="panel">
               <h2 className="text-lg font-bold">{title as string}</h2>

@@ -11,8 +11,20 @@ export function StepNotes({ stepId, notes, locked, onAct }: { stepId: string; no
       <label htmlFor={`note-${stepId}`} className="label">
         Note on this step
       </label>
-      <textarea id={`note-${stepId}`} className="input min-h-20" value={note} maxLength={2000} onChange={(e) => setNote(e.target.value)} disabled={locked} />
-      <button type="button" className="btn btn-secondary self-start" disabled={locked || !note.trim()} onClick={() => void onAct("note.added", { stepId, payload: { text: note.trim() } }).then(() => setNote(""))}>
+      <textarea
+        id={`note-${stepId}`}
+        className="input min-h-20"
+        value={note}
+        maxLength={2000}
+        onChange={(e) => setNote(e.target.value)}
+        disabled={locked}
+      />
+      <button
+        type="button"
+        className="btn btn-secondary self-start"
+        disabled={locked || !note.trim()}
+        onClick={() => void onAct("note.added", { stepId, payload: { text: note.trim() } }).then(() => setNote(""))}
+      >
         Add note
       </button>
       {notes.length ? (

@@ -14,7 +14,19 @@ import type { Act, PacketPages, StepDto, StepState } from "./use-run";
 
 /** One step of the run: its notices first, the instruction, cited pages, and what the student records. */
 export function StepPanel({
-  number, total, step, state, locked, blocked, now, packet, packetPages, online, onAct, data, runId,
+  number,
+  total,
+  step,
+  state,
+  locked,
+  blocked,
+  now,
+  packet,
+  packetPages,
+  online,
+  onAct,
+  data,
+  runId,
 }: {
   number: number;
   total: number;
@@ -59,7 +71,9 @@ export function StepPanel({
         <StepMarkdown text={step.text} />
       </div>
 
-      {step.references.length ? <StepReferences references={step.references} packet={packet} packetPages={packetPages} online={online} /> : null}
+      {step.references.length ? (
+        <StepReferences references={step.references} packet={packet} packetPages={packetPages} online={online} />
+      ) : null}
 
       {step.calculator ? (
         <p>
@@ -70,19 +84,41 @@ export function StepPanel({
         </p>
       ) : null}
 
-      {step.measurement ? <StepReading number={number} stepId={step.id} measurement={step.measurement} recorded={state.value} frozen={frozen} onAct={onAct} /> : null}
+      {step.measurement ? (
+        <StepReading number={number} stepId={step.id} measurement={step.measurement} recorded={state.value} frozen={frozen} onAct={onAct} />
+      ) : null}
 
       {step.timerMinutes ? (
-        <StepTimer number={number} stepId={step.id} minutes={step.timerMinutes} timer={state.timer} now={now} locked={locked} frozen={frozen} onAct={onAct} data={data} runId={runId} />
+        <StepTimer
+          number={number}
+          stepId={step.id}
+          minutes={step.timerMinutes}
+          timer={state.timer}
+          now={now}
+          locked={locked}
+          frozen={frozen}
+          onAct={onAct}
+          data={data}
+          runId={runId}
+        />
       ) : null}
 
       <StepNotes stepId={step.id} notes={state.notes} locked={locked} onAct={onAct} />
 
-      <StepPhoto stepId={step.id} count={state.photos.length} disabled={locked || !!state.boughtOff} onAct={onAct} data={data} runId={runId} />
+      <StepPhoto
+        stepId={step.id}
+        count={state.photos.length}
+        disabled={locked || !!state.boughtOff}
+        onAct={onAct}
+        data={data}
+        runId={runId}
+      />
 
       {step.inspectionPoint && state.checked ? (
         <p role="note" className={`rounded-md px-4 py-3 font-semibold ${state.boughtOff ? "bg-ok-pale text-ok" : "border-4 border-deck"}`}>
-          {state.boughtOff ? `Bought off ${state.boughtOff.at.slice(0, 16).replace("T", " ")}.` : "Waiting for buy-off: your instructor checks this step here at the cart or from the review queue."}
+          {state.boughtOff
+            ? `Bought off ${state.boughtOff.at.slice(0, 16).replace("T", " ")}.`
+            : "Waiting for buy-off: your instructor checks this step here at the cart or from the review queue."}
         </p>
       ) : null}
 

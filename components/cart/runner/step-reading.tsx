@@ -6,7 +6,14 @@ import { describeLimit } from "@/lib/domain/calc/limits";
 import type { Act, StepDto, StepState } from "./use-run";
 
 /** The measured value of a step: judged while typed, recorded as an event, the last one shown. */
-export function StepReading({ number, stepId, measurement, recorded, frozen, onAct }: {
+export function StepReading({
+  number,
+  stepId,
+  measurement,
+  recorded,
+  frozen,
+  onAct,
+}: {
   number: number;
   stepId: string;
   measurement: NonNullable<StepDto["measurement"]>;
@@ -24,13 +31,21 @@ export function StepReading({ number, stepId, measurement, recorded, frozen, onA
         void onAct("value.recorded", { stepId, payload: { value: value.trim() } }).then(() => setValue(""));
       }}
     >
-      <LimitCheckField id={`value-${stepId}`} label={`${measurement.label} (limits ${describeLimit(measurement)})`} limit={measurement} value={value} onChange={setValue} />
+      <LimitCheckField
+        id={`value-${stepId}`}
+        label={`${measurement.label} (limits ${describeLimit(measurement)})`}
+        limit={measurement}
+        value={value}
+        onChange={setValue}
+      />
       <button type="submit" className="btn btn-secondary self-start" disabled={frozen || !value.trim()}>
         Record this reading
       </button>
       {recorded ? (
         <p data-testid={`recorded-${number}`} className={recorded.judgement.status === "in" ? "notice-ok" : "notice-error"}>
-          Recorded {recorded.text}: {recorded.judgement.status === "in" ? "within limits" : recorded.judgement.status === "out" ? "OUT OF LIMITS" : "not understood"}. {recorded.judgement.message}
+          Recorded {recorded.text}:{" "}
+          {recorded.judgement.status === "in" ? "within limits" : recorded.judgement.status === "out" ? "OUT OF LIMITS" : "not understood"}.{" "}
+          {recorded.judgement.message}
         </p>
       ) : null}
     </form>

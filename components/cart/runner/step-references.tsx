@@ -7,7 +7,17 @@ import type { PacketPages, StepDto } from "./use-run";
 const PacketPage = dynamic(() => import("../packet-page"), { ssr: false, loading: () => <p role="status">Opening the page…</p> });
 
 /** The manual pages a step cites: from the offline packet when stored, else a link while online. */
-export function StepReferences({ references, packet, packetPages, online }: { references: StepDto["references"]; packet: Blob | null; packetPages: PacketPages; online: boolean }) {
+export function StepReferences({
+  references,
+  packet,
+  packetPages,
+  online,
+}: {
+  references: StepDto["references"];
+  packet: Blob | null;
+  packetPages: PacketPages;
+  online: boolean;
+}) {
   const [openPage, setOpenPage] = useState<number | null>(null);
   return (
     <div className="flex flex-col gap-2">
@@ -17,7 +27,13 @@ export function StepReferences({ references, packet, packetPages, online }: { re
           const inPacket = packetPages.find((p) => p.revisionId === r.revisionId && p.page === r.page);
           const key = inPacket?.packetPage ?? -r.page;
           return packet && inPacket ? (
-            <button key={key} type="button" className="btn btn-secondary" aria-expanded={openPage === key} onClick={() => setOpenPage(openPage === key ? null : key)}>
+            <button
+              key={key}
+              type="button"
+              className="btn btn-secondary"
+              aria-expanded={openPage === key}
+              onClick={() => setOpenPage(openPage === key ? null : key)}
+            >
               {openPage === key ? "Hide" : "Show"} page {r.page} · {r.manualTitle}, {r.revisionLabel}
             </button>
           ) : online ? (

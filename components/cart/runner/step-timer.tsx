@@ -5,7 +5,18 @@ import { formatLeft } from "../timer-watch";
 import type { Act, StepState } from "./use-run";
 
 /** A step's timer: started and stopped as events, and kept in the cart's timers so it rings on any page. */
-export function StepTimer({ number, stepId, minutes, timer, now, locked, frozen, onAct, data, runId }: {
+export function StepTimer({
+  number,
+  stepId,
+  minutes,
+  timer,
+  now,
+  locked,
+  frozen,
+  onAct,
+  data,
+  runId,
+}: {
   number: number;
   stepId: string;
   minutes: number;
@@ -25,7 +36,16 @@ export function StepTimer({ number, stepId, minutes, timer, now, locked, frozen,
           <span role="timer" aria-live="off" className={`text-3xl font-bold tabular-nums ${timerLeft <= 0 ? "text-danger" : ""}`}>
             {timerLeft <= 0 ? "Time is up" : formatLeft(timerLeft)}
           </span>
-          <button type="button" className="btn btn-secondary" disabled={locked} onClick={() => void onAct("timer.stopped", { stepId }).then(() => data.setTimers((t) => t.filter((x) => !(x.runId === runId && x.stepId === stepId))))}>
+          <button
+            type="button"
+            className="btn btn-secondary"
+            disabled={locked}
+            onClick={() =>
+              void onAct("timer.stopped", { stepId }).then(() =>
+                data.setTimers((t) => t.filter((x) => !(x.runId === runId && x.stepId === stepId))),
+              )
+            }
+          >
             Stop timer
           </button>
         </>
@@ -36,7 +56,10 @@ export function StepTimer({ number, stepId, minutes, timer, now, locked, frozen,
           disabled={frozen}
           onClick={async () => {
             await onAct("timer.started", { stepId, payload: { minutes } });
-            await data.setTimers((t) => [...t.filter((x) => !(x.runId === runId && x.stepId === stepId)), { runId, stepId, label: `step ${number} (${minutes} min)`, endsAt: Date.now() + minutes * 60_000 }]);
+            await data.setTimers((t) => [
+              ...t.filter((x) => !(x.runId === runId && x.stepId === stepId)),
+              { runId, stepId, label: `step ${number} (${minutes} min)`, endsAt: Date.now() + minutes * 60_000 },
+            ]);
           }}
         >
           Start the {minutes} min timer

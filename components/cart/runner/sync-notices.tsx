@@ -9,7 +9,8 @@ export function RefusedChanges({ refused }: { refused: RefusedItem[] }) {
   return (
     <div role="alert" className="notice-error">
       <p className="font-semibold">
-        The school&apos;s server refused {refused.length} {refused.length === 1 ? "change" : "changes"} made on this laptop: {refused.at(-1)!.reason}
+        The school&apos;s server refused {refused.length} {refused.length === 1 ? "change" : "changes"} made on this laptop:{" "}
+        {refused.at(-1)!.reason}
       </p>
       <p>Tell your instructor; those changes are not part of the run.</p>
     </div>

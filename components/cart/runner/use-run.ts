@@ -28,7 +28,9 @@ export function useRun(data: CartData, runId: string) {
       Promise.all([data.run(runId), data.pending(), data.packet(runId), data.refused()]).then(([stored, queued, blob, refused]) => {
         setRefused(refused.filter((r) => r.runId === runId));
         setDetail(stored ?? null);
-        setPending(queued.filter((p) => p.runId === runId).map((p) => ({ ...p.event, userId: data.userId, type: p.event.type as RunEventType })));
+        setPending(
+          queued.filter((p) => p.runId === runId).map((p) => ({ ...p.event, userId: data.userId, type: p.event.type as RunEventType })),
+        );
         setPacket((old) => old ?? blob ?? null); // a new Blob each read would reload the page view
       }),
     [data, runId],
@@ -43,7 +45,12 @@ export function useRun(data: CartData, runId: string) {
 
   const state = useMemo(() => {
     if (!detail) return null;
-    const steps = detail.version.steps.map((s) => ({ id: s.id, inspectionPoint: s.inspectionPoint, measurement: s.measurement, timerMinutes: s.timerMinutes }));
+    const steps = detail.version.steps.map((s) => ({
+      id: s.id,
+      inspectionPoint: s.inspectionPoint,
+      measurement: s.measurement,
+      timerMinutes: s.timerMinutes,
+    }));
     return foldRun([...detail.events, ...pending], steps, new Set(detail.reviewers));
   }, [detail, pending]);
 

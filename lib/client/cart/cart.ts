@@ -3,7 +3,15 @@
 // network is there (on start, on the online event, on focus, after each change, with backoff).
 import type { RunDetailDto, WorkItemDto } from "@/lib/contracts/runs";
 import type { RunEventType } from "@/lib/domain/runs/fold";
-import { cartData, clearSignOutPending, lastUser, rememberUser, signOutPending, type CartData, type CartUser } from "@/lib/client/cart/store";
+import {
+  cartData,
+  clearSignOutPending,
+  lastUser,
+  rememberUser,
+  signOutPending,
+  type CartData,
+  type CartUser,
+} from "@/lib/client/cart/store";
 import { backoffDelay, syncOnce, type SyncResult } from "@/lib/client/cart/sync";
 
 /**
@@ -12,7 +20,10 @@ import { backoffDelay, syncOnce, type SyncResult } from "@/lib/client/cart/sync"
  */
 export async function endPendingSignOut(): Promise<"none" | "ended" | "failed"> {
   if (!(await signOutPending())) return "none";
-  const ended = await fetch("/api/session", { method: "DELETE" }).then((r) => r.ok, () => false);
+  const ended = await fetch("/api/session", { method: "DELETE" }).then(
+    (r) => r.ok,
+    () => false,
+  );
   if (!ended) return "failed";
   await clearSignOutPending();
   return "ended";
@@ -155,7 +166,9 @@ export function syncer(data: CartData): Syncer {
       };
       // The tab and the service worker may both try: the Web Locks API lets one send at a time.
       const locked: Promise<SyncResult> =
-        typeof navigator !== "undefined" && navigator.locks ? (navigator.locks.request(`hangarleaf-sync-${data.userId}`, pass) as unknown as Promise<SyncResult>) : pass();
+        typeof navigator !== "undefined" && navigator.locks
+          ? (navigator.locks.request(`hangarleaf-sync-${data.userId}`, pass) as unknown as Promise<SyncResult>)
+          : pass();
       const current = locked.finally(() => {
         running = null;
         if (again) {

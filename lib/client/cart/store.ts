@@ -169,7 +169,13 @@ export function cartData(userId: string) {
                   const known = new Set(detail.events.map((e) => e.id));
                   const added = leaving
                     .filter((p) => p.runId === runId && !known.has(p.event.id))
-                    .map((p) => ({ ...p.event, type: p.event.type as RunDetailDto["events"][number]["type"], userId, userName: "", serverTime: null }));
+                    .map((p) => ({
+                      ...p.event,
+                      type: p.event.type as RunDetailDto["events"][number]["type"],
+                      userId,
+                      userName: "",
+                      serverTime: null,
+                    }));
                   return { ...detail, events: [...detail.events, ...added] };
                 },
                 store,
@@ -187,9 +193,22 @@ export function cartData(userId: string) {
           await update<RefusedItem[]>("refused", (old) => [...(old ?? []), ...items].slice(-200), store);
           changed();
         },
-        postEvents: async (runId, events) => answerOf(await fetcher(`/api/runs/${runId}/events`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ events }) })),
+        postEvents: async (runId, events) =>
+          answerOf(
+            await fetcher(`/api/runs/${runId}/events`, {
+              method: "POST",
+              headers: { "content-type": "application/json" },
+              body: JSON.stringify({ events }),
+            }),
+          ),
         putPhoto: async (p) =>
-          answerOf(await fetcher(`/api/runs/${p.runId}/photos/${p.photoId}${p.stepId ? `?step=${p.stepId}` : ""}`, { method: "PUT", headers: { "content-type": p.type }, body: p.blob })),
+          answerOf(
+            await fetcher(`/api/runs/${p.runId}/photos/${p.photoId}${p.stepId ? `?step=${p.stepId}` : ""}`, {
+              method: "PUT",
+              headers: { "content-type": p.type },
+              body: p.blob,
+            }),
+          ),
       };
     },
   };

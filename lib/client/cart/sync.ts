@@ -86,10 +86,16 @@ export async function syncOnce(port: SyncPort, { size = batchSize }: { size?: nu
       // will never take: re-sending would block the queue forever, so they are set aside.
       refused += batch.length;
       await port.refused(batch.map((e) => ({ id: e.id, runId, reason: answer.message ?? `refused (${answer.status})` })));
-      await port.removeEvents(batch.map((e) => e.id), false);
+      await port.removeEvents(
+        batch.map((e) => e.id),
+        false,
+      );
     } else {
       sent += batch.length;
-      await port.removeEvents(batch.map((e) => e.id), true);
+      await port.removeEvents(
+        batch.map((e) => e.id),
+        true,
+      );
     }
     return "done";
   };
@@ -122,7 +128,12 @@ export function backoffDelay(attempt: number, random = Math.random): number {
  */
 export async function syncUntilDone(
   port: SyncPort,
-  { sleep = (ms: number) => new Promise<void>((r) => setTimeout(r, ms)), maxPasses = 50, size = batchSize, delay = backoffDelay }: { sleep?: (ms: number) => Promise<void>; maxPasses?: number; size?: number; delay?: (attempt: number) => number } = {},
+  {
+    sleep = (ms: number) => new Promise<void>((r) => setTimeout(r, ms)),
+    maxPasses = 50,
+    size = batchSize,
+    delay = backoffDelay,
+  }: { sleep?: (ms: number) => Promise<void>; maxPasses?: number; size?: number; delay?: (attempt: number) => number } = {},
 ): Promise<SyncResult & { passes: number }> {
   let total: SyncResult = { sent: 0, refused: 0, stop: null };
   let fruitless = 0;

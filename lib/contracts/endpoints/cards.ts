@@ -2,7 +2,15 @@
 import { cardListQuerySchema } from "@/lib/domain/validation/cards";
 import { endpoint, file, json, none, numberSegment, uuidSegment } from "@/lib/contracts/endpoint";
 import { cardBodyLimit } from "@/lib/contracts/cards";
-import { archiveSchema, citePageSchema, coauthorsSchema, createCardSchema, recheckDecisionsSchema, saveDraftSchema, subjectSchema } from "@/lib/domain/validation/cards";
+import {
+  archiveSchema,
+  citePageSchema,
+  coauthorsSchema,
+  createCardSchema,
+  recheckDecisionsSchema,
+  saveDraftSchema,
+  subjectSchema,
+} from "@/lib/domain/validation/cards";
 import type { CardDto, CardSummaryDto, CardVersionDto, RecheckDto, SubjectDto } from "@/lib/contracts/cards";
 
 export const cardsApi = {

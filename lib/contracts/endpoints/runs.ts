@@ -3,7 +3,15 @@ import { z } from "zod";
 import { runStatuses } from "@/lib/domain/vocabulary";
 import { endpoint, file, isUuid, json, uuidSegment } from "@/lib/contracts/endpoint";
 import { buyOffSchema, createAssignmentSchema, eventBatchSchema, returnRunSchema, reviewCommentSchema } from "@/lib/domain/validation/runs";
-import type { AssignmentDto, ClassRecordDto, EventBatchResultDto, PhotoDto, RunDetailDto, StudentRecordDto, WorkItemDto } from "@/lib/contracts/runs";
+import type {
+  AssignmentDto,
+  ClassRecordDto,
+  EventBatchResultDto,
+  PhotoDto,
+  RunDetailDto,
+  StudentRecordDto,
+  WorkItemDto,
+} from "@/lib/contracts/runs";
 import type { RunStatus } from "@/lib/domain/runs/fold";
 
 export const runsApi = {
@@ -11,7 +19,12 @@ export const runsApi = {
     method: "GET",
     path: "/api/assignments",
     access: "assignments:manage",
-    query: z.object({ card: z.string().optional().transform((v) => (v && isUuid(v) ? v.toLowerCase() : undefined)) }),
+    query: z.object({
+      card: z
+        .string()
+        .optional()
+        .transform((v) => (v && isUuid(v) ? v.toLowerCase() : undefined)),
+    }),
     answer: json<{ assignments: AssignmentDto[] }>(),
     who: "instructor (made by them or for their classes), admin",
     doc: `200 \`{ "assignments": [ { "id", "cardId", "title", "versionNumber", "className", "dueOn", "note", "assignedByName", "createdAt", "counts": { status: n } } ] }\``,
@@ -78,7 +91,12 @@ export const runsApi = {
     path: "/api/runs/:id/photos/:photoId",
     access: "signed-in",
     params: { id: uuidSegment("That run"), photoId: uuidSegment("That photo") },
-    query: z.object({ step: z.string().optional().transform((v) => (v && isUuid(v) ? v.toLowerCase() : null)) }),
+    query: z.object({
+      step: z
+        .string()
+        .optional()
+        .transform((v) => (v && isUuid(v) ? v.toLowerCase() : null)),
+    }),
     body: { kind: "binary" },
     answer: json<{ photo: PhotoDto }>(),
     status: 201,

@@ -94,7 +94,5 @@ const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boo
 ];
 
 export function navigationFor(actor: Actor, { outbox = false }: { outbox?: boolean } = {}): NavItem[] {
-  return navigation
-    .filter((n) => (!n.permission || can(actor, n.permission)) && (!n.onlyWithOutbox || outbox))
-    .map((n) => n.item);
+  return navigation.filter((n) => (!n.permission || can(actor, n.permission)) && (!n.onlyWithOutbox || outbox)).map((n) => n.item);
 }

@@ -39,7 +39,17 @@ export interface FlatPattern {
  * The flat length of a part from its outside (mold-line) dimensions: each flat is its dimension
  * less the setback of every bend at its ends; the developed length is the flats plus the allowances.
  */
-export function flatPattern({ thickness, radius, dimensions, bends }: { thickness: number; radius: number; dimensions: number[]; bends: number[] }): FlatPattern {
+export function flatPattern({
+  thickness,
+  radius,
+  dimensions,
+  bends,
+}: {
+  thickness: number;
+  radius: number;
+  dimensions: number[];
+  bends: number[];
+}): FlatPattern {
   checkSheet(thickness, radius);
   if (dimensions.length !== bends.length + 1) refuse("A part with n bends has n + 1 outside dimensions.");
   if (!dimensions.every((d) => d > 0)) refuse("Every outside dimension must be more than zero.");
@@ -77,21 +87,41 @@ export interface RadiusCheck {
   message: string;
 }
 
-export function checkBendRadius({ thickness, radius, temper = "2024-T3" }: { thickness: number; radius: number; temper?: Temper }): RadiusCheck {
+export function checkBendRadius({
+  thickness,
+  radius,
+  temper = "2024-T3",
+}: {
+  thickness: number;
+  radius: number;
+  temper?: Temper;
+}): RadiusCheck {
   checkSheet(thickness, radius);
   if (temper === "2024-O") {
     // 2024-O bends around 0 to 1 t (AC 43.13-1B Table 4-6).
     const high = thickness;
     return radius >= high
       ? { status: "ok", tableThickness: null, low: 0, high, message: "At or above 1 t, the largest radius the table gives for 2024-O." }
-      : { status: "tight", tableThickness: null, low: 0, high, message: "Inside the 0 to 1 t range of AC 43.13-1B Table 4-6 for 2024-O: check the drawing." };
+      : {
+          status: "tight",
+          tableThickness: null,
+          low: 0,
+          high,
+          message: "Inside the 0 to 1 t range of AC 43.13-1B Table 4-6 for 2024-O: check the drawing.",
+        };
   }
   // Between two listed gauges, the thicker row is used: its multiples of t are the larger, so the
   // safer ones (0.040 in takes the 0.064 row, 3 t to 5 t, not 2 t to 4 t). Only float noise, a
   // billionth of an inch, counts as "on" a listed gauge.
   const row = table2024T3.find(([t]) => t >= thickness - 1e-9);
   if (!row) {
-    return { status: "no-data", tableThickness: null, low: null, high: null, message: "Thicker than AC 43.13-1B Table 4-6 lists for 2024-T3: use the manufacturer's data." };
+    return {
+      status: "no-data",
+      tableThickness: null,
+      low: null,
+      high: null,
+      message: "Thicker than AC 43.13-1B Table 4-6 lists for 2024-T3: use the manufacturer's data.",
+    };
   }
   const [t, lowT, highT] = row;
   const low = lowT * thickness;
@@ -99,10 +129,28 @@ export function checkBendRadius({ thickness, radius, temper = "2024-T3" }: { thi
   // The radii are shown rounded up, so a shown minimum never allows a tighter bend than the table.
   const range = `${lowT} t to ${highT} t, ${formatNumber(low, 4, "up")} to ${formatNumber(high, 4, "up")} in (row ${t} in)`;
   if (radius < low - 1e-9) {
-    return { status: "too-small", tableThickness: t, low, high, message: `Too tight: ${formatAgainst(radius, low, 4)} in is smaller than the ${lowT} t minimum of AC 43.13-1B Table 4-6 for 2024-T3 (${range}). The bend is likely to crack.` };
+    return {
+      status: "too-small",
+      tableThickness: t,
+      low,
+      high,
+      message: `Too tight: ${formatAgainst(radius, low, 4)} in is smaller than the ${lowT} t minimum of AC 43.13-1B Table 4-6 for 2024-T3 (${range}). The bend is likely to crack.`,
+    };
   }
   if (radius < high - 1e-9) {
-    return { status: "tight", tableThickness: t, low, high, message: `Inside the table's range of ${range}: use the larger radius unless the drawing calls for this one.` };
+    return {
+      status: "tight",
+      tableThickness: t,
+      low,
+      high,
+      message: `Inside the table's range of ${range}: use the larger radius unless the drawing calls for this one.`,
+    };
   }
-  return { status: "ok", tableThickness: t, low, high, message: `At or above ${highT} t, the largest radius the table gives for this gauge (${range}).` };
+  return {
+    status: "ok",
+    tableThickness: t,
+    low,
+    high,
+    message: `At or above ${highT} t, the largest radius the table gives for this gauge (${range}).`,
+  };
 }

@@ -12,7 +12,16 @@ export interface Limit {
 }
 
 export type Judgement =
-  | { status: "in" | "out"; value: number; unit: string; converted: number; limitUnit: string; shown: string; limitText: string; message: string }
+  | {
+      status: "in" | "out";
+      value: number;
+      unit: string;
+      converted: number;
+      limitUnit: string;
+      shown: string;
+      limitText: string;
+      message: string;
+    }
   | { status: "invalid"; message: string };
 
 /** The limit as [low, high] in its unit; nominal ± tolerance wins over min/max when both are set. */
@@ -45,7 +54,8 @@ const relativeSlack = 1e-9;
 export function judgeValue(input: string | { value: number; unit: string }, limit: Limit): Judgement {
   const limitUnit = resolveUnit(limit.unit);
   if (!limitUnit) return { status: "invalid", message: `The limit's unit "${limit.unit}" is not known.` };
-  const quantity = typeof input === "string" ? parseQuantity(input, limit.unit) : { value: input.value, unit: resolveUnit(input.unit) ?? "" };
+  const quantity =
+    typeof input === "string" ? parseQuantity(input, limit.unit) : { value: input.value, unit: resolveUnit(input.unit) ?? "" };
   if (!quantity || !quantity.unit) {
     return { status: "invalid", message: `Type a number, with a unit if it is not ${unitLabel(limitUnit)} (for example "12.5 mm").` };
   }
@@ -63,7 +73,8 @@ export function judgeValue(input: string | { value: number; unit: string }, limi
   // "0.25 in: OUT … at most 0.25 in").
   const crossed = tooLow ? low : tooHigh ? high : null;
   const convertedText = crossed != null ? formatAgainst(converted, crossed, 5) : formatNumber(converted, 5);
-  const typedText = crossed != null && quantity.unit === limitUnit ? formatAgainst(quantity.value, crossed, 6) : formatNumber(quantity.value, 6);
+  const typedText =
+    crossed != null && quantity.unit === limitUnit ? formatAgainst(quantity.value, crossed, 6) : formatNumber(quantity.value, 6);
   const shown =
     quantity.unit === limitUnit
       ? `${typedText} ${unitLabel(limitUnit)}`

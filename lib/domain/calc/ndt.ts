@@ -26,7 +26,12 @@ export type DeveloperForm = "nonaqueous" | "dry" | "aqueous";
  * aqueous 2 hours (ASTM E1417, from memory).
  */
 export const developmentWindows: Record<DeveloperForm, { label: string; min: number; max: number; source: string }> = {
-  nonaqueous: { label: "nonaqueous (solvent-suspended)", min: 10, max: 30, source: "ASTM E1417 floor (from memory); NAVSEA T9074-AS-GIB-010/271: 7 to 30 min after it dries" },
+  nonaqueous: {
+    label: "nonaqueous (solvent-suspended)",
+    min: 10,
+    max: 30,
+    source: "ASTM E1417 floor (from memory); NAVSEA T9074-AS-GIB-010/271: 7 to 30 min after it dries",
+  },
   dry: { label: "dry powder", min: 10, max: 240, source: "ASTM E1417 (from memory)" },
   aqueous: { label: "aqueous (soluble or suspendable)", min: 10, max: 120, source: "ASTM E1417 (from memory)" },
 };
@@ -79,13 +84,27 @@ export function penetrantDwell({
   const developmentWindow: [number, number] = [window.min, window.max];
   const dwellBelowMinimum = specifiedMinutes < minimumDwellMinutes;
   if (dwellBelowMinimum) {
-    warnings.push(`A specified dwell of ${formatNumber(specifiedMinutes, 3)} min is under the ${minimumDwellMinutes}-minute minimum (ASTM E1417, from memory): check the procedure and the penetrant maker's data before you go on.`);
+    warnings.push(
+      `A specified dwell of ${formatNumber(specifiedMinutes, 3)} min is under the ${minimumDwellMinutes}-minute minimum (ASTM E1417, from memory): check the procedure and the penetrant maker's data before you go on.`,
+    );
   }
   const blocked = (rule: string): DwellResult => ({
-    allowed: false, dwellMinutes: null, shortestMinutes: null, developmentMinutes: null, developmentWindow, dwellBelowMinimum, temperatureF: t, rule, warnings: [rule, ...warnings],
+    allowed: false,
+    dwellMinutes: null,
+    shortestMinutes: null,
+    developmentMinutes: null,
+    developmentWindow,
+    dwellBelowMinimum,
+    temperatureF: t,
+    rule,
+    warnings: [rule, ...warnings],
   });
-  if (t < penetrantWindowF.min) return blocked(`No penetrant inspection below ${penetrantWindowF.min} °F (T.O. 33B-1-1). Warm the part or move it into the shop.`);
-  if (t > penetrantWindowF.max) return blocked(`Above ${penetrantWindowF.max} °F the penetrant dries in the flaws and T.O. 33B-1-1 gives no rule: cool the part, or follow the penetrant maker's data.`);
+  if (t < penetrantWindowF.min)
+    return blocked(`No penetrant inspection below ${penetrantWindowF.min} °F (T.O. 33B-1-1). Warm the part or move it into the shop.`);
+  if (t > penetrantWindowF.max)
+    return blocked(
+      `Above ${penetrantWindowF.max} °F the penetrant dries in the flaws and T.O. 33B-1-1 gives no rule: cool the part, or follow the penetrant maker's data.`,
+    );
   let dwell = specifiedMinutes;
   let shortest = specifiedMinutes;
   let rule = "60 to 100 °F: the specified dwell (T.O. 33B-1-1).";
@@ -105,8 +124,21 @@ export function penetrantDwell({
   // development time under the floor.
   const half = dwell / 2;
   const developmentMinutes = Math.min(Math.max(half, window.min), window.max);
-  if (half > window.max) warnings.push(`Half the dwell is more than the ${window.max} min the ${window.label} developer allows: inspect within ${window.max} min.`);
-  return { allowed: true, dwellMinutes: dwell, shortestMinutes: shortest, developmentMinutes, developmentWindow, dwellBelowMinimum, temperatureF: t, rule, warnings };
+  if (half > window.max)
+    warnings.push(
+      `Half the dwell is more than the ${window.max} min the ${window.label} developer allows: inspect within ${window.max} min.`,
+    );
+  return {
+    allowed: true,
+    dwellMinutes: dwell,
+    shortestMinutes: shortest,
+    developmentMinutes,
+    developmentWindow,
+    dwellBelowMinimum,
+    temperatureF: t,
+    rule,
+    warnings,
+  };
 }
 
 /**
@@ -179,7 +211,8 @@ export function coilShotCurrent({
   if (!(insideDiameter >= 0)) refuse("The bore of a hollow part is zero or more.");
   if (insideDiameter >= diameter) refuse("The bore must be smaller than the outside diameter.");
   if (coilDiameter != null && !(coilDiameter > 0)) refuse("The coil's inside diameter must be more than zero.");
-  if (arrangement === "centred" && coilDiameter == null) refuse("A part centred in the coil needs the coil's inside diameter: its radius is in the formula.");
+  if (arrangement === "centred" && coilDiameter == null)
+    refuse("A part centred in the coil needs the coil's inside diameter: its radius is in the formula.");
   if (coilDiameter != null && coilDiameter <= diameter) refuse("The coil's inside diameter must be larger than the part.");
 
   // A hollow part carries flux only in its wall: the effective diameter is that of a solid bar of
@@ -196,18 +229,30 @@ export function coilShotCurrent({
   // Fill factor from the coil bore and the part's outside diameter (the area it fills).
   const fillFactor = coilDiameter != null ? (coilDiameter / diameter) ** 2 : null;
   if (fillFactor !== null && fillFactor > 2 && fillFactor < 10) {
-    refuse(`The fill factor is ${formatAgainst(fillFactor, fillFactor < 6 ? 2 : 10, 3)}, between 2 and 10: neither the low nor the high fill-factor formula holds. Use the intermediate formula of your procedure, or a coil that suits the part.`);
+    refuse(
+      `The fill factor is ${formatAgainst(fillFactor, fillFactor < 6 ? 2 : 10, 3)}, between 2 and 10: neither the low nor the high fill-factor formula holds. Use the intermediate formula of your procedure, or a coil that suits the part.`,
+    );
   }
   if (fillFactor !== null && arrangement !== "high-fill" && fillFactor <= 2) {
-    refuse(`The fill factor is ${formatAgainst(fillFactor, 2, 3)}: 2 or less is a high fill factor. Choose "${coilArrangements["high-fill"]}".`);
+    refuse(
+      `The fill factor is ${formatAgainst(fillFactor, 2, 3)}: 2 or less is a high fill factor. Choose "${coilArrangements["high-fill"]}".`,
+    );
   }
   if (fillFactor !== null && arrangement === "high-fill" && fillFactor >= 10) {
-    refuse(`The fill factor is ${formatAgainst(fillFactor, 10, 3)}: 10 or more is a low fill factor. Choose whether the part lies against the coil wall or is centred.`);
+    refuse(
+      `The fill factor is ${formatAgainst(fillFactor, 10, 3)}: 10 or more is a low fill factor. Choose whether the part lies against the coil wall or is centred.`,
+    );
   }
   const ratioUsed = Math.min(ratio, coilRatioRange.cap);
   const notes: string[] = [];
-  if (ratio > coilRatioRange.cap) notes.push(`L/D is ${formatAgainst(ratio, coilRatioRange.cap, 4)}: the formula uses ${coilRatioRange.cap}, its cap (ASTM E1444, from memory). A long part may need more than one shot along its length.`);
-  if (insideDiameter > 0) notes.push(`Hollow part: effective diameter √(${formatNumber(diameter, 4)}² − ${formatNumber(insideDiameter, 4)}²) = ${formatNumber(effectiveDiameter, 4)} in.`);
+  if (ratio > coilRatioRange.cap)
+    notes.push(
+      `L/D is ${formatAgainst(ratio, coilRatioRange.cap, 4)}: the formula uses ${coilRatioRange.cap}, its cap (ASTM E1444, from memory). A long part may need more than one shot along its length.`,
+    );
+  if (insideDiameter > 0)
+    notes.push(
+      `Hollow part: effective diameter √(${formatNumber(diameter, 4)}² − ${formatNumber(insideDiameter, 4)}²) = ${formatNumber(effectiveDiameter, 4)} in.`,
+    );
 
   let ampereTurns: number;
   let formula: string;
@@ -223,6 +268,8 @@ export function coilShotCurrent({
     formula = "I = 35,000 ÷ ((L/D + 2) × N)";
   }
   const amperes = ampereTurns / turns;
-  notes.push("The current is a starting value, ±10 %: check the field on the part with a field indicator (a pie gauge or shim) before you trust the shot.");
+  notes.push(
+    "The current is a starting value, ±10 %: check the field on the part with a field indicator (a pie gauge or shim) before you trust the shot.",
+  );
   return { ratio, ratioUsed, effectiveDiameter, fillFactor, amperes, range: [amperes * 0.9, amperes * 1.1], formula, warnings: [], notes };
 }

@@ -46,7 +46,8 @@ export function chooseRivetDiameter(thickestSheet: number): DiameterChoice {
     if (d < thickestSheet - 1e-9) continue; // smaller than the sheet: never (NAVEDTRA 14018)
     if (d === suggested) options.push({ diameter: d, basis: "the next size at or above 3 t (AC 43.13-1B par. 4-58g)" });
     else if (d === alternative) options.push({ diameter: d, basis: "one size larger, also satisfactory (AC 43.13-1B par. 4-58g)" });
-    else if (d < target - 1e-9) options.push({ diameter: d, basis: "between t and 3 t (NAVEDTRA 14018 ch. 13), under the 3 t the AC aims at" });
+    else if (d < target - 1e-9)
+      options.push({ diameter: d, basis: "between t and 3 t (NAVEDTRA 14018 ch. 13), under the 3 t the AC aims at" });
   }
   const warnings: string[] = [];
   if (suggested === null) {
@@ -95,7 +96,15 @@ export interface Layout {
   warnings: string[];
 }
 
-export function rivetLayout({ diameter, countersunk = false, pitch }: { diameter: number; countersunk?: boolean; pitch?: number | null }): Layout {
+export function rivetLayout({
+  diameter,
+  countersunk = false,
+  pitch,
+}: {
+  diameter: number;
+  countersunk?: boolean;
+  pitch?: number | null;
+}): Layout {
   if (!(diameter > 0)) refuse("The diameter must be more than zero.");
   if (pitch != null && !(pitch > 0)) refuse("The pitch must be more than zero.");
   const minimumEdgeDistance = (countersunk ? 2.5 : 2) * diameter;
@@ -103,8 +112,10 @@ export function rivetLayout({ diameter, countersunk = false, pitch }: { diameter
   const usualPitch: [number, number] = [4 * diameter, 8 * diameter];
   const transverse = (p: number) => Math.max(0.75 * p, minimumRowSpacing);
   const warnings: string[] = [];
-  if (pitch != null && pitch < 3 * diameter - 1e-9) warnings.push("That pitch is under the 3 D minimum (NAVEDTRA 14018; TM 10-5410-229-13&P): space the rivets farther apart.");
-  else if (pitch != null && pitch > 8 * diameter + 1e-9) warnings.push("That pitch is over the 8 D the handbook says pitch seldom exceeds (NAVEDTRA 14018): check the repair drawing.");
+  if (pitch != null && pitch < 3 * diameter - 1e-9)
+    warnings.push("That pitch is under the 3 D minimum (NAVEDTRA 14018; TM 10-5410-229-13&P): space the rivets farther apart.");
+  else if (pitch != null && pitch > 8 * diameter + 1e-9)
+    warnings.push("That pitch is over the 8 D the handbook says pitch seldom exceeds (NAVEDTRA 14018): check the repair drawing.");
   return {
     minimumEdgeDistance,
     edgeDistance: [minimumEdgeDistance, 4 * diameter],
@@ -129,7 +140,17 @@ export interface SpliceCount {
  * Rivets for a splice: the table value per inch of width times the width, reduced by the factor
  * its notes give (0.75 for the single-lap sheet splice of par. 4-58g, 0.6 in the Fig. 4-20 example).
  */
-export function rivetsForSplice({ width, rivetsPerInch, factor = 1, rows = 1 }: { width: number; rivetsPerInch: number; factor?: number; rows?: number }): SpliceCount {
+export function rivetsForSplice({
+  width,
+  rivetsPerInch,
+  factor = 1,
+  rows = 1,
+}: {
+  width: number;
+  rivetsPerInch: number;
+  factor?: number;
+  rows?: number;
+}): SpliceCount {
   if (!(width > 0) || !(rivetsPerInch > 0)) refuse("Width and rivets per inch must be more than zero.");
   if (!(factor > 0 && factor <= 1)) refuse("The reduction factor is between 0 and 1.");
   if (!Number.isInteger(rows) || rows < 1) refuse("Use one or more rows.");
@@ -153,7 +174,17 @@ function trim(n: number): string {
 }
 
 /** Diameter in 32nds, length in 16ths (AC 43.13-1B par. 4-57a(4)): MS20470AD4-3.5. */
-export function rivetPartNumber({ head, material, diameter, lengthSixteenths }: { head: HeadStyle; material: RivetMaterial; diameter: number; lengthSixteenths: number }): string {
+export function rivetPartNumber({
+  head,
+  material,
+  diameter,
+  lengthSixteenths,
+}: {
+  head: HeadStyle;
+  material: RivetMaterial;
+  diameter: number;
+  lengthSixteenths: number;
+}): string {
   const d32 = diameter * 32;
   if (!(diameter > 0) || !(lengthSixteenths > 0)) refuse("A rivet's diameter and length are more than zero.");
   if (Math.abs(d32 - Math.round(d32)) > 1e-6) refuse("A rivet diameter is a whole number of 32nds of an inch.");
@@ -170,13 +201,25 @@ export function parseRivetPartNumber(code: string): { head: string; material: st
  * 2017 rivets of 3/16 in and under and 2024 rivets of 5/32 in and under may be replaced by 2117
  * rivets 1/32 in larger (AC 43.13-1B par. 4-57b).
  */
-export function substituteWith2117({ alloy, diameter }: { alloy: "2017" | "2024"; diameter: number }): { allowed: boolean; replacement: number | null; reason: string } {
+export function substituteWith2117({ alloy, diameter }: { alloy: "2017" | "2024"; diameter: number }): {
+  allowed: boolean;
+  replacement: number | null;
+  reason: string;
+} {
   if (!(diameter > 0)) refuse("The diameter must be more than zero.");
   const limit = alloy === "2017" ? 3 / 16 : 5 / 32;
   if (diameter <= limit + 1e-9) {
-    return { allowed: true, replacement: diameter + 1 / 32, reason: `${alloy} rivets up to ${alloy === "2017" ? "3/16" : "5/32"} in may be replaced by 2117 rivets 1/32 in larger.` };
+    return {
+      allowed: true,
+      replacement: diameter + 1 / 32,
+      reason: `${alloy} rivets up to ${alloy === "2017" ? "3/16" : "5/32"} in may be replaced by 2117 rivets 1/32 in larger.`,
+    };
   }
-  return { allowed: false, replacement: null, reason: `The handbook allows the swap only for ${alloy} rivets up to ${alloy === "2017" ? "3/16" : "5/32"} in.` };
+  return {
+    allowed: false,
+    replacement: null,
+    reason: `The handbook allows the swap only for ${alloy} rivets up to ${alloy === "2017" ? "3/16" : "5/32"} in.`,
+  };
 }
 
 /** 0.125 → "1/8", 0.15625 → "5/32": how the shop names a diameter. */

@@ -30,24 +30,54 @@ function positive(torque: number, what: string) {
 }
 
 /** TW = TA × L / (L + A); with an adapter pointing back toward the handle, L − A (TM 1-1500-204-23-9). */
-export function wrenchSetting({ desired, lever, adapter, direction = "lengthens" }: { desired: number; lever: number; adapter: number; direction?: AdapterDirection }): number {
+export function wrenchSetting({
+  desired,
+  lever,
+  adapter,
+  direction = "lengthens",
+}: {
+  desired: number;
+  lever: number;
+  adapter: number;
+  direction?: AdapterDirection;
+}): number {
   positive(desired, "torque the manual asks for");
   check(lever, adapter, direction);
   return (desired * lever) / (direction === "lengthens" ? lever + adapter : lever - adapter);
 }
 
 /** The torque the fastener gets for a given wrench setting (TM 9-254's reverse example). */
-export function appliedTorque({ setting, lever, adapter, direction = "lengthens" }: { setting: number; lever: number; adapter: number; direction?: AdapterDirection }): number {
+export function appliedTorque({
+  setting,
+  lever,
+  adapter,
+  direction = "lengthens",
+}: {
+  setting: number;
+  lever: number;
+  adapter: number;
+  direction?: AdapterDirection;
+}): number {
   positive(setting, "wrench setting");
   check(lever, adapter, direction);
   return (setting * (direction === "lengthens" ? lever + adapter : lever - adapter)) / lever;
 }
 
 /** What to say beside a setting whose geometry the formula accepts but a shop would question. */
-export function adapterWarnings({ lever, adapter, direction = "lengthens" }: { lever: number; adapter: number; direction?: AdapterDirection }): string[] {
+export function adapterWarnings({
+  lever,
+  adapter,
+  direction = "lengthens",
+}: {
+  lever: number;
+  adapter: number;
+  direction?: AdapterDirection;
+}): string[] {
   const warnings: string[] = [];
   if (direction === "lengthens" && adapter > lever) {
-    warnings.push("The adapter is longer than the wrench: the setting is under half the torque wanted, low in the wrench's range where it is least accurate. Use a larger wrench or a shorter adapter if you can (common practice).");
+    warnings.push(
+      "The adapter is longer than the wrench: the setting is under half the torque wanted, low in the wrench's range where it is least accurate. Use a larger wrench or a shorter adapter if you can (common practice).",
+    );
   }
   return warnings;
 }

@@ -11,7 +11,19 @@ export function refuse(message: string): never {
   throw new AppError("invalid", message);
 }
 
-export type Dimension = "length" | "torque" | "temperature" | "pressure" | "force" | "time" | "current" | "angle" | "intensity" | "illuminance" | "volume" | "speed";
+export type Dimension =
+  | "length"
+  | "torque"
+  | "temperature"
+  | "pressure"
+  | "force"
+  | "time"
+  | "current"
+  | "angle"
+  | "intensity"
+  | "illuminance"
+  | "volume"
+  | "speed";
 
 interface LinearUnit {
   dimension: Dimension;
@@ -30,9 +42,71 @@ const linear: Record<string, LinearUnit> = {
   cm: { dimension: "length", factor: 0.01, label: "cm", aliases: [] },
   ft: { dimension: "length", factor: 12 * inch, label: "ft", aliases: ["ft.", "feet", "foot", "'", "′"] },
   thou: { dimension: "length", factor: inch / 1000, label: "thou", aliases: ["mil", "mils", "thousandths"] },
-  "in-lb": { dimension: "torque", factor: lbf * inch, label: "in-lb", aliases: ["inlb", "in·lb", "in·lbf", "in-lbf", "in-lbs", "inlbs", "in.-lb", "in.-lbs", "in.lb", "in.lbs", "lb-in", "lbs-in", "lbin", "lbf·in", "lbf-in", "lbf.in", "lb·in", "lb.in", "inch-pounds", "inch-pound", "inch-lbs", "inch-lb", "pound-inches"] },
-  "ft-lb": { dimension: "torque", factor: lbf * 12 * inch, label: "ft-lb", aliases: ["ftlb", "ft·lb", "ft·lbf", "ft-lbf", "ft-lbs", "ftlbs", "ft.-lb", "ft.-lbs", "ft.lb", "ft.lbs", "lb-ft", "lbs-ft", "lbft", "lbf·ft", "lbf-ft", "lbf.ft", "lb·ft", "lb.ft", "foot-pounds", "foot-pound", "pound-feet", "pound-foot"] },
-  "N·m": { dimension: "torque", factor: 1, label: "N·m", aliases: ["nm", "n-m", "n.m", "n·m", "newton-metres", "newton-meters", "newton-metre", "newton-meter"] },
+  "in-lb": {
+    dimension: "torque",
+    factor: lbf * inch,
+    label: "in-lb",
+    aliases: [
+      "inlb",
+      "in·lb",
+      "in·lbf",
+      "in-lbf",
+      "in-lbs",
+      "inlbs",
+      "in.-lb",
+      "in.-lbs",
+      "in.lb",
+      "in.lbs",
+      "lb-in",
+      "lbs-in",
+      "lbin",
+      "lbf·in",
+      "lbf-in",
+      "lbf.in",
+      "lb·in",
+      "lb.in",
+      "inch-pounds",
+      "inch-pound",
+      "inch-lbs",
+      "inch-lb",
+      "pound-inches",
+    ],
+  },
+  "ft-lb": {
+    dimension: "torque",
+    factor: lbf * 12 * inch,
+    label: "ft-lb",
+    aliases: [
+      "ftlb",
+      "ft·lb",
+      "ft·lbf",
+      "ft-lbf",
+      "ft-lbs",
+      "ftlbs",
+      "ft.-lb",
+      "ft.-lbs",
+      "ft.lb",
+      "ft.lbs",
+      "lb-ft",
+      "lbs-ft",
+      "lbft",
+      "lbf·ft",
+      "lbf-ft",
+      "lbf.ft",
+      "lb·ft",
+      "lb.ft",
+      "foot-pounds",
+      "foot-pound",
+      "pound-feet",
+      "pound-foot",
+    ],
+  },
+  "N·m": {
+    dimension: "torque",
+    factor: 1,
+    label: "N·m",
+    aliases: ["nm", "n-m", "n.m", "n·m", "newton-metres", "newton-meters", "newton-metre", "newton-meter"],
+  },
   psi: { dimension: "pressure", factor: lbf / (inch * inch), label: "psi", aliases: ["lb/in2", "lb/in²"] },
   kPa: { dimension: "pressure", factor: 1000, label: "kPa", aliases: [] },
   bar: { dimension: "pressure", factor: 100_000, label: "bar", aliases: [] },
@@ -53,8 +127,16 @@ const linear: Record<string, LinearUnit> = {
 };
 
 /** Temperatures are not proportional: each has an offset. Base is kelvin. */
-const temperature: Record<string, { label: string; toKelvin: (v: number) => number; fromKelvin: (k: number) => number; aliases: string[] }> = {
-  "°F": { label: "°F", toKelvin: (f) => ((f - 32) * 5) / 9 + 273.15, fromKelvin: (k) => ((k - 273.15) * 9) / 5 + 32, aliases: ["f", "degf", "deg f", "fahrenheit"] },
+const temperature: Record<
+  string,
+  { label: string; toKelvin: (v: number) => number; fromKelvin: (k: number) => number; aliases: string[] }
+> = {
+  "°F": {
+    label: "°F",
+    toKelvin: (f) => ((f - 32) * 5) / 9 + 273.15,
+    fromKelvin: (k) => ((k - 273.15) * 9) / 5 + 32,
+    aliases: ["f", "degf", "deg f", "fahrenheit"],
+  },
   "°C": { label: "°C", toKelvin: (c) => c + 273.15, fromKelvin: (k) => k - 273.15, aliases: ["c", "degc", "deg c", "celsius"] },
   K: { label: "K", toKelvin: (k) => k, fromKelvin: (k) => k, aliases: ["kelvin"] },
 };

@@ -2,7 +2,6 @@
 import { escapeRegExp } from "@/lib/domain/escape";
 import { markEnd, markStart, parseQuery, snippetToHtml } from "@/search/query";
 
-
 /**
  * The beginnings of the words to mark for a query: each word, its expansions, and `also` (the
  * spellings a typo was corrected to). A word's first letters carry it through plurals and endings:

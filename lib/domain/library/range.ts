@@ -4,7 +4,6 @@ export interface ByteRange {
   end: number;
 }
 
-
 /**
  * One byte range from a Range header (RFC 9110, 14.2), or null for the whole file. Several ranges
  * are answered with the whole file, which the RFC allows; a range past the end is unsatisfiable.

@@ -34,9 +34,9 @@ export interface CompareOptions {
   window?: number;
 }
 
-const dateLike = /\b(\d{4}-\d{2}-\d{2}|\d{1,2}\/\d{1,2}\/\d{2,4}|\d{1,2} (jan|feb|mar|apr|may|jun|jul|aug|sep|oct|nov|dec)[a-z]* \d{4}|(jan|feb|mar|apr|may|jun|jul|aug|sep|oct|nov|dec)[a-z]* \d{1,2},? \d{4})\b/g;
+const dateLike =
+  /\b(\d{4}-\d{2}-\d{2}|\d{1,2}\/\d{1,2}\/\d{2,4}|\d{1,2} (jan|feb|mar|apr|may|jun|jul|aug|sep|oct|nov|dec)[a-z]* \d{4}|(jan|feb|mar|apr|may|jun|jul|aug|sep|oct|nov|dec)[a-z]* \d{1,2},? \d{4})\b/g;
 const pageWord = /\b(page|pg\.?|p\.)\s*\d+(\s*(of|\/)\s*\d+)?\b/g;
-
 
 /** The lines of a page with digits masked: the shape a running header keeps from page to page. */
 function lineShape(line: string) {
@@ -49,18 +49,29 @@ function lineShape(line: string) {
  */
 export function normalisePages(texts: string[], labels: string[] = []): string[] {
   const counts = new Map<string, number>();
-  const pageLines = texts.map((t) => t.split(/\r?\n/).map((l) => l.trim()).filter(Boolean));
+  const pageLines = texts.map((t) =>
+    t
+      .split(/\r?\n/)
+      .map((l) => l.trim())
+      .filter(Boolean),
+  );
   for (const lines of pageLines) {
     for (const shape of new Set(lines.map(lineShape))) counts.set(shape, (counts.get(shape) ?? 0) + 1);
   }
   const running = (shape: string) => texts.length >= 4 && (counts.get(shape) ?? 0) >= Math.max(3, texts.length * 0.6);
-  const labelPattern = labels.length
-    ? new RegExp(`\\b(${labels.map((l) => escapeRegExp(l.toLowerCase())).join("|")})\\b`, "g")
-    : null;
+  const labelPattern = labels.length ? new RegExp(`\\b(${labels.map((l) => escapeRegExp(l.toLowerCase())).join("|")})\\b`, "g") : null;
   return pageLines.map((lines) => {
-    let text = lines.filter((l) => !running(lineShape(l))).join(" ").toLowerCase();
+    let text = lines
+      .filter((l) => !running(lineShape(l)))
+      .join(" ")
+      .toLowerCase();
     if (labelPattern) text = text.replace(labelPattern, " ");
-    return text.replace(pageWord, " ").replace(dateLike, " ").replace(/[^\p{L}\p{N}.,;:%±°/-]+/gu, " ").replace(/\s+/g, " ").trim();
+    return text
+      .replace(pageWord, " ")
+      .replace(dateLike, " ")
+      .replace(/[^\p{L}\p{N}.,;:%±°/-]+/gu, " ")
+      .replace(/\s+/g, " ")
+      .trim();
   });
 }
 
@@ -335,5 +346,7 @@ export function suggestPage(
     if (s > best.similarity) best = { page: j + 1, similarity: round(s) };
   });
   // A weak match would send a student to the wrong procedure: no suggestion is the honest answer.
-  return best.similarity >= minimumSuggestion ? { ...best, status: "removed" } : { page: null, similarity: best.similarity, status: "removed" };
+  return best.similarity >= minimumSuggestion
+    ? { ...best, status: "removed" }
+    : { page: null, similarity: best.similarity, status: "removed" };
 }

@@ -109,7 +109,9 @@ const laterOf = (a: string, b: string) => (a < b ? b : a);
 export function orderEvents<E extends RunEvent>(events: readonly E[]): OrderedEvent<E>[] {
   const unique = new Map<string, E>();
   for (const e of events) if (!unique.has(e.id)) unique.set(e.id, e);
-  const byReceipt = [...unique.values()].sort((a, b) => compare(receipt(a), receipt(b)) || compare(a.clientTime, b.clientTime) || compare(a.id, b.id));
+  const byReceipt = [...unique.values()].sort(
+    (a, b) => compare(receipt(a), receipt(b)) || compare(a.clientTime, b.clientTime) || compare(a.id, b.id),
+  );
   const placed: (OrderedEvent<E> & { batch: number })[] = [];
   type Wall = { moment: ReviewMoment; at: string; receivedAt: string };
   let wall: Wall | null = null; // the latest review moment of earlier batches
@@ -124,7 +126,8 @@ export function orderEvents<E extends RunEvent>(events: readonly E[]): OrderedEv
       const at = laterOf(event.clientTime, moment ? latest : (wall?.at ?? ""));
       // Late means stamped before the wall was received: a wall placed far ahead by one fast cart
       // stamp does not make honest work after it look back-dated (it is still placed after it).
-      const lateAfter = wall && at !== event.clientTime && event.clientTime < wall.receivedAt ? { moment: wall.moment, receivedAt: wall.receivedAt } : null;
+      const lateAfter =
+        wall && at !== event.clientTime && event.clientTime < wall.receivedAt ? { moment: wall.moment, receivedAt: wall.receivedAt } : null;
       placed.push({ event, at, lateAfter, batch });
       nextLatest = laterOf(nextLatest, at);
       if (moment && (!nextWall || at >= nextWall.at)) nextWall = { moment, at, receivedAt: event.serverTime ?? at };
@@ -133,11 +136,15 @@ export function orderEvents<E extends RunEvent>(events: readonly E[]): OrderedEv
     latest = nextLatest;
   }
   return placed
-    .sort((a, b) => compare(a.at, b.at) || a.batch - b.batch || compare(a.event.clientTime, b.event.clientTime) || compare(a.event.id, b.event.id))
+    .sort(
+      (a, b) =>
+        compare(a.at, b.at) || a.batch - b.batch || compare(a.event.clientTime, b.event.clientTime) || compare(a.event.id, b.event.id),
+    )
     .map(({ batch: _batch, ...rest }) => rest);
 }
 
-const text = (payload: Record<string, unknown> | undefined, key: string) => (typeof payload?.[key] === "string" ? (payload[key] as string) : "");
+const text = (payload: Record<string, unknown> | undefined, key: string) =>
+  typeof payload?.[key] === "string" ? (payload[key] as string) : "";
 
 /**
  * Folds a run's events over its card version's steps. `instructors` are the user ids allowed to buy
@@ -159,7 +166,8 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
     state.eventCount++;
     if (lateAfter) state.late.push({ id: e.id, after: lateAfter.moment, at: lateAfter.receivedAt });
     // A late event that is set aside says so: it was stamped before the review moment it arrived after.
-    const setAside = (reason: string) => state.ignored.push({ id: e.id, reason: lateAfter ? `arrived after the ${lateAfter.moment}: ${reason}` : reason });
+    const setAside = (reason: string) =>
+      state.ignored.push({ id: e.id, reason: lateAfter ? `arrived after the ${lateAfter.moment}: ${reason}` : reason });
     if (state.signedOff) {
       setAside("after sign-off");
       continue;

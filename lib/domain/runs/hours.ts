@@ -10,7 +10,10 @@ export const idleMinutes = 20;
 export const offlineHours = 8;
 
 export function activeMinutes(clientTimes: readonly string[], idle = idleMinutes): number {
-  const times = clientTimes.map((t) => Date.parse(t)).filter(Number.isFinite).sort((a, b) => a - b);
+  const times = clientTimes
+    .map((t) => Date.parse(t))
+    .filter(Number.isFinite)
+    .sort((a, b) => a - b);
   let ms = 0;
   for (let i = 1; i < times.length; i++) ms += Math.min(times[i]! - times[i - 1]!, idle * 60_000);
   return Math.round(ms / 60_000);
@@ -23,7 +26,10 @@ export function activeMinutes(clientTimes: readonly string[], idle = idleMinutes
  * from the first receipt to the last plus one offline session, however the cart's clock was set;
  * an event not yet received counts at its stamp (the cart's own view).
  */
-export function workingMinutes(events: readonly { clientTime: string; serverTime?: string | null }[], { assignedAt }: { assignedAt: string }): number {
+export function workingMinutes(
+  events: readonly { clientTime: string; serverTime?: string | null }[],
+  { assignedAt }: { assignedAt: string },
+): number {
   const assigned = Date.parse(assignedAt);
   const times = events.map((e) => {
     const stamp = Date.parse(e.clientTime);

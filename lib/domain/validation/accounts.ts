@@ -3,10 +3,7 @@ import { z } from "zod";
 import { roles } from "@/lib/domain/access/permissions";
 
 /** Password rules shared by every form and handler that sets one. */
-export const newPasswordSchema = z
-  .string()
-  .min(10, "Use at least 10 characters.")
-  .max(200, "Use at most 200 characters.");
+export const newPasswordSchema = z.string().min(10, "Use at least 10 characters.").max(200, "Use at most 200 characters.");
 
 export const emailSchema = z
   .string({ error: "Enter an e-mail address." })
@@ -21,11 +18,7 @@ export const signInSchema = z.object({
 });
 export type SignInInput = z.input<typeof signInSchema>;
 
-const nameSchema = z
-  .string({ error: "Enter a name." })
-  .trim()
-  .min(1, "Enter a name.")
-  .max(120, "Use at most 120 characters.");
+const nameSchema = z.string({ error: "Enter a name." }).trim().min(1, "Enter a name.").max(120, "Use at most 120 characters.");
 
 export const roleSchema = z.enum(roles, { error: "Choose a role: student, instructor, librarian or admin." });
 

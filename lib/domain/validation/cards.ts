@@ -9,7 +9,10 @@ export type NoticeKind = (typeof noticeKinds)[number];
 export const noticeLabels: Record<NoticeKind, string> = { warning: "WARNING", caution: "CAUTION", note: "NOTE" };
 
 const shortText = (what: string, max: number) =>
-  z.string({ error: `Give ${what}.` }).trim().max(max, `Use at most ${max} characters for ${what}.`);
+  z
+    .string({ error: `Give ${what}.` })
+    .trim()
+    .max(max, `Use at most ${max} characters for ${what}.`);
 
 const textList = (what: string, maxItems: number) =>
   z
@@ -34,7 +37,10 @@ const finite = z.number().finite().nullable().optional();
 export const measurementSchema = z
   .object({
     label: shortText("what is measured", 120).min(1, "Say what is measured."),
-    unit: z.string().trim().refine((u) => resolveUnit(u) !== null, "That unit is not known (try in, mm, in-lb, N·m, °F, psi, lb)."),
+    unit: z
+      .string()
+      .trim()
+      .refine((u) => resolveUnit(u) !== null, "That unit is not known (try in, mm, in-lb, N·m, °F, psi, lb)."),
     min: finite,
     max: finite,
     nominal: finite,
@@ -54,7 +60,13 @@ export const stepSchema = z.object({
   measurement: measurementSchema.nullable().optional().default(null),
   calculator: z.enum(calculatorSlugs).nullable().optional().default(null),
   inspectionPoint: z.boolean().default(false),
-  timerMinutes: z.number().min(0.5, "A timer runs at least half a minute.").max(600, "A timer runs at most 600 minutes.").nullable().optional().default(null),
+  timerMinutes: z
+    .number()
+    .min(0.5, "A timer runs at least half a minute.")
+    .max(600, "A timer runs at most 600 minutes.")
+    .nullable()
+    .optional()
+    .default(null),
 });
 
 export const cardContentSchema = z.object({
@@ -62,7 +74,13 @@ export const cardContentSchema = z.object({
   applicability: textList("models", 20),
   ataChapter: z.union([z.literal(""), z.string().regex(/^\d{2}$/, "An ATA chapter is two digits, such as 27.")]).default(""),
   subjectId: z.uuid("Choose a curriculum subject.").nullable().default(null),
-  estimatedMinutes: z.number().int("Whole minutes.").min(1, "At least one minute.").max(6000, "At most 6000 minutes.").nullable().default(null),
+  estimatedMinutes: z
+    .number()
+    .int("Whole minutes.")
+    .min(1, "At least one minute.")
+    .max(6000, "At most 6000 minutes.")
+    .nullable()
+    .default(null),
   tools: textList("tools", 40),
   consumables: textList("consumables", 40),
   protectiveEquipment: textList("items of protective equipment", 20),
@@ -109,7 +127,11 @@ export const cardStatuses = ["draft", "published", "archived"] as const;
 export const cardListQuerySchema = z.object({
   status: z.enum(cardStatuses).optional().catch(undefined),
   subject: z.uuid().optional().catch(undefined),
-  ata: z.string().regex(/^\d{2}$/).optional().catch(undefined),
+  ata: z
+    .string()
+    .regex(/^\d{2}$/)
+    .optional()
+    .catch(undefined),
   model: z.string().trim().max(60).optional().catch(undefined),
   q: z.string().trim().max(200).optional().catch(undefined),
 });
@@ -139,5 +161,7 @@ export const recheckDecisionsSchema = z.object({
 });
 
 export const coauthorsSchema = z.object({
-  userIds: z.array(z.uuid("Each co-author is named by their account id."), { error: "Send { userIds: [...] }." }).max(20, "At most 20 co-authors."),
+  userIds: z
+    .array(z.uuid("Each co-author is named by their account id."), { error: "Send { userIds: [...] }." })
+    .max(20, "At most 20 co-authors."),
 });

@@ -17,7 +17,14 @@ const list = (what: string, item: z.ZodString, max: number) =>
     .string()
     .max(2000, `Use at most 2000 characters for ${what}.`)
     .optional()
-    .transform((v) => [...new Set((v ?? "").split(",").map((s) => s.trim()).filter(Boolean))])
+    .transform((v) => [
+      ...new Set(
+        (v ?? "")
+          .split(",")
+          .map((s) => s.trim())
+          .filter(Boolean),
+      ),
+    ])
     .pipe(z.array(item).max(max, `Give at most ${max} ${what}.`));
 
 export const revisionFieldsSchema = z.object({

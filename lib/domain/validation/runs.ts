@@ -24,7 +24,9 @@ const plausibleTime = (iso: string) => {
 
 export const runEventInputSchema = z.object({
   id: z.uuid("Each event has an id made on the cart (a UUID)."),
-  type: z.enum(cartEventTypes as [string, ...string[]], { error: "That kind of event is not known here. Return and sign-off go through the review screen." }),
+  type: z.enum(cartEventTypes as [string, ...string[]], {
+    error: "That kind of event is not known here. Return and sign-off go through the review screen.",
+  }),
   stepId: z.uuid("A step id is a UUID.").nullable().optional().default(null),
   payload: z
     .record(z.string(), z.unknown())
@@ -60,15 +62,32 @@ export const createAssignmentSchema = z
     classId: z.uuid("Choose a class.").nullable().optional().default(null),
     studentIds: z.array(z.uuid()).max(500, "At most 500 students at a time.").optional().default([]),
     dueOn: optionalDate,
-    note: z.string().trim().max(300, "Keep the note to 300 characters (an aircraft or a station).").refine(noNul, "A NUL character cannot be stored.").optional().default(""),
+    note: z
+      .string()
+      .trim()
+      .max(300, "Keep the note to 300 characters (an aircraft or a station).")
+      .refine(noNul, "A NUL character cannot be stored.")
+      .optional()
+      .default(""),
   })
   .refine((a) => a.classId || a.studentIds.length, { message: "Choose a class or at least one student.", path: ["classId"] });
 
 export const reviewCommentSchema = z.object({
-  comment: z.string().trim().max(2000, "Keep the comment to 2000 characters.").refine(noNul, "A NUL character cannot be stored.").optional().default(""),
+  comment: z
+    .string()
+    .trim()
+    .max(2000, "Keep the comment to 2000 characters.")
+    .refine(noNul, "A NUL character cannot be stored.")
+    .optional()
+    .default(""),
 });
 export const returnRunSchema = z.object({
-  comment: z.string({ error: "Say what the student should fix." }).trim().min(1, "Say what the student should fix.").max(2000, "Keep the comment to 2000 characters.").refine(noNul, "A NUL character cannot be stored."),
+  comment: z
+    .string({ error: "Say what the student should fix." })
+    .trim()
+    .min(1, "Say what the student should fix.")
+    .max(2000, "Keep the comment to 2000 characters.")
+    .refine(noNul, "A NUL character cannot be stored."),
 });
 export const buyOffSchema = z.object({ stepId: z.uuid("Name the inspection point's step.") });
 

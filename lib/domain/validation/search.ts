@@ -12,9 +12,22 @@ export const searchParamsSchema = z.object({
   revision: z.uuid("revision is a revision id.").optional(),
   type: z.enum(documentTypes, { error: "That is not a document type." }).optional(),
   model: z.string().trim().min(1).max(60).optional(),
-  ata: z.string().regex(/^\d{2}$/, "An ATA chapter is two digits.").optional(),
+  ata: z
+    .string()
+    .regex(/^\d{2}$/, "An ATA chapter is two digits.")
+    .optional(),
   includeSuperseded: flag,
-  limit: z.coerce.number({ error: "limit is a number." }).int("limit is a whole number.").min(1, "limit is 1 to 50.").max(50, "limit is 1 to 50.").default(10),
-  offset: z.coerce.number({ error: "offset is a number." }).int().min(0, "offset is 0 or more.").max(1000, "offset is at most 1000.").default(0),
+  limit: z.coerce
+    .number({ error: "limit is a number." })
+    .int("limit is a whole number.")
+    .min(1, "limit is 1 to 50.")
+    .max(50, "limit is 1 to 50.")
+    .default(10),
+  offset: z.coerce
+    .number({ error: "offset is a number." })
+    .int()
+    .min(0, "offset is 0 or more.")
+    .max(1000, "offset is at most 1000.")
+    .default(0),
 });
 export type SearchParams = z.infer<typeof searchParamsSchema>;

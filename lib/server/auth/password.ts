@@ -13,7 +13,6 @@ function scrypt(password: string, salt: Buffer, options: ScryptOptions): Promise
   );
 }
 
-
 export async function hashPassword(password: string): Promise<string> {
   const salt = randomBytes(16);
   const key = await scrypt(password, salt, params);

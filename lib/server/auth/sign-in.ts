@@ -4,7 +4,14 @@ import { getDb } from "@/db";
 import { signInThrottles, users } from "@/db/schema";
 import { AppError } from "@/lib/domain/errors";
 import { getDummyHash, verifyPassword } from "@/lib/server/auth/password";
-import { delayAfterFailures, failuresAfter, resetThrottleKeys, throttleKeys, throttlePolicy, type ThrottleRule } from "@/lib/domain/access/throttle";
+import {
+  delayAfterFailures,
+  failuresAfter,
+  resetThrottleKeys,
+  throttleKeys,
+  throttlePolicy,
+  type ThrottleRule,
+} from "@/lib/domain/access/throttle";
 
 const wrongCredentials = "That e-mail and password do not match an active account.";
 
@@ -36,7 +43,8 @@ async function reserveAttempt(key: string, rule: ThrottleRule, now: Date): Promi
 async function reserveAll(keys: [string, ThrottleRule][], now: Date, what: string): Promise<void> {
   for (const [key, rule] of keys) {
     const wait = await reserveAttempt(key, rule, now);
-    if (wait > 0) throw new AppError("rate_limited", `Too many ${what}. Wait ${wait} seconds, then try again.`, { retryAfterSeconds: wait });
+    if (wait > 0)
+      throw new AppError("rate_limited", `Too many ${what}. Wait ${wait} seconds, then try again.`, { retryAfterSeconds: wait });
   }
 }
 
@@ -49,7 +57,15 @@ export async function verifySignIn({ email, password, address }: { email: string
   const keys = throttleKeys(email, address);
   // Counted as a failure before the check, so attempts sent all at once cannot slip past a block;
   // a right password takes its count back below.
-  await reserveAll([[keys.pair, throttlePolicy.pair], [keys.account, throttlePolicy.account], [keys.address, throttlePolicy.address]], now, "failed sign-ins");
+  await reserveAll(
+    [
+      [keys.pair, throttlePolicy.pair],
+      [keys.account, throttlePolicy.account],
+      [keys.address, throttlePolicy.address],
+    ],
+    now,
+    "failed sign-ins",
+  );
 
   const [user] = await getDb()
     .select({
@@ -72,12 +88,17 @@ export async function verifySignIn({ email, password, address }: { email: string
 
   // The right password: this person's counts start again, and the address gets its attempt back
   // (a classroom behind one address signs in many times).
-  await getDb().delete(signInThrottles).where(inArray(signInThrottles.key, [keys.pair, keys.account]));
+  await getDb()
+    .delete(signInThrottles)
+    .where(inArray(signInThrottles.key, [keys.pair, keys.account]));
   await getDb()
     .update(signInThrottles)
     .set({ failures: sql`greatest(${signInThrottles.failures} - 1, 0)`, blockedUntil: null })
     .where(and(eq(signInThrottles.key, keys.address), sql`${signInThrottles.failures} < ${throttlePolicy.address.free}`));
-  await getDb().update(users).set({ lastSignInAt: sql`now()` }).where(eq(users.id, user.id));
+  await getDb()
+    .update(users)
+    .set({ lastSignInAt: sql`now()` })
+    .where(eq(users.id, user.id));
   return { id: user.id, email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion };
 }
 
@@ -87,5 +108,12 @@ export async function verifySignIn({ email, password, address }: { email: string
  */
 export async function throttleResetRequest({ email, address }: { email: string; address: string }): Promise<void> {
   const keys = resetThrottleKeys(email, address);
-  await reserveAll([[keys.address, throttlePolicy.resetAddress], [keys.account, throttlePolicy.resetAccount]], new Date(), "password-reset requests");
+  await reserveAll(
+    [
+      [keys.address, throttlePolicy.resetAddress],
+      [keys.account, throttlePolicy.resetAccount],
+    ],
+    new Date(),
+    "password-reset requests",
+  );
 }

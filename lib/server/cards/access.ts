@@ -29,10 +29,17 @@ export const isAuthor = (actor: Actor) => can(actor, "cards:author");
  * Other authors may read and duplicate it (403 here, since they can see the card).
  */
 export async function lockCard(tx: Tx, cardId: string, actor: Actor) {
-  const [card] = await tx.select({ id: taskCards.id, ownerId: taskCards.ownerId, archivedAt: taskCards.archivedAt }).from(taskCards).where(eq(taskCards.id, cardId)).for("update");
+  const [card] = await tx
+    .select({ id: taskCards.id, ownerId: taskCards.ownerId, archivedAt: taskCards.archivedAt })
+    .from(taskCards)
+    .where(eq(taskCards.id, cardId))
+    .for("update");
   if (!card) throw notFound();
   if (!(await editsCard(tx, actor, card))) {
-    throw new AppError("forbidden", "Only the card's owner, its co-authors or an admin can change this card. Duplicate it to make your own.");
+    throw new AppError(
+      "forbidden",
+      "Only the card's owner, its co-authors or an admin can change this card. Duplicate it to make your own.",
+    );
   }
   return card;
 }
@@ -60,9 +67,14 @@ export async function coauthorsOf(db: Db | Tx, cardId: string): Promise<{ id: st
 export async function setCoauthors({ actor, cardId, userIds }: { actor: Actor; cardId: string; userIds: string[] }) {
   const wanted = [...new Set(userIds)];
   await getDb().transaction(async (tx) => {
-    const [card] = await tx.select({ id: taskCards.id, ownerId: taskCards.ownerId }).from(taskCards).where(eq(taskCards.id, cardId)).for("update");
+    const [card] = await tx
+      .select({ id: taskCards.id, ownerId: taskCards.ownerId })
+      .from(taskCards)
+      .where(eq(taskCards.id, cardId))
+      .for("update");
     if (!card) throw notFound();
-    if (card.ownerId !== actor.id && !can(actor, "cards:edit-any")) throw new AppError("forbidden", "Only the card's owner or an admin names its co-authors.");
+    if (card.ownerId !== actor.id && !can(actor, "cards:edit-any"))
+      throw new AppError("forbidden", "Only the card's owner or an admin names its co-authors.");
     const people = wanted.length
       ? await tx.select({ id: users.id, role: users.role, status: users.status }).from(users).where(inArray(users.id, wanted))
       : [];
@@ -72,7 +84,13 @@ export async function setCoauthors({ actor, cardId, userIds }: { actor: Actor; c
     }
     await tx.delete(cardCoauthors).where(eq(cardCoauthors.cardId, cardId));
     if (fit.length) await tx.insert(cardCoauthors).values(fit.map((p) => ({ cardId, userId: p.id })));
-    await recordAudit(tx, { actorId: actor.id, action: "card.coauthors_set", subjectType: "task_card", subjectId: cardId, details: { coauthors: fit.map((p) => p.id) } });
+    await recordAudit(tx, {
+      actorId: actor.id,
+      action: "card.coauthors_set",
+      subjectType: "task_card",
+      subjectId: cardId,
+      details: { coauthors: fit.map((p) => p.id) },
+    });
   });
   return coauthorsOf(getDb(), cardId);
 }

@@ -18,19 +18,39 @@ import { type VersionRow, loadVersions, describeRevisions, toVersionDto, getCard
  * a ready revision and a page it has: a card never points students at a page that does not exist.
  */
 export async function citationsFor(tx: Tx, versionId: string, steps: Step[]) {
-  const described = await describeRevisions(tx, steps.flatMap((s) => s.references.map((r) => r.revisionId)));
+  const described = await describeRevisions(
+    tx,
+    steps.flatMap((s) => s.references.map((r) => r.revisionId)),
+  );
   const rows: (typeof cardCitations.$inferInsert)[] = [];
   steps.forEach((step, i) => {
     for (const ref of step.references) {
       const d = described.get(ref.revisionId);
-      if (!d) throw new AppError("invalid", `Step ${i + 1} cites a revision that is not in the library.`, { fields: { steps: "Unknown revision." } });
+      if (!d)
+        throw new AppError("invalid", `Step ${i + 1} cites a revision that is not in the library.`, {
+          fields: { steps: "Unknown revision." },
+        });
       if (d.status !== "ready") {
-        throw new AppError("invalid", `Step ${i + 1} cites ${d.manualTitle} ${d.label}, which is not ready to read yet.`, { fields: { steps: "Revision not ready." } });
+        throw new AppError("invalid", `Step ${i + 1} cites ${d.manualTitle} ${d.label}, which is not ready to read yet.`, {
+          fields: { steps: "Revision not ready." },
+        });
       }
       if (d.pageCount != null && ref.page > d.pageCount) {
-        throw new AppError("invalid", `Step ${i + 1} cites page ${ref.page} of ${d.manualTitle} ${d.label}, which has ${d.pageCount} pages.`, { fields: { steps: "No such page." } });
+        throw new AppError(
+          "invalid",
+          `Step ${i + 1} cites page ${ref.page} of ${d.manualTitle} ${d.label}, which has ${d.pageCount} pages.`,
+          { fields: { steps: "No such page." } },
+        );
       }
-      rows.push({ versionId, stepId: step.id, stepNumber: i + 1, manualId: d.manualId, revisionId: ref.revisionId, pageNumber: ref.page, quote: ref.quote });
+      rows.push({
+        versionId,
+        stepId: step.id,
+        stepNumber: i + 1,
+        manualId: d.manualId,
+        revisionId: ref.revisionId,
+        pageNumber: ref.page,
+        quote: ref.quote,
+      });
     }
   });
   return rows;
@@ -59,12 +79,20 @@ function contentColumns(content: CardContent) {
 async function writeContent(tx: Tx, versionId: string, content: CardContent, editCount: number) {
   await assertSubjectExists(tx, content.subjectId);
   const rows = await citationsFor(tx, versionId, content.steps);
-  await tx.update(taskCardVersions).set({ ...contentColumns(content), editCount: editCount + 1 }).where(eq(taskCardVersions.id, versionId));
+  await tx
+    .update(taskCardVersions)
+    .set({ ...contentColumns(content), editCount: editCount + 1 })
+    .where(eq(taskCardVersions.id, versionId));
   await tx.delete(cardCitations).where(eq(cardCitations.versionId, versionId));
   if (rows.length) await tx.insert(cardCitations).values(rows);
 }
 
-export function versionToContent(v: Pick<VersionRow, "title" | "applicability" | "ataChapter" | "subjectId" | "estimatedMinutes" | "tools" | "consumables" | "protectiveEquipment" | "steps">): CardContent {
+export function versionToContent(
+  v: Pick<
+    VersionRow,
+    "title" | "applicability" | "ataChapter" | "subjectId" | "estimatedMinutes" | "tools" | "consumables" | "protectiveEquipment" | "steps"
+  >,
+): CardContent {
   return parseWith(cardContentSchema, {
     title: v.title,
     applicability: v.applicability,
@@ -80,10 +108,22 @@ export function versionToContent(v: Pick<VersionRow, "title" | "applicability" |
 
 export async function createCard({ actor, content, ownerId }: { actor: Actor; content: CardContent; ownerId?: string }): Promise<CardDto> {
   const id = await getDb().transaction(async (tx) => {
-    const [card] = await tx.insert(taskCards).values({ ownerId: ownerId ?? actor.id }).returning({ id: taskCards.id });
-    const [version] = await tx.insert(taskCardVersions).values({ cardId: card!.id, number: 1, title: content.title, createdBy: actor.id }).returning({ id: taskCardVersions.id });
+    const [card] = await tx
+      .insert(taskCards)
+      .values({ ownerId: ownerId ?? actor.id })
+      .returning({ id: taskCards.id });
+    const [version] = await tx
+      .insert(taskCardVersions)
+      .values({ cardId: card!.id, number: 1, title: content.title, createdBy: actor.id })
+      .returning({ id: taskCardVersions.id });
     await writeContent(tx, version!.id, content, -1);
-    await recordAudit(tx, { actorId: actor.id, action: "card.created", subjectType: "task_card", subjectId: card!.id, details: { title: content.title } });
+    await recordAudit(tx, {
+      actorId: actor.id,
+      action: "card.created",
+      subjectType: "task_card",
+      subjectId: card!.id,
+      details: { title: content.title },
+    });
     return card!.id;
   });
   return getCard({ actor, id });
@@ -91,7 +131,11 @@ export async function createCard({ actor, content, ownerId }: { actor: Actor; co
 
 /** The card's open draft, made from its newest version when there is none. */
 async function openDraft(tx: Tx, actor: Actor, cardId: string) {
-  const versions = await tx.select().from(taskCardVersions).where(eq(taskCardVersions.cardId, cardId)).orderBy(desc(taskCardVersions.number));
+  const versions = await tx
+    .select()
+    .from(taskCardVersions)
+    .where(eq(taskCardVersions.cardId, cardId))
+    .orderBy(desc(taskCardVersions.number));
   const draft = versions.find((v) => v.status === "draft");
   if (draft) return { draft, opened: false };
   const latest = versions[0];
@@ -102,7 +146,9 @@ async function openDraft(tx: Tx, actor: Actor, cardId: string) {
     .returning();
   const cited = await tx.select().from(cardCitations).where(eq(cardCitations.versionId, latest.id));
   if (cited.length) {
-    await tx.insert(cardCitations).values(cited.map(({ id: _id, createdAt: _c, updatedAt: _u, ...c }) => ({ ...c, versionId: created!.id })));
+    await tx
+      .insert(cardCitations)
+      .values(cited.map(({ id: _id, createdAt: _c, updatedAt: _u, ...c }) => ({ ...c, versionId: created!.id })));
   }
   return { draft: created!, opened: true };
 }
@@ -111,7 +157,17 @@ async function openDraft(tx: Tx, actor: Actor, cardId: string) {
  * Saves the card's draft. Editing a published card opens a new draft version from it; the
  * published version itself never changes. `editCount` guards against overwriting a newer save.
  */
-export async function saveDraft({ actor, cardId, content, editCount }: { actor: Actor; cardId: string; content: CardContent; editCount?: number }): Promise<CardVersionDto> {
+export async function saveDraft({
+  actor,
+  cardId,
+  content,
+  editCount,
+}: {
+  actor: Actor;
+  cardId: string;
+  content: CardContent;
+  editCount?: number;
+}): Promise<CardVersionDto> {
   try {
     const versionId = await getDb().transaction(async (tx) => {
       const card = await lockCard(tx, cardId, actor);
@@ -134,7 +190,19 @@ export async function saveDraft({ actor, cardId, content, editCount }: { actor: 
 }
 
 /** Changes one version by number: allowed for a draft, 409 for a published version. */
-export async function updateVersion({ actor, cardId, number, content, editCount }: { actor: Actor; cardId: string; number: number; content: CardContent; editCount?: number }) {
+export async function updateVersion({
+  actor,
+  cardId,
+  number,
+  content,
+  editCount,
+}: {
+  actor: Actor;
+  cardId: string;
+  number: number;
+  content: CardContent;
+  editCount?: number;
+}) {
   const [row] = await getDb()
     .select({ status: taskCardVersions.status })
     .from(taskCardVersions)
@@ -177,7 +245,21 @@ export async function applyToDraft({
 }
 
 /** "Cite while reading": adds one page to a step of the card's draft. */
-export async function citePage({ actor, cardId, stepId, revisionId, page, quote }: { actor: Actor; cardId: string; stepId: string; revisionId: string; page: number; quote: string }) {
+export async function citePage({
+  actor,
+  cardId,
+  stepId,
+  revisionId,
+  page,
+  quote,
+}: {
+  actor: Actor;
+  cardId: string;
+  stepId: string;
+  revisionId: string;
+  page: number;
+  quote: string;
+}) {
   try {
     return await getDb().transaction(async (tx) => {
       const card = await lockCard(tx, cardId, actor);
@@ -188,7 +270,8 @@ export async function citePage({ actor, cardId, stepId, revisionId, page, quote 
       if (!step) throw new AppError("invalid", "That step is not on the card's draft any more.", { fields: { stepId: "Unknown step." } });
       const already = step.references.some((r) => r.revisionId === revisionId && r.page === page);
       if (!already) {
-        if (step.references.length >= 20) throw new AppError("invalid", "A step cites at most 20 pages.", { fields: { stepId: "Too many references." } });
+        if (step.references.length >= 20)
+          throw new AppError("invalid", "A step cites at most 20 pages.", { fields: { stepId: "Too many references." } });
         step.references.push({ revisionId, page, quote });
         await writeContent(tx, draft.id, content, draft.editCount);
       }
@@ -203,10 +286,14 @@ export async function citePage({ actor, cardId, stepId, revisionId, page, quote 
 export async function discardDraft({ actor, cardId }: { actor: Actor; cardId: string }) {
   await getDb().transaction(async (tx) => {
     await lockCard(tx, cardId, actor);
-    const versions = await tx.select({ id: taskCardVersions.id, status: taskCardVersions.status }).from(taskCardVersions).where(eq(taskCardVersions.cardId, cardId));
+    const versions = await tx
+      .select({ id: taskCardVersions.id, status: taskCardVersions.status })
+      .from(taskCardVersions)
+      .where(eq(taskCardVersions.cardId, cardId));
     const draft = versions.find((v) => v.status === "draft");
     if (!draft) throw new AppError("conflict", "There is no draft to discard.");
-    if (!versions.some((v) => v.status === "published")) throw new AppError("conflict", "This card has never been published: archive it instead.");
+    if (!versions.some((v) => v.status === "published"))
+      throw new AppError("conflict", "This card has never been published: archive it instead.");
     // Recheck decisions made in this draft are undone with it: those citations wait again.
     await tx
       .update(citationRechecks)
@@ -219,7 +306,12 @@ export async function discardDraft({ actor, cardId }: { actor: Actor; cardId: st
 
 export async function duplicateCard({ actor, cardId }: { actor: Actor; cardId: string }): Promise<CardDto> {
   const db = getDb();
-  const [latest] = await db.select().from(taskCardVersions).where(eq(taskCardVersions.cardId, cardId)).orderBy(desc(taskCardVersions.number)).limit(1);
+  const [latest] = await db
+    .select()
+    .from(taskCardVersions)
+    .where(eq(taskCardVersions.cardId, cardId))
+    .orderBy(desc(taskCardVersions.number))
+    .limit(1);
   if (!latest) throw notFound();
   const content = versionToContent(latest);
   const title = `Copy of ${content.title}`.slice(0, 160);
@@ -227,15 +319,29 @@ export async function duplicateCard({ actor, cardId }: { actor: Actor; cardId: s
   const steps = content.steps.map((s) => ({ ...s, id: crypto.randomUUID() }));
   const created = await createCard({ actor, content: { ...content, title, steps } });
   await db.update(taskCards).set({ duplicatedFrom: cardId }).where(eq(taskCards.id, created.id));
-  await recordAudit(db, { actorId: actor.id, action: "card.duplicated", subjectType: "task_card", subjectId: created.id, details: { from: cardId, title } });
+  await recordAudit(db, {
+    actorId: actor.id,
+    action: "card.duplicated",
+    subjectType: "task_card",
+    subjectId: created.id,
+    details: { from: cardId, title },
+  });
   return created;
 }
 
 export async function setArchived({ actor, cardId, archived }: { actor: Actor; cardId: string; archived: boolean }) {
   await getDb().transaction(async (tx) => {
     await lockCard(tx, cardId, actor);
-    await tx.update(taskCards).set({ archivedAt: archived ? new Date() : null }).where(eq(taskCards.id, cardId));
-    await recordAudit(tx, { actorId: actor.id, action: archived ? "card.archived" : "card.restored", subjectType: "task_card", subjectId: cardId });
+    await tx
+      .update(taskCards)
+      .set({ archivedAt: archived ? new Date() : null })
+      .where(eq(taskCards.id, cardId));
+    await recordAudit(tx, {
+      actorId: actor.id,
+      action: archived ? "card.archived" : "card.restored",
+      subjectType: "task_card",
+      subjectId: cardId,
+    });
   });
   return getCard({ actor, id: cardId });
 }

@@ -18,14 +18,26 @@ export async function publishDraft({ actor, cardId }: { actor: Actor; cardId: st
     const versionId = await getDb().transaction(async (tx) => {
       const card = await lockCard(tx, cardId, actor);
       if (card.archivedAt) throw new AppError("conflict", "That card is archived. Bring it back from the archive to publish it.");
-      const [draft] = await tx.select().from(taskCardVersions).where(and(eq(taskCardVersions.cardId, cardId), eq(taskCardVersions.status, "draft")));
+      const [draft] = await tx
+        .select()
+        .from(taskCardVersions)
+        .where(and(eq(taskCardVersions.cardId, cardId), eq(taskCardVersions.status, "draft")));
       if (!draft) throw new AppError("conflict", "There is no draft to publish: the newest version is already published.");
       const content = parseWith(publishableCardSchema, versionToContent(draft));
       // Citations are checked again: a page cited last week must still exist in a ready revision.
       await citationsFor(tx, draft.id, content.steps);
-      await tx.update(taskCardVersions).set({ status: "published", publishedAt: new Date(), publishedBy: actor.id }).where(eq(taskCardVersions.id, draft.id));
+      await tx
+        .update(taskCardVersions)
+        .set({ status: "published", publishedAt: new Date(), publishedBy: actor.id })
+        .where(eq(taskCardVersions.id, draft.id));
       await tx.update(taskCards).set({ updatedAt: new Date() }).where(eq(taskCards.id, cardId));
-      await recordAudit(tx, { actorId: actor.id, action: "card.published", subjectType: "task_card", subjectId: cardId, details: { title: draft.title, version: draft.number } });
+      await recordAudit(tx, {
+        actorId: actor.id,
+        action: "card.published",
+        subjectType: "task_card",
+        subjectId: cardId,
+        details: { title: draft.title, version: draft.number },
+      });
       return draft.id;
     });
     const [row] = await loadVersions(getDb(), eq(taskCardVersions.id, versionId));

@@ -99,7 +99,11 @@ export async function loadVersions(db: Db | Tx, where: ReturnType<typeof eq>): P
 
 /** Manual titles, revision labels and currency for every revision the steps cite. */
 export async function describeRevisions(db: Db | Tx, revisionIds: string[]) {
-  if (!revisionIds.length) return new Map<string, { manualId: string; manualTitle: string; label: string; current: boolean; status: string; pageCount: number | null }>();
+  if (!revisionIds.length)
+    return new Map<
+      string,
+      { manualId: string; manualTitle: string; label: string; current: boolean; status: string; pageCount: number | null }
+    >();
   const rows = await db
     .select({
       id: revisions.id,
@@ -113,7 +117,19 @@ export async function describeRevisions(db: Db | Tx, revisionIds: string[]) {
     .from(revisions)
     .innerJoin(manuals, eq(manuals.id, revisions.manualId))
     .where(inArray(revisions.id, [...new Set(revisionIds)]));
-  return new Map(rows.map((r) => [r.id, { manualId: r.manualId, manualTitle: r.manualTitle, label: r.label, current: r.currentRevisionId === r.id, status: r.status, pageCount: r.pageCount }]));
+  return new Map(
+    rows.map((r) => [
+      r.id,
+      {
+        manualId: r.manualId,
+        manualTitle: r.manualTitle,
+        label: r.label,
+        current: r.currentRevisionId === r.id,
+        status: r.status,
+        pageCount: r.pageCount,
+      },
+    ]),
+  );
 }
 
 /**
@@ -136,7 +152,10 @@ async function openRecheckSteps(db: Db | Tx, cardId: string): Promise<Set<string
 export async function toVersionDto(db: Db | Tx, row: VersionRow): Promise<CardVersionDto> {
   const steps = (row.steps as unknown[]).map((s) => stepSchema.parse(s));
   const rechecking = await openRecheckSteps(db, row.cardId);
-  const described = await describeRevisions(db, steps.flatMap((s) => s.references.map((r) => r.revisionId)));
+  const described = await describeRevisions(
+    db,
+    steps.flatMap((s) => s.references.map((r) => r.revisionId)),
+  );
   const stepDtos: StepDto[] = steps.map((s) => ({
     ...s,
     underRecheck: rechecking.has(s.id),
@@ -208,7 +227,12 @@ export async function getCard({ actor, id }: { actor: Actor; id: string }): Prom
     canEdit: await editsCard(db, actor, card),
     archivedAt: card.archivedAt?.toISOString() ?? null,
     openRechecks: author ? (open?.n ?? 0) : 0,
-    versions: versions.map((v) => ({ number: v.number, status: v.status, publishedAt: v.publishedAt?.toISOString() ?? null, updatedAt: v.updatedAt.toISOString() })),
+    versions: versions.map((v) => ({
+      number: v.number,
+      status: v.status,
+      publishedAt: v.publishedAt?.toISOString() ?? null,
+      updatedAt: v.updatedAt.toISOString(),
+    })),
     draft: draftRow ? await toVersionDto(db, draftRow) : null,
     published: publishedRow ? await toVersionDto(db, publishedRow) : null,
   };
@@ -218,7 +242,8 @@ export async function getCard({ actor, id }: { actor: Actor; id: string }): Prom
 export async function getCardVersion({ actor, cardId, number }: { actor: Actor; cardId: string; number: number }): Promise<CardVersionDto> {
   const db = getDb();
   const [row] = await loadVersions(db, and(eq(taskCardVersions.cardId, cardId), eq(taskCardVersions.number, number))!);
-  if (!row || (!isAuthor(actor) && row.status !== "published")) throw new AppError("not_found", "That version of the task card was not found.");
+  if (!row || (!isAuthor(actor) && row.status !== "published"))
+    throw new AppError("not_found", "That version of the task card was not found.");
   return toVersionDto(db, row);
 }
 

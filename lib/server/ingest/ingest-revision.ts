@@ -29,10 +29,18 @@ class GivenUp extends Error {}
  */
 const lockKey = (revisionId: string) => `ingest:${revisionId}`;
 
-export async function ingestRevision({ revisionId, log = console.log }: { revisionId: string; log?: (m: string) => void }): Promise<Outcome> {
+export async function ingestRevision({
+  revisionId,
+  log = console.log,
+}: {
+  revisionId: string;
+  log?: (m: string) => void;
+}): Promise<Outcome> {
   const holder = await getPool().connect();
   try {
-    const { rows } = await holder.query<{ ok: boolean }>("select pg_try_advisory_lock(hashtextextended($1, 0)) as ok", [lockKey(revisionId)]);
+    const { rows } = await holder.query<{ ok: boolean }>("select pg_try_advisory_lock(hashtextextended($1, 0)) as ok", [
+      lockKey(revisionId),
+    ]);
     if (!rows[0]?.ok) return "skipped"; // a live worker has it
     return await ingestLocked({ revisionId, log });
   } finally {
@@ -47,18 +55,23 @@ async function ingestLocked({ revisionId, log }: { revisionId: string; log: (m: 
   const [claimed] = await db
     .update(revisions)
     .set({ status: "processing", attempts: sql`${revisions.attempts} + 1`, heartbeatAt: sql`now()`, error: null, pagesDone: 0 })
-    .where(
-      and(
-        eq(revisions.id, revisionId),
-        sql`${revisions.status} in ('queued', 'processing')`,
-      ),
-    )
-    .returning({ id: revisions.id, manualId: revisions.manualId, fileKey: revisions.fileKey, attempts: revisions.attempts, label: revisions.label });
+    .where(and(eq(revisions.id, revisionId), sql`${revisions.status} in ('queued', 'processing')`))
+    .returning({
+      id: revisions.id,
+      manualId: revisions.manualId,
+      fileKey: revisions.fileKey,
+      attempts: revisions.attempts,
+      label: revisions.label,
+    });
   if (!claimed) return "skipped";
 
   const started = Date.now();
   const beat = setInterval(() => {
-    void db.update(revisions).set({ heartbeatAt: sql`now()` }).where(eq(revisions.id, revisionId)).catch(() => undefined);
+    void db
+      .update(revisions)
+      .set({ heartbeatAt: sql`now()` })
+      .where(eq(revisions.id, revisionId))
+      .catch(() => undefined);
   }, heartbeatSeconds * 1000);
 
   // The page batch being written, if any (see flush below); awaited before a failure cleans up.
@@ -136,7 +149,10 @@ async function ingestLocked({ revisionId, log }: { revisionId: string; log: (m: 
       if (!turned) throw new GivenUp();
       if (becomesCurrent) {
         if (manual?.currentRevisionId) {
-          await tx.update(revisions).set({ supersededAt: sql`now()` }).where(eq(revisions.id, manual.currentRevisionId));
+          await tx
+            .update(revisions)
+            .set({ supersededAt: sql`now()` })
+            .where(eq(revisions.id, manual.currentRevisionId));
         }
         await tx.update(manuals).set({ currentRevisionId: revisionId }).where(eq(manuals.id, claimed.manualId));
       }
@@ -168,11 +184,17 @@ async function ingestLocked({ revisionId, log }: { revisionId: string; log: (m: 
     const lastTry = known || claimed.attempts >= maxAttempts;
     if (!lastTry) {
       // Put it back for the job's retry; the error may be passing (database restart, full disk).
-      await db.update(revisions).set({ status: "queued", heartbeatAt: null }).where(eq(revisions.id, revisionId)).catch(() => undefined);
+      await db
+        .update(revisions)
+        .set({ status: "queued", heartbeatAt: null })
+        .where(eq(revisions.id, revisionId))
+        .catch(() => undefined);
       throw error;
     }
     await writing.catch(() => undefined);
-    const reason = known ? error.message : `Ingest failed ${claimed.attempts} times; the last error was: ${String(error instanceof Error ? error.message : error).slice(0, 300)}`;
+    const reason = known
+      ? error.message
+      : `Ingest failed ${claimed.attempts} times; the last error was: ${String(error instanceof Error ? error.message : error).slice(0, 300)}`;
     await db.delete(pages).where(eq(pages.revisionId, revisionId));
     await db.update(revisions).set({ status: "failed", error: reason, heartbeatAt: null }).where(eq(revisions.id, revisionId));
     log(`revision ${revisionId} failed: ${reason}`);

@@ -55,7 +55,10 @@ export async function makeThumbnails({ revisionId }: { revisionId: string }): Pr
           if (!page) continue;
           const key = storageKeys.thumbnail(revisionId, page);
           await store.put(key, createReadStream(path.join(dir, name)), "image/png");
-          await db.update(pages).set({ thumbnailKey: key }).where(and(eq(pages.revisionId, revisionId), eq(pages.pageNumber, page)));
+          await db
+            .update(pages)
+            .set({ thumbnailKey: key })
+            .where(and(eq(pages.revisionId, revisionId), eq(pages.pageNumber, page)));
           made++;
         }
       } finally {

@@ -51,7 +51,9 @@ function newRevision(input: { revisionId: string; manualId: string; revision: Re
 }
 
 const labelTaken = (label: string) =>
-  new AppError("conflict", `This manual already has a revision labelled "${label}".`, { fields: { revisionLabel: "Already used on this manual." } });
+  new AppError("conflict", `This manual already has a revision labelled "${label}".`, {
+    fields: { revisionLabel: "Already used on this manual." },
+  });
 
 export async function createManualWithRevision({
   actor,
@@ -73,7 +75,10 @@ export async function createManualWithRevision({
         fields: { title: "Already in the library." },
       });
     }
-    const [row] = await tx.insert(manuals).values({ ...manual, createdBy: actor.id }).returning({ id: manuals.id });
+    const [row] = await tx
+      .insert(manuals)
+      .values({ ...manual, createdBy: actor.id })
+      .returning({ id: manuals.id });
     if (!row) throw new AppError("internal");
     await tx.insert(revisions).values(newRevision({ revisionId, manualId: row.id, revision, file, actor }));
     await recordAudit(tx, {
@@ -250,7 +255,13 @@ export async function retryRevision({ actor, id }: { actor: Actor; id: string })
       if (!exists) throw new AppError("not_found", "That revision was not found.");
       throw new AppError("conflict", `Only a failed revision can be tried again; this one is ${exists.status}.`);
     }
-    await recordAudit(tx, { actorId: actor.id, action: "revision.retried", subjectType: "manual", subjectId: row.manualId, details: { revisionId: id } });
+    await recordAudit(tx, {
+      actorId: actor.id,
+      action: "revision.retried",
+      subjectType: "manual",
+      subjectId: row.manualId,
+      details: { revisionId: id },
+    });
     return row;
   });
   await queueOrFail(updated.id);
@@ -260,9 +271,19 @@ export async function retryRevision({ actor, id }: { actor: Actor; id: string })
 /** A librarian's "keep on carts": carts store the whole current PDF of the manual. */
 export async function setKeepOnCarts({ actor, id, keepOnCarts }: { actor: Actor; id: string; keepOnCarts: boolean }) {
   return getDb().transaction(async (tx) => {
-    const [row] = await tx.update(manuals).set({ keepOnCarts }).where(eq(manuals.id, id)).returning({ id: manuals.id, title: manuals.title, keepOnCarts: manuals.keepOnCarts });
+    const [row] = await tx
+      .update(manuals)
+      .set({ keepOnCarts })
+      .where(eq(manuals.id, id))
+      .returning({ id: manuals.id, title: manuals.title, keepOnCarts: manuals.keepOnCarts });
     if (!row) throw new AppError("not_found", "That manual was not found.");
-    await recordAudit(tx, { actorId: actor.id, action: keepOnCarts ? "manual.kept_on_carts" : "manual.not_kept_on_carts", subjectType: "manual", subjectId: id, details: { title: row.title } });
+    await recordAudit(tx, {
+      actorId: actor.id,
+      action: keepOnCarts ? "manual.kept_on_carts" : "manual.not_kept_on_carts",
+      subjectType: "manual",
+      subjectId: id,
+      details: { title: row.title },
+    });
     return row;
   });
 }

@@ -59,7 +59,6 @@ const tooLarge = (limit: number) =>
     fields: { file: "Too large." },
   });
 
-
 export interface ReceivedUpload {
   fields: Record<string, string>;
   file: { size: number; sha256: string } | null;
@@ -118,7 +117,12 @@ export async function receivePdfUpload(
     return { fields, file };
   } catch (error) {
     // The stream failure may be the parser's reaction to the inspector's refusal: report the refusal.
-    const reason = stored ? await (stored as Promise<unknown>).then(() => error, (e: unknown) => e) : error;
+    const reason = stored
+      ? await (stored as Promise<unknown>).then(
+          () => error,
+          (e: unknown) => e,
+        )
+      : error;
     await store.delete(key).catch(() => undefined);
     if (reason instanceof AppError) throw reason;
     throw new AppError("bad_request", "The upload was interrupted or its multipart body is malformed. Try again.", { cause: reason });
@@ -132,7 +136,11 @@ export async function receivePdfUpload(
 export async function withUploadedPdf<T>(
   request: Request,
   { store, limitBytes }: { store: ObjectStore; limitBytes: number },
-  record: (upload: { revisionId: string; fields: Record<string, string>; file: { key: string; size: number; sha256: string } }) => Promise<T>,
+  record: (upload: {
+    revisionId: string;
+    fields: Record<string, string>;
+    file: { key: string; size: number; sha256: string };
+  }) => Promise<T>,
 ): Promise<T> {
   const revisionId = randomUUID();
   const key = storageKeys.revisionFile(revisionId);

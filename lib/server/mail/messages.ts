@@ -10,7 +10,6 @@ export const mailMessageSchema = z.object({
 });
 export type MailMessage = z.infer<typeof mailMessageSchema>;
 
-
 function withLink(paragraphs: string[], link: { label: string; href: string }, after: string[]) {
   const text = [...paragraphs, `${link.label}: ${link.href}`, ...after, "— Hangarleaf"].join("\n\n");
   const html = [
@@ -27,10 +26,7 @@ export function invitationMail(input: { to: string; name: string; invitedBy: str
     to: input.to,
     subject: "You are invited to Hangarleaf",
     ...withLink(
-      [
-        `Hello ${input.name},`,
-        `${input.invitedBy} has made you a Hangarleaf account as ${input.role}. Choose your password to start.`,
-      ],
+      [`Hello ${input.name},`, `${input.invitedBy} has made you a Hangarleaf account as ${input.role}. Choose your password to start.`],
       { label: "Choose your password", href: input.link },
       ["The link works for 7 days and once only. If you did not expect this, ignore this mail."],
     ),
@@ -58,10 +54,21 @@ export interface ImpactCard {
 const statusWords: Record<string, string> = { changed: "changed", moved: "moved", removed: "is gone" };
 
 /** One mail per instructor per revision: the cards and steps whose cited pages the revision touched. */
-export function revisionImpactMail(input: { to: string; name: string; manualTitle: string; revisionLabel: string; previousLabel: string; cards: ImpactCard[]; changesLink: string }): MailMessage {
+export function revisionImpactMail(input: {
+  to: string;
+  name: string;
+  manualTitle: string;
+  revisionLabel: string;
+  previousLabel: string;
+  cards: ImpactCard[];
+  changesLink: string;
+}): MailMessage {
   const count = input.cards.reduce((n, c) => n + c.steps.length, 0);
   const lines = (card: ImpactCard) =>
-    card.steps.map((s) => `Step ${s.number}: page ${s.page} of ${input.previousLabel} ${statusWords[s.status] ?? s.status}${s.suggested ? `; suggested page ${s.suggested} of ${input.revisionLabel}` : "; no similar page found"}`);
+    card.steps.map(
+      (s) =>
+        `Step ${s.number}: page ${s.page} of ${input.previousLabel} ${statusWords[s.status] ?? s.status}${s.suggested ? `; suggested page ${s.suggested} of ${input.revisionLabel}` : "; no similar page found"}`,
+    );
   const intro = [
     `Hello ${input.name},`,
     `${input.manualTitle} ${input.revisionLabel} is now the current revision. ${count === 1 ? "One page" : `${count} pages`} your published task cards cite changed, moved or went. Students keep seeing a notice on those steps until you recheck them.`,
@@ -75,10 +82,18 @@ export function revisionImpactMail(input: { to: string; name: string; manualTitl
   const html = [
     ...intro.map((p) => `<p>${escapeHtml(p)}</p>`),
     ...input.cards.map(
-      (c) => `<h3>${escapeHtml(c.title)}</h3><ul>${lines(c).map((l) => `<li>${escapeHtml(l)}</li>`).join("")}</ul><p><a href="${escapeHtml(c.link)}">Recheck ${escapeHtml(c.title)}</a></p>`,
+      (c) =>
+        `<h3>${escapeHtml(c.title)}</h3><ul>${lines(c)
+          .map((l) => `<li>${escapeHtml(l)}</li>`)
+          .join("")}</ul><p><a href="${escapeHtml(c.link)}">Recheck ${escapeHtml(c.title)}</a></p>`,
     ),
     `<p><a href="${escapeHtml(input.changesLink)}">What changed in ${escapeHtml(input.revisionLabel)}</a></p>`,
     "<p>— Hangarleaf</p>",
   ].join("\n");
-  return { to: input.to, subject: `${input.manualTitle} ${input.revisionLabel}: ${input.cards.length === 1 ? "a task card" : `${input.cards.length} task cards`} to recheck`, text, html };
+  return {
+    to: input.to,
+    subject: `${input.manualTitle} ${input.revisionLabel}: ${input.cards.length === 1 ? "a task card" : `${input.cards.length} task cards`} to recheck`,
+    text,
+    html,
+  };
 }

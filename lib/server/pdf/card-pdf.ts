@@ -30,7 +30,20 @@ export function markdownToPlain(markdown: string): string {
     .trim();
 }
 
-const replacements: Record<string, string> = { "≤": "<=", "≥": ">=", "→": "->", "←": "<-", "⌈": "", "⌉": "", "Σ": "sum ", "√": "sqrt", "−": "-", "″": '"', "′": "'", "✓": "v" };
+const replacements: Record<string, string> = {
+  "≤": "<=",
+  "≥": ">=",
+  "→": "->",
+  "←": "<-",
+  "⌈": "",
+  "⌉": "",
+  Σ: "sum ",
+  "√": "sqrt",
+  "−": "-",
+  "″": '"',
+  "′": "'",
+  "✓": "v",
+};
 
 /** Helvetica speaks WinAnsi only: other characters are spelled out or dropped, never a crash. */
 function printable(font: PDFFont, text: string): string {
@@ -77,14 +90,23 @@ export class CardWriter {
 
   wrap(text: string, font: PDFFont, size: number, maxWidth: number): string[] {
     // An empty paragraph stays as a blank line.
-    return printable(font, text).split("\n").flatMap((paragraph) => {
-      const lines = wrapLine(paragraph, font, size, maxWidth);
-      return lines.length ? lines : [""];
-    });
+    return printable(font, text)
+      .split("\n")
+      .flatMap((paragraph) => {
+        const lines = wrapLine(paragraph, font, size, maxWidth);
+        return lines.length ? lines : [""];
+      });
   }
 
-
-  text(text: string, { size = 10.5, bold = false, indent = 0, color = black }: { size?: number; bold?: boolean; indent?: number; color?: ReturnType<typeof rgb> } = {}) {
+  text(
+    text: string,
+    {
+      size = 10.5,
+      bold = false,
+      indent = 0,
+      color = black,
+    }: { size?: number; bold?: boolean; indent?: number; color?: ReturnType<typeof rgb> } = {},
+  ) {
     const font = bold ? this.bold : this.regular;
     for (const line of this.wrap(text, font, size, width - indent)) {
       this.ensure(size + 4);
@@ -138,7 +160,10 @@ export async function renderCardPdf(version: CardVersionDto, { printedAt = new D
   doc.setCreationDate(printedAt);
   const regular = await doc.embedFont(StandardFonts.Helvetica);
   const bold = await doc.embedFont(StandardFonts.HelveticaBold);
-  const state = version.status === "published" ? `version ${version.number}, published ${version.publishedAt?.slice(0, 10) ?? ""}` : `DRAFT version ${version.number}, not for use on aircraft`;
+  const state =
+    version.status === "published"
+      ? `version ${version.number}, published ${version.publishedAt?.slice(0, 10) ?? ""}`
+      : `DRAFT version ${version.number}, not for use on aircraft`;
   const w = new CardWriter(doc, regular, bold, `${version.title} - ${state}`);
 
   w.text("TASK CARD", { size: 9, bold: true, color: grey });
@@ -160,7 +185,11 @@ export async function renderCardPdf(version: CardVersionDto, { printedAt = new D
     "Training use. The current manufacturer's data, your instructor, local rules and licensed practice come first. Check every reference below against the current revision before work begins.",
   );
 
-  for (const [label, items] of [["Tools", version.tools], ["Consumables", version.consumables], ["Protective equipment", version.protectiveEquipment]] as const) {
+  for (const [label, items] of [
+    ["Tools", version.tools],
+    ["Consumables", version.consumables],
+    ["Protective equipment", version.protectiveEquipment],
+  ] as const) {
     if (!items.length) continue;
     w.text(label, { bold: true, size: 11 });
     w.text(items.map((i) => `• ${i}`).join("\n"), { indent: 8 });
@@ -177,16 +206,27 @@ export async function renderCardPdf(version: CardVersionDto, { printedAt = new D
     w.gap(3);
     if (step.measurement) {
       const m = step.measurement;
-      w.text(`${m.label}: measured ____________ ${unitLabel(m.unit)}    limits ${describeLimit(m)}    in limits  [ ] yes  [ ] no`, { indent: 8 });
+      w.text(`${m.label}: measured ____________ ${unitLabel(m.unit)}    limits ${describeLimit(m)}    in limits  [ ] yes  [ ] no`, {
+        indent: 8,
+      });
     }
     if (step.timerMinutes) w.text(`Timer ${step.timerMinutes} min:  started ________  ended ________`, { indent: 8 });
-    if (step.calculator) w.text(`Calculator: ${calculators[step.calculator].title} (training aid; check against the manufacturer's data).`, { indent: 8, size: 9.5 });
+    if (step.calculator)
+      w.text(`Calculator: ${calculators[step.calculator].title} (training aid; check against the manufacturer's data).`, {
+        indent: 8,
+        size: 9.5,
+      });
     for (const ref of step.references) {
       const quote = ref.quote ? ` - "${ref.quote}"` : "";
-      w.text(`Ref: ${ref.manualTitle}, ${ref.revisionLabel}, page ${ref.page}${ref.current ? "" : " (SUPERSEDED revision: check the current one)"}${quote}`, { indent: 8, size: 9.5, color: grey });
+      w.text(
+        `Ref: ${ref.manualTitle}, ${ref.revisionLabel}, page ${ref.page}${ref.current ? "" : " (SUPERSEDED revision: check the current one)"}${quote}`,
+        { indent: 8, size: 9.5, color: grey },
+      );
     }
     w.gap(3);
-    w.text(step.inspectionPoint ? "Student initials ______    Instructor buy-off ______  date ________" : "Student initials ______", { indent: 8 });
+    w.text(step.inspectionPoint ? "Student initials ______    Instructor buy-off ______  date ________" : "Student initials ______", {
+      indent: 8,
+    });
     w.gap(4);
     w.rule();
   });
@@ -195,7 +235,10 @@ export async function renderCardPdf(version: CardVersionDto, { printedAt = new D
   w.text("Sign-off", { bold: true, size: 12.5 });
   w.text("Student ______________________  date ________      Instructor ______________________  date ________");
   w.gap(8);
-  w.text(`Printed ${printedAt.toISOString().slice(0, 16).replace("T", " ")} UTC from Hangarleaf. A printed card is a copy: the card in Hangarleaf is the one that counts.`, { size: 8.5, color: grey });
+  w.text(
+    `Printed ${printedAt.toISOString().slice(0, 16).replace("T", " ")} UTC from Hangarleaf. A printed card is a copy: the card in Hangarleaf is the one that counts.`,
+    { size: 8.5, color: grey },
+  );
   w.finish();
   return doc.save();
 }

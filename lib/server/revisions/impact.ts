@@ -5,7 +5,15 @@ import "server-only";
 import { and, asc, desc, eq, inArray, isNull, lt, ne, or, sql } from "drizzle-orm";
 import { getDb } from "@/db";
 import {
-  cardCitations, citationRechecks, manuals, pages, revisionComparisons, revisions, taskCards, taskCardVersions, users,
+  cardCitations,
+  citationRechecks,
+  manuals,
+  pages,
+  revisionComparisons,
+  revisions,
+  taskCards,
+  taskCardVersions,
+  users,
 } from "@/db/schema";
 import { getEnv } from "@/lib/server/env";
 import { sendJob } from "@/lib/server/jobs";
@@ -25,7 +33,10 @@ export async function queueComparison({ revisionId }: { revisionId: string }) {
  */
 export async function queueComparisonsAfterReady({ revisionId }: { revisionId: string }) {
   const db = getDb();
-  const [me] = await db.select({ manualId: revisions.manualId, date: revisions.revisionDate, createdAt: revisions.createdAt }).from(revisions).where(eq(revisions.id, revisionId));
+  const [me] = await db
+    .select({ manualId: revisions.manualId, date: revisions.revisionDate, createdAt: revisions.createdAt })
+    .from(revisions)
+    .where(eq(revisions.id, revisionId));
   if (!me) return;
   await queueComparison({ revisionId });
   const [newer] = await db
@@ -36,7 +47,10 @@ export async function queueComparisonsAfterReady({ revisionId }: { revisionId: s
         eq(revisions.manualId, me.manualId),
         eq(revisions.status, "ready"),
         ne(revisions.id, revisionId),
-        or(sql`${revisions.revisionDate} > ${me.date}`, and(eq(revisions.revisionDate, me.date), sql`${revisions.createdAt} > ${me.createdAt}`)),
+        or(
+          sql`${revisions.revisionDate} > ${me.date}`,
+          and(eq(revisions.revisionDate, me.date), sql`${revisions.createdAt} > ${me.createdAt}`),
+        ),
       ),
     )
     .orderBy(asc(revisions.revisionDate), asc(revisions.createdAt))
@@ -45,7 +59,11 @@ export async function queueComparisonsAfterReady({ revisionId }: { revisionId: s
 }
 
 async function pageTexts(revisionId: string): Promise<string[]> {
-  const rows = await getDb().select({ n: pages.pageNumber, text: pages.text }).from(pages).where(eq(pages.revisionId, revisionId)).orderBy(asc(pages.pageNumber));
+  const rows = await getDb()
+    .select({ n: pages.pageNumber, text: pages.text })
+    .from(pages)
+    .where(eq(pages.revisionId, revisionId))
+    .orderBy(asc(pages.pageNumber));
   return rows.map((r) => r.text);
 }
 
@@ -59,7 +77,10 @@ async function previousRevision(revision: { id: string; manualId: string; revisi
         eq(revisions.manualId, revision.manualId),
         eq(revisions.status, "ready"),
         ne(revisions.id, revision.id),
-        or(lt(revisions.revisionDate, revision.revisionDate), and(eq(revisions.revisionDate, revision.revisionDate), lt(revisions.createdAt, revision.createdAt))),
+        or(
+          lt(revisions.revisionDate, revision.revisionDate),
+          and(eq(revisions.revisionDate, revision.revisionDate), lt(revisions.createdAt, revision.createdAt)),
+        ),
       ),
     )
     .orderBy(desc(revisions.revisionDate), desc(revisions.createdAt))
@@ -78,7 +99,14 @@ export interface CompareOutcome {
 export async function compareRevision({ revisionId }: { revisionId: string }): Promise<CompareOutcome> {
   const db = getDb();
   const [revision] = await db
-    .select({ id: revisions.id, manualId: revisions.manualId, label: revisions.label, revisionDate: revisions.revisionDate, createdAt: revisions.createdAt, status: revisions.status })
+    .select({
+      id: revisions.id,
+      manualId: revisions.manualId,
+      label: revisions.label,
+      revisionDate: revisions.revisionDate,
+      createdAt: revisions.createdAt,
+      status: revisions.status,
+    })
     .from(revisions)
     .where(eq(revisions.id, revisionId));
   if (!revision || revision.status !== "ready") return { previousRevisionId: null, summary: null, flagged: 0, mailed: 0 };
@@ -98,15 +126,29 @@ export async function compareRevision({ revisionId }: { revisionId: string }): P
   await db
     .insert(revisionComparisons)
     .values({ revisionId, previousRevisionId: previous.id, pages: comparison.pages, summary: comparison.summary })
-    .onConflictDoUpdate({ target: revisionComparisons.revisionId, set: { previousRevisionId: previous.id, pages: comparison.pages, summary: comparison.summary, updatedAt: new Date() } });
+    .onConflictDoUpdate({
+      target: revisionComparisons.revisionId,
+      set: { previousRevisionId: previous.id, pages: comparison.pages, summary: comparison.summary, updatedAt: new Date() },
+    });
   log(`${revision.label} against ${previous.label}: ${JSON.stringify(comparison.summary)} in ${Date.now() - started} ms`);
 
   // Only the current revision sends anyone back to their cards.
-  const [manual] = await db.select({ currentRevisionId: manuals.currentRevisionId, title: manuals.title }).from(manuals).where(eq(manuals.id, revision.manualId));
-  if (manual?.currentRevisionId !== revisionId) return { previousRevisionId: previous.id, summary: comparison.summary, flagged: 0, mailed: 0 };
+  const [manual] = await db
+    .select({ currentRevisionId: manuals.currentRevisionId, title: manuals.title })
+    .from(manuals)
+    .where(eq(manuals.id, revision.manualId));
+  if (manual?.currentRevisionId !== revisionId)
+    return { previousRevisionId: previous.id, summary: comparison.summary, flagged: 0, mailed: 0 };
 
   const flagged = await flagCitations({ revisionId, previousRevisionId: previous.id, comparison, oldTexts, newTexts, labels });
-  const mailed = await mailOwners({ revisionId, manualId: revision.manualId, manualTitle: manual.title, revisionLabel: revision.label, previousLabel: previous.label, rechecks: flagged });
+  const mailed = await mailOwners({
+    revisionId,
+    manualId: revision.manualId,
+    manualTitle: manual.title,
+    revisionLabel: revision.label,
+    previousLabel: previous.label,
+    rechecks: flagged,
+  });
   return { previousRevisionId: previous.id, summary: comparison.summary, flagged: flagged.length, mailed };
 }
 
@@ -133,7 +175,21 @@ async function citationsOf(previousRevisionId: string) {
     );
 }
 
-async function flagCitations({ revisionId, previousRevisionId, comparison, oldTexts, newTexts, labels }: { revisionId: string; previousRevisionId: string; comparison: Comparison; oldTexts: string[]; newTexts: string[]; labels: string[] }) {
+async function flagCitations({
+  revisionId,
+  previousRevisionId,
+  comparison,
+  oldTexts,
+  newTexts,
+  labels,
+}: {
+  revisionId: string;
+  previousRevisionId: string;
+  comparison: Comparison;
+  oldTexts: string[];
+  newTexts: string[];
+  labels: string[];
+}) {
   const byOld = new Map<number, PageChange>();
   for (const p of comparison.pages) if (p.oldPage) byOld.set(p.oldPage, p);
   const rows: (typeof citationRechecks.$inferInsert)[] = [];
@@ -159,16 +215,42 @@ async function flagCitations({ revisionId, previousRevisionId, comparison, oldTe
   return getDb().insert(citationRechecks).values(rows).onConflictDoNothing().returning();
 }
 
-async function mailOwners({ revisionId, manualId, manualTitle, revisionLabel, previousLabel, rechecks }: { revisionId: string; manualId: string; manualTitle: string; revisionLabel: string; previousLabel: string; rechecks: (typeof citationRechecks.$inferSelect)[] }) {
+async function mailOwners({
+  revisionId,
+  manualId,
+  manualTitle,
+  revisionLabel,
+  previousLabel,
+  rechecks,
+}: {
+  revisionId: string;
+  manualId: string;
+  manualTitle: string;
+  revisionLabel: string;
+  previousLabel: string;
+  rechecks: (typeof citationRechecks.$inferSelect)[];
+}) {
   if (!rechecks.length) return 0;
   const db = getDb();
   const cards = await db
-    .select({ id: taskCards.id, ownerEmail: users.email, ownerName: users.name, title: taskCardVersions.title, versionId: taskCardVersions.id })
+    .select({
+      id: taskCards.id,
+      ownerEmail: users.email,
+      ownerName: users.name,
+      title: taskCardVersions.title,
+      versionId: taskCardVersions.id,
+    })
     .from(taskCards)
     .innerJoin(users, eq(users.id, taskCards.ownerId))
     .innerJoin(taskCardVersions, eq(taskCardVersions.cardId, taskCards.id))
     .where(inArray(taskCardVersions.id, [...new Set(rechecks.map((r) => r.versionId))]));
-  const byOwner = new Map<string, { name: string; cards: { title: string; link: string; steps: { number: number; page: number; status: string; suggested: number | null }[] }[] }>();
+  const byOwner = new Map<
+    string,
+    {
+      name: string;
+      cards: { title: string; link: string; steps: { number: number; page: number; status: string; suggested: number | null }[] }[];
+    }
+  >();
   const base = getEnv().APP_URL.replace(/\/$/, "");
   for (const card of cards) {
     const owner = byOwner.get(card.ownerEmail) ?? { name: card.ownerName, cards: [] };
@@ -183,7 +265,17 @@ async function mailOwners({ revisionId, manualId, manualTitle, revisionLabel, pr
     byOwner.set(card.ownerEmail, owner);
   }
   for (const [to, owner] of byOwner) {
-    await queueMail(revisionImpactMail({ to, name: owner.name, manualTitle, revisionLabel, previousLabel, cards: owner.cards, changesLink: `${base}/library/${manualId}/${revisionId}/changes` }));
+    await queueMail(
+      revisionImpactMail({
+        to,
+        name: owner.name,
+        manualTitle,
+        revisionLabel,
+        previousLabel,
+        cards: owner.cards,
+        changesLink: `${base}/library/${manualId}/${revisionId}/changes`,
+      }),
+    );
   }
   return byOwner.size;
 }

@@ -14,11 +14,19 @@ import type { RecheckDto } from "@/lib/contracts/cards";
 
 export type { ComparisonDto, RecheckDto };
 
-
 export async function getComparison({ revisionId }: { revisionId: string }): Promise<ComparisonDto> {
   const [row] = await getDb().select().from(revisionComparisons).where(eq(revisionComparisons.revisionId, revisionId));
-  if (!row) throw new AppError("not_found", "That revision has not been compared yet. The comparison is made a moment after the revision is ready.");
-  return { revisionId, previousRevisionId: row.previousRevisionId, pages: row.pages as PageChange[], summary: row.summary as Record<PageStatus, number> };
+  if (!row)
+    throw new AppError(
+      "not_found",
+      "That revision has not been compared yet. The comparison is made a moment after the revision is ready.",
+    );
+  return {
+    revisionId,
+    previousRevisionId: row.previousRevisionId,
+    pages: row.pages as PageChange[],
+    summary: row.summary as Record<PageStatus, number>,
+  };
 }
 
 /** The cards a revision sent back to their authors, with how many citations are still open. */
@@ -40,10 +48,12 @@ export async function listRechecksOfRevision({ revisionId }: { revisionId: strin
     .orderBy(asc(taskCardVersions.title));
 }
 
-
 async function pageText(revisionId: string, page: number | null) {
   if (!page) return null;
-  const [row] = await getDb().select({ text: pages.text }).from(pages).where(and(eq(pages.revisionId, revisionId), eq(pages.pageNumber, page)));
+  const [row] = await getDb()
+    .select({ text: pages.text })
+    .from(pages)
+    .where(and(eq(pages.revisionId, revisionId), eq(pages.pageNumber, page)));
   return row?.text ?? null;
 }
 
@@ -62,7 +72,13 @@ export async function listOpenRechecks({ cardId }: { cardId: string }): Promise<
   const info = new Map(
     (
       await db
-        .select({ id: revisions.id, label: revisions.label, pageCount: revisions.pageCount, manualId: revisions.manualId, manualTitle: manuals.title })
+        .select({
+          id: revisions.id,
+          label: revisions.label,
+          pageCount: revisions.pageCount,
+          manualId: revisions.manualId,
+          manualTitle: manuals.title,
+        })
         .from(revisions)
         .innerJoin(manuals, eq(manuals.id, revisions.manualId))
         .where(inArray(revisions.id, revisionIds))
@@ -81,7 +97,12 @@ export async function listOpenRechecks({ cardId }: { cardId: string }): Promise<
         status: r.status,
         manualId: oldInfo.manualId,
         manualTitle: oldInfo.manualTitle,
-        old: { revisionId: r.previousRevisionId, label: oldInfo.label, page: r.oldPage, text: (await pageText(r.previousRevisionId, r.oldPage)) ?? "" },
+        old: {
+          revisionId: r.previousRevisionId,
+          label: oldInfo.label,
+          page: r.oldPage,
+          text: (await pageText(r.previousRevisionId, r.oldPage)) ?? "",
+        },
         suggested: {
           revisionId: r.revisionId,
           label: newInfo.label,
@@ -108,11 +129,22 @@ export async function applyRechecks({ actor, cardId, decisions }: { actor: Actor
     cardId,
     change: async (tx, content, draftId) => {
       const ids = decisions.map((d) => d.id);
-      const rows = await tx.select().from(citationRechecks).where(and(eq(citationRechecks.cardId, cardId), inArray(citationRechecks.id, ids))).for("update");
-      if (rows.length !== new Set(ids).size) throw new AppError("invalid", "Some of those rechecks are not on this card.", { fields: { decisions: "Unknown recheck." } });
-      if (rows.some((r) => r.outcome !== "open")) throw new AppError("conflict", "Some of those citations were rechecked already. Reload the page.");
+      const rows = await tx
+        .select()
+        .from(citationRechecks)
+        .where(and(eq(citationRechecks.cardId, cardId), inArray(citationRechecks.id, ids)))
+        .for("update");
+      if (rows.length !== new Set(ids).size)
+        throw new AppError("invalid", "Some of those rechecks are not on this card.", { fields: { decisions: "Unknown recheck." } });
+      if (rows.some((r) => r.outcome !== "open"))
+        throw new AppError("conflict", "Some of those citations were rechecked already. Reload the page.");
       const pageCounts = new Map(
-        (await tx.select({ id: revisions.id, pageCount: revisions.pageCount }).from(revisions).where(inArray(revisions.id, [...new Set(rows.map((r) => r.revisionId))]))).map((r) => [r.id, r.pageCount]),
+        (
+          await tx
+            .select({ id: revisions.id, pageCount: revisions.pageCount })
+            .from(revisions)
+            .where(inArray(revisions.id, [...new Set(rows.map((r) => r.revisionId))]))
+        ).map((r) => [r.id, r.pageCount]),
       );
       const outcomes: { id: string; outcome: "accepted" | "relinked" | "dropped"; page: number | null }[] = [];
       for (const decision of decisions) {
@@ -121,12 +153,19 @@ export async function applyRechecks({ actor, cardId, decisions }: { actor: Actor
         const index = step?.references.findIndex((ref) => ref.revisionId === r.previousRevisionId && ref.page === r.oldPage) ?? -1;
         let page: number | null = null;
         if (decision.action === "accept") {
-          if (!r.suggestedPage) throw new AppError("invalid", `Step ${r.stepNumber}: there is no suggested page to accept. Choose a page or drop the citation.`, { fields: { decisions: "No suggestion." } });
+          if (!r.suggestedPage)
+            throw new AppError(
+              "invalid",
+              `Step ${r.stepNumber}: there is no suggested page to accept. Choose a page or drop the citation.`,
+              { fields: { decisions: "No suggestion." } },
+            );
           page = r.suggestedPage;
         } else if (decision.action === "relink") {
           const count = pageCounts.get(r.revisionId) ?? null;
           if (!decision.page || (count !== null && decision.page > count)) {
-            throw new AppError("invalid", `Step ${r.stepNumber}: choose a page from 1 to ${count ?? "the last page"}.`, { fields: { decisions: "No such page." } });
+            throw new AppError("invalid", `Step ${r.stepNumber}: choose a page from 1 to ${count ?? "the last page"}.`, {
+              fields: { decisions: "No such page." },
+            });
           }
           page = decision.page;
         }
@@ -135,17 +174,30 @@ export async function applyRechecks({ actor, cardId, decisions }: { actor: Actor
           if (page === null) step.references.splice(index, 1);
           else step.references[index] = { revisionId: r.revisionId, page, quote: old.quote };
           // The same page cited twice on a step after relinking is cited once.
-          step.references = step.references.filter((ref, k, all) => all.findIndex((o) => o.revisionId === ref.revisionId && o.page === ref.page) === k);
+          step.references = step.references.filter(
+            (ref, k, all) => all.findIndex((o) => o.revisionId === ref.revisionId && o.page === ref.page) === k,
+          );
         }
-        outcomes.push({ id: r.id, outcome: decision.action === "accept" ? "accepted" : decision.action === "relink" ? "relinked" : "dropped", page });
+        outcomes.push({
+          id: r.id,
+          outcome: decision.action === "accept" ? "accepted" : decision.action === "relink" ? "relinked" : "dropped",
+          page,
+        });
       }
 
       // Unchanged pages of the old revision follow the card to the new revision. (No recheck is
       // ever about an unchanged page, so these never collide with an open one.)
       for (const revisionId of new Set(rows.map((r) => r.revisionId))) {
         const previousRevisionId = rows.find((r) => r.revisionId === revisionId)!.previousRevisionId;
-        const [comparison] = await tx.select({ pages: revisionComparisons.pages }).from(revisionComparisons).where(eq(revisionComparisons.revisionId, revisionId));
-        const unchanged = new Map(((comparison?.pages ?? []) as PageChange[]).filter((p) => p.status === "unchanged" && p.oldPage).map((p) => [p.oldPage!, p.newPage!]));
+        const [comparison] = await tx
+          .select({ pages: revisionComparisons.pages })
+          .from(revisionComparisons)
+          .where(eq(revisionComparisons.revisionId, revisionId));
+        const unchanged = new Map(
+          ((comparison?.pages ?? []) as PageChange[])
+            .filter((p) => p.status === "unchanged" && p.oldPage)
+            .map((p) => [p.oldPage!, p.newPage!]),
+        );
         for (const step of content.steps) {
           step.references = step.references.map((ref) =>
             ref.revisionId === previousRevisionId && unchanged.has(ref.page) ? { ...ref, revisionId, page: unchanged.get(ref.page)! } : ref,
@@ -160,7 +212,13 @@ export async function applyRechecks({ actor, cardId, decisions }: { actor: Actor
             .set({ outcome: o.outcome, chosenPage: o.page, resolvedBy: actor.id, resolvedAt: new Date(), resultVersionId: draftId })
             .where(eq(citationRechecks.id, o.id));
         }
-        await recordAudit(tx, { actorId: actor.id, action: "card.rechecked", subjectType: "task_card", subjectId: cardId, details: { decisions: outcomes.length } });
+        await recordAudit(tx, {
+          actorId: actor.id,
+          action: "card.rechecked",
+          subjectType: "task_card",
+          subjectId: cardId,
+          details: { decisions: outcomes.length },
+        });
       };
     },
   });

@@ -28,19 +28,30 @@ export async function createAssignment({ actor, input }: { actor: Actor; input: 
       .innerJoin(taskCards, eq(taskCards.id, taskCardVersions.cardId))
       .where(and(eq(taskCardVersions.cardId, input.cardId), eq(taskCardVersions.status, "published")))
       .orderBy(desc(taskCardVersions.number));
-    if (!published.length) throw new AppError("invalid", "That card has no published version to assign.", { fields: { cardId: "Publish the card first." } });
-    if (published[0]!.archivedAt) throw new AppError("invalid", "That card is archived.", { fields: { cardId: "Archived cards cannot be assigned." } });
+    if (!published.length)
+      throw new AppError("invalid", "That card has no published version to assign.", { fields: { cardId: "Publish the card first." } });
+    if (published[0]!.archivedAt)
+      throw new AppError("invalid", "That card is archived.", { fields: { cardId: "Archived cards cannot be assigned." } });
     const version = input.versionNumber ? published.find((v) => v.number === input.versionNumber) : published[0];
-    if (!version) throw new AppError("invalid", `Version ${input.versionNumber} of that card is not published.`, { fields: { versionNumber: "Not a published version." } });
+    if (!version)
+      throw new AppError("invalid", `Version ${input.versionNumber} of that card is not published.`, {
+        fields: { versionNumber: "Not a published version." },
+      });
 
     const studentIds = new Set<string>();
     if (input.classId) {
       const [found] = await tx.select({ id: classes.id }).from(classes).where(eq(classes.id, input.classId));
       const member = can(actor, "classes:view-all")
         ? true
-        : (await tx.select({ u: classMembers.userId }).from(classMembers).where(and(eq(classMembers.classId, input.classId), eq(classMembers.userId, actor.id)))).length > 0;
+        : (
+            await tx
+              .select({ u: classMembers.userId })
+              .from(classMembers)
+              .where(and(eq(classMembers.classId, input.classId), eq(classMembers.userId, actor.id)))
+          ).length > 0;
       // An instructor outside the class learns nothing about it, as on the class pages.
-      if (!found || !member) throw new AppError("invalid", "That class was not found among yours.", { fields: { classId: "Not one of your classes." } });
+      if (!found || !member)
+        throw new AppError("invalid", "That class was not found among yours.", { fields: { classId: "Not one of your classes." } });
       const members = await tx
         .select({ id: users.id })
         .from(classMembers)
@@ -53,18 +64,32 @@ export async function createAssignment({ actor, input }: { actor: Actor; input: 
         .select({ id: users.id })
         .from(users)
         .where(and(inArray(users.id, input.studentIds), eq(users.role, "student"), ne(users.status, "deactivated")));
-      const mine = await assignableStudents(tx, actor, named.map((n) => n.id));
+      const mine = await assignableStudents(
+        tx,
+        actor,
+        named.map((n) => n.id),
+      );
       // Someone else's student is answered like a stranger: an instructor learns nothing of other classes.
       if (named.length !== new Set(input.studentIds).size || mine.size !== named.length) {
-        throw new AppError("invalid", "Some of the people chosen are not active students of your classes.", { fields: { studentIds: "Only active students of your classes can be assigned." } });
+        throw new AppError("invalid", "Some of the people chosen are not active students of your classes.", {
+          fields: { studentIds: "Only active students of your classes can be assigned." },
+        });
       }
       named.forEach((m) => studentIds.add(m.id));
     }
-    if (!studentIds.size) throw new AppError("invalid", "That class has no active students yet.", { fields: { classId: "No students in it." } });
+    if (!studentIds.size)
+      throw new AppError("invalid", "That class has no active students yet.", { fields: { classId: "No students in it." } });
 
     const [assignment] = await tx
       .insert(assignments)
-      .values({ cardId: input.cardId, versionId: version.id, classId: input.classId, dueOn: input.dueOn, note: input.note, assignedBy: actor.id })
+      .values({
+        cardId: input.cardId,
+        versionId: version.id,
+        classId: input.classId,
+        dueOn: input.dueOn,
+        note: input.note,
+        assignedBy: actor.id,
+      })
       .returning({ id: assignments.id });
     const made = await tx
       .insert(runs)
@@ -98,7 +123,10 @@ export async function listAssignments({ actor, cardId }: { actor: Actor; cardId?
       note: assignments.note,
       assignedByName: users.name,
       createdAt: assignments.createdAt,
-      counts: sql<Record<RunStatus, number> | null>`(select jsonb_object_agg(s.status, s.n) from (select status, count(*)::int as n from runs r where r.assignment_id = ${assignments.id} group by status) s)`,
+      counts: sql<Record<
+        RunStatus,
+        number
+      > | null>`(select jsonb_object_agg(s.status, s.n) from (select status, count(*)::int as n from runs r where r.assignment_id = ${assignments.id} group by status) s)`,
     })
     .from(assignments)
     .innerJoin(taskCardVersions, eq(taskCardVersions.id, assignments.versionId))

@@ -11,14 +11,19 @@ import type { RunEventInput } from "@/lib/domain/validation/runs";
 import { type RunEvent, type RunState } from "@/lib/domain/runs/fold";
 import { loadRun, stepsOnly, foldStored } from "@/lib/server/runs/queries";
 
-export const signedOffConflict = () => new AppError("conflict", "This run is signed off. Its record cannot change; ask your instructor to assign the card again.");
+export const signedOffConflict = () =>
+  new AppError("conflict", "This run is signed off. Its record cannot change; ask your instructor to assign the card again.");
 
 export const reviewEventTypes = new Set(["inspection.bought_off", "run.returned", "run.signed_off"]);
 
 /** Stores what the fold says back onto the run row, for lists and queues. */
 export async function writeFold(tx: Tx, runId: string, state: RunState, events: RunEvent[]) {
   const times = events.map((e) => e.clientTime).sort();
-  const submitted = events.filter((e) => e.type === "run.submitted").map((e) => e.clientTime).sort().at(-1);
+  const submitted = events
+    .filter((e) => e.type === "run.submitted")
+    .map((e) => e.clientTime)
+    .sort()
+    .at(-1);
   await tx
     .update(runs)
     .set({
@@ -39,7 +44,15 @@ export function isSignedOffError(error: unknown) {
  * as a duplicate and nothing changes, so a cart may re-send a batch whose answer it never got, even
  * after sign-off. New events on a signed-off run are refused (409), here and by the database.
  */
-export async function appendEvents({ actor, runId, events }: { actor: Actor; runId: string; events: RunEventInput[] }): Promise<EventBatchResultDto> {
+export async function appendEvents({
+  actor,
+  runId,
+  events,
+}: {
+  actor: Actor;
+  runId: string;
+  events: RunEventInput[];
+}): Promise<EventBatchResultDto> {
   try {
     return await getDb().transaction(async (tx) => {
       const run = await loadRun(tx, actor, runId, { lock: true });
@@ -57,9 +70,20 @@ export async function appendEvents({ actor, runId, events }: { actor: Actor; run
         // and the transaction's start time (the column default) can be earlier than a batch that
         // held the lock first.
         const serverTime = await receiptTime(tx, runId);
-        await tx.insert(runEvents).values(
-          fresh.map((e) => ({ id: e.id, runId, userId: actor.id, type: e.type, stepId: e.stepId, payload: e.payload, clientTime: new Date(e.clientTime), serverTime })),
-        );
+        await tx
+          .insert(runEvents)
+          .values(
+            fresh.map((e) => ({
+              id: e.id,
+              runId,
+              userId: actor.id,
+              type: e.type,
+              stepId: e.stepId,
+              payload: e.payload,
+              clientTime: new Date(e.clientTime),
+              serverTime,
+            })),
+          );
       }
       if (!fresh.length) return { stored: 0, duplicates: events.length, status: run.status };
       const { events: all, state } = await foldStored(tx, runId, await stepsOnly(tx, run.versionId));
@@ -69,7 +93,8 @@ export async function appendEvents({ actor, runId, events }: { actor: Actor; run
   } catch (error) {
     if (isSignedOffError(error)) throw signedOffConflict();
     // Two runs sent an event with the same new id at the same moment.
-    if (databaseErrorCode(error) === "23505") throw new AppError("conflict", "An event id in this batch is already used. Each event needs its own id.");
+    if (databaseErrorCode(error) === "23505")
+      throw new AppError("conflict", "An event id in this batch is already used. Each event needs its own id.");
     throw error;
   }
 }

@@ -34,27 +34,51 @@ export async function packetFor(db: Db | Tx, version: CardVersionDto): Promise<P
   if (!cited.length) return { pages: [], keepOnCarts: [], hash: "" };
   const revisionIds = [...new Set(cited.map((c) => c.revisionId))];
   const described = await db
-    .select({ id: revisions.id, label: revisions.label, manualId: manuals.id, manualTitle: manuals.title, keepOnCarts: manuals.keepOnCarts })
+    .select({
+      id: revisions.id,
+      label: revisions.label,
+      manualId: manuals.id,
+      manualTitle: manuals.title,
+      keepOnCarts: manuals.keepOnCarts,
+    })
     .from(revisions)
     .innerJoin(manuals, eq(manuals.id, revisions.manualId))
     .where(inArray(revisions.id, revisionIds));
   const texts = await db
     .select({ revisionId: pages.revisionId, page: pages.pageNumber, text: pages.text })
     .from(pages)
-    .where(and(inArray(pages.revisionId, revisionIds), sql`(${pages.revisionId}::text || ':' || ${pages.pageNumber}) = any(${`{${[...seen].join(",")}}`}::text[])`));
+    .where(
+      and(
+        inArray(pages.revisionId, revisionIds),
+        sql`(${pages.revisionId}::text || ':' || ${pages.pageNumber}) = any(${`{${[...seen].join(",")}}`}::text[])`,
+      ),
+    );
   const textOf = new Map(texts.map((t) => [`${t.revisionId}:${t.page}`, t.text]));
   const byId = new Map(described.map((d) => [d.id, d]));
   const planned = cited
     .filter((c) => byId.has(c.revisionId))
     .map((c, i): PacketPageDto => {
       const d = byId.get(c.revisionId)!;
-      return { manualId: d.manualId, manualTitle: d.manualTitle, revisionId: c.revisionId, revisionLabel: d.label, page: c.page, packetPage: i + 1, text: textOf.get(`${c.revisionId}:${c.page}`) ?? "" };
+      return {
+        manualId: d.manualId,
+        manualTitle: d.manualTitle,
+        revisionId: c.revisionId,
+        revisionLabel: d.label,
+        page: c.page,
+        packetPage: i + 1,
+        text: textOf.get(`${c.revisionId}:${c.page}`) ?? "",
+      };
     });
-  const hash = createHash("sha256").update(planned.map((p) => `${p.revisionId}:${p.page}`).join(",")).digest("hex").slice(0, 40);
+  const hash = createHash("sha256")
+    .update(planned.map((p) => `${p.revisionId}:${p.page}`).join(","))
+    .digest("hex")
+    .slice(0, 40);
   return {
     pages: planned,
     hash,
-    keepOnCarts: described.filter((d) => d.keepOnCarts).map((d) => ({ revisionId: d.id, manualTitle: d.manualTitle, url: `/api/revisions/${d.id}/file` })),
+    keepOnCarts: described
+      .filter((d) => d.keepOnCarts)
+      .map((d) => ({ revisionId: d.id, manualTitle: d.manualTitle, url: `/api/revisions/${d.id}/file` })),
   };
 }
 
@@ -79,7 +103,10 @@ export async function packetBytes(db: Db | Tx, plan: PacketPlan): Promise<Uint8A
   for (const file of files) {
     const source = await PDFDocument.load(await readAll((await store.get(file.fileKey)).body), { updateMetadata: false });
     const wanted = plan.pages.filter((p) => p.revisionId === file.id);
-    const pagesCopied = await out.copyPages(source, wanted.map((p) => p.page - 1));
+    const pagesCopied = await out.copyPages(
+      source,
+      wanted.map((p) => p.page - 1),
+    );
     wanted.forEach((p, i) => copied.set(`${p.revisionId}:${p.page}`, pagesCopied[i]!));
   }
   // Pages go in packet order, whatever revision they came from.

@@ -18,7 +18,9 @@ import { reviewEventTypes } from "@/lib/server/runs/events";
 const runNotFound = () => new AppError("not_found", "That run was not found.");
 
 function workItemQuery(db: Db | Tx) {
-  const newest = sql<number | null>`(select max(v.number) from task_card_versions v where v.card_id = ${taskCardVersions.cardId} and v.status = 'published')`;
+  const newest = sql<
+    number | null
+  >`(select max(v.number) from task_card_versions v where v.card_id = ${taskCardVersions.cardId} and v.status = 'published')`;
   return db
     .select({
       runId: runs.id,
@@ -66,7 +68,10 @@ export async function listMyWork({ actor }: { actor: Actor }): Promise<WorkItemD
 
 /** Runs waiting for an instructor: submitted ones, oldest first, and inspection points waiting on a cart. */
 export async function listReviewQueue({ actor, status = "submitted" }: { actor: Actor; status?: RunStatus }): Promise<WorkItemDto[]> {
-  const rows = await workItemQuery(getDb()).where(and(eq(runs.status, status), reviewScope(actor))).orderBy(asc(runs.submittedAt), asc(runs.lastEventAt)).limit(500);
+  const rows = await workItemQuery(getDb())
+    .where(and(eq(runs.status, status), reviewScope(actor)))
+    .orderBy(asc(runs.submittedAt), asc(runs.lastEventAt))
+    .limit(500);
   return rows.map(toWorkItem);
 }
 
@@ -87,7 +92,12 @@ export async function loadRun(db: Db | Tx, actor: Actor, runId: string, { lock =
 }
 
 function stepsForFold(version: Pick<CardVersionDto, "steps">): CardStepForRun[] {
-  return version.steps.map((s) => ({ id: s.id, inspectionPoint: s.inspectionPoint, measurement: s.measurement, timerMinutes: s.timerMinutes }));
+  return version.steps.map((s) => ({
+    id: s.id,
+    inspectionPoint: s.inspectionPoint,
+    measurement: s.measurement,
+    timerMinutes: s.timerMinutes,
+  }));
 }
 
 /** Only the steps, for folding: the full version (manual titles, rechecks) is not needed to store events. */

@@ -17,7 +17,10 @@ const noSubject = "No subject";
 export async function studentRecord({ actor, studentId }: { actor: Actor; studentId: string }): Promise<StudentRecordDto> {
   const db = getDb();
   if (!(await readsRecordOf(db, actor, studentId))) throw new AppError("not_found", "That record was not found.");
-  const [student] = await db.select({ id: users.id, name: users.name, email: users.email, role: users.role }).from(users).where(eq(users.id, studentId));
+  const [student] = await db
+    .select({ id: users.id, name: users.name, email: users.email, role: users.role })
+    .from(users)
+    .where(eq(users.id, studentId));
   if (!student || student.role !== "student") throw new AppError("not_found", "That record was not found.");
   const signed = await db
     .select({
@@ -61,7 +64,16 @@ const hours = (minutes: number) => (minutes / 60).toFixed(1);
 
 export function studentRecordCsv(record: StudentRecordDto): string {
   const rows = record.subjects.flatMap((s) =>
-    s.signedOff.map((c) => [record.student.name, s.subjectName, c.title, c.versionNumber, c.signedAt.slice(0, 10), c.instructorName, c.estimatedMinutes != null ? hours(c.estimatedMinutes) : "", hours(c.actualMinutes)]),
+    s.signedOff.map((c) => [
+      record.student.name,
+      s.subjectName,
+      c.title,
+      c.versionNumber,
+      c.signedAt.slice(0, 10),
+      c.instructorName,
+      c.estimatedMinutes != null ? hours(c.estimatedMinutes) : "",
+      hours(c.actualMinutes),
+    ]),
   );
   return toCsv(["Student", "Subject", "Task card", "Version", "Signed off", "Instructor", "Estimated hours", "Actual hours"], rows);
 }
@@ -70,15 +82,26 @@ export async function studentRecordPdf(record: StudentRecordDto, printedAt = new
   const doc = await PDFDocument.create();
   doc.setTitle(`Training record: ${record.student.name}`);
   doc.setProducer("Hangarleaf");
-  const w = new CardWriter(doc, await doc.embedFont(StandardFonts.Helvetica), await doc.embedFont(StandardFonts.HelveticaBold), `Training record of ${record.student.name} - printed ${printedAt.toISOString().slice(0, 10)}`);
+  const w = new CardWriter(
+    doc,
+    await doc.embedFont(StandardFonts.Helvetica),
+    await doc.embedFont(StandardFonts.HelveticaBold),
+    `Training record of ${record.student.name} - printed ${printedAt.toISOString().slice(0, 10)}`,
+  );
   w.text("TRAINING RECORD", { size: 9, bold: true, color: grey });
   w.text(record.student.name, { size: 17, bold: true });
-  w.text(`${record.totals.signedOff} task cards signed off · estimated ${hours(record.totals.estimatedMinutes)} h · actual ${hours(record.totals.actualMinutes)} h`, { size: 10, color: grey });
+  w.text(
+    `${record.totals.signedOff} task cards signed off · estimated ${hours(record.totals.estimatedMinutes)} h · actual ${hours(record.totals.actualMinutes)} h`,
+    { size: 10, color: grey },
+  );
   w.gap(8);
   for (const subject of record.subjects) {
     w.text(subject.subjectName, { size: 13, bold: true });
     for (const c of subject.signedOff) {
-      w.text(`${c.title} (version ${c.versionNumber}) - signed off ${c.signedAt.slice(0, 10)} by ${c.instructorName}; ${c.estimatedMinutes != null ? `estimated ${hours(c.estimatedMinutes)} h, ` : ""}actual ${hours(c.actualMinutes)} h`, { indent: 12 });
+      w.text(
+        `${c.title} (version ${c.versionNumber}) - signed off ${c.signedAt.slice(0, 10)} by ${c.instructorName}; ${c.estimatedMinutes != null ? `estimated ${hours(c.estimatedMinutes)} h, ` : ""}actual ${hours(c.actualMinutes)} h`,
+        { indent: 12 },
+      );
     }
     w.gap(6);
   }
@@ -86,7 +109,10 @@ export async function studentRecordPdf(record: StudentRecordDto, printedAt = new
   if (record.open.length || record.returned.length) {
     w.gap(6);
     w.text("Open and returned runs", { size: 13, bold: true });
-    for (const r of [...record.returned, ...record.open]) w.text(`${r.title} (version ${r.versionNumber}): ${r.workStatus.replace("_", " ")}${r.dueOn ? `, due ${r.dueOn}` : ""}`, { indent: 12 });
+    for (const r of [...record.returned, ...record.open])
+      w.text(`${r.title} (version ${r.versionNumber}): ${r.workStatus.replace("_", " ")}${r.dueOn ? `, due ${r.dueOn}` : ""}`, {
+        indent: 12,
+      });
   }
   w.finish();
   return doc.save();
@@ -96,7 +122,15 @@ export async function studentRecordPdf(record: StudentRecordDto, printedAt = new
 export async function classRecord({ actor, classId }: { actor: Actor; classId: string }): Promise<ClassRecordDto> {
   const db = getDb();
   const [klass] = await db.select({ id: classes.id, name: classes.name }).from(classes).where(eq(classes.id, classId));
-  const member = klass && (can(actor, "classes:view-all") || (await db.select().from(classMembers).where(and(eq(classMembers.classId, classId), eq(classMembers.userId, actor.id)))).length > 0);
+  const member =
+    klass &&
+    (can(actor, "classes:view-all") ||
+      (
+        await db
+          .select()
+          .from(classMembers)
+          .where(and(eq(classMembers.classId, classId), eq(classMembers.userId, actor.id)))
+      ).length > 0);
   if (!klass || !member || !can(actor, "records:view-all")) throw new AppError("not_found", "That class was not found.");
   const students = await db
     .select({ id: users.id, name: users.name })

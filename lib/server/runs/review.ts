@@ -18,9 +18,18 @@ import { loadRun, foldStored } from "@/lib/server/runs/queries";
  * A review event made on the server, at the server's time: the fold places it after everything
  * received before it, so a cart whose clock runs fast cannot have earlier work folded in after it.
  */
-async function appendReviewEvent(tx: Tx, actor: Actor, runId: string, type: "run.returned" | "run.signed_off" | "inspection.bought_off", stepId: string | null, payload: Record<string, unknown>) {
+async function appendReviewEvent(
+  tx: Tx,
+  actor: Actor,
+  runId: string,
+  type: "run.returned" | "run.signed_off" | "inspection.bought_off",
+  stepId: string | null,
+  payload: Record<string, unknown>,
+) {
   const serverTime = await receiptTime(tx, runId);
-  await tx.insert(runEvents).values({ id: crypto.randomUUID(), runId, userId: actor.id, type, stepId, payload, clientTime: serverTime, serverTime });
+  await tx
+    .insert(runEvents)
+    .values({ id: crypto.randomUUID(), runId, userId: actor.id, type, stepId, payload, clientTime: serverTime, serverTime });
 }
 
 async function reviewContext(tx: Tx, actor: Actor, runId: string) {
@@ -34,9 +43,13 @@ export async function buyOff({ actor, runId, stepId }: { actor: Actor; runId: st
   return getDb().transaction(async (tx) => {
     const { version, state } = await reviewContext(tx, actor, runId);
     const step = version.steps.find((s) => s.id === stepId);
-    if (!step?.inspectionPoint) throw new AppError("invalid", "That step is not an inspection point of this card.", { fields: { stepId: "Not an inspection point." } });
+    if (!step?.inspectionPoint)
+      throw new AppError("invalid", "That step is not an inspection point of this card.", {
+        fields: { stepId: "Not an inspection point." },
+      });
     if (state.steps[stepId]?.boughtOff) throw new AppError("conflict", "That inspection point is already bought off.");
-    if (!state.steps[stepId]?.checked) throw new AppError("invalid", "The student has not done that step yet.", { fields: { stepId: "Not done yet." } });
+    if (!state.steps[stepId]?.checked)
+      throw new AppError("invalid", "The student has not done that step yet.", { fields: { stepId: "Not done yet." } });
     await appendReviewEvent(tx, actor, runId, "inspection.bought_off", stepId, {});
     const after = await foldStored(tx, runId, version);
     await writeFold(tx, runId, after.state, after.events);
@@ -61,7 +74,12 @@ export async function returnRun({ actor, runId, comment }: { actor: Actor; runId
 function revisionsCitedBy(version: CardVersionDto): SignOffDto["revisionsCited"] {
   const byRevision = new Map<string, SignOffDto["revisionsCited"][number]>();
   for (const ref of version.steps.flatMap((s) => s.references)) {
-    const entry = byRevision.get(ref.revisionId) ?? { revisionId: ref.revisionId, manualTitle: ref.manualTitle, label: ref.revisionLabel, pages: [] };
+    const entry = byRevision.get(ref.revisionId) ?? {
+      revisionId: ref.revisionId,
+      manualTitle: ref.manualTitle,
+      label: ref.revisionLabel,
+      pages: [],
+    };
     if (!entry.pages.includes(ref.page)) entry.pages.push(ref.page);
     byRevision.set(ref.revisionId, entry);
   }
@@ -85,7 +103,10 @@ export async function signOffRun({ actor, runId, comment }: { actor: Actor; runI
       const { run, version, state, events } = await reviewContext(tx, actor, runId);
       if (state.status !== "submitted") throw new AppError("conflict", "Only a submitted run can be signed off.");
       const waiting = version.steps.findIndex((s) => s.inspectionPoint && !state.steps[s.id]?.boughtOff);
-      if (waiting >= 0) throw new AppError("invalid", `Buy off the inspection point at step ${waiting + 1} before signing off.`, { fields: { stepId: "Inspection point not bought off." } });
+      if (waiting >= 0)
+        throw new AppError("invalid", `Buy off the inspection point at step ${waiting + 1} before signing off.`, {
+          fields: { stepId: "Inspection point not bought off." },
+        });
       const unchecked = version.steps.findIndex((s) => !state.steps[s.id]?.checked);
       if (unchecked >= 0) throw new AppError("invalid", `Step ${unchecked + 1} is not done. Return the run instead.`);
       await appendReviewEvent(tx, actor, runId, "run.signed_off", null, { comment });
@@ -98,7 +119,12 @@ export async function signOffRun({ actor, runId, comment }: { actor: Actor; runI
         action: "run.signed_off",
         subjectType: "run",
         subjectId: runId,
-        details: { studentId: run.studentId, title: version.title, version: version.number, revisions: revisionsCited.map((r) => `${r.manualTitle} ${r.label}`) },
+        details: {
+          studentId: run.studentId,
+          title: version.title,
+          version: version.number,
+          revisions: revisionsCited.map((r) => `${r.manualTitle} ${r.label}`),
+        },
       });
       return { status: "signed_off" as const };
     });

@@ -50,7 +50,10 @@ export async function assignableStudents(db: Db | Tx, actor: Actor, studentIds: 
   if (!studentIds.length) return new Set();
   const result = await db.execute<{ id: string }>(
     sql`select user_id as id from class_members where class_id in (select class_id from class_members where user_id = ${actor.id})
-        and user_id in (${sql.join(studentIds.map((id) => sql`${id}::uuid`), sql`, `)})`,
+        and user_id in (${sql.join(
+          studentIds.map((id) => sql`${id}::uuid`),
+          sql`, `,
+        )})`,
   );
   return new Set(result.rows.map((r) => r.id));
 }

@@ -82,4 +82,3 @@ export function s3Store(options: S3Options): ObjectStore {
   };
   return store;
 }
-

@@ -1,8 +1,14 @@
 "use client";
 
 import {
-  createColumnHelper, getCoreRowModel, getFilteredRowModel, getPaginationRowModel,
-  getSortedRowModel, useReactTable, type ColumnFiltersState, type SortingState,
+  createColumnHelper,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getPaginationRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnFiltersState,
+  type SortingState,
 } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import { DataTable } from "@/components/data-table";
@@ -102,7 +108,9 @@ export function AccountsManager({ initialAccounts, currentUserId }: { initialAcc
                 <button
                   type="button"
                   className="btn btn-secondary btn-small"
-                  onClick={() => void report(update.mutateAsync({ id: account.id, status: "active" }), `${account.name} can sign in again.`)}
+                  onClick={() =>
+                    void report(update.mutateAsync({ id: account.id, status: "active" }), `${account.name} can sign in again.`)
+                  }
                 >
                   Reactivate
                 </button>
@@ -159,11 +167,17 @@ export function AccountsManager({ initialAccounts, currentUserId }: { initialAcc
       <section aria-labelledby="accounts-title" className="panel flex flex-col gap-4">
         <h2 id="accounts-title">Everyone</h2>
         <div aria-live="polite">
-          {message ? <p className={message.ok ? "notice-ok" : "notice-error"} role="status">{message.text}</p> : null}
+          {message ? (
+            <p className={message.ok ? "notice-ok" : "notice-error"} role="status">
+              {message.text}
+            </p>
+          ) : null}
         </div>
         <div className="grid gap-3 md:grid-cols-[2fr_1fr_1fr]">
           <div className="field">
-            <label htmlFor="accounts-search" className="label">Find</label>
+            <label htmlFor="accounts-search" className="label">
+              Find
+            </label>
             <input
               id="accounts-search"
               className="input"
@@ -174,20 +188,33 @@ export function AccountsManager({ initialAccounts, currentUserId }: { initialAcc
             />
           </div>
           <div className="field">
-            <label htmlFor="accounts-role" className="label">Role</label>
+            <label htmlFor="accounts-role" className="label">
+              Role
+            </label>
             <select id="accounts-role" className="input" value={filterValue("role")} onChange={(e) => setFilter("role", e.target.value)}>
               <option value="">All roles</option>
               {roles.map((r) => (
-                <option key={r} value={r}>{roleLabels[r]}</option>
+                <option key={r} value={r}>
+                  {roleLabels[r]}
+                </option>
               ))}
             </select>
           </div>
           <div className="field">
-            <label htmlFor="accounts-status" className="label">Status</label>
-            <select id="accounts-status" className="input" value={filterValue("status")} onChange={(e) => setFilter("status", e.target.value)}>
+            <label htmlFor="accounts-status" className="label">
+              Status
+            </label>
+            <select
+              id="accounts-status"
+              className="input"
+              value={filterValue("status")}
+              onChange={(e) => setFilter("status", e.target.value)}
+            >
               <option value="">Any status</option>
               {statusesOf("account").map((value) => (
-                <option key={value} value={value}>{statusLabel("account", value)}</option>
+                <option key={value} value={value}>
+                  {statusLabel("account", value)}
+                </option>
               ))}
             </select>
           </div>
@@ -202,10 +229,20 @@ export function AccountsManager({ initialAccounts, currentUserId }: { initialAcc
             {isFetching ? " · updating…" : ""}
           </span>
           <span className="ml-auto flex gap-2">
-            <button type="button" className="btn btn-secondary btn-small" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
+            <button
+              type="button"
+              className="btn btn-secondary btn-small"
+              onClick={() => table.previousPage()}
+              disabled={!table.getCanPreviousPage()}
+            >
               Previous page
             </button>
-            <button type="button" className="btn btn-secondary btn-small" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
+            <button
+              type="button"
+              className="btn btn-secondary btn-small"
+              onClick={() => table.nextPage()}
+              disabled={!table.getCanNextPage()}
+            >
               Next page
             </button>
           </span>

@@ -26,9 +26,7 @@ export function CreateAccountForm() {
       setResult({
         ok: true,
         message:
-          user.status === "invited"
-            ? `Invitation sent to ${user.email}.`
-            : `Account for ${user.email} created with the password you gave.`,
+          user.status === "invited" ? `Invitation sent to ${user.email}.` : `Account for ${user.email} created with the password you gave.`,
       });
       form.reset({ name: "", email: "", role: values.role, password: "" });
     } catch (error) {

@@ -19,7 +19,9 @@ export default async function CalculatorPage({ params }: { params: Promise<{ slu
   return (
     <div className="flex max-w-4xl flex-col gap-5">
       <nav aria-label="Breadcrumb">
-        <Link href="/calculators" className="inline-flex min-h-11 items-center">Calculators</Link>
+        <Link href="/calculators" className="inline-flex min-h-11 items-center">
+          Calculators
+        </Link>
       </nav>
       <h1>{calculators[slug].title}</h1>
       <p>{calculators[slug].summary}</p>

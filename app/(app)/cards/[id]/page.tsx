@@ -13,8 +13,13 @@ import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Task card" };
 
-
-export default async function CardPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ v?: string }> }) {
+export default async function CardPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<{ v?: string }>;
+}) {
   const { id } = await params;
   const { v } = await searchParams;
   const user = await requirePageUser("cards:view", `/cards/${id}`);
@@ -30,7 +35,9 @@ export default async function CardPage({ params, searchParams }: { params: Promi
   return (
     <div className="flex flex-col gap-5">
       <nav aria-label="Breadcrumb">
-        <Link href="/cards" className="inline-flex min-h-11 items-center">Task cards</Link>
+        <Link href="/cards" className="inline-flex min-h-11 items-center">
+          Task cards
+        </Link>
       </nav>
       {card.archivedAt ? <p className="notice-error">This card is archived: it is not offered for new work.</p> : null}
       {author && card.openRechecks > 0 ? (
@@ -59,7 +66,9 @@ export default async function CardPage({ params, searchParams }: { params: Promi
       {author ? (
         <section className="panel flex flex-col gap-3" aria-label="Card versions and actions">
           <CardActions card={card} />
-          {card.ownerId === user.id || can(user, "cards:edit-any") ? <CoauthorsForm card={card} colleagues={await listColleagues()} /> : null}
+          {card.ownerId === user.id || can(user, "cards:edit-any") ? (
+            <CoauthorsForm card={card} colleagues={await listColleagues()} />
+          ) : null}
           <div>
             <h2 className="text-base font-bold">Versions</h2>
             <ul className="flex flex-wrap gap-2">
@@ -75,7 +84,11 @@ export default async function CardPage({ params, searchParams }: { params: Promi
                 </li>
               ))}
             </ul>
-            <p className="hint mt-1">Owner: {card.ownerName ?? "nobody"}{card.coauthors.length ? ` · co-authors: ${card.coauthors.map((c) => c.name).join(", ")}` : ""}{shown.publishedByName ? ` · published by ${shown.publishedByName}` : ""}</p>
+            <p className="hint mt-1">
+              Owner: {card.ownerName ?? "nobody"}
+              {card.coauthors.length ? ` · co-authors: ${card.coauthors.map((c) => c.name).join(", ")}` : ""}
+              {shown.publishedByName ? ` · published by ${shown.publishedByName}` : ""}
+            </p>
           </div>
         </section>
       ) : null}

@@ -41,11 +41,18 @@ export function AssignForm({ cardId, versions, classes, students }: Props) {
               note,
             },
           });
-          setResult({ ok: true, text: `Assigned: ${assignment.runs} ${assignment.runs === 1 ? "student has" : "students have"} it in their work.` });
+          setResult({
+            ok: true,
+            text: `Assigned: ${assignment.runs} ${assignment.runs === 1 ? "student has" : "students have"} it in their work.`,
+          });
           router.refresh();
         } catch (error) {
           // The field's own words ("Choose a class…"), not the API's "classId: …" form.
-          setResult(error instanceof ApiError ? { ok: false, text: Object.values(error.fields)[0] ?? error.message, fields: error.fields } : { ok: false, text: "That did not work." });
+          setResult(
+            error instanceof ApiError
+              ? { ok: false, text: Object.values(error.fields)[0] ?? error.message, fields: error.fields }
+              : { ok: false, text: "That did not work." },
+          );
         } finally {
           setBusy(false);
         }
@@ -54,7 +61,15 @@ export function AssignForm({ cardId, versions, classes, students }: Props) {
       <fieldset className="flex flex-col gap-2">
         <legend className="label">Give it to</legend>
         <label className="flex min-h-11 items-center gap-2">
-          <input type="radio" name="to" checked={to === "class"} onChange={() => setTo("class")} disabled={!classes.length} className="size-5" /> A whole class
+          <input
+            type="radio"
+            name="to"
+            checked={to === "class"}
+            onChange={() => setTo("class")}
+            disabled={!classes.length}
+            className="size-5"
+          />{" "}
+          A whole class
         </label>
         {to === "class" ? (
           <select aria-label="Class" className="input max-w-md" value={classId} onChange={(e) => setClassId(e.target.value)}>
@@ -76,12 +91,14 @@ export function AssignForm({ cardId, versions, classes, students }: Props) {
                   type="checkbox"
                   className="size-5"
                   checked={chosen.has(s.id)}
-                  onChange={(e) => setChosen((old) => {
-                    const next = new Set(old);
-                    if (e.target.checked) next.add(s.id);
-                    else next.delete(s.id);
-                    return next;
-                  })}
+                  onChange={(e) =>
+                    setChosen((old) => {
+                      const next = new Set(old);
+                      if (e.target.checked) next.add(s.id);
+                      else next.delete(s.id);
+                      return next;
+                    })
+                  }
                 />
                 {s.name} <span className="text-ink-soft">({s.className})</span>
               </label>
@@ -107,7 +124,14 @@ export function AssignForm({ cardId, versions, classes, students }: Props) {
           <label htmlFor="assign-due" className="label">
             Due date (optional)
           </label>
-          <input id="assign-due" type="date" className="input" value={dueOn} onChange={(e) => setDueOn(e.target.value)} aria-invalid={!!result?.fields?.dueOn} />
+          <input
+            id="assign-due"
+            type="date"
+            className="input"
+            value={dueOn}
+            onChange={(e) => setDueOn(e.target.value)}
+            aria-invalid={!!result?.fields?.dueOn}
+          />
           {result?.fields?.dueOn ? <span className="field-error">{result.fields.dueOn}</span> : null}
         </div>
         <div className="field">

@@ -27,7 +27,8 @@ export function CardActions({ card }: { card: CardDto }) {
     <div className="flex flex-col gap-3">
       {card.canEdit ? null : (
         <p className="hint">
-          {card.ownerName ?? "Another author"} owns this card: only the owner, the co-authors they name or an admin can change it. Duplicate it to make a card of your own.
+          {card.ownerName ?? "Another author"} owns this card: only the owner, the co-authors they name or an admin can change it. Duplicate
+          it to make a card of your own.
         </p>
       )}
       <div className="flex flex-wrap gap-2">
@@ -37,7 +38,12 @@ export function CardActions({ card }: { card: CardDto }) {
           </Link>
         )}
         {card.draft && !archived && card.canEdit ? (
-          <button type="button" className="btn btn-primary" disabled={action.isPending} onClick={() => void run("publish", `Version ${card.draft!.number} is published.`)}>
+          <button
+            type="button"
+            className="btn btn-primary"
+            disabled={action.isPending}
+            onClick={() => void run("publish", `Version ${card.draft!.number} is published.`)}
+          >
             Publish draft v{card.draft.number}
           </button>
         ) : null}
@@ -45,12 +51,22 @@ export function CardActions({ card }: { card: CardDto }) {
           Duplicate
         </button>
         {card.draft && card.published && !archived && card.canEdit ? (
-          <button type="button" className="btn btn-danger" disabled={action.isPending} onClick={() => void run("discard", "The draft was discarded.")}>
+          <button
+            type="button"
+            className="btn btn-danger"
+            disabled={action.isPending}
+            onClick={() => void run("discard", "The draft was discarded.")}
+          >
             Discard draft
           </button>
         ) : null}
         {card.canEdit ? (
-          <button type="button" className="btn btn-danger" disabled={action.isPending} onClick={() => void run(archived ? "restore" : "archive", archived ? "The card is back in the list." : "The card is archived.")}>
+          <button
+            type="button"
+            className="btn btn-danger"
+            disabled={action.isPending}
+            onClick={() => void run(archived ? "restore" : "archive", archived ? "The card is back in the list." : "The card is archived.")}
+          >
             {archived ? "Bring back from the archive" : "Archive"}
           </button>
         ) : null}

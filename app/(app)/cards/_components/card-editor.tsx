@@ -13,7 +13,8 @@ import { StepEditor, type ManualOption } from "./step-editor";
 import { useSaveDraft } from "./use-cards";
 import { cardsApi } from "@/lib/contracts/endpoints/cards";
 
-type SaveState = { kind: "saved"; at: Date | null } | { kind: "unsaved" } | { kind: "saving" } | { kind: "error"; message: string; conflict: boolean };
+type SaveState =
+  { kind: "saved"; at: Date | null } | { kind: "unsaved" } | { kind: "saving" } | { kind: "error"; message: string; conflict: boolean };
 
 const autosaveDelayMs = 1200;
 
@@ -21,7 +22,17 @@ const autosaveDelayMs = 1200;
  * The card editor: header fields, steps (add, edit, reorder with buttons or the keyboard, remove),
  * autosave of the draft, and a preview that is the student's own view of the card.
  */
-export function CardEditor({ card, subjects, manuals, userId }: { card: CardDto; subjects: SubjectDto[]; manuals: ManualOption[]; userId: string }) {
+export function CardEditor({
+  card,
+  subjects,
+  manuals,
+  userId,
+}: {
+  card: CardDto;
+  subjects: SubjectDto[];
+  manuals: ManualOption[];
+  userId: string;
+}) {
   const router = useRouter();
   const base = (card.draft ?? card.published)!;
   const { control, register, setValue, getValues, subscribe, formState } = useForm<CardForm>({ defaultValues: fromVersion(base) });
@@ -136,10 +147,22 @@ export function CardEditor({ card, subjects, manuals, userId }: { card: CardDto;
     <div className="flex flex-col gap-5">
       <div className="sticky top-0 z-10 flex flex-wrap items-center gap-3 border-b-2 border-line bg-paper py-2">
         <div role="tablist" aria-label="Editor view" className="flex gap-2">
-          <button type="button" role="tab" aria-selected={tab === "edit"} className={`btn ${tab === "edit" ? "btn-primary" : "btn-secondary"}`} onClick={() => setTab("edit")}>
+          <button
+            type="button"
+            role="tab"
+            aria-selected={tab === "edit"}
+            className={`btn ${tab === "edit" ? "btn-primary" : "btn-secondary"}`}
+            onClick={() => setTab("edit")}
+          >
             Edit
           </button>
-          <button type="button" role="tab" aria-selected={tab === "preview"} className={`btn ${tab === "preview" ? "btn-primary" : "btn-secondary"}`} onClick={() => setTab("preview")}>
+          <button
+            type="button"
+            role="tab"
+            aria-selected={tab === "preview"}
+            className={`btn ${tab === "preview" ? "btn-primary" : "btn-secondary"}`}
+            onClick={() => setTab("preview")}
+          >
             Preview as a student
           </button>
         </div>
@@ -183,7 +206,9 @@ export function CardEditor({ card, subjects, manuals, userId }: { card: CardDto;
               <select className="input" {...register("subjectId")}>
                 <option value="">Choose a subject</option>
                 {subjects.map((s) => (
-                  <option key={s.id} value={s.id}>{s.name}</option>
+                  <option key={s.id} value={s.id}>
+                    {s.name}
+                  </option>
                 ))}
               </select>
             </label>

@@ -41,7 +41,11 @@ export interface CardForm {
   steps: StepField[];
 }
 
-const lines = (text: string) => text.split("\n").map((s) => s.trim()).filter(Boolean);
+const lines = (text: string) =>
+  text
+    .split("\n")
+    .map((s) => s.trim())
+    .filter(Boolean);
 const numberOrNull = (text: string) => (text.trim() ? parseNumber(text) : null);
 
 export function emptyStep(): StepField {
@@ -105,7 +109,10 @@ function measurementOf(s: StepField) {
 export function toContent(form: CardForm): CardContentInput {
   return {
     title: form.title,
-    applicability: form.applicability.split(",").map((s) => s.trim()).filter(Boolean),
+    applicability: form.applicability
+      .split(",")
+      .map((s) => s.trim())
+      .filter(Boolean),
     ataChapter: form.ataChapter.trim(),
     subjectId: form.subjectId || null,
     estimatedMinutes: form.estimatedMinutes.trim() ? Math.round(Number(form.estimatedMinutes)) : null,
@@ -142,13 +149,25 @@ export function toPreview(form: CardForm, base: CardVersionDto, subjectName: str
     protectiveEquipment: content.protectiveEquipment ?? [],
     steps: form.steps.map((s): StepDto => {
       const m = measurementOf(s);
-      const usable = m && m.unit && ((m.min ?? null) !== null || (m.max ?? null) !== null || ((m.nominal ?? null) !== null && (m.tolerance ?? null) !== null));
+      const usable =
+        m &&
+        m.unit &&
+        ((m.min ?? null) !== null || (m.max ?? null) !== null || ((m.nominal ?? null) !== null && (m.tolerance ?? null) !== null));
       return {
         id: s.uid,
         text: s.text,
         notices: s.notices.filter((n) => n.text.trim()),
         references: s.references.map((r) => ({ ...r })),
-        measurement: usable ? { label: m.label || "Measured value", unit: m.unit, min: m.min ?? null, max: m.max ?? null, nominal: m.nominal ?? null, tolerance: m.tolerance ?? null } : null,
+        measurement: usable
+          ? {
+              label: m.label || "Measured value",
+              unit: m.unit,
+              min: m.min ?? null,
+              max: m.max ?? null,
+              nominal: m.nominal ?? null,
+              tolerance: m.tolerance ?? null,
+            }
+          : null,
         calculator: s.calculator || null,
         inspectionPoint: s.inspectionPoint,
         timerMinutes: numberOrNull(s.timerMinutes),

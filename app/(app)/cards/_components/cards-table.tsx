@@ -1,8 +1,14 @@
 "use client";
 
 import {
-  createColumnHelper, getCoreRowModel, getFilteredRowModel, getPaginationRowModel, getSortedRowModel, useReactTable,
-  type ColumnFiltersState, type SortingState,
+  createColumnHelper,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getPaginationRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnFiltersState,
+  type SortingState,
 } from "@tanstack/react-table";
 import Link from "next/link";
 import { useMemo, useState } from "react";
@@ -13,7 +19,15 @@ import { useCardList } from "./use-cards";
 
 const column = createColumnHelper<CardSummaryDto>();
 
-export function CardsTable({ initialCards, subjects, author }: { initialCards: CardSummaryDto[]; subjects: SubjectDto[]; author: boolean }) {
+export function CardsTable({
+  initialCards,
+  subjects,
+  author,
+}: {
+  initialCards: CardSummaryDto[];
+  subjects: SubjectDto[];
+  author: boolean;
+}) {
   const [status, setStatus] = useState<CardListStatus | "">("");
   const { data: cards = [], isFetching, error } = useCardList(status, initialCards);
   const [sorting, setSorting] = useState<SortingState>([{ id: "title", desc: false }]);
@@ -42,8 +56,12 @@ export function CardsTable({ initialCards, subjects, author }: { initialCards: C
             <StatusBadge kind="card" status={info.getValue()}>
               {info.getValue() === "published" ? `${statusLabel("card", "published")} v${info.row.original.publishedNumber}` : undefined}
             </StatusBadge>
-            {info.row.original.hasDraft ? <span className="badge bg-amber-pale text-ink">Draft v{info.row.original.latestNumber} open</span> : null}
-            {info.row.original.openRechecks ? <span className="badge bg-danger-pale text-danger">Recheck {info.row.original.openRechecks}</span> : null}
+            {info.row.original.hasDraft ? (
+              <span className="badge bg-amber-pale text-ink">Draft v{info.row.original.latestNumber} open</span>
+            ) : null}
+            {info.row.original.openRechecks ? (
+              <span className="badge bg-danger-pale text-danger">Recheck {info.row.original.openRechecks}</span>
+            ) : null}
           </span>
         ),
       }),
@@ -79,14 +97,21 @@ export function CardsTable({ initialCards, subjects, author }: { initialCards: C
       <div className="panel grid gap-3 sm:grid-cols-2 lg:grid-cols-5" role="search" aria-label="Filter task cards">
         <label className="field lg:col-span-2">
           <span className="label">Title</span>
-          <input className="input" value={filterValue("title")} onChange={(e) => setFilter("title", e.target.value)} placeholder="Search by title" />
+          <input
+            className="input"
+            value={filterValue("title")}
+            onChange={(e) => setFilter("title", e.target.value)}
+            placeholder="Search by title"
+          />
         </label>
         <label className="field">
           <span className="label">Subject</span>
           <select className="input" value={filterValue("subjectName")} onChange={(e) => setFilter("subjectName", e.target.value)}>
             <option value="">All subjects</option>
             {subjects.map((s) => (
-              <option key={s.id} value={s.name}>{s.name}</option>
+              <option key={s.id} value={s.name}>
+                {s.name}
+              </option>
             ))}
           </select>
         </label>
@@ -95,7 +120,9 @@ export function CardsTable({ initialCards, subjects, author }: { initialCards: C
           <select className="input" value={filterValue("ataChapter")} onChange={(e) => setFilter("ataChapter", e.target.value)}>
             <option value="">All</option>
             {chapters.map((c) => (
-              <option key={c} value={c}>{c}</option>
+              <option key={c} value={c}>
+                {c}
+              </option>
             ))}
           </select>
         </label>
@@ -116,16 +143,26 @@ export function CardsTable({ initialCards, subjects, author }: { initialCards: C
         ) : null}
       </div>
       <p id="cards-count" aria-live="polite" className="hint">
-        {error ? "The list could not be loaded. Check the connection." : isFetching ? "Loading…" : `${table.getFilteredRowModel().rows.length} cards`}
+        {error
+          ? "The list could not be loaded. Check the connection."
+          : isFetching
+            ? "Loading…"
+            : `${table.getFilteredRowModel().rows.length} cards`}
       </p>
       <div className="panel overflow-x-auto">
         <DataTable table={table} empty="No task cards match." describedBy="cards-count" />
       </div>
       {table.getPageCount() > 1 ? (
         <div className="flex items-center gap-3">
-          <button type="button" className="btn btn-secondary" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>Previous</button>
-          <span>Page {table.getState().pagination.pageIndex + 1} of {table.getPageCount()}</span>
-          <button type="button" className="btn btn-secondary" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>Next</button>
+          <button type="button" className="btn btn-secondary" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
+            Previous
+          </button>
+          <span>
+            Page {table.getState().pagination.pageIndex + 1} of {table.getPageCount()}
+          </span>
+          <button type="button" className="btn btn-secondary" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
+            Next
+          </button>
         </div>
       ) : null}
     </div>

@@ -37,12 +37,14 @@ export function CoauthorsForm({ card, colleagues }: { card: CardDto; colleagues:
                 type="checkbox"
                 className="h-6 w-6"
                 checked={chosen.has(c.id)}
-                onChange={(e) => setChosen((old) => {
-                  const next = new Set(old);
-                  if (e.target.checked) next.add(c.id);
-                  else next.delete(c.id);
-                  return next;
-                })}
+                onChange={(e) =>
+                  setChosen((old) => {
+                    const next = new Set(old);
+                    if (e.target.checked) next.add(c.id);
+                    else next.delete(c.id);
+                    return next;
+                  })
+                }
               />
               {c.name}
             </label>

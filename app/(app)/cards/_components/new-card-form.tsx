@@ -36,11 +36,15 @@ export function NewCardForm({ subjects }: { subjects: SubjectDto[] }) {
         <select name="subjectId" className="input" defaultValue="">
           <option value="">Choose later</option>
           {subjects.map((s) => (
-            <option key={s.id} value={s.id}>{s.name}</option>
+            <option key={s.id} value={s.id}>
+              {s.name}
+            </option>
           ))}
         </select>
       </label>
-      <p id="new-card-error" aria-live="polite" className={error ? "notice-error" : ""}>{error ?? ""}</p>
+      <p id="new-card-error" aria-live="polite" className={error ? "notice-error" : ""}>
+        {error ?? ""}
+      </p>
       <button type="submit" className="btn btn-primary self-start" disabled={create.isPending}>
         {create.isPending ? "Making the draft…" : "Make the draft and open the editor"}
       </button>

@@ -65,11 +65,24 @@ export function RecheckForm({ cardId, items }: { cardId: string; items: Item[] }
             {item.diff}
             <div className="flex flex-wrap items-end gap-4">
               <label className="flex min-h-11 items-center gap-2 font-semibold">
-                <input type="radio" name={name} className="h-6 w-6" checked={c.action === "accept"} disabled={!item.suggestedPage} onChange={() => set(item.id, { action: "accept" })} />
+                <input
+                  type="radio"
+                  name={name}
+                  className="h-6 w-6"
+                  checked={c.action === "accept"}
+                  disabled={!item.suggestedPage}
+                  onChange={() => set(item.id, { action: "accept" })}
+                />
                 {item.suggestedPage ? `Cite page ${item.suggestedPage} of ${item.newLabel}` : "No suggestion to keep"}
               </label>
               <label className="flex min-h-11 items-center gap-2 font-semibold">
-                <input type="radio" name={name} className="h-6 w-6" checked={c.action === "relink"} onChange={() => set(item.id, { action: "relink" })} />
+                <input
+                  type="radio"
+                  name={name}
+                  className="h-6 w-6"
+                  checked={c.action === "relink"}
+                  onChange={() => set(item.id, { action: "relink" })}
+                />
                 Cite another page of {item.newLabel}:
               </label>
               <label className="field w-32">
@@ -84,14 +97,22 @@ export function RecheckForm({ cardId, items }: { cardId: string; items: Item[] }
                 />
               </label>
               <label className="flex min-h-11 items-center gap-2 font-semibold">
-                <input type="radio" name={name} className="h-6 w-6" checked={c.action === "drop"} onChange={() => set(item.id, { action: "drop" })} />
+                <input
+                  type="radio"
+                  name={name}
+                  className="h-6 w-6"
+                  checked={c.action === "drop"}
+                  onChange={() => set(item.id, { action: "drop" })}
+                />
                 Drop this citation
               </label>
             </div>
           </fieldset>
         );
       })}
-      <p aria-live="polite" className={error ? "notice-error" : ""}>{error ?? ""}</p>
+      <p aria-live="polite" className={error ? "notice-error" : ""}>
+        {error ?? ""}
+      </p>
       <button type="submit" className="btn btn-primary self-start" disabled={busy}>
         {busy ? "Saving…" : "Finish: make the new draft version"}
       </button>

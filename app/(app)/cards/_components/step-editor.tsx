@@ -45,8 +45,17 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
     if (!Number.isInteger(page) || page < 1 || (manual.pageCount !== null && page > manual.pageCount)) {
       return setPickError(`Give a page from 1 to ${manual.pageCount ?? "the last page"}.`);
     }
-    if (step.references.some((r) => r.revisionId === manual.revisionId && r.page === page)) return setPickError("That page is already cited on this step.");
-    references.append({ revisionId: manual.revisionId, page, quote: pick.quote.trim(), manualId: manual.manualId, manualTitle: manual.title, revisionLabel: manual.label, current: true });
+    if (step.references.some((r) => r.revisionId === manual.revisionId && r.page === page))
+      return setPickError("That page is already cited on this step.");
+    references.append({
+      revisionId: manual.revisionId,
+      page,
+      quote: pick.quote.trim(),
+      manualId: manual.manualId,
+      manualTitle: manual.title,
+      revisionLabel: manual.label,
+      current: true,
+    });
     setPick({ ...pick, page: "", quote: "" });
     setPickError("");
   };
@@ -56,11 +65,25 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
     <fieldset className="panel flex flex-col gap-4" aria-label={`Step ${n}`}>
       <legend className="sr-only">Step {n}</legend>
       <div className="flex flex-wrap items-center gap-2">
-        <h3 className="mr-auto text-xl font-bold" id={id("heading")}>Step {n}</h3>
-        <button type="button" className="btn btn-secondary btn-small" disabled={index === 0} onClick={() => onMove(index, index - 1)} aria-label={`Move step ${n} up`}>
+        <h3 className="mr-auto text-xl font-bold" id={id("heading")}>
+          Step {n}
+        </h3>
+        <button
+          type="button"
+          className="btn btn-secondary btn-small"
+          disabled={index === 0}
+          onClick={() => onMove(index, index - 1)}
+          aria-label={`Move step ${n} up`}
+        >
           ↑ Up
         </button>
-        <button type="button" className="btn btn-secondary btn-small" disabled={index === count - 1} onClick={() => onMove(index, index + 1)} aria-label={`Move step ${n} down`}>
+        <button
+          type="button"
+          className="btn btn-secondary btn-small"
+          disabled={index === count - 1}
+          onClick={() => onMove(index, index + 1)}
+          aria-label={`Move step ${n} down`}
+        >
           ↓ Down
         </button>
         <button type="button" className="btn btn-danger btn-small" onClick={onRemove} aria-label={`Remove step ${n}`}>
@@ -69,14 +92,18 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
       </div>
 
       <section className="flex flex-col gap-2" aria-label={`Notices of step ${n}`}>
-        <p className="hint">WARNING: can injure or kill. CAUTION: can damage equipment. NOTE: information. Shown before the step, in that order.</p>
+        <p className="hint">
+          WARNING: can injure or kill. CAUTION: can damage equipment. NOTE: information. Shown before the step, in that order.
+        </p>
         {notices.fields.map((field, j) => (
           <div key={field.id} className="flex flex-wrap items-start gap-2 rounded-md border-2 border-line p-2">
             <label className="field w-40">
               <span className="label">Kind</span>
               <select className="input" {...register(`steps.${index}.notices.${j}.kind`)}>
                 {noticeKinds.map((k) => (
-                  <option key={k} value={k}>{noticeLabels[k]}</option>
+                  <option key={k} value={k}>
+                    {noticeLabels[k]}
+                  </option>
                 ))}
               </select>
             </label>
@@ -84,7 +111,12 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
               <span className="label">Notice text</span>
               <textarea className="input min-h-20" {...register(`steps.${index}.notices.${j}.text`)} />
             </label>
-            <button type="button" className="btn btn-danger btn-small self-end" onClick={() => notices.remove(j)} aria-label={`Remove notice ${j + 1} of step ${n}`}>
+            <button
+              type="button"
+              className="btn btn-danger btn-small self-end"
+              onClick={() => notices.remove(j)}
+              aria-label={`Remove notice ${j + 1} of step ${n}`}
+            >
               Remove
             </button>
           </div>
@@ -99,8 +131,12 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
       </section>
 
       <div className="field">
-        <label className="label" htmlFor={id("text")}>Instruction</label>
-        <span className="hint" id={id("text-hint")}>Markdown: **bold**, lists with “- ”, links as [text](https://…). No HTML.</span>
+        <label className="label" htmlFor={id("text")}>
+          Instruction
+        </label>
+        <span className="hint" id={id("text-hint")}>
+          Markdown: **bold**, lists with “- ”, links as [text](https://…). No HTML.
+        </span>
         <textarea id={id("text")} className="input min-h-28" aria-describedby={id("text-hint")} {...register(`steps.${index}.text`)} />
       </div>
 
@@ -115,7 +151,12 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
                 {cited.quote ? <q className="ml-2 text-ink-soft">{cited.quote}</q> : null}
               </span>
               {cited.current ? null : <span className="badge bg-danger-pale text-danger">superseded revision</span>}
-              <button type="button" className="btn btn-danger btn-small" onClick={() => references.remove(j)} aria-label={`Remove page ${cited.page} from step ${n}`}>
+              <button
+                type="button"
+                className="btn btn-danger btn-small"
+                onClick={() => references.remove(j)}
+                aria-label={`Remove page ${cited.page} from step ${n}`}
+              >
                 Remove
               </button>
             </li>
@@ -140,11 +181,15 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
             <span className="label">Quoted words (optional)</span>
             <input className="input" value={pick.quote} onChange={(e) => setPick({ ...pick, quote: e.target.value })} />
           </label>
-          <button type="button" className="btn btn-secondary" onClick={addReference}>Add page</button>
+          <button type="button" className="btn btn-secondary" onClick={addReference}>
+            Add page
+          </button>
           <button type="button" className="btn btn-secondary" onClick={() => onCiteFromReader(step.uid)}>
             Find it in the library…
           </button>
-          <p className="field-error w-full" aria-live="polite">{pickError}</p>
+          <p className="field-error w-full" aria-live="polite">
+            {pickError}
+          </p>
         </div>
       </section>
 
@@ -163,7 +208,9 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
               <span className="label">Unit</span>
               <select className="input" {...register(`steps.${index}.measurement.unit`)}>
                 {allUnits.map((u) => (
-                  <option key={u} value={u}>{unitLabel(u)}</option>
+                  <option key={u} value={u}>
+                    {unitLabel(u)}
+                  </option>
                 ))}
               </select>
             </label>
@@ -171,10 +218,12 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
               <legend className="label">Limits as</legend>
               <div className="flex flex-wrap gap-4">
                 <label className="flex min-h-11 items-center gap-2">
-                  <input type="radio" value="range" className="h-5 w-5" {...register(`steps.${index}.measurement.mode`)} /> minimum and maximum
+                  <input type="radio" value="range" className="h-5 w-5" {...register(`steps.${index}.measurement.mode`)} /> minimum and
+                  maximum
                 </label>
                 <label className="flex min-h-11 items-center gap-2">
-                  <input type="radio" value="tolerance" className="h-5 w-5" {...register(`steps.${index}.measurement.mode`)} /> nominal ± tolerance
+                  <input type="radio" value="tolerance" className="h-5 w-5" {...register(`steps.${index}.measurement.mode`)} /> nominal ±
+                  tolerance
                 </label>
               </div>
             </fieldset>
@@ -211,7 +260,9 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
           <select className="input" {...register(`steps.${index}.calculator`)}>
             <option value="">None</option>
             {calculatorSlugs.map((s) => (
-              <option key={s} value={s}>{calculators[s].title}</option>
+              <option key={s} value={s}>
+                {calculators[s].title}
+              </option>
             ))}
           </select>
         </label>

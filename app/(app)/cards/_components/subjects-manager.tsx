@@ -34,9 +34,13 @@ export function SubjectsManager({ initialSubjects }: { initialSubjects: SubjectD
           <span className="label">New subject</span>
           <input className="input" value={name} onChange={(e) => setName(e.target.value)} maxLength={120} required />
         </label>
-        <button type="submit" className="btn btn-primary" disabled={saveSubject.isPending}>Add subject</button>
+        <button type="submit" className="btn btn-primary" disabled={saveSubject.isPending}>
+          Add subject
+        </button>
       </form>
-      <p aria-live="polite" className={message ? (message.ok ? "notice-ok" : "notice-error") : ""}>{message?.text ?? ""}</p>
+      <p aria-live="polite" className={message ? (message.ok ? "notice-ok" : "notice-error") : ""}>
+        {message?.text ?? ""}
+      </p>
       <ul className="panel flex flex-col divide-y divide-line">
         {subjects.map((s) => (
           <li key={s.id} className="flex flex-wrap items-center gap-3 py-2">
@@ -50,15 +54,29 @@ export function SubjectsManager({ initialSubjects }: { initialSubjects: SubjectD
               >
                 <label className="field flex-1">
                   <span className="label">Name of “{s.name}”</span>
-                  <input className="input" value={editing.name} onChange={(e) => setEditing({ id: s.id, name: e.target.value })} autoFocus />
+                  <input
+                    className="input"
+                    value={editing.name}
+                    onChange={(e) => setEditing({ id: s.id, name: e.target.value })}
+                    autoFocus
+                  />
                 </label>
-                <button type="submit" className="btn btn-primary">Save</button>
-                <button type="button" className="btn btn-secondary" onClick={() => setEditing(null)}>Cancel</button>
+                <button type="submit" className="btn btn-primary">
+                  Save
+                </button>
+                <button type="button" className="btn btn-secondary" onClick={() => setEditing(null)}>
+                  Cancel
+                </button>
               </form>
             ) : (
               <>
                 <span className="flex-1 font-semibold">{s.name}</span>
-                <button type="button" className="btn btn-secondary btn-small" onClick={() => setEditing({ id: s.id, name: s.name })} aria-label={`Rename ${s.name}`}>
+                <button
+                  type="button"
+                  className="btn btn-secondary btn-small"
+                  onClick={() => setEditing({ id: s.id, name: s.name })}
+                  aria-label={`Rename ${s.name}`}
+                >
                   Rename
                 </button>
               </>

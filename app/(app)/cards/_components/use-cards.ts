@@ -74,7 +74,8 @@ export function useSaveSubject() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async ({ id, name }: { id?: string; name: string }) =>
-      (await (id ? call(cardsApi.renameSubject, { params: { id }, body: { name } }) : call(cardsApi.createSubject, { body: { name } }))).subject,
+      (await (id ? call(cardsApi.renameSubject, { params: { id }, body: { name } }) : call(cardsApi.createSubject, { body: { name } })))
+        .subject,
     onSuccess: () => client.invalidateQueries({ queryKey: ["subjects"] }),
   });
 }

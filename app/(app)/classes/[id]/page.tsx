@@ -12,7 +12,6 @@ import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Class" };
 
-
 export default async function ClassPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requirePageUser("classes:view", `/classes/${id}`);
@@ -21,7 +20,9 @@ export default async function ClassPage({ params }: { params: Promise<{ id: stri
   const manages = can(user, "classes:manage");
   const memberIds = new Set(found.members.map((m) => m.id));
   const candidates = manages
-    ? (await listUsers()).filter((u) => !memberIds.has(u.id) && u.status !== "deactivated").map((u) => ({ id: u.id, label: `${u.name} (${roleLabels[u.role].toLowerCase()}, ${u.email})` }))
+    ? (await listUsers())
+        .filter((u) => !memberIds.has(u.id) && u.status !== "deactivated")
+        .map((u) => ({ id: u.id, label: `${u.name} (${roleLabels[u.role].toLowerCase()}, ${u.email})` }))
     : [];
   return (
     <div className="flex flex-col gap-6">
@@ -31,7 +32,11 @@ export default async function ClassPage({ params }: { params: Promise<{ id: stri
       <div>
         <h1>{found.name}</h1>
         {found.description ? <p className="text-ink-soft">{found.description}</p> : null}
-        {found.startsOn && found.endsOn ? <p>{found.startsOn} to {found.endsOn}</p> : null}
+        {found.startsOn && found.endsOn ? (
+          <p>
+            {found.startsOn} to {found.endsOn}
+          </p>
+        ) : null}
       </div>
       <section aria-labelledby="members" className="panel flex flex-col gap-3">
         <h2 id="members">Members ({found.members.length})</h2>

@@ -110,7 +110,9 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
       {manages ? (
         <section aria-labelledby="new-revision" className="flex flex-col gap-3">
           <h2 id="new-revision">Upload a new revision</h2>
-          <p className="text-ink-soft">It becomes the current revision once every page is read; the one before stays readable, marked superseded.</p>
+          <p className="text-ink-soft">
+            It becomes the current revision once every page is read; the one before stays readable, marked superseded.
+          </p>
           <UploadForm mode={{ kind: "revision", manualId: manual.id }} />
         </section>
       ) : null}

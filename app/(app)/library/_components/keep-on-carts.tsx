@@ -32,8 +32,14 @@ export function KeepOnCarts({ manualId, kept }: { manualId: string; kept: boolea
       >
         {kept ? "✓ Kept whole on carts" : "Keep the whole manual on carts"}
       </button>
-      <span className="hint">{kept ? "Carts store the whole current PDF for the cards that cite it." : "Carts store only the pages task cards cite."}</span>
-      {message ? <span role="alert" className="notice-error">{message}</span> : null}
+      <span className="hint">
+        {kept ? "Carts store the whole current PDF for the cards that cite it." : "Carts store only the pages task cards cite."}
+      </span>
+      {message ? (
+        <span role="alert" className="notice-error">
+          {message}
+        </span>
+      ) : null}
     </div>
   );
 }

@@ -28,7 +28,11 @@ export function RetryButton({ revisionId, label }: { revisionId: string; label: 
       >
         Try again
       </button>
-      {state.message ? <span role="status" className="text-sm">{state.message}</span> : null}
+      {state.message ? (
+        <span role="status" className="text-sm">
+          {state.message}
+        </span>
+      ) : null}
     </span>
   );
 }

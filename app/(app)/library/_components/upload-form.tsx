@@ -43,7 +43,8 @@ function send(url: string, data: FormData, onProgress: (sent: number, total: num
       }
       resolve({ status: xhr.status, body });
     };
-    xhr.onerror = () => resolve({ status: 0, body: { error: { message: "The connection broke during the upload. Nothing was stored; try again." } } });
+    xhr.onerror = () =>
+      resolve({ status: 0, body: { error: { message: "The connection broke during the upload. Nothing was stored; try again." } } });
     xhr.send(data);
   });
 }
@@ -58,7 +59,14 @@ export function UploadForm({ mode }: { mode: Mode }) {
   const retry = useRetryRevision();
   const form = useForm<FormInput, unknown, z.output<typeof manualFormSchema>>({
     resolver: zodResolver((mode.kind === "manual" ? manualFormSchema : revisionFormSchema) as typeof manualFormSchema),
-    defaultValues: { title: "", documentType: "maintenance_manual", applicability: "", ataChapters: "", revisionLabel: "", revisionDate: "" },
+    defaultValues: {
+      title: "",
+      documentType: "maintenance_manual",
+      applicability: "",
+      ataChapters: "",
+      revisionLabel: "",
+      revisionDate: "",
+    },
   });
   const { errors, isSubmitting } = form.formState;
 
@@ -68,7 +76,10 @@ export function UploadForm({ mode }: { mode: Mode }) {
     // The raw strings go to the server, which parses them with the same schema.
     const values = form.getValues();
     const data = new FormData();
-    const names = mode.kind === "manual" ? (["title", "documentType", "applicability", "ataChapters", "revisionLabel", "revisionDate"] as const) : (["revisionLabel", "revisionDate"] as const);
+    const names =
+      mode.kind === "manual"
+        ? (["title", "documentType", "applicability", "ataChapters", "revisionLabel", "revisionDate"] as const)
+        : (["revisionLabel", "revisionDate"] as const);
     for (const name of names) data.append(name, String(values[name] ?? ""));
     const file = (values.file as FileList)[0]!;
     data.append("file", file, file.name); // the file last: the fields arrive first
@@ -92,8 +103,19 @@ export function UploadForm({ mode }: { mode: Mode }) {
   const busy = isSubmitting || (revisionId !== null && revision?.status !== "ready" && revision?.status !== "failed");
 
   return (
-    <form onSubmit={onSubmit} noValidate className="panel flex flex-col gap-4" aria-label={mode.kind === "manual" ? "Upload a manual" : "Upload a new revision"}>
-      <div aria-live="assertive">{problem ? <p className="notice-error" role="alert">{problem}</p> : null}</div>
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="panel flex flex-col gap-4"
+      aria-label={mode.kind === "manual" ? "Upload a manual" : "Upload a new revision"}
+    >
+      <div aria-live="assertive">
+        {problem ? (
+          <p className="notice-error" role="alert">
+            {problem}
+          </p>
+        ) : null}
+      </div>
       {mode.kind === "manual" ? (
         <div className="grid gap-4 md:grid-cols-2">
           <FormField id="title" label="Title" error={errors.title?.message}>
@@ -110,10 +132,20 @@ export function UploadForm({ mode }: { mode: Mode }) {
               </select>
             )}
           </FormField>
-          <FormField id="applicability" label="Applies to (optional)" hint="Models, separated by commas." error={errors.applicability?.message}>
+          <FormField
+            id="applicability"
+            label="Applies to (optional)"
+            hint="Models, separated by commas."
+            error={errors.applicability?.message}
+          >
             {(props) => <input {...props} {...form.register("applicability")} className="input" />}
           </FormField>
-          <FormField id="ataChapters" label="ATA chapters (optional)" hint="Two digits each, separated by commas: 32, 61." error={errors.ataChapters?.message}>
+          <FormField
+            id="ataChapters"
+            label="ATA chapters (optional)"
+            hint="Two digits each, separated by commas: 32, 61."
+            error={errors.ataChapters?.message}
+          >
             {(props) => <input {...props} {...form.register("ataChapters")} className="input" />}
           </FormField>
         </div>
@@ -169,7 +201,9 @@ export function UploadForm({ mode }: { mode: Mode }) {
           ) : (
             <>
               <label htmlFor="ingest-progress" className="label">
-                {revision.status === "queued" ? "Waiting for the reader…" : `Reading pages: ${revision.pagesDone} of ${revision.pageCount ?? "?"}`}
+                {revision.status === "queued"
+                  ? "Waiting for the reader…"
+                  : `Reading pages: ${revision.pagesDone} of ${revision.pageCount ?? "?"}`}
               </label>
               <progress id="ingest-progress" className="h-4 w-full" max={revision.pageCount ?? 1} value={revision.pagesDone} />
             </>

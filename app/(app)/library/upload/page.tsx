@@ -16,8 +16,8 @@ export default async function UploadPage() {
       </Link>
       <h1>Upload a manual</h1>
       <p className="text-ink-soft">
-        A PDF of up to {formatBytes(getEnv().HL_UPLOAD_LIMIT_BYTES)}. Hangarleaf reads every page (scanned pages too) before
-        the manual shows in the library; until then nobody else sees it.
+        A PDF of up to {formatBytes(getEnv().HL_UPLOAD_LIMIT_BYTES)}. Hangarleaf reads every page (scanned pages too) before the manual
+        shows in the library; until then nobody else sees it.
       </p>
       <UploadForm mode={{ kind: "manual" }} />
     </div>

@@ -49,7 +49,8 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
           {run.studentName}: {version.title}
         </h1>
         <p className="text-ink-soft">
-          Version {version.number} · {run.subjectName ?? "no subject"} · {run.dueOn ? `due ${run.dueOn}` : "no due date"} {run.note ? `· ${run.note}` : ""}
+          Version {version.number} · {run.subjectName ?? "no subject"} · {run.dueOn ? `due ${run.dueOn}` : "no due date"}{" "}
+          {run.note ? `· ${run.note}` : ""}
         </p>
         <p>
           Manual revisions cited:{" "}
@@ -58,7 +59,8 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
       </header>
       {detail.signOff ? (
         <p role="note" className="rounded-md border-4 border-ok bg-ok-pale px-4 py-3 font-semibold">
-          Signed off by {detail.signOff.instructorName} on {detail.signOff.signedAt.slice(0, 16).replace("T", " ")} UTC (version {detail.signOff.versionNumber}). The record cannot change.
+          Signed off by {detail.signOff.instructorName} on {detail.signOff.signedAt.slice(0, 16).replace("T", " ")} UTC (version{" "}
+          {detail.signOff.versionNumber}). The record cannot change.
         </p>
       ) : null}
 
@@ -66,7 +68,13 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
         runId={runId}
         status={state.status}
         inspectionPoints={version.steps
-          .map((s, i) => ({ id: s.id, number: i + 1, checked: !!state.steps[s.id]?.checked, boughtOff: !!state.steps[s.id]?.boughtOff, inspectionPoint: s.inspectionPoint }))
+          .map((s, i) => ({
+            id: s.id,
+            number: i + 1,
+            checked: !!state.steps[s.id]?.checked,
+            boughtOff: !!state.steps[s.id]?.boughtOff,
+            inspectionPoint: s.inspectionPoint,
+          }))
           .filter((s) => s.inspectionPoint)}
       />
 
@@ -81,7 +89,9 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                   <h3 className="mr-auto text-lg font-bold">
                     Step {i + 1} {s.checked ? "· done" : "· not done"}
                   </h3>
-                  {step.inspectionPoint ? <span className="badge bg-deck text-white">{s.boughtOff ? "Bought off" : "Inspection point"}</span> : null}
+                  {step.inspectionPoint ? (
+                    <span className="badge bg-deck text-white">{s.boughtOff ? "Bought off" : "Inspection point"}</span>
+                  ) : null}
                 </div>
                 {sortNotices(step.notices).map((n, j) => (
                   <CardNotice key={j} kind={n.kind} text={n.text} />
@@ -90,7 +100,9 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                 {step.measurement ? (
                   <p className={s.value ? (s.value.judgement.status === "in" ? "notice-ok" : "notice-error") : "hint"}>
                     {step.measurement.label} (limits {describeLimit(step.measurement)}):{" "}
-                    {s.value ? `${s.value.text}, ${s.value.judgement.status === "in" ? "within limits" : "OUT OF LIMITS"}. ${s.value.judgement.message}` : "no reading recorded"}
+                    {s.value
+                      ? `${s.value.text}, ${s.value.judgement.status === "in" ? "within limits" : "OUT OF LIMITS"}. ${s.value.judgement.message}`
+                      : "no reading recorded"}
                   </p>
                 ) : null}
                 {s.timer ? (
@@ -110,7 +122,11 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                       detail.photos.some((x) => x.id === p.key) ? (
                         <a key={p.key} href={`/api/runs/${runId}/photos/${p.key}`} target="_blank" rel="noreferrer">
                           {/* eslint-disable-next-line @next/next/no-img-element -- a stored photo behind the API, not a static asset */}
-                          <img src={`/api/runs/${runId}/photos/${p.key}`} alt={`Photo of step ${i + 1}`} className="h-32 rounded border border-line object-cover" />
+                          <img
+                            src={`/api/runs/${runId}/photos/${p.key}`}
+                            alt={`Photo of step ${i + 1}`}
+                            className="h-32 rounded border border-line object-cover"
+                          />
                         </a>
                       ) : (
                         <span key={p.key} className="hint">
@@ -134,7 +150,8 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
             const setAside = ignoredById.get(e.id);
             return (
               <li key={e.id} className="text-sm">
-                <span className="font-mono">{e.clientTime.slice(0, 16).replace("T", " ")}</span> · {e.userName} {eventLabel[e.type] ?? e.type}
+                <span className="font-mono">{e.clientTime.slice(0, 16).replace("T", " ")}</span> · {e.userName}{" "}
+                {eventLabel[e.type] ?? e.type}
                 {e.stepId ? ` step ${stepNumber.get(e.stepId) ?? "?"}` : ""}
                 {typeof e.payload?.value === "string" ? `: ${e.payload.value}` : ""}
                 {typeof e.payload?.comment === "string" && e.payload.comment ? `: “${e.payload.comment}”` : ""}
@@ -143,7 +160,9 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                     {`arrived after the ${late.after} of ${late.at.slice(0, 16).replace("T", " ")}${e.serverTime ? ` (received ${e.serverTime.slice(0, 16).replace("T", " ")})` : ""}`}
                   </strong>
                 ) : null}
-                {setAside ? <span className="ml-2 hint">{`not counted: ${late ? setAside.replace(/^arrived after the [^:]+: /, "") : setAside}`}</span> : null}
+                {setAside ? (
+                  <span className="ml-2 hint">{`not counted: ${late ? setAside.replace(/^arrived after the [^:]+: /, "") : setAside}`}</span>
+                ) : null}
               </li>
             );
           })}
@@ -151,8 +170,8 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
         </ol>
         {state.ignored.length ? (
           <p className="hint mt-2">
-            {state.ignored.length} event(s) set aside and not part of the record: each says why above. Times are the cart&apos;s clock (UTC);
-            an event the server received after a buy-off, hand-in or sign-off never changes what was reviewed.
+            {state.ignored.length} event(s) set aside and not part of the record: each says why above. Times are the cart&apos;s clock
+            (UTC); an event the server received after a buy-off, hand-in or sign-off never changes what was reviewed.
           </p>
         ) : null}
       </section>

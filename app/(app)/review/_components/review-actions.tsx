@@ -45,7 +45,15 @@ export function ReviewActions({ runId, status, inspectionPoints }: { runId: stri
                 Step {p.number} bought off
               </span>
             ) : (
-              <button key={p.id} type="button" className="btn btn-secondary" disabled={busy || !p.checked} onClick={() => void send(() => call(runsApi.buyOff, { params: { id: runId }, body: { stepId: p.id } }), `Step ${p.number} bought off.`)}>
+              <button
+                key={p.id}
+                type="button"
+                className="btn btn-secondary"
+                disabled={busy || !p.checked}
+                onClick={() =>
+                  void send(() => call(runsApi.buyOff, { params: { id: runId }, body: { stepId: p.id } }), `Step ${p.number} bought off.`)
+                }
+              >
                 {p.checked ? `Buy off step ${p.number}` : `Step ${p.number}: not done yet`}
               </button>
             ),
@@ -55,16 +63,36 @@ export function ReviewActions({ runId, status, inspectionPoints }: { runId: stri
       <label htmlFor="review-comment" className="label">
         Comment for the student (needed to return the run)
       </label>
-      <textarea id="review-comment" className="input min-h-24" value={comment} maxLength={2000} onChange={(e) => setComment(e.target.value)} />
+      <textarea
+        id="review-comment"
+        className="input min-h-24"
+        value={comment}
+        maxLength={2000}
+        onChange={(e) => setComment(e.target.value)}
+      />
       <div className="flex flex-wrap gap-2">
-        <button type="button" className="btn btn-primary" disabled={busy || status !== "submitted"} onClick={() => void send(() => call(runsApi.signOff, { params: { id: runId }, body: { comment } }), "Signed off.")}>
+        <button
+          type="button"
+          className="btn btn-primary"
+          disabled={busy || status !== "submitted"}
+          onClick={() => void send(() => call(runsApi.signOff, { params: { id: runId }, body: { comment } }), "Signed off.")}
+        >
           Sign off
         </button>
-        <button type="button" className="btn btn-danger" disabled={busy || status !== "submitted" || !comment.trim()} onClick={() => void send(() => call(runsApi.returnRun, { params: { id: runId }, body: { comment } }), "Returned to the student.")}>
+        <button
+          type="button"
+          className="btn btn-danger"
+          disabled={busy || status !== "submitted" || !comment.trim()}
+          onClick={() => void send(() => call(runsApi.returnRun, { params: { id: runId }, body: { comment } }), "Returned to the student.")}
+        >
           Return with comment
         </button>
       </div>
-      {status !== "submitted" ? <p className="hint">The student has not handed this run in yet: you can buy off inspection points, and sign off once it is handed in.</p> : null}
+      {status !== "submitted" ? (
+        <p className="hint">
+          The student has not handed this run in yet: you can buy off inspection points, and sign off once it is handed in.
+        </p>
+      ) : null}
       {message ? (
         <p role={message.ok ? "status" : "alert"} className={message.ok ? "notice-ok" : "notice-error"}>
           {message.text}

@@ -86,7 +86,7 @@ export function SearchScreen({ manuals }: { manuals: { id: string; title: string
           id="search-q"
           type="search"
           className="input text-xl"
-          placeholder="e.g. magneto timing, tire pressure, &quot;cable tension&quot;"
+          placeholder='e.g. magneto timing, tire pressure, "cable tension"'
           value={input.q}
           onChange={set("q")}
           autoFocus
@@ -98,42 +98,64 @@ export function SearchScreen({ manuals }: { manuals: { id: string; title: string
           aria-describedby="search-help"
         />
         <p id="search-help" className="hint">
-          Typos are forgiven. Use &quot;quotes&quot; for a phrase and -word to leave a word out. Arrow keys move through the
-          results; Enter opens one.
+          Typos are forgiven. Use &quot;quotes&quot; for a phrase and -word to leave a word out. Arrow keys move through the results; Enter
+          opens one.
         </p>
         <div className="grid gap-3 md:grid-cols-4">
           <div className="field">
-            <label htmlFor="search-manual" className="label">Manual</label>
+            <label htmlFor="search-manual" className="label">
+              Manual
+            </label>
             <select id="search-manual" className="input" value={input.manual} onChange={set("manual")}>
               <option value="">All manuals</option>
               {manuals.map((m) => (
-                <option key={m.id} value={m.id}>{m.title}</option>
+                <option key={m.id} value={m.id}>
+                  {m.title}
+                </option>
               ))}
             </select>
           </div>
           <div className="field">
-            <label htmlFor="search-type" className="label">Document type</label>
+            <label htmlFor="search-type" className="label">
+              Document type
+            </label>
             <select id="search-type" className="input" value={input.type} onChange={set("type")}>
               <option value="">All types</option>
               {documentTypes.map((t) => (
-                <option key={t} value={t}>{documentTypeLabels[t]}</option>
+                <option key={t} value={t}>
+                  {documentTypeLabels[t]}
+                </option>
               ))}
             </select>
           </div>
           <div className="field">
-            <label htmlFor="search-model" className="label">Model</label>
+            <label htmlFor="search-model" className="label">
+              Model
+            </label>
             <input id="search-model" className="input" value={input.model} onChange={set("model")} placeholder="e.g. HT-20" />
           </div>
           <div className="field">
-            <label htmlFor="search-ata" className="label">ATA chapter</label>
-            <input id="search-ata" className="input" inputMode="numeric" maxLength={2} value={input.ata} onChange={set("ata")} placeholder="e.g. 32" />
+            <label htmlFor="search-ata" className="label">
+              ATA chapter
+            </label>
+            <input
+              id="search-ata"
+              className="input"
+              inputMode="numeric"
+              maxLength={2}
+              value={input.ata}
+              onChange={set("ata")}
+              placeholder="e.g. 32"
+            />
           </div>
         </div>
       </div>
 
       <div aria-live="polite" className="min-h-7">
         {error ? (
-          <p className="notice-error" role="alert">{error}</p>
+          <p className="notice-error" role="alert">
+            {error}
+          </p>
         ) : search.data && debounced.q ? (
           <p>
             {search.data.total === 0

@@ -25,8 +25,8 @@ export default async function SetPasswordPage({ params }: { params: Promise<{ to
     <>
       <h1>{link.purpose === "invitation" ? `Welcome, ${link.name}` : "Choose a new password"}</h1>
       <p>
-        Choose the password for <strong>{link.email}</strong>. Use at least 10 characters; a few unrelated words are
-        easy to remember and hard to guess.
+        Choose the password for <strong>{link.email}</strong>. Use at least 10 characters; a few unrelated words are easy to remember and
+        hard to guess.
       </p>
       <SetPasswordForm token={token} />
     </>

@@ -32,14 +32,18 @@ export function SignInForm({ next }: { next: string }) {
 
   return (
     <form onSubmit={onSubmit} noValidate className="panel flex flex-col gap-4" aria-label="Sign in">
-      <div aria-live="assertive">{problem ? <p className="notice-error" role="alert">{problem}</p> : null}</div>
+      <div aria-live="assertive">
+        {problem ? (
+          <p className="notice-error" role="alert">
+            {problem}
+          </p>
+        ) : null}
+      </div>
       <FormField id="email" label="E-mail" error={errors.email?.message}>
         {(props) => <input {...props} {...form.register("email")} type="email" autoComplete="username" className="input" />}
       </FormField>
       <FormField id="password" label="Password" error={errors.password?.message}>
-        {(props) => (
-          <input {...props} {...form.register("password")} type="password" autoComplete="current-password" className="input" />
-        )}
+        {(props) => <input {...props} {...form.register("password")} type="password" autoComplete="current-password" className="input" />}
       </FormField>
       <button type="submit" className="btn btn-primary w-full" disabled={isSubmitting}>
         {isSubmitting ? "Signing in…" : "Sign in"}

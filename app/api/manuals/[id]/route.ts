@@ -10,13 +10,15 @@ export const GET = handle(api.library.getManual, async ({ actor, params: { id } 
   if (!staff && !manual.currentRevisionId) throw new AppError("not_found", "That manual was not found.");
   return {
     ...manual,
-    revisions: manual.revisions.filter((r) => staff || r.status === "ready").map((r) => ({
-      id: r.id,
-      label: r.label,
-      date: r.revisionDate,
-      status: r.status,
-      pageCount: r.pageCount,
-      supersededAt: r.supersededAt,
-    })),
+    revisions: manual.revisions
+      .filter((r) => staff || r.status === "ready")
+      .map((r) => ({
+        id: r.id,
+        label: r.label,
+        date: r.revisionDate,
+        status: r.status,
+        pageCount: r.pageCount,
+        supersededAt: r.supersededAt,
+      })),
   };
 });

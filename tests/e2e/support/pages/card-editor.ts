@@ -33,7 +33,9 @@ export class CardEditorPage {
   }
 
   async addNotice(step: number, kind: NoticeKind, text: string) {
-    await this.step(step).getByRole("button", { name: `+ ${kind}` }).click();
+    await this.step(step)
+      .getByRole("button", { name: `+ ${kind}` })
+      .click();
     await this.step(step).getByLabel("Notice text").fill(text);
   }
 

@@ -20,7 +20,8 @@ export class CartRunnerPage {
   async waitForServiceWorker() {
     await this.page.evaluate(async () => {
       await navigator.serviceWorker.ready;
-      if (!navigator.serviceWorker.controller) await new Promise((r) => navigator.serviceWorker.addEventListener("controllerchange", r, { once: true }));
+      if (!navigator.serviceWorker.controller)
+        await new Promise((r) => navigator.serviceWorker.addEventListener("controllerchange", r, { once: true }));
     });
   }
 
@@ -71,7 +72,9 @@ export class CartRunnerPage {
   }
 
   async completeStep(n: number) {
-    await this.step(n).getByRole("button", { name: `Mark step ${n} done` }).click();
+    await this.step(n)
+      .getByRole("button", { name: `Mark step ${n} done` })
+      .click();
   }
 
   /** The button that shows a cited manual page, anywhere on the run. */
@@ -80,7 +83,9 @@ export class CartRunnerPage {
   }
 
   async showCitedPage(step: number, pageNumber: number) {
-    await this.step(step).getByRole("button", { name: new RegExp(`Show page ${pageNumber}`) }).click();
+    await this.step(step)
+      .getByRole("button", { name: new RegExp(`Show page ${pageNumber}`) })
+      .click();
   }
 
   async handIn() {

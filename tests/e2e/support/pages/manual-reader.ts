@@ -44,7 +44,10 @@ export class ManualReaderPage {
 
   /** Jumps to a page through the strip of pages beside the reader. */
   async goToPage(pageNumber: number) {
-    await this.page.getByRole("navigation", { name: "Pages" }).getByRole("button", { name: `Page ${pageNumber}`, exact: true }).click();
+    await this.page
+      .getByRole("navigation", { name: "Pages" })
+      .getByRole("button", { name: `Page ${pageNumber}`, exact: true })
+      .click();
   }
 
   /** Opens the same page as text, for reading aloud or a slow connection. */

@@ -19,7 +19,15 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
   const card = await getCard({ actor: user, id }).catch(notFoundOnMissing);
   const classes = await listClasses({ actor: user });
   const members = await Promise.all(classes.map((c) => getClassById({ actor: user, id: c.id })));
-  const students = [...new Map(members.flatMap((c) => c.members.filter((m) => m.role === "student" && m.status !== "deactivated").map((m) => [m.id, { id: m.id, name: m.name, className: c.name }]))).values()];
+  const students = [
+    ...new Map(
+      members.flatMap((c) =>
+        c.members
+          .filter((m) => m.role === "student" && m.status !== "deactivated")
+          .map((m) => [m.id, { id: m.id, name: m.name, className: c.name }]),
+      ),
+    ).values(),
+  ];
   const assignments = await listAssignments({ actor: user, cardId: id });
   const published = card.versions.filter((v) => v.status === "published").map((v) => v.number);
   return (
@@ -31,7 +39,9 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
       </nav>
       <h1>Assign: {card.published?.title ?? card.draft?.title}</h1>
       {published.length === 0 || card.archivedAt ? (
-        <p className="notice-error">{card.archivedAt ? "This card is archived and cannot be assigned." : "Publish the card before assigning it."}</p>
+        <p className="notice-error">
+          {card.archivedAt ? "This card is archived and cannot be assigned." : "Publish the card before assigning it."}
+        </p>
       ) : (
         <AssignForm cardId={id} versions={published} classes={classes.map((c) => ({ id: c.id, name: c.name }))} students={students} />
       )}

@@ -11,7 +11,6 @@ import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Recheck task card" };
 
-
 const statusWords = { changed: "changed", moved: "moved to another page", removed: "is no longer in the manual" } as const;
 
 /** Each citation a new revision touched: old page and suggested new page side by side, and a decision. */
@@ -24,9 +23,15 @@ export default async function RecheckPage({ params }: { params: Promise<{ id: st
   return (
     <div className="flex flex-col gap-5">
       <nav aria-label="Breadcrumb" className="flex flex-wrap gap-x-3">
-        <Link href="/cards" className="py-2">Task cards</Link>
-        <span aria-hidden="true" className="py-2">›</span>
-        <Link href={`/cards/${id}`} className="py-2">{title}</Link>
+        <Link href="/cards" className="py-2">
+          Task cards
+        </Link>
+        <span aria-hidden="true" className="py-2">
+          ›
+        </span>
+        <Link href={`/cards/${id}`} className="py-2">
+          {title}
+        </Link>
       </nav>
       <h1>Recheck: {title}</h1>
       {rechecks.length === 0 ? (
@@ -36,8 +41,8 @@ export default async function RecheckPage({ params }: { params: Promise<{ id: st
           <p className="text-ink-soft">
             A new revision changed pages this card cites. For each one, compare the old page with the suggested page of the new revision,
             then keep the suggestion, choose another page, or drop the citation. Finishing makes a new draft version of the card, which you
-            publish when it is right. Check the step&apos;s own values (limits, torques, times) against the new page too. Assignments already
-            running keep the version they were given.
+            publish when it is right. Check the step&apos;s own values (limits, torques, times) against the new page too. Assignments
+            already running keep the version they were given.
           </p>
           <RecheckForm
             cardId={id}
@@ -53,7 +58,11 @@ export default async function RecheckPage({ params }: { params: Promise<{ id: st
               diff: (
                 <PageDiff
                   oldTitle={`${r.old.label}, page ${r.old.page} (cited now)`}
-                  newTitle={r.suggested.page ? `${r.suggested.label}, page ${r.suggested.page} (suggested, ${Math.round(r.suggested.similarity * 100)} % alike)` : `${r.suggested.label}: no similar page`}
+                  newTitle={
+                    r.suggested.page
+                      ? `${r.suggested.label}, page ${r.suggested.page} (suggested, ${Math.round(r.suggested.similarity * 100)} % alike)`
+                      : `${r.suggested.label}: no similar page`
+                  }
                   oldText={r.old.text}
                   newText={r.suggested.page ? (r.suggested.text ?? "") : null}
                 />

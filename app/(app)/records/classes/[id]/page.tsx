@@ -30,7 +30,13 @@ export default async function ClassRecordPage({ params }: { params: Promise<{ id
       <section aria-label="Progress by subject" className="panel overflow-x-auto">
         <h2>Signed off of assigned, by subject</h2>
         {totals.length ? (
-          <svg role="img" aria-label="Bar chart: task cards signed off of those assigned, per subject" width={barWidth + 330} height={totals.length * 44 + 10} className="max-w-full">
+          <svg
+            role="img"
+            aria-label="Bar chart: task cards signed off of those assigned, per subject"
+            width={barWidth + 330}
+            height={totals.length * 44 + 10}
+            className="max-w-full"
+          >
             {totals.map((t, i) => {
               const share = t.assigned ? t.signedOff / t.assigned : 0;
               return (

@@ -80,7 +80,14 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
         <ul className="flex flex-col gap-1">
           {[...record.returned, ...record.open].map((r) => (
             <li key={r.runId}>
-              {own ? <a href={`/cart/run?id=${r.runId}`}>{r.title}</a> : can(user, "runs:review") ? <Link href={`/review/${r.runId}`}>{r.title}</Link> : r.title} · {r.workStatus.replace("_", " ")}
+              {own ? (
+                <a href={`/cart/run?id=${r.runId}`}>{r.title}</a>
+              ) : can(user, "runs:review") ? (
+                <Link href={`/review/${r.runId}`}>{r.title}</Link>
+              ) : (
+                r.title
+              )}{" "}
+              · {r.workStatus.replace("_", " ")}
               {r.dueOn ? ` · due ${r.dueOn}` : ""}
             </li>
           ))}

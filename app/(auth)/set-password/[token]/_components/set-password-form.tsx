@@ -31,7 +31,13 @@ export function SetPasswordForm({ token }: { token: string }) {
 
   return (
     <form onSubmit={onSubmit} noValidate className="panel flex flex-col gap-4" aria-label="Choose a password">
-      <div aria-live="assertive">{problem ? <p className="notice-error" role="alert">{problem}</p> : null}</div>
+      <div aria-live="assertive">
+        {problem ? (
+          <p className="notice-error" role="alert">
+            {problem}
+          </p>
+        ) : null}
+      </div>
       <FormField id="password" label="New password" hint="At least 10 characters." error={errors.password?.message}>
         {(props) => <input {...props} {...form.register("password")} type="password" autoComplete="new-password" className="input" />}
       </FormField>

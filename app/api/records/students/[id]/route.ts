@@ -7,7 +7,8 @@ import { studentRecord, studentRecordCsv, studentRecordPdf } from "@/lib/server/
 export const GET = handle(api.runs.studentRecord, async ({ actor, params: { id }, query: { format } }) => {
   const record = await studentRecord({ actor, studentId: id });
   const base = `record-${fileSlug(record.student.name, "student")}`;
-  if (format === "csv") return fileResponse(studentRecordCsv(record), { type: "text/csv; charset=utf-8", filename: `${base}.csv`, download: true });
+  if (format === "csv")
+    return fileResponse(studentRecordCsv(record), { type: "text/csv; charset=utf-8", filename: `${base}.csv`, download: true });
   if (format === "pdf") return fileResponse(await studentRecordPdf(record), { type: "application/pdf", filename: `${base}.pdf` });
   return record;
 });

@@ -35,7 +35,11 @@ export const GET = handle(api.library.revisionFile, async ({ request, actor, par
     if (range) {
       return new Response(stream, {
         status: 206,
-        headers: { ...headers, "Content-Range": `bytes ${range.start}-${range.end}/${size}`, "Content-Length": String(range.end - range.start + 1) },
+        headers: {
+          ...headers,
+          "Content-Range": `bytes ${range.start}-${range.end}/${size}`,
+          "Content-Length": String(range.end - range.start + 1),
+        },
       });
     }
     return new Response(stream, { status: 200, headers: { ...headers, "Content-Length": String(size) } });

@@ -3,4 +3,6 @@ import { api } from "@/lib/contracts/endpoints";
 import { signOffRun } from "@/lib/server/runs/review";
 
 /** Signs off a submitted run. There is no route that changes or removes a sign-off. */
-export const POST = handle(api.runs.signOff, async ({ actor, params: { id }, body: { comment } }) => signOffRun({ actor, runId: id, comment }));
+export const POST = handle(api.runs.signOff, async ({ actor, params: { id }, body: { comment } }) =>
+  signOffRun({ actor, runId: id, comment }),
+);

@@ -15,7 +15,6 @@ import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Page" };
 
-
 /**
  * One page of a revision: its text (searched words marked), picture, and the way to the PDF at that
  * page. The deep link every search hit and task-card reference points at.
@@ -49,13 +48,23 @@ export default async function ManualPageView({
   return (
     <div className="flex flex-col gap-4">
       <nav aria-label="Breadcrumb" className="flex flex-wrap gap-x-3">
-        <Link href="/library" prefetch={false} className="py-2">Library</Link>
-        <span aria-hidden="true" className="py-2">›</span>
-        <Link href={`/library/${manualId}`} prefetch={false} className="py-2">{manual.title}</Link>
+        <Link href="/library" prefetch={false} className="py-2">
+          Library
+        </Link>
+        <span aria-hidden="true" className="py-2">
+          ›
+        </span>
+        <Link href={`/library/${manualId}`} prefetch={false} className="py-2">
+          {manual.title}
+        </Link>
         {q ? (
           <>
-            <span aria-hidden="true" className="py-2">›</span>
-            <Link href={`/search?q=${encodeURIComponent(q)}`} prefetch={false} className="py-2">Back to the results</Link>
+            <span aria-hidden="true" className="py-2">
+              ›
+            </span>
+            <Link href={`/search?q=${encodeURIComponent(q)}`} prefetch={false} className="py-2">
+              Back to the results
+            </Link>
           </>
         ) : null}
       </nav>
@@ -64,7 +73,10 @@ export default async function ManualPageView({
         <div role="alert" className="notice-error">
           This is {revision.label}, a superseded revision. Do not work from it.{" "}
           {current ? (
-            <Link href={`/library/${manualId}/${current.id}/${Math.min(pageNumber, current.pageCount ?? pageNumber)}${query}`} prefetch={false}>
+            <Link
+              href={`/library/${manualId}/${current.id}/${Math.min(pageNumber, current.pageCount ?? pageNumber)}${query}`}
+              prefetch={false}
+            >
               Open page {Math.min(pageNumber, current.pageCount ?? pageNumber)} of the current revision, {current.label}
             </Link>
           ) : null}
@@ -81,7 +93,9 @@ export default async function ManualPageView({
             <span className="label">Search in this manual</span>
             <input name="q" className="input w-64" defaultValue={q} />
           </label>
-          <button type="submit" className="btn btn-primary">Search</button>
+          <button type="submit" className="btn btn-primary">
+            Search
+          </button>
         </form>
         <a href={`/api/revisions/${revisionId}/file#page=${pageNumber}`} className="btn btn-secondary" target="_blank" rel="noreferrer">
           Open the whole PDF
@@ -89,7 +103,13 @@ export default async function ManualPageView({
       </div>
 
       {can(user, "cards:author") ? (
-        <CiteOnCard userId={user.id} revisionId={revisionId} revisionLabel={revision.label} superseded={superseded} initialPage={pageNumber} />
+        <CiteOnCard
+          userId={user.id}
+          revisionId={revisionId}
+          revisionLabel={revision.label}
+          superseded={superseded}
+          initialPage={pageNumber}
+        />
       ) : null}
 
       <PdfReaderLoader
@@ -104,9 +124,13 @@ export default async function ManualPageView({
       />
 
       <details className="panel">
-        <summary className="cursor-pointer py-2 font-semibold">Text of page {pageNumber} (for reading aloud, copying, or a slow connection)</summary>
+        <summary className="cursor-pointer py-2 font-semibold">
+          Text of page {pageNumber} (for reading aloud, copying, or a slow connection)
+        </summary>
         <article className="mt-2 whitespace-pre-line leading-relaxed" aria-label={`Text of page ${pageNumber}`}>
-          {page.ocr ? <p className="hint mb-2">This page is a scan; its text was read by OCR and may hold errors. Check against the PDF.</p> : null}
+          {page.ocr ? (
+            <p className="hint mb-2">This page is a scan; its text was read by OCR and may hold errors. Check against the PDF.</p>
+          ) : null}
           <MarkedText snippet={highlightWords(page.text, q, corrections)} />
         </article>
       </details>

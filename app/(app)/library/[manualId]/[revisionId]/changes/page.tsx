@@ -13,12 +13,20 @@ import { notFoundOnMissing } from "@/app/_adapters/not-found";
 export const metadata: Metadata = { title: "What changed" };
 
 /** The comparison of a revision with the one before it, as a list of the new revision's effective pages. */
-export default async function RevisionChangesPage({ params, searchParams }: { params: Promise<{ manualId: string; revisionId: string }>; searchParams: Promise<{ all?: string }> }) {
+export default async function RevisionChangesPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ manualId: string; revisionId: string }>;
+  searchParams: Promise<{ all?: string }>;
+}) {
   const { manualId, revisionId } = await params;
   const { all } = await searchParams;
   const user = await requirePageUser("library:view", `/library/${manualId}/${revisionId}/changes`);
   if (!isUuid(manualId) || !isUuid(revisionId)) notFound();
-  const [manual, revision] = await Promise.all([getManual({ id: manualId }), getReadableRevision({ actor: user, id: revisionId })]).catch(notFoundOnMissing);
+  const [manual, revision] = await Promise.all([getManual({ id: manualId }), getReadableRevision({ actor: user, id: revisionId })]).catch(
+    notFoundOnMissing,
+  );
   if (revision.manualId !== manualId) notFound();
   const comparison = await getComparison({ revisionId }).catch((error: unknown) => {
     if (error instanceof AppError && error.code === "not_found") return null;
@@ -33,16 +41,24 @@ export default async function RevisionChangesPage({ params, searchParams }: { pa
   return (
     <div className="flex flex-col gap-5">
       <nav aria-label="Breadcrumb" className="flex flex-wrap gap-x-3">
-        <Link href="/library" className="py-2">Library</Link>
-        <span aria-hidden="true" className="py-2">›</span>
-        <Link href={`/library/${manualId}`} className="py-2">{manual.title}</Link>
+        <Link href="/library" className="py-2">
+          Library
+        </Link>
+        <span aria-hidden="true" className="py-2">
+          ›
+        </span>
+        <Link href={`/library/${manualId}`} className="py-2">
+          {manual.title}
+        </Link>
       </nav>
       <h1>
         What changed in {revision.label}
         {previous ? ` since ${previous.label}` : ""}
       </h1>
       {!comparison ? (
-        <p className="notice-error">This revision has not been compared yet. The comparison is made a moment after the revision is ready; reload in a little while.</p>
+        <p className="notice-error">
+          This revision has not been compared yet. The comparison is made a moment after the revision is ready; reload in a little while.
+        </p>
       ) : !comparison.previousRevisionId ? (
         <p className="panel">This is the first revision of the manual in the library: there is nothing to compare it with.</p>
       ) : (
@@ -55,8 +71,8 @@ export default async function RevisionChangesPage({ params, searchParams }: { pa
             ))}
           </ul>
           <p className="text-ink-soft">
-            Page numbers, revision labels, dates and running headers are left out of the comparison. A moved page has the same content at a new
-            page number.
+            Page numbers, revision labels, dates and running headers are left out of the comparison. A moved page has the same content at a
+            new page number.
           </p>
 
           <section className="panel flex flex-col gap-2" aria-labelledby="affected">
@@ -67,7 +83,10 @@ export default async function RevisionChangesPage({ params, searchParams }: { pa
               <ul className="flex flex-col gap-1">
                 {rechecks.map((r) => (
                   <li key={r.cardId}>
-                    <Link href={`/cards/${r.cardId}`} className="font-semibold">{r.title}</Link>: {r.open} of {r.total} citations still to recheck
+                    <Link href={`/cards/${r.cardId}`} className="font-semibold">
+                      {r.title}
+                    </Link>
+                    : {r.open} of {r.total} citations still to recheck
                     {r.ownerName ? ` (owner ${r.ownerName})` : ""}
                   </li>
                 ))}
@@ -77,7 +96,9 @@ export default async function RevisionChangesPage({ params, searchParams }: { pa
 
           <section className="panel flex flex-col gap-2 overflow-x-auto" aria-labelledby="pages">
             <div className="flex flex-wrap items-center gap-3">
-              <h2 id="pages" className="mr-auto">Effective pages of {revision.label}</h2>
+              <h2 id="pages" className="mr-auto">
+                Effective pages of {revision.label}
+              </h2>
               <Link href={all ? "?" : "?all=1"} className="btn btn-secondary btn-small">
                 {all ? "Show only what changed" : "Show every page"}
               </Link>

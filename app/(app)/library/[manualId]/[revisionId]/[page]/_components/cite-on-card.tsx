@@ -17,7 +17,19 @@ function currentPage(fallback: number): number {
  * "Put this page on a card": with a card draft open for citing, the reader adds the page it shows
  * (and any selected words as the quote) to the chosen step.
  */
-export function CiteOnCard({ userId, revisionId, revisionLabel, superseded, initialPage }: { userId: string; revisionId: string; revisionLabel: string; superseded: boolean; initialPage: number }) {
+export function CiteOnCard({
+  userId,
+  revisionId,
+  revisionLabel,
+  superseded,
+  initialPage,
+}: {
+  userId: string;
+  revisionId: string;
+  revisionLabel: string;
+  superseded: boolean;
+  initialPage: number;
+}) {
   const [target, setTarget] = useState<CitingTarget | null>(null);
   const [stepId, setStepId] = useState("");
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
@@ -55,13 +67,23 @@ export function CiteOnCard({ userId, revisionId, revisionLabel, superseded, init
     cite
       .mutateAsync({ stepId: chosen, revisionId, page, quote })
       .then((r) =>
-        setMessage({ ok: true, text: r.added ? `Page ${page} is on step ${r.stepNumber} of draft version ${r.versionNumber}.` : `Page ${page} was already on step ${r.stepNumber}.` }),
+        setMessage({
+          ok: true,
+          text: r.added
+            ? `Page ${page} is on step ${r.stepNumber} of draft version ${r.versionNumber}.`
+            : `Page ${page} was already on step ${r.stepNumber}.`,
+        }),
       )
-      .catch((error: unknown) => setMessage({ ok: false, text: error instanceof ApiError ? error.message : "The page could not be added." }));
+      .catch((error: unknown) =>
+        setMessage({ ok: false, text: error instanceof ApiError ? error.message : "The page could not be added." }),
+      );
   };
 
   return (
-    <section className="flex flex-wrap items-end gap-3 rounded-md border-4 border-teal bg-teal-pale p-3" aria-label="Cite this page on a task card">
+    <section
+      className="flex flex-wrap items-end gap-3 rounded-md border-4 border-teal bg-teal-pale p-3"
+      aria-label="Cite this page on a task card"
+    >
       <p className="w-full font-semibold">
         Citing pages for the card <Link href={`/cards/${target.cardId}/edit`}>{target.title}</Link>
         {superseded ? <span className="ml-2 text-danger">— {revisionLabel} is superseded: cite the current revision instead.</span> : null}
@@ -79,7 +101,9 @@ export function CiteOnCard({ userId, revisionId, revisionLabel, superseded, init
       <button type="button" className="btn btn-primary" onClick={add} disabled={!chosen || cite.isPending}>
         Put this page on the step
       </button>
-      <Link href={`/cards/${target.cardId}/edit`} className="btn btn-secondary">Back to the card</Link>
+      <Link href={`/cards/${target.cardId}/edit`} className="btn btn-secondary">
+        Back to the card
+      </Link>
       <button
         type="button"
         className="btn btn-secondary"
@@ -91,7 +115,9 @@ export function CiteOnCard({ userId, revisionId, revisionLabel, superseded, init
         Stop citing
       </button>
       <p className="hint w-full">Select words on the page first to quote them with the citation.</p>
-      <p aria-live="polite" className={`w-full ${message ? (message.ok ? "notice-ok" : "notice-error") : ""}`}>{message?.text ?? ""}</p>
+      <p aria-live="polite" className={`w-full ${message ? (message.ok ? "notice-ok" : "notice-error") : ""}`}>
+        {message?.text ?? ""}
+      </p>
       {card.error ? <p className="notice-error w-full">The card could not be loaded; it may have been archived.</p> : null}
     </section>
   );
