@@ -70,20 +70,18 @@ export async function appendEvents({
         // and the transaction's start time (the column default) can be earlier than a batch that
         // held the lock first.
         const serverTime = await receiptTime(tx, runId);
-        await tx
-          .insert(runEvents)
-          .values(
-            fresh.map((e) => ({
-              id: e.id,
-              runId,
-              userId: actor.id,
-              type: e.type,
-              stepId: e.stepId,
-              payload: e.payload,
-              clientTime: new Date(e.clientTime),
-              serverTime,
-            })),
-          );
+        await tx.insert(runEvents).values(
+          fresh.map((e) => ({
+            id: e.id,
+            runId,
+            userId: actor.id,
+            type: e.type,
+            stepId: e.stepId,
+            payload: e.payload,
+            clientTime: new Date(e.clientTime),
+            serverTime,
+          })),
+        );
       }
       if (!fresh.length) return { stored: 0, duplicates: events.length, status: run.status };
       const { events: all, state } = await foldStored(tx, runId, await stepsOnly(tx, run.versionId));
