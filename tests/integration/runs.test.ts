@@ -18,6 +18,9 @@ import type { RunDetailDto, StudentRecordDto, WorkItemDto } from "@/lib/contract
 import { call, demo, makeAccount, signIn } from "../support/http";
 import { uniqueTitle } from "../support/library";
 
+/** A due date a week ahead, whenever the tests run (a past one is refused). */
+const soon = new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
+
 const exec = promisify(execFile);
 
 let instructor: string;
@@ -60,7 +63,7 @@ async function runOf(cookie: string, runId: string) {
 const send = (cookie: string, runId: string, events: unknown[]) => call("POST", `/api/runs/${runId}/events`, { cookie, json: { events } });
 
 async function newRun(): Promise<string> {
-  const answer = await assign({ studentIds: [students[0]!.id], dueOn: "2026-12-18", note: "Bay 2, HT-20 trainer" });
+  const answer = await assign({ studentIds: [students[0]!.id], dueOn: soon, note: "Bay 2, HT-20 trainer" });
   expect(answer.status).toBe(201);
   const work = await myWork(students[0]!.cookie);
   return work.find((w) => w.status === "not_started" && w.note === "Bay 2, HT-20 trainer")!.runId;
@@ -156,9 +159,18 @@ describe("assigning", () => {
     expect(
       (await call("POST", `/api/classes/${classId}/members`, { cookie: admin, json: { userIds: students.map((s) => s.id) } })).status,
     ).toBe(200);
-    const made = await assign({ classId, dueOn: "2026-01-05" }, admin);
+    // A past due date is refused; one that has passed since the assignment makes the run overdue.
+    const past = new Date(Date.now() - 3 * 86_400_000).toISOString().slice(0, 10);
+    const refused = await assign({ classId, dueOn: past }, admin);
+    expect(refused.status).toBe(422);
+    expect(((await refused.json()) as { error: { fields: Record<string, string> } }).error.fields.dueOn).toBe(
+      "A due date cannot be in the past.",
+    );
+    const made = await assign({ classId, dueOn: soon }, admin);
     expect(made.status).toBe(201);
-    expect(((await made.json()) as { assignment: { runs: number } }).assignment.runs).toBe(2);
+    const madeAssignment = ((await made.json()) as { assignment: { id: string; runs: number } }).assignment;
+    expect(madeAssignment.runs).toBe(2);
+    await getDb().execute(sql`update assignments set due_on = '2026-01-05' where id = ${madeAssignment.id}`);
     const mine = await myWork(students[0]!.cookie);
     const theirs = await myWork(students[1]!.cookie);
     const item = mine.find((w) => w.cardId === card.id && w.dueOn === "2026-01-05")!;

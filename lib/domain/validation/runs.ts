@@ -2,6 +2,7 @@
 // what happens at the aircraft (return and sign-off have their own routes, made on the server).
 import { z } from "zod";
 import { runEventTypes } from "@/lib/domain/runs/fold";
+import { earliestToday } from "@/lib/domain/validation/dates";
 
 // What a cart may send. Buy-off, return and sign-off are made on the server by their own routes,
 // after their checks (the step is done, the run is handed in) and with an audit entry.
@@ -52,7 +53,9 @@ const optionalDate = z
   .union([z.literal(""), z.iso.date("A due date is a date, such as 2026-12-18.")])
   .nullable()
   .optional()
-  .transform((d) => d || null);
+  .transform((d) => d || null)
+  // Read when the request is parsed: a card due yesterday would be overdue the moment it is given.
+  .refine((d) => !d || d >= earliestToday(), "A due date cannot be in the past.");
 
 export const createAssignmentSchema = z
   .object({
