@@ -11,7 +11,7 @@ import { AppError } from "@/lib/domain/errors";
 import { parseWith } from "@/lib/server/http";
 import { cardContentSchema, sortNotices, type CardContent, type Step } from "@/lib/domain/validation/cards";
 import { notFound, frozen, asConflict, lockCard } from "@/lib/server/cards/access";
-import { type VersionRow, loadVersions, describeRevisions, toVersionDto, getCard } from "@/lib/server/cards/read";
+import { type VersionRow, describeRevisions, getCard, getVersionById } from "@/lib/server/cards/read";
 
 /**
  * Checks every cited page against the library and returns the citation rows. A citation must name
@@ -182,8 +182,7 @@ export async function saveDraft({
       await tx.update(taskCards).set({ updatedAt: new Date() }).where(eq(taskCards.id, cardId));
       return draft.id;
     });
-    const [row] = await loadVersions(getDb(), eq(taskCardVersions.id, versionId));
-    return toVersionDto(getDb(), row!);
+    return getVersionById(versionId);
   } catch (error) {
     asConflict(error);
   }
@@ -237,8 +236,7 @@ export async function applyToDraft({
       await tx.update(taskCards).set({ updatedAt: new Date() }).where(eq(taskCards.id, cardId));
       return draft.id;
     });
-    const [row] = await loadVersions(getDb(), eq(taskCardVersions.id, versionId));
-    return toVersionDto(getDb(), row!);
+    return getVersionById(versionId);
   } catch (error) {
     asConflict(error);
   }

@@ -10,7 +10,7 @@ import { AppError } from "@/lib/domain/errors";
 import { parseWith } from "@/lib/server/http";
 import { publishableCardSchema } from "@/lib/domain/validation/cards";
 import { asConflict, lockCard } from "@/lib/server/cards/access";
-import { loadVersions, toVersionDto } from "@/lib/server/cards/read";
+import { getVersionById } from "@/lib/server/cards/read";
 import { citationsFor, versionToContent } from "@/lib/server/cards/draft";
 
 export async function publishDraft({ actor, cardId }: { actor: Actor; cardId: string }): Promise<CardVersionDto> {
@@ -40,8 +40,7 @@ export async function publishDraft({ actor, cardId }: { actor: Actor; cardId: st
       });
       return draft.id;
     });
-    const [row] = await loadVersions(getDb(), eq(taskCardVersions.id, versionId));
-    return toVersionDto(getDb(), row!);
+    return getVersionById(versionId);
   } catch (error) {
     asConflict(error);
   }

@@ -86,7 +86,7 @@ export async function listCards({
 
 export type VersionRow = typeof taskCardVersions.$inferSelect & { subjectName: string | null; publishedByName: string | null };
 
-export async function loadVersions(db: Db | Tx, where: ReturnType<typeof eq>): Promise<VersionRow[]> {
+async function loadVersions(db: Db | Tx, where: ReturnType<typeof eq>): Promise<VersionRow[]> {
   const publisher = sql<string | null>`(select name from users where users.id = ${taskCardVersions.publishedBy})`;
   const rows = await db
     .select({ version: taskCardVersions, subjectName: curriculumSubjects.name, publishedByName: publisher })
@@ -149,7 +149,7 @@ async function openRecheckSteps(db: Db | Tx, cardId: string): Promise<Set<string
   return new Set(rows.map((r) => r.stepId));
 }
 
-export async function toVersionDto(db: Db | Tx, row: VersionRow): Promise<CardVersionDto> {
+async function toVersionDto(db: Db | Tx, row: VersionRow): Promise<CardVersionDto> {
   const steps = (row.steps as unknown[]).map((s) => stepSchema.parse(s));
   const rechecking = await openRecheckSteps(db, row.cardId);
   const described = await describeRevisions(
