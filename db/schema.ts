@@ -468,6 +468,9 @@ export const runs = pgTable(
     startedAt: timestamp("started_at", { withTimezone: true }),
     submittedAt: timestamp("submitted_at", { withTimezone: true }),
     lastEventAt: timestamp("last_event_at", { withTimezone: true }),
+    /** The inspection point the run waits at (done, not bought off), and when the student called for it. */
+    waitingStepId: uuid("waiting_step_id"),
+    calledAt: timestamp("called_at", { withTimezone: true }),
     ...timestamps,
   },
   (t) => [
