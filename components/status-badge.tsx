@@ -29,20 +29,20 @@ const teal = "bg-teal-pale text-teal-dark";
 const looks = {
   // Said to the student in My work; the run page adds what to do next, the review queue is the instructor's.
   run: {
-    not_started: { label: "Not started", tone: "bg-panel text-ink border border-ink-soft", on: { "run-page": { tone: teal } } },
-    in_progress: { label: "In progress", tone: teal },
+    not_started: { label: "Ready to start", tone: "bg-panel text-ink border border-ink-soft", on: { "run-page": { tone: teal } } },
+    in_progress: { label: "In work", tone: teal },
     returned: {
-      label: "Returned to you",
+      label: "Sent back for rework",
       tone: danger,
-      on: { "run-page": { label: "Returned: see your instructor's comment" }, review: { label: "Returned" } },
+      on: { "run-page": { label: "Sent back for rework: see your instructor's comment" } },
     },
     submitted: {
-      label: "Handed in",
+      label: "Waiting for inspection",
       tone: amber,
-      on: { "run-page": { label: "Handed in: waiting for your instructor", tone: teal }, review: { label: "Waiting for sign-off" } },
+      on: { "run-page": { label: "Waiting for your instructor's inspection", tone: teal } },
     },
     signed_off: { label: "Signed off", tone: ok },
-    overdue: { label: "Overdue", tone: "bg-danger text-white" },
+    overdue: { label: "Past due", tone: "bg-danger text-white" },
   } satisfies Record<RunStatus | "overdue", Entry>,
   account: {
     active: { label: "Active", tone: ok },

@@ -4,10 +4,12 @@ import { requirePageUser } from "@/app/_adapters/session";
 import { can } from "@/lib/domain/access/permissions";
 import { listClassesOfUser } from "@/lib/server/classes";
 import { listMyWork, listReviewQueue } from "@/lib/server/runs/queries";
+import { countBuyOffCalls } from "@/lib/server/runs/buy-offs";
 
 const roleIntro: Record<Role, string> = {
   student: "The task cards your instructors assign are under My work; it also opens on the cart without a network.",
-  instructor: "Runs handed in by your students wait under Review; assign cards from a card's page.",
+  instructor:
+    "Runs waiting for your inspection and inspection points waiting for buy-off are under Review; assign cards from a card's page.",
   librarian: "You keep the school's manuals current; the library opens here as it is built.",
   admin: "You manage accounts, roles and classes, and can read the audit log.",
 };
@@ -19,6 +21,7 @@ export default async function HomePage() {
   // What is waiting, at a glance: a student's open work, an instructor's queue.
   const work = can(user, "runs:do") ? await listMyWork({ actor: user }) : null;
   const waiting = can(user, "runs:review") ? (await listReviewQueue({ actor: user })).length : null;
+  const buyOffs = can(user, "runs:review") ? await countBuyOffCalls({ actor: user }) : null;
   const open = work?.filter((w) => w.status !== "signed_off" && w.status !== "submitted") ?? [];
   return (
     <div className="flex flex-col gap-6">
@@ -31,11 +34,13 @@ export default async function HomePage() {
       {work ? (
         <section aria-labelledby="my-work" className="panel flex flex-wrap items-center gap-4">
           <h2 id="my-work" className="mr-auto">
-            My work: {open.length} to do
+            My work: {open.length} open
             {open.some((w) => w.workStatus === "overdue") ? (
-              <span className="text-danger"> · {open.filter((w) => w.workStatus === "overdue").length} overdue</span>
+              <span className="text-danger"> · {open.filter((w) => w.workStatus === "overdue").length} past due</span>
             ) : null}
-            {open.some((w) => w.status === "returned") ? ` · ${open.filter((w) => w.status === "returned").length} returned to you` : null}
+            {open.some((w) => w.status === "returned")
+              ? ` · ${open.filter((w) => w.status === "returned").length} sent back for rework`
+              : null}
           </h2>
           <Link href="/cart" className="btn btn-primary text-lg">
             Open my work
@@ -45,10 +50,28 @@ export default async function HomePage() {
       {waiting !== null ? (
         <section aria-labelledby="review-waiting" className="panel flex flex-wrap items-center gap-4">
           <h2 id="review-waiting" className="mr-auto">
-            {waiting === 0 ? "No run waits for sign-off" : `${waiting} ${waiting === 1 ? "run waits" : "runs wait"} for sign-off`}
+            {waiting === 0
+              ? "No run waits for inspection"
+              : `${waiting} ${waiting === 1 ? "run waits" : "runs wait"} for inspection and sign-off`}
           </h2>
           <Link href="/review" className="btn btn-primary text-lg">
             Review
+          </Link>
+        </section>
+      ) : null}
+      {buyOffs ? (
+        <section
+          aria-labelledby="buy-offs-waiting"
+          className={`panel flex flex-wrap items-center gap-4 ${buyOffs.called ? "border-4 border-deck" : ""}`}
+        >
+          <h2 id="buy-offs-waiting" className="mr-auto">
+            {buyOffs.waiting === 0
+              ? "No inspection point waits for buy-off"
+              : `${buyOffs.waiting} inspection ${buyOffs.waiting === 1 ? "point waits" : "points wait"} for buy-off`}
+            {buyOffs.called ? <span className="text-danger"> · {buyOffs.called} called you to the aircraft</span> : null}
+          </h2>
+          <Link href="/review?tab=buy-offs" className="btn btn-primary text-lg">
+            Buy-off queue
           </Link>
         </section>
       ) : null}

@@ -1,6 +1,6 @@
 "use client";
 
-import { useId, type ReactNode } from "react";
+import { createContext, useContext, useId, type ReactNode } from "react";
 import { parseNumber } from "@/lib/domain/calc/units";
 
 /** A number field that takes decimals and shop fractions ("0.040", "1/8", "1 1/4"). */
@@ -78,6 +78,12 @@ export function SelectField<T extends string>({
 export const num = (v: string): number | null => (v.trim() === "" ? null : parseNumber(v));
 
 /** The result rows, with what went wrong first, then the warnings, then notes that go with the result. */
+/**
+ * Set where a calculator runs inside a step of a run: each plain result gets a button that puts it
+ * into the step's reading, so nobody copies a number by hand from one screen to another.
+ */
+export const ResultPickContext = createContext<((value: string) => void) | null>(null);
+
 export function Results({
   rows,
   warnings = [],
@@ -89,6 +95,7 @@ export function Results({
   notes?: string[];
   error?: string | null;
 }) {
+  const pick = useContext(ResultPickContext);
   return (
     <div aria-live="polite" className="flex flex-col gap-2">
       {error ? <p className="notice-error">{error}</p> : null}
@@ -112,6 +119,11 @@ export function Results({
               <dd>
                 <span className="text-lg font-bold">{value}</span>
                 {formula ? <span className="ml-2 text-sm text-ink-soft">{formula}</span> : null}
+                {pick && typeof value === "string" ? (
+                  <button type="button" className="btn btn-secondary btn-small ml-2" onClick={() => pick(value)}>
+                    Put into the reading
+                  </button>
+                ) : null}
               </dd>
             </div>
           ))}

@@ -18,8 +18,8 @@ interface Doc {
 /** "My work" grouped by what is left to do, with a search over the cards and pages stored here. */
 export function WorkList({ data, items, savedAt }: { data: CartData; items: WorkItemDto[]; savedAt: string | null }) {
   const groups: { title: string; items: WorkItemDto[] }[] = [
-    { title: "To do", items: items.filter((w) => !["submitted", "signed_off"].includes(w.status)) },
-    { title: "Handed in", items: items.filter((w) => w.status === "submitted") },
+    { title: "Open", items: items.filter((w) => !["submitted", "signed_off"].includes(w.status)) },
+    { title: "Waiting for inspection", items: items.filter((w) => w.status === "submitted") },
     { title: "Signed off", items: items.filter((w) => w.status === "signed_off") },
   ];
   return (

@@ -166,6 +166,8 @@ export async function seedRuns(db: Db): Promise<number> {
             startedAt: times[0] ?? null,
             lastEventAt: times.at(-1) ?? null,
             submittedAt: state.status === "submitted" ? times.at(-1)! : null,
+            waitingStepId: state.waitingAt,
+            calledAt: state.calledAt ? new Date(state.calledAt) : null,
           })
           .returning({ id: runs.id });
         // The demo's carts were online: each event reached the server as it was made.

@@ -25,6 +25,21 @@ export interface WorkItemDto {
   estimatedMinutes: number | null;
 }
 
+/** An inspection point done on a cart and waiting for the instructor's buy-off. */
+export interface BuyOffCallDto {
+  runId: string;
+  studentName: string;
+  title: string;
+  versionNumber: number;
+  /** The assignment's note: often where the aircraft stands. */
+  note: string;
+  stepId: string;
+  stepNumber: number;
+  /** When the student called the instructor from the cart; null when done but not called. */
+  calledAt: string | null;
+  lastEventAt: string | null;
+}
+
 /** A cited page as the cart stores it: where it is in the offline packet, and its text for search. */
 export interface PacketPageDto {
   manualId: string;

@@ -106,7 +106,7 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   expect(new Set(stored.map((e) => e.id)).size).toBe(5);
 
   await runner.handIn();
-  await expect(runner.runStatus()).toContainText("Handed in");
+  await expect(runner.runStatus()).toContainText("Waiting for your instructor's inspection");
   await expect
     .poll(async () => ((await (await instructor.get(`/api/runs/${runId}`)).json()) as { run: { status: string } }).run.status, {
       timeout: 20_000,
@@ -123,7 +123,7 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   await expect(reviewer.getByText(/36 lb, within limits/)).toBeVisible();
   await expect(reviewer.getByText("Note: Turnbuckle at the aft pulley re-tensioned")).toBeVisible();
   await review.returnWithComment("Show the safety wire on both turnbuckles in a photo next time; measure once more.");
-  await expect(reviewer.getByText("Returned to the student.")).toBeVisible();
+  await expect(reviewer.getByText("Sent back for rework.")).toBeVisible();
 
   await page.reload();
   await expect(runner.instructorComment()).toContainText("measure once more");
@@ -131,7 +131,7 @@ test("a run on the cart survives going offline, syncs once, is returned, fixed a
   await runner.recordReading(1, /Cable tension/, "35");
   await expect(runner.recordedReading(1)).toContainText("Recorded 35");
   await runner.handIn();
-  await expect(runner.runStatus()).toContainText("Handed in");
+  await expect(runner.runStatus()).toContainText("Waiting for your instructor's inspection");
   // The badge can still say "all changes sent" from before the click: ask the server instead.
   await expect
     .poll(async () => ((await (await instructor.get(`/api/runs/${runId}`)).json()) as { run: { status: string } }).run.status, {

@@ -231,6 +231,7 @@ export const accessMatrix: Row[] = [
   { method: "POST", route: "/api/assignments", path: () => "/api/assignments", json: {}, expect: only({ instructor: 422, admin: 422 }) },
   { method: "GET", route: "/api/my-work", path: () => "/api/my-work", expect: only({ student: 200 }) },
   { method: "GET", route: "/api/review", path: () => "/api/review", expect: only({ instructor: 200, admin: 200 }) },
+  { method: "GET", route: "/api/review/buy-offs", path: () => "/api/review/buy-offs", expect: only({ instructor: 200, admin: 200 }) },
   // A run is seen by its student and by reviewers; anyone else is told it does not exist.
   {
     method: "GET",
@@ -285,7 +286,7 @@ export const accessMatrix: Row[] = [
     method: "POST",
     route: "/api/runs/[id]/sign-off",
     path: (i) => `/api/runs/${i.nobody}/sign-off`,
-    json: {},
+    json: { password: "not checked before the run is found" },
     expect: only({ instructor: 404, admin: 404 }),
   },
   {

@@ -24,6 +24,7 @@ const soon = new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
 const exec = promisify(execFile);
 
 let instructor: string;
+let instructorPassword: string;
 let admin: string;
 let librarian: string;
 const students: { id: string; cookie: string }[] = [];
@@ -72,10 +73,11 @@ async function newRun(): Promise<string> {
 beforeAll(async () => {
   const account = async (role: "instructor" | "student" | "librarian") => {
     const a = await makeAccount(role);
-    return { id: a.id, cookie: await signIn(a.email, a.password) };
+    return { id: a.id, cookie: await signIn(a.email, a.password), password: a.password };
   };
   const teacher = await account("instructor");
   instructor = teacher.cookie;
+  instructorPassword = teacher.password;
   librarian = (await account("librarian")).cookie;
   students.push(await account("student"), await account("student"));
   admin = await signIn(demo.admin);
@@ -279,7 +281,7 @@ describe("review and sign-off", () => {
     expect(queue.some((r) => r.runId === runId)).toBe(true);
     expect((await call("GET", "/api/review", { cookie })).status).toBe(403);
 
-    const early = await call("POST", `/api/runs/${runId}/sign-off`, { cookie: instructor, json: {} });
+    const early = await call("POST", `/api/runs/${runId}/sign-off`, { cookie: instructor, json: { password: instructorPassword } });
     expect(early.status).toBe(422);
     expect(((await early.json()) as { error: { message: string } }).error.message).toMatch(/inspection point at step 2/);
     expect((await call("POST", `/api/runs/${runId}/return`, { cookie: instructor, json: { comment: "" } })).status).toBe(422);
@@ -314,9 +316,21 @@ describe("review and sign-off", () => {
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: instructor, json: { stepId: stepIds[0] } })).status).toBe(422);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: instructor, json: { stepId: stepIds[1] } })).status).toBe(200);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: instructor, json: { stepId: stepIds[1] } })).status).toBe(409);
-    const signed = await call("POST", `/api/runs/${runId}/sign-off`, { cookie: instructor, json: { comment: "Good work." } });
+    // A sign-off is permanent: without the instructor's own password typed again, nothing is signed.
+    const noPassword = await call("POST", `/api/runs/${runId}/sign-off`, { cookie: instructor, json: { comment: "Good work." } });
+    expect(noPassword.status).toBe(422);
+    expect(((await noPassword.json()) as { error: { fields: Record<string, string> } }).error.fields.password).toBeTruthy();
+    const wrong = await call("POST", `/api/runs/${runId}/sign-off`, { cookie: instructor, json: { password: "guess", comment: "x" } });
+    expect(wrong.status).toBe(422);
+    expect((await runOf(cookie, runId)).run.status).toBe("submitted");
+    const signed = await call("POST", `/api/runs/${runId}/sign-off`, {
+      cookie: instructor,
+      json: { comment: "Good work.", password: instructorPassword },
+    });
     expect(signed.status).toBe(200);
-    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: instructor, json: {} })).status).toBe(409);
+    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: instructor, json: { password: instructorPassword } })).status).toBe(
+      409,
+    );
     expect((await call("POST", `/api/runs/${runId}/return`, { cookie: instructor, json: { comment: "again" } })).status).toBe(409);
 
     // After sign-off: a new event is refused; a re-send of what was stored is answered calmly.

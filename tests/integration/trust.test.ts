@@ -15,6 +15,7 @@ import { uniqueTitle } from "../support/library";
 interface Person {
   id: string;
   cookie: string;
+  password: string;
 }
 let teacher: Person; // instructor of class A, owner of the card
 let learner: Person; // student of class A
@@ -27,7 +28,7 @@ const stepIds = [randomUUID(), randomUUID(), randomUUID()];
 
 const person = async (role: "instructor" | "student") => {
   const a = await makeAccount(role);
-  return { id: a.id, cookie: await signIn(a.email, a.password) };
+  return { id: a.id, cookie: await signIn(a.email, a.password), password: a.password };
 };
 const event = (type: string, clientTime: string, over: Record<string, unknown> = {}) => ({
   id: randomUUID(),
@@ -152,7 +153,7 @@ describe("a signed record cannot be bent by a cart's clock", () => {
     ).toBe(200);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: teacher.cookie, json: { stepId: stepIds[0] } })).status).toBe(200);
     // The back-dated uncheck would have made the sign-off refuse "step 2 is not done".
-    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: teacher.cookie, json: { comment: "ok" } })).status).toBe(200);
+    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: teacher.cookie, json: { comment: "ok", password: teacher.password } })).status).toBe(200);
     const shown = await detail(learner.cookie, runId);
     expect(shown.run.status).toBe("signed_off");
     const [signed] = await getDb().select().from(signOffs).where(eq(signOffs.runId, runId));
@@ -174,7 +175,7 @@ describe("a signed record cannot be bent by a cart's clock", () => {
     expect((await send(learner.cookie, runId, backDated)).status).toBe(200);
     expect((await send(learner.cookie, runId, [...honest, event("run.submitted", ago(10))])).status).toBe(200);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: teacher.cookie, json: { stepId: stepIds[0] } })).status).toBe(200);
-    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: teacher.cookie, json: {} })).status).toBe(200);
+    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: teacher.cookie, json: { password: teacher.password } })).status).toBe(200);
     const [signed] = await getDb().select({ minutes: signOffs.actualMinutes }).from(signOffs).where(eq(signOffs.runId, runId));
     // The cart's stamps alone add up to 400 × 20 minutes; the run was assigned a moment ago.
     expect(signed!.minutes).toBeLessThanOrEqual(2);
@@ -208,7 +209,7 @@ describe("instructors act on their own classes; authors own their cards", () => 
     expect((await call("GET", `/api/runs/${runId}/photos/${randomUUID()}`, { cookie: them })).status).toBe(404);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: them, json: { stepId: stepIds[0] } })).status).toBe(404);
     expect((await call("POST", `/api/runs/${runId}/return`, { cookie: them, json: { comment: "not mine" } })).status).toBe(404);
-    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: them, json: {} })).status).toBe(404);
+    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: them, json: { password: otherTeacher.password } })).status).toBe(404);
     for (const format of ["", "?format=csv", "?format=pdf"]) {
       expect((await call("GET", `/api/records/students/${learner.id}${format}`, { cookie: them })).status).toBe(404);
     }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { foldRun, orderEvents, type CardStepForRun, type RunEvent } from "@/lib/domain/runs/fold";
+import { cannotMarkDone, foldRun, orderEvents, reopenedStepIds, type CardStepForRun, type RunEvent } from "@/lib/domain/runs/fold";
 
 const steps: CardStepForRun[] = [
   { id: "s1", inspectionPoint: false, measurement: { unit: "in-lb", min: 50, max: 70 }, timerMinutes: null },
@@ -279,5 +279,80 @@ describe("a cart's clock cannot bend what was reviewed", () => {
       for (let seed = 1; seed <= 5; seed++) expect(foldRun(shuffled(list, seed + trial), steps, instructors)).toEqual(expected);
       expect(foldRun([...list, ...list.slice(0, 2)], steps, instructors)).toEqual(expected);
     }
+  });
+});
+
+describe("readings, rework and calls for a buy-off", () => {
+  it("keeps every reading of a step, and an out-of-limit one needs a note before the step is done", () => {
+    const refused = foldRun(
+      [ev("value.recorded", 1, { stepId: "s1", payload: { value: "80 in-lb" } }), ev("step.checked", 2, { stepId: "s1" })],
+      steps,
+      instructors,
+    );
+    expect(refused.steps.s1!.checked).toBe(false);
+    expect(refused.ignored[0]!.reason).toMatch(/out of limits: write a note/);
+    expect(cannotMarkDone(steps[0]!, refused.steps.s1!)).toMatch(/out of limits/);
+
+    const noted = foldRun(
+      [
+        ev("value.recorded", 1, { stepId: "s1", payload: { value: "80 in-lb" } }),
+        ev("note.added", 2, { stepId: "s1", payload: { text: "Wrench read high; reported to the instructor." } }),
+        ev("step.checked", 3, { stepId: "s1" }),
+        ev("value.recorded", 4, { stepId: "s1", payload: { value: "60 in-lb" } }),
+      ],
+      steps,
+      instructors,
+    );
+    expect(noted.steps.s1!.checked).toBe(true);
+    expect(noted.steps.s1!.checkedBy).toBe(student);
+    expect(noted.steps.s1!.readings.map((r) => [r.text, r.judgement.status])).toEqual([
+      ["80 in-lb", "out"],
+      ["60 in-lb", "in"],
+    ]);
+    expect(noted.steps.s1!.value?.text).toBe("60 in-lb");
+  });
+
+  it("reopens the steps the instructor names on a return, bought-off ones included, and keeps the earlier readings", () => {
+    const state = foldRun(
+      [
+        ...story,
+        ev("run.returned", 23, { userId: instructor, payload: { comment: "Redo the torque and the wire.", reopenStepIds: ["s1", "s2"] } }),
+      ],
+      steps,
+      instructors,
+    );
+    expect(state.status).toBe("returned");
+    expect(state.steps.s1).toMatchObject({ checked: false, value: null, reopened: { at: at(23), by: instructor } });
+    expect(state.steps.s1!.readings).toHaveLength(2);
+    expect(state.steps.s2).toMatchObject({ checked: false, boughtOff: null, reopened: { by: instructor } });
+    expect(state.steps.s3).toMatchObject({ checked: true, reopened: null });
+    // The reopened inspection point takes work again and waits for a new buy-off.
+    const again = foldRun(
+      [
+        ...story,
+        ev("run.returned", 23, { userId: instructor, payload: { reopenStepIds: ["s2"] } }),
+        ev("step.checked", 24, { stepId: "s2" }),
+        ev("inspection.called", 25, { stepId: "s2" }),
+      ],
+      steps,
+      instructors,
+    );
+    expect(again.waitingAt).toBe("s2");
+    expect(again.calledAt).toBe(at(25));
+    expect(reopenedStepIds({ reopenStepIds: ["s1", 7, null] })).toEqual(["s1"]);
+  });
+
+  it("takes a call for the instructor only at a done inspection point, and forgets it when the step is undone", () => {
+    const early = foldRun([ev("inspection.called", 1, { stepId: "s2" })], steps, instructors);
+    expect(early.calledAt).toBeNull();
+    expect(early.ignored[0]!.reason).toMatch(/once the step is done/);
+    expect(
+      foldRun([ev("step.checked", 1, { stepId: "s3" }), ev("inspection.called", 2, { stepId: "s3" })], steps, instructors).ignored[0]!
+        .reason,
+    ).toBe("not an inspection point");
+    const called = [ev("step.checked", 1, { stepId: "s2" }), ev("inspection.called", 2, { stepId: "s2" })];
+    expect(foldRun(called, steps, instructors)).toMatchObject({ waitingAt: "s2", calledAt: at(2) });
+    const undone = foldRun([...called, ev("step.unchecked", 3, { stepId: "s2" })], steps, instructors);
+    expect(undone).toMatchObject({ waitingAt: null, calledAt: null });
   });
 });

@@ -8,12 +8,12 @@ export function HandIn({ waitingIndex, allDone, onHandIn }: { waitingIndex: numb
       {waitingIndex >= 0 ? (
         <p>Step {waitingIndex + 1} is an inspection point: your instructor buys it off before you go on.</p>
       ) : allDone ? (
-        <p>Every step is done. Hand the run in for your instructor&apos;s sign-off.</p>
+        <p>Every step is done. Hand the run in for your instructor&apos;s inspection and sign-off.</p>
       ) : (
         <p>Finish every step to hand the run in.</p>
       )}
       <button type="button" className="btn btn-primary self-start text-lg" disabled={!allDone || waitingIndex >= 0} onClick={onHandIn}>
-        Hand in for sign-off
+        Hand in for inspection
       </button>
     </section>
   );

@@ -35,7 +35,7 @@ export function RunHeader({ detail, status, returned }: { detail: RunDetailDto; 
       ) : null}
       {returned && status !== "signed_off" ? (
         <div role="note" aria-label="Instructor's comment" className="rounded-md border-4 border-danger bg-danger-pale px-4 py-3">
-          <p className="font-bold">Returned by your instructor</p>
+          <p className="font-bold">Sent back for rework by your instructor</p>
           <p className="whitespace-pre-line text-lg">{String(returned.payload?.comment ?? "")}</p>
         </div>
       ) : null}

@@ -54,6 +54,14 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
               step={step}
               state={state.steps[step.id]!}
               locked={locked}
+              lockedWhy={
+                state.status === "signed_off"
+                  ? "Signed off: the record cannot change."
+                  : state.status === "submitted"
+                    ? "Waiting for inspection: your instructor reviews it now. Nothing changes until it is signed off or sent back for rework."
+                    : null
+              }
+              studentName={detail.run.studentName}
               blocked={blocked ? waitingIndex + 1 : null}
               now={now}
               packet={packet}

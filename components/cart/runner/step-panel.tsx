@@ -3,7 +3,12 @@
 import { CardNotice } from "@/components/card-notice";
 import { StepMarkdown } from "@/components/step-markdown";
 import type { CartData } from "@/lib/client/cart/store";
+import { useState } from "react";
+import { CalculatorPanel } from "@/components/calculators/calculator-panel";
+import { ResultPickContext } from "@/components/calculators/parts";
 import { calculators } from "@/lib/domain/calc";
+import { initialsOf } from "@/lib/domain/names";
+import { cannotMarkDone } from "@/lib/domain/runs/fold";
 import { sortNotices } from "@/lib/domain/validation/cards";
 import { StepNotes } from "./step-notes";
 import { StepPhoto } from "./step-photo";
@@ -19,6 +24,8 @@ export function StepPanel({
   step,
   state,
   locked,
+  lockedWhy,
+  studentName,
   blocked,
   now,
   packet,
@@ -33,6 +40,9 @@ export function StepPanel({
   step: StepDto;
   state: StepState;
   locked: boolean;
+  /** Why the whole run takes no more work (handed in, signed off), said under each control it stops. */
+  lockedWhy: string | null;
+  studentName: string;
   blocked: number | null;
   now: number;
   packet: Blob | null;
@@ -45,6 +55,16 @@ export function StepPanel({
   const disabled = locked || blocked !== null;
   // A bought-off step stays as the instructor saw it (the fold ignores changes); notes still go.
   const frozen = disabled || !!state.boughtOff;
+  // Every control that cannot be used says why, in the order the student would fix it.
+  const frozenWhy = locked
+    ? lockedWhy
+    : blocked !== null
+      ? `Step ${blocked} waits for your instructor's buy-off first.`
+      : state.boughtOff
+        ? "Bought off: this step stays as your instructor saw it. You can still add a note."
+        : null;
+  const doneWhy = !state.checked ? cannotMarkDone(step, state) : null;
+  const [reading, setReading] = useState("");
 
   return (
     <li className={`panel flex flex-col gap-4 border-l-8 ${state.checked ? "border-l-ok" : "border-l-line"}`} aria-label={`Step ${number}`}>
@@ -75,17 +95,39 @@ export function StepPanel({
         <StepReferences references={step.references} packet={packet} packetPages={packetPages} online={online} />
       ) : null}
 
-      {step.calculator ? (
-        <p>
-          Calculator for this step:{" "}
-          <a href={`/calculators/${step.calculator}`} className="font-semibold">
-            {calculators[step.calculator].title}
-          </a>
+      {state.reopened && !state.checked ? (
+        <p role="note" className="rounded-md border-4 border-danger bg-danger-pale px-4 py-3 font-semibold">
+          Your instructor sent this step back for rework: do it again{step.measurement ? " and record a new reading" : ""}
+          {step.inspectionPoint ? ", then call them for a new buy-off" : ""}.
         </p>
       ) : null}
 
+      {step.calculator ? (
+        // Inside the run, offline too: the calculator is part of the cart's code, not a page to go to.
+        <details className="rounded-md border-2 border-line bg-paper px-3 py-2">
+          <summary className="flex min-h-11 cursor-pointer items-center font-semibold">
+            Calculator for this step: {calculators[step.calculator].title}
+          </summary>
+          <div className="pt-3">
+            <ResultPickContext.Provider value={step.measurement && !frozen ? setReading : null}>
+              <CalculatorPanel slug={step.calculator} headingLevel={4} />
+            </ResultPickContext.Provider>
+          </div>
+        </details>
+      ) : null}
+
       {step.measurement ? (
-        <StepReading number={number} stepId={step.id} measurement={step.measurement} recorded={state.value} frozen={frozen} onAct={onAct} />
+        <StepReading
+          number={number}
+          stepId={step.id}
+          measurement={step.measurement}
+          recorded={state.value}
+          frozen={frozen}
+          why={frozenWhy}
+          value={reading}
+          setValue={setReading}
+          onAct={onAct}
+        />
       ) : null}
 
       {step.timerMinutes ? (
@@ -115,22 +157,48 @@ export function StepPanel({
       />
 
       {step.inspectionPoint && state.checked ? (
-        <p role="note" className={`rounded-md px-4 py-3 font-semibold ${state.boughtOff ? "bg-ok-pale text-ok" : "border-4 border-deck"}`}>
-          {state.boughtOff
-            ? `Bought off ${state.boughtOff.at.slice(0, 16).replace("T", " ")}.`
-            : "Waiting for buy-off: your instructor checks this step here at the cart or from the review queue."}
-        </p>
+        <div
+          role="note"
+          className={`flex flex-col gap-3 rounded-md px-4 py-3 font-semibold ${state.boughtOff ? "bg-ok-pale text-ok" : "border-4 border-deck"}`}
+        >
+          {state.boughtOff ? (
+            `Bought off ${state.boughtOff.at.slice(0, 16).replace("T", " ")}.`
+          ) : state.called ? (
+            <span>
+              You called your instructor at {state.called.at.slice(11, 16)}.{" "}
+              {online ? "They have been told; wait here with the work open." : "They are told as soon as this cart is back online."}
+            </span>
+          ) : (
+            <>
+              <span>Waiting for buy-off: your instructor checks this step here at the aircraft before you go on.</span>
+              <button
+                type="button"
+                className="btn btn-primary min-h-14 self-start text-lg"
+                disabled={locked}
+                onClick={() => void onAct("inspection.called", { stepId: step.id })}
+              >
+                Call my instructor to buy off step {number}
+              </button>
+            </>
+          )}
+        </div>
       ) : null}
 
       <button
         type="button"
         aria-pressed={state.checked}
+        aria-describedby={frozenWhy || doneWhy ? `why-${step.id}` : undefined}
         className={`btn min-h-16 text-xl ${state.checked ? "btn-secondary" : "btn-primary"}`}
-        disabled={frozen}
+        disabled={frozen || !!doneWhy}
         onClick={() => void onAct(state.checked ? "step.unchecked" : "step.checked", { stepId: step.id })}
       >
-        {state.checked ? `✓ Step ${number} done (tap to undo)` : `Mark step ${number} done`}
+        {state.checked ? `✓ Step ${number} done by ${initialsOf(studentName)} (tap to undo)` : `Mark step ${number} done`}
       </button>
+      {frozenWhy || doneWhy ? (
+        <p id={`why-${step.id}`} className={doneWhy && !frozenWhy ? "notice-error" : "hint"}>
+          {frozenWhy ?? doneWhy}
+        </p>
+      ) : null}
     </li>
   );
 }

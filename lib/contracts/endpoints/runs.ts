@@ -2,9 +2,10 @@
 import { z } from "zod";
 import { runStatuses } from "@/lib/domain/vocabulary";
 import { endpoint, file, isUuid, json, uuidSegment } from "@/lib/contracts/endpoint";
-import { buyOffSchema, createAssignmentSchema, eventBatchSchema, returnRunSchema, reviewCommentSchema } from "@/lib/domain/validation/runs";
+import { buyOffSchema, createAssignmentSchema, eventBatchSchema, returnRunSchema, signOffSchema } from "@/lib/domain/validation/runs";
 import type {
   AssignmentDto,
+  BuyOffCallDto,
   ClassRecordDto,
   EventBatchResultDto,
   PhotoDto,
@@ -57,6 +58,15 @@ export const runsApi = {
     who: "instructor, admin",
     doc: `200 \`{ "runs": [ … as above, with "studentName" ] }\` (an instructor's own classes' students and runs they assigned): \`submitted\` (default, oldest first), \`in_progress\`, \`returned\`, \`signed_off\``,
   }),
+  buyOffQueue: endpoint({
+    method: "GET",
+    path: "/api/review/buy-offs",
+    access: "runs:review",
+    headers: { "Cache-Control": "private, no-store" },
+    answer: json<{ points: BuyOffCallDto[] }>(),
+    who: "instructor, admin",
+    doc: `200 \`{ "points": [ { "runId", "studentName", "title", "versionNumber", "note", "stepId", "stepNumber", "calledAt", "lastEventAt" } ] }\`: inspection points done on a cart and not bought off, in the instructor's scope; the ones the student called for (\`inspection.called\`) first, longest waiting first. A call also mails the instructors of the student's classes`,
+  }),
   get: endpoint({
     method: "GET",
     path: "/api/runs/:id",
@@ -75,7 +85,7 @@ export const runsApi = {
     body: { kind: "json", schema: eventBatchSchema, maxBytes: 2 * 1024 * 1024 },
     answer: json<EventBatchResultDto>(),
     who: "the run's student; instructors for `inspection.bought_off`",
-    doc: `\`{ "events": [ { "id" (UUID made on the cart), "type", "stepId"?, "payload"?, "clientTime" } ] }\` (1–500, 4,000 characters of payload each, 2 MiB) → 200 \`{ "stored", "duplicates", "status" }\`. Types: \`step.checked\`, \`step.unchecked\`, \`value.recorded\` \`{ value }\`, \`note.added\` \`{ text }\`, \`photo.added\` \`{ key }\`, \`timer.started\` \`{ minutes }\`, \`timer.stopped\`, \`inspection.bought_off\`, \`run.submitted\`. Idempotent by id: a re-sent event is counted as a duplicate and changes nothing, also after sign-off; a **new** event on a signed-off run → 409. 403 for an event of the wrong role`,
+    doc: `\`{ "events": [ { "id" (UUID made on the cart), "type", "stepId"?, "payload"?, "clientTime" } ] }\` (1–500, 4,000 characters of payload each, 2 MiB) → 200 \`{ "stored", "duplicates", "status" }\`. Types: \`step.checked\`, \`step.unchecked\`, \`value.recorded\` \`{ value }\`, \`note.added\` \`{ text }\`, \`photo.added\` \`{ key }\`, \`timer.started\` \`{ minutes }\`, \`timer.stopped\`, \`inspection.called\` (at a done inspection point: asks the instructor to come), \`run.submitted\`. Idempotent by id: a re-sent event is counted as a duplicate and changes nothing, also after sign-off; a **new** event on a signed-off run → 409. 403 for an event of the wrong role`,
   }),
   packet: endpoint({
     method: "GET",
@@ -130,17 +140,17 @@ export const runsApi = {
     body: { kind: "json", schema: returnRunSchema },
     answer: json<{ status: RunStatus }>(),
     who: "instructor, admin",
-    doc: `\`{ "comment" }\` (required) → 200: a submitted run goes back to the student with the comment`,
+    doc: `\`{ "comment" (required), "reopenStepIds"? }\` → 200: a submitted run goes back to the student with the comment; the steps named are reopened to be done again (bought-off inspection points too), their earlier readings kept in the step's history. 422 for a step not on the card`,
   }),
   signOff: endpoint({
     method: "POST",
     path: "/api/runs/:id/sign-off",
     access: "runs:review",
     params: { id: uuidSegment("That run") },
-    body: { kind: "json", schema: reviewCommentSchema },
+    body: { kind: "json", schema: signOffSchema },
     answer: json<{ status: RunStatus }>(),
     who: "instructor, admin",
-    doc: `\`{ "comment"? }\` → 200: a submitted run with every step done and every inspection point bought off (422 otherwise) is signed off: instructor, time, version and the revisions cited are recorded and audited. There is no way to change or remove a sign-off (the database refuses it, SQLSTATE HLF02)`,
+    doc: `\`{ "password", "comment"? }\` (the instructor's own password, typed again) → 200: a submitted run with every step done and every inspection point bought off (422 otherwise) is signed off: instructor, time, version and the revisions cited are recorded and audited. A wrong password → 422 on \`password\` (counted on the account's sign-in throttle: 429 after too many). There is no way to change or remove a sign-off (the database refuses it, SQLSTATE HLF02)`,
   }),
   studentRecord: endpoint({
     method: "GET",

@@ -19,6 +19,7 @@ export const runEventTypes = [
   "photo.added",
   "timer.started",
   "timer.stopped",
+  "inspection.called",
   "inspection.bought_off",
   "run.submitted",
   "run.returned",
@@ -45,14 +46,31 @@ export interface CardStepForRun {
   timerMinutes: number | null;
 }
 
+export interface Reading {
+  text: string;
+  judgement: Judgement;
+  at: string;
+}
+
 export interface StepState {
   checked: boolean;
   checkedAt: string | null;
-  value: { text: string; judgement: Judgement; at: string } | null;
+  /** Who marked it done: the paper card's initials box. */
+  checkedBy: string | null;
+  /** The reading that counts: the last one recorded since the step was last reopened. */
+  value: Reading | null;
+  /** Every reading recorded on the step, oldest first, kept across rework: the instructor sees them all. */
+  readings: Reading[];
   notes: { text: string; at: string; by: string }[];
   photos: { key: string; at: string }[];
   timer: { startedAt: string; minutes: number; stoppedAt: string | null } | null;
+  /** The student asked the instructor to come and buy off this inspection point. */
+  called: { at: string } | null;
   boughtOff: { by: string; at: string } | null;
+  /** The instructor sent the run back naming this step: it is to be done again, buy-off included. */
+  reopened: { at: string; by: string } | null;
+  /** A note written since the current reading: an out-of-limit reading needs one before the step is done. */
+  notedSinceReading: boolean;
 }
 
 export type { RunStatus };
@@ -62,6 +80,8 @@ export interface RunState {
   steps: Record<string, StepState>;
   /** The first inspection point checked but not bought off: later steps wait for it. */
   waitingAt: string | null;
+  /** When the student called the instructor to the step the run waits at; null when not called. */
+  calledAt: string | null;
   returnedComment: string | null;
   signedOff: { by: string; at: string } | null;
   /** Events the fold set aside, with why (after sign-off, for an unknown step, not allowed). */
@@ -74,7 +94,35 @@ export interface RunState {
   eventCount: number;
 }
 
-const emptyStep = (): StepState => ({ checked: false, checkedAt: null, value: null, notes: [], photos: [], timer: null, boughtOff: null });
+const emptyStep = (): StepState => ({
+  checked: false,
+  checkedAt: null,
+  checkedBy: null,
+  value: null,
+  readings: [],
+  notes: [],
+  photos: [],
+  timer: null,
+  called: null,
+  boughtOff: null,
+  reopened: null,
+  notedSinceReading: false,
+});
+
+/** Why a step cannot be marked done yet, in the student's words; null when it can. The cart asks the same. */
+export function cannotMarkDone(step: Pick<CardStepForRun, "measurement">, s: StepState): string | null {
+  if (!step.measurement || !s.value || s.value.judgement.status === "in") return null;
+  if (s.notedSinceReading) return null;
+  return s.value.judgement.status === "out"
+    ? "The reading is out of limits: write a note of what you found (and tell your instructor) before marking the step done."
+    : "The reading was not understood: record it again, or write a note of why, before marking the step done.";
+}
+
+/** Text of a run.returned event's list of steps to do again, as ids; anything else is dropped. */
+export function reopenedStepIds(payload: Record<string, unknown> | undefined): string[] {
+  const ids = payload?.reopenStepIds;
+  return Array.isArray(ids) ? ids.filter((id): id is string => typeof id === "string") : [];
+}
 
 /** The events that stand between what came before and what comes after. */
 const reviewMoments = {
@@ -155,6 +203,7 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
     status: "not_started",
     steps: Object.fromEntries(steps.map((s) => [s.id, emptyStep()])),
     waitingAt: null,
+    calledAt: null,
     returnedComment: null,
     signedOff: null,
     ignored: [],
@@ -190,6 +239,22 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
       if (e.type === "run.returned") {
         state.status = "returned";
         state.returnedComment = text(e.payload, "comment") || null;
+        // The steps the instructor names are done again from the start, bought-off ones too; the
+        // readings stay in the step's history so the second attempt is seen beside the first.
+        for (const id of reopenedStepIds(e.payload)) {
+          const s = state.steps[id];
+          if (!s) continue;
+          Object.assign(s, {
+            checked: false,
+            checkedAt: null,
+            checkedBy: null,
+            value: null,
+            called: null,
+            boughtOff: null,
+            notedSinceReading: false,
+            reopened: { at: e.clientTime, by: e.userId },
+          });
+        }
       } else {
         state.status = "signed_off";
         state.signedOff = { by: e.userId, at: e.clientTime };
@@ -219,13 +284,22 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
     }
     if (state.status === "not_started" || state.status === "returned") state.status = "in_progress";
     switch (e.type) {
-      case "step.checked":
+      case "step.checked": {
+        const why = cannotMarkDone(step, s);
+        if (why) {
+          setAside(why);
+          break;
+        }
         s.checked = true;
         s.checkedAt = e.clientTime;
+        s.checkedBy = e.userId;
         break;
+      }
       case "step.unchecked":
         s.checked = false;
         s.checkedAt = null;
+        s.checkedBy = null;
+        s.called = null;
         break;
       case "value.recorded": {
         const value = text(e.payload, "value");
@@ -234,10 +308,18 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
           break;
         }
         s.value = { text: value, judgement: judgeValue(value, step.measurement), at: e.clientTime };
+        s.readings.push(s.value);
+        s.notedSinceReading = false;
         break;
       }
       case "note.added":
         s.notes.push({ text: text(e.payload, "text"), at: e.clientTime, by: e.userId });
+        s.notedSinceReading = true;
+        break;
+      case "inspection.called":
+        if (!step.inspectionPoint) setAside("not an inspection point");
+        else if (!s.checked) setAside("call the instructor once the step is done");
+        else s.called = { at: e.clientTime };
         break;
       case "photo.added":
         s.photos.push({ key: text(e.payload, "key"), at: e.clientTime });
@@ -256,5 +338,6 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
     }
   }
   state.waitingAt = steps.find((st) => st.inspectionPoint && state.steps[st.id]!.checked && !state.steps[st.id]!.boughtOff)?.id ?? null;
+  state.calledAt = state.waitingAt ? (state.steps[state.waitingAt]!.called?.at ?? null) : null;
   return state;
 }

@@ -91,6 +91,19 @@ export const returnRunSchema = z.object({
     .min(1, "Say what the student should fix.")
     .max(2000, "Keep the comment to 2000 characters.")
     .refine(noNul, "A NUL character cannot be stored."),
+  /** The steps to do again: they are reopened, bought-off ones included. */
+  reopenStepIds: z
+    .array(z.uuid("A step id is a UUID."), { error: "Name the steps to do again as a list." })
+    .max(500, "A card has at most 500 steps.")
+    .optional()
+    .default([]),
+});
+/** A sign-off is permanent: the instructor types their password again. */
+export const signOffSchema = reviewCommentSchema.extend({
+  password: z
+    .string({ error: "Type your password to sign off." })
+    .min(1, "Type your password to sign off.")
+    .max(200, "That is not your password."),
 });
 export const buyOffSchema = z.object({ stepId: z.uuid("Name the inspection point's step.") });
 

@@ -117,3 +117,20 @@ export async function throttleResetRequest({ email, address }: { email: string; 
     "password-reset requests",
   );
 }
+
+/**
+ * Asks a signed-in person for their password again before a permanent act (a sign-off): the
+ * session alone says someone is at the keyboard, the password says it is the instructor. Wrong
+ * answers count on the account's sign-in throttle, so a borrowed session cannot guess it.
+ */
+export async function confirmOwnPassword({ userId, password }: { userId: string; password: string }): Promise<void> {
+  const [user] = await getDb().select({ email: users.email, passwordHash: users.passwordHash }).from(users).where(eq(users.id, userId));
+  if (!user) throw new AppError("unauthorized", "Sign in again.");
+  const key = throttleKeys(user.email, "").account;
+  await reserveAll([[key, throttlePolicy.account]], new Date(), "wrong passwords");
+  if (!(await verifyPassword(user.passwordHash ?? (await getDummyHash()), password)))
+    throw new AppError("invalid", "That is not your password. Type the password you sign in with.", {
+      fields: { password: "Not your password." },
+    });
+  await getDb().delete(signInThrottles).where(eq(signInThrottles.key, key));
+}

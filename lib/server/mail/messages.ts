@@ -97,3 +97,28 @@ export function revisionImpactMail(input: {
     html,
   };
 }
+
+/** A student at the aircraft asks for the instructor: an inspection point waits for buy-off. */
+export function buyOffCallMail(input: {
+  to: string;
+  name: string;
+  studentName: string;
+  title: string;
+  stepNumber: number;
+  note: string;
+  link: string;
+}): MailMessage {
+  const where = input.note ? ` (${input.note})` : "";
+  return {
+    to: input.to,
+    subject: `${input.studentName} is waiting for a buy-off: step ${input.stepNumber} of ${input.title}`,
+    ...withLink(
+      [
+        `Hello ${input.name},`,
+        `${input.studentName} has done step ${input.stepNumber} of "${input.title}"${where}, an inspection point, and asks you to come and buy it off. The later steps wait until you do.`,
+      ],
+      { label: "Open the buy-off queue", href: input.link },
+      [],
+    ),
+  };
+}

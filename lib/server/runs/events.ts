@@ -10,6 +10,7 @@ import { AppError, databaseErrorCode } from "@/lib/domain/errors";
 import type { RunEventInput } from "@/lib/domain/validation/runs";
 import { type RunEvent, type RunState } from "@/lib/domain/runs/fold";
 import { loadRun, stepsOnly, foldStored } from "@/lib/server/runs/queries";
+import { noticeBuyOffCall } from "@/lib/server/runs/buy-offs";
 
 export const signedOffConflict = () =>
   new AppError("conflict", "This run is signed off. Its record cannot change; ask your instructor to assign the card again.");
@@ -31,6 +32,8 @@ export async function writeFold(tx: Tx, runId: string, state: RunState, events: 
       startedAt: times[0] ? new Date(times[0]) : null,
       lastEventAt: times.at(-1) ? new Date(times.at(-1)!) : null,
       submittedAt: state.status === "submitted" && submitted ? new Date(submitted) : null,
+      waitingStepId: state.waitingAt,
+      calledAt: state.calledAt ? new Date(state.calledAt) : null,
     })
     .where(eq(runs.id, runId));
 }
@@ -54,7 +57,7 @@ export async function appendEvents({
   events: RunEventInput[];
 }): Promise<EventBatchResultDto> {
   try {
-    return await getDb().transaction(async (tx) => {
+    const outcome = await getDb().transaction(async (tx) => {
       const run = await loadRun(tx, actor, runId, { lock: true });
       const ids = [...new Set(events.map((e) => e.id))];
       const known = await tx.select({ id: runEvents.id, runId: runEvents.runId }).from(runEvents).where(inArray(runEvents.id, ids));
@@ -83,11 +86,16 @@ export async function appendEvents({
           })),
         );
       }
-      if (!fresh.length) return { stored: 0, duplicates: events.length, status: run.status };
+      if (!fresh.length) return { result: { stored: 0, duplicates: events.length, status: run.status }, called: null };
       const { events: all, state } = await foldStored(tx, runId, await stepsOnly(tx, run.versionId));
       await writeFold(tx, runId, state, all);
-      return { stored: fresh.length, duplicates: events.length - fresh.length, status: state.status };
+      // A new call for the instructor: this batch made the run wait at a step the student called for.
+      const called = state.calledAt && (!run.calledAt || run.waitingStepId !== state.waitingAt) ? state.waitingAt : null;
+      return { result: { stored: fresh.length, duplicates: events.length - fresh.length, status: state.status }, called };
     });
+    // After the commit: a mail is never sent for a batch that was rolled back.
+    if (outcome.called) await noticeBuyOffCall(runId, outcome.called);
+    return outcome.result;
   } catch (error) {
     if (isSignedOffError(error)) throw signedOffConflict();
     // Two runs sent an event with the same new id at the same moment.

@@ -9,10 +9,11 @@ import { getVersionById } from "@/lib/server/cards/read";
 import type { CardVersionDto } from "@/lib/contracts/cards";
 import type { SignOffDto } from "@/lib/contracts/runs";
 import { AppError, databaseErrorCode } from "@/lib/domain/errors";
-import { orderEvents, type RunEvent, type RunState } from "@/lib/domain/runs/fold";
+import { cannotMarkDone, orderEvents, type RunEvent, type RunState } from "@/lib/domain/runs/fold";
 import { workingMinutes } from "@/lib/domain/runs/hours";
 import { signedOffConflict, writeFold, isSignedOffError, receiptTime } from "@/lib/server/runs/events";
 import { loadRun, foldStored } from "@/lib/server/runs/queries";
+import { confirmOwnPassword } from "@/lib/server/auth/sign-in";
 
 /**
  * A review event made on the server, at the server's time: the fold places it after everything
@@ -58,14 +59,36 @@ export async function buyOff({ actor, runId, stepId }: { actor: Actor; runId: st
   });
 }
 
-export async function returnRun({ actor, runId, comment }: { actor: Actor; runId: string; comment: string }) {
+export async function returnRun({
+  actor,
+  runId,
+  comment,
+  reopenStepIds = [],
+}: {
+  actor: Actor;
+  runId: string;
+  comment: string;
+  reopenStepIds?: string[];
+}) {
   return getDb().transaction(async (tx) => {
     const { state, version } = await reviewContext(tx, actor, runId);
     if (state.status !== "submitted") throw new AppError("conflict", "Only a submitted run can be returned.");
-    await appendReviewEvent(tx, actor, runId, "run.returned", null, { comment });
+    const numbers = new Map(version.steps.map((s, i) => [s.id, i + 1]));
+    const reopen = [...new Set(reopenStepIds)];
+    if (reopen.some((id) => !numbers.has(id)))
+      throw new AppError("invalid", "A step named to do again is not on this card version.", {
+        fields: { reopenStepIds: "Not a step of this card." },
+      });
+    await appendReviewEvent(tx, actor, runId, "run.returned", null, { comment, reopenStepIds: reopen });
     const after = await foldStored(tx, runId, version);
     await writeFold(tx, runId, after.state, after.events);
-    await recordAudit(tx, { actorId: actor.id, action: "run.returned", subjectType: "run", subjectId: runId, details: { comment } });
+    await recordAudit(tx, {
+      actorId: actor.id,
+      action: "run.returned",
+      subjectType: "run",
+      subjectId: runId,
+      details: { comment, reopenedSteps: reopen.map((id) => numbers.get(id)!).sort((a, b) => a - b) },
+    });
     return { status: after.state.status };
   });
 }
@@ -97,7 +120,11 @@ function workCounted(events: RunEvent[], state: RunState, studentId: string): Ru
   return ordered.slice(0, lastHandIn + 1).filter((e) => e.userId === studentId && !setAside.has(e.id));
 }
 
-export async function signOffRun({ actor, runId, comment }: { actor: Actor; runId: string; comment: string }) {
+export async function signOffRun({ actor, runId, comment, password }: { actor: Actor; runId: string; comment: string; password: string }) {
+  // Whose run first (404 for a stranger's), then the password, before the run's lock: a wrong
+  // password changes nothing and holds nobody up.
+  await loadRun(getDb(), actor, runId);
+  await confirmOwnPassword({ userId: actor.id, password });
   try {
     return await getDb().transaction(async (tx) => {
       const { run, version, state, events } = await reviewContext(tx, actor, runId);
@@ -109,6 +136,12 @@ export async function signOffRun({ actor, runId, comment }: { actor: Actor; runI
         });
       const unchecked = version.steps.findIndex((s) => !state.steps[s.id]?.checked);
       if (unchecked >= 0) throw new AppError("invalid", `Step ${unchecked + 1} is not done. Return the run instead.`);
+      const unexplained = version.steps.findIndex((s) => cannotMarkDone(s, state.steps[s.id]!));
+      if (unexplained >= 0)
+        throw new AppError(
+          "invalid",
+          `Step ${unexplained + 1}'s reading is out of limits and has no note of what was found. Return the run and name the step.`,
+        );
       await appendReviewEvent(tx, actor, runId, "run.signed_off", null, { comment });
       const actualMinutes = workingMinutes(workCounted(events, state, run.studentId), { assignedAt: run.createdAt.toISOString() });
       const revisionsCited = revisionsCitedBy(version);

@@ -8,6 +8,8 @@ import { requirePageUser } from "@/app/_adapters/session";
 import { isUuid } from "@/lib/server/http";
 import { getRunDetail } from "@/lib/server/runs/queries";
 import { sortNotices } from "@/lib/domain/validation/cards";
+import { reopenedStepIds, type Reading } from "@/lib/domain/runs/fold";
+import { initialsOf } from "@/lib/domain/names";
 import { ReviewActions } from "../_components/review-actions";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
@@ -21,11 +23,16 @@ const eventLabel: Record<string, string> = {
   "photo.added": "added a photo",
   "timer.started": "started the timer",
   "timer.stopped": "stopped the timer",
+  "inspection.called": "called the instructor to",
   "inspection.bought_off": "bought off",
   "run.submitted": "handed in",
-  "run.returned": "returned the run",
+  "run.returned": "sent the run back for rework",
   "run.signed_off": "signed off",
 };
+
+const shortTime = (iso: string) => iso.slice(0, 16).replace("T", " ");
+const verdict = (r: Reading) =>
+  r.judgement.status === "in" ? "within limits" : r.judgement.status === "out" ? "OUT OF LIMITS" : "not understood";
 
 export default async function ReviewRunPage({ params }: { params: Promise<{ runId: string }> }) {
   const { runId } = await params;
@@ -34,6 +41,8 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
   const detail = await getRunDetail({ actor: user, runId }).catch(notFoundOnMissing);
   const { version, state, run } = detail;
   const stepNumber = new Map(version.steps.map((s, i) => [s.id, i + 1]));
+  const names = new Map(detail.events.map((e) => [e.userId, e.userName]));
+  const nameOf = (id: string) => names.get(id) ?? (id === run.studentId ? run.studentName : "someone");
   const lateById = new Map(state.late.map((l) => [l.id, l]));
   const ignoredById = new Map(state.ignored.map((i) => [i.id, i.reason]));
   const revisions = [...new Map(version.steps.flatMap((s) => s.references).map((r) => [r.revisionId, r])).values()];
@@ -67,15 +76,18 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
       <ReviewActions
         runId={runId}
         status={state.status}
-        inspectionPoints={version.steps
-          .map((s, i) => ({
+        who={`${run.studentName}'s run of "${version.title}" (version ${version.number})`}
+        steps={version.steps.map((s, i) => {
+          const st = state.steps[s.id]!;
+          return {
             id: s.id,
             number: i + 1,
-            checked: !!state.steps[s.id]?.checked,
-            boughtOff: !!state.steps[s.id]?.boughtOff,
+            checked: st.checked,
+            boughtOff: !!st.boughtOff,
             inspectionPoint: s.inspectionPoint,
-          }))
-          .filter((s) => s.inspectionPoint)}
+            outOfLimits: !!st.value && st.value.judgement.status !== "in",
+          };
+        })}
       />
 
       <section aria-label="Steps" className="flex flex-col gap-3">
@@ -89,8 +101,12 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                   <h3 className="mr-auto text-lg font-bold">
                     Step {i + 1} {s.checked ? "· done" : "· not done"}
                   </h3>
+                  {s.checkedBy ? <span className="badge bg-panel text-ink">Done by {initialsOf(nameOf(s.checkedBy))}</span> : null}
+                  {s.reopened && !s.checked ? <span className="badge bg-danger-pale text-danger">Reopened for rework</span> : null}
                   {step.inspectionPoint ? (
-                    <span className="badge bg-deck text-white">{s.boughtOff ? "Bought off" : "Inspection point"}</span>
+                    <span className="badge bg-deck text-white">
+                      {s.boughtOff ? "Bought off" : s.called ? `Buy-off called for ${shortTime(s.called.at)}` : "Inspection point"}
+                    </span>
                   ) : null}
                 </div>
                 {sortNotices(step.notices).map((n, j) => (
@@ -98,12 +114,37 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                 ))}
                 <StepMarkdown text={step.text} />
                 {step.measurement ? (
-                  <p className={s.value ? (s.value.judgement.status === "in" ? "notice-ok" : "notice-error") : "hint"}>
-                    {step.measurement.label} (limits {describeLimit(step.measurement)}):{" "}
-                    {s.value
-                      ? `${s.value.text}, ${s.value.judgement.status === "in" ? "within limits" : "OUT OF LIMITS"}. ${s.value.judgement.message}`
-                      : "no reading recorded"}
-                  </p>
+                  <div className="flex flex-col gap-1">
+                    <p className={s.value ? (s.value.judgement.status === "in" ? "notice-ok" : "notice-error") : "hint"}>
+                      {step.measurement.label} (limits {describeLimit(step.measurement)}):{" "}
+                      {s.value
+                        ? `${s.value.text}, ${verdict(s.value)}. ${s.value.judgement.message}`
+                        : s.readings.length
+                          ? "no reading since the step was reopened"
+                          : "no reading recorded"}
+                    </p>
+                    {s.readings.length > 1 || (s.readings.length === 1 && !s.value) ? (
+                      <table className="text-sm">
+                        <caption className="text-left font-semibold">Every reading of this step, oldest first</caption>
+                        <thead>
+                          <tr>
+                            <th className="pr-4 text-left">When (cart)</th>
+                            <th className="pr-4 text-left">Reading</th>
+                            <th className="text-left">Verdict</th>
+                          </tr>
+                        </thead>
+                        <tbody>
+                          {s.readings.map((r, j) => (
+                            <tr key={j} className={r.judgement.status === "in" ? "" : "font-bold text-danger"}>
+                              <td className="pr-4 font-mono">{shortTime(r.at)}</td>
+                              <td className="pr-4">{r.text}</td>
+                              <td>{verdict(r)}</td>
+                            </tr>
+                          ))}
+                        </tbody>
+                      </table>
+                    ) : null}
+                  </div>
                 ) : null}
                 {s.timer ? (
                   <p>
@@ -155,6 +196,11 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                 {e.stepId ? ` step ${stepNumber.get(e.stepId) ?? "?"}` : ""}
                 {typeof e.payload?.value === "string" ? `: ${e.payload.value}` : ""}
                 {typeof e.payload?.comment === "string" && e.payload.comment ? `: “${e.payload.comment}”` : ""}
+                {e.type === "run.returned" && reopenedStepIds(e.payload).length
+                  ? ` (to do again: step ${reopenedStepIds(e.payload)
+                      .map((id) => stepNumber.get(id) ?? "?")
+                      .join(", ")})`
+                  : ""}
                 {late ? (
                   <strong className="ml-2 rounded border border-line px-1">
                     {`arrived after the ${late.after} of ${late.at.slice(0, 16).replace("T", " ")}${e.serverTime ? ` (received ${e.serverTime.slice(0, 16).replace("T", " ")})` : ""}`}

@@ -89,6 +89,6 @@ export class CartRunnerPage {
   }
 
   async handIn() {
-    await this.page.getByRole("button", { name: "Hand in for sign-off" }).click();
+    await this.page.getByRole("button", { name: "Hand in for inspection" }).click();
   }
 }

@@ -30,12 +30,24 @@ export class ReviewPage {
 
   async returnWithComment(comment: string) {
     await this.writeComment(comment);
-    await this.page.getByRole("button", { name: "Return with comment" }).click();
+    await this.page.getByRole("button", { name: "Send back for rework" }).click();
   }
 
-  /** Signs the run off, with a comment for the student if one is given. */
-  async signOff(comment?: string) {
+  /** Ticks the steps to do again before sending the run back. */
+  async reopenSteps(...numbers: number[]) {
+    for (const n of numbers) await this.page.getByRole("checkbox", { name: new RegExp(`^Step ${n}\\b`) }).check();
+  }
+
+  /** Signs the run off, with a comment for the student if one is given, confirming with the password. */
+  async signOff(comment?: string, password = "hangarleaf-demo") {
     if (comment !== undefined) await this.writeComment(comment);
-    await this.page.getByRole("button", { name: "Sign off" }).click();
+    await this.page.getByRole("button", { name: "Sign off…" }).click();
+    await this.page.getByLabel("Your password, to confirm it is you").fill(password);
+    await this.page.getByRole("button", { name: "Sign off now" }).click();
+  }
+
+  /** The queue of inspection points waiting for buy-off. */
+  async openBuyOffQueue() {
+    await this.page.goto("/review?tab=buy-offs");
   }
 }
