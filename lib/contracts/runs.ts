@@ -1,6 +1,7 @@
 // JSON shapes of assignments, runs and records shared by the API, the cart and the review screens.
 import type { CardVersionDto } from "@/lib/contracts/cards";
 import type { RunEvent, RunStatus } from "@/lib/domain/runs/fold";
+import type { MeasuredValue } from "@/lib/domain/runs/measured";
 
 /** What "my work" shows: the run's status, and overdue when the due date passed before submitting. */
 export type WorkStatus = RunStatus | "overdue";
@@ -113,6 +114,10 @@ export interface StudentRecordDto {
       instructorName: string;
       estimatedMinutes: number | null;
       actualMinutes: number;
+      /** As the sign-off recorded them: the manual revisions the version cited, with the pages. */
+      revisionsCited: SignOffDto["revisionsCited"];
+      /** Each measured step of the version with the reading that counts, folded from the run's events. */
+      measured: MeasuredValue[];
     }[];
   }[];
   open: WorkItemDto[];

@@ -368,7 +368,9 @@ describe("review and sign-off", () => {
     const csv = await call("GET", `/api/records/students/${students[0]!.id}?format=csv`, { cookie });
     expect(csv.headers.get("content-type")).toMatch(/text\/csv/);
     const text = await csv.text();
-    expect(text.split("\r\n")[0]).toBe("Student,Subject,Task card,Version,Signed off,Instructor,Estimated hours,Actual hours");
+    expect(text.split("\r\n")[0]).toBe(
+      "Student,Subject,Task card,Version,Revisions cited,Signed off (UTC),Instructor,Estimated hours,Actual hours,Step,Measured,Value,Limit,Verdict",
+    );
     expect(text).toContain(card.published!.title);
     const pdf = await call("GET", `/api/records/students/${students[0]!.id}?format=pdf`, { cookie });
     expect(pdf.headers.get("content-type")).toBe("application/pdf");

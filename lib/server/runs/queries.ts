@@ -1,6 +1,6 @@
 // Reading runs: work lists, the review queue, one run folded from its events, its packet.
 import "server-only";
-import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type Db, type Tx } from "@/db";
 import { assignments, curriculumSubjects, runEvents, runPhotos, runs, signOffs, taskCardVersions, users } from "@/db/schema";
 import { type Actor } from "@/lib/domain/access/permissions";
@@ -126,14 +126,46 @@ function toRunEvent(e: typeof runEvents.$inferSelect): RunEvent {
   };
 }
 
+// Review events are written only by the permission-checked routes below (the events API refuses
+// them), so whoever wrote one was a reviewer then, even if their role changed since.
+const reviewersOf = (stored: (typeof runEvents.$inferSelect)[]) =>
+  new Set(stored.filter((e) => reviewEventTypes.has(e.type)).map((e) => e.userId));
+
 /** The fold of what is stored, with the reviewers' ids as the server knows them. */
 export async function foldStored(db: Db | Tx, runId: string, version: Pick<CardVersionDto, "steps">) {
   const rows = await eventsOf(db, runId);
-  // Review events are written only by the permission-checked routes below (the events API refuses
-  // them), so whoever wrote one was a reviewer then, even if their role changed since.
-  const reviewers = new Set(rows.filter((r) => reviewEventTypes.has(r.event.type)).map((r) => r.event.userId));
+  const reviewers = reviewersOf(rows.map((r) => r.event));
   const events = rows.map((r) => toRunEvent(r.event));
   return { rows, events, reviewers, state: foldRun(events, stepsForFold(version), reviewers) };
+}
+
+/** The folds of many runs, as foldStored folds one, from one read of their events (a record lists many). */
+export async function foldStoredRuns(
+  db: Db | Tx,
+  list: readonly { runId: string; steps: readonly CardStepForRun[] }[],
+): Promise<Map<string, RunState>> {
+  if (!list.length) return new Map();
+  const stored = await db
+    .select()
+    .from(runEvents)
+    .where(
+      inArray(
+        runEvents.runId,
+        list.map((r) => r.runId),
+      ),
+    );
+  const byRun = new Map<string, (typeof runEvents.$inferSelect)[]>();
+  for (const e of stored) {
+    const events = byRun.get(e.runId);
+    if (events) events.push(e);
+    else byRun.set(e.runId, [e]);
+  }
+  return new Map(
+    list.map(({ runId, steps }) => {
+      const events = byRun.get(runId) ?? [];
+      return [runId, foldRun(events.map(toRunEvent), steps, reviewersOf(events))];
+    }),
+  );
 }
 
 async function signOffOf(db: Db | Tx, runId: string): Promise<SignOffDto | null> {

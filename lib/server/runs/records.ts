@@ -4,11 +4,13 @@ import { PDFDocument, StandardFonts } from "pdf-lib";
 import { getDb } from "@/db";
 import { classes, classMembers, curriculumSubjects, runs, signOffs, taskCardVersions, users } from "@/db/schema";
 import { can, type Actor } from "@/lib/domain/access/permissions";
-import type { ClassRecordDto, StudentRecordDto } from "@/lib/contracts/runs";
+import type { ClassRecordDto, SignOffDto, StudentRecordDto } from "@/lib/contracts/runs";
 import { AppError } from "@/lib/domain/errors";
-import { CardWriter, grey } from "@/lib/server/pdf/card-pdf";
-import { toCsv } from "@/lib/domain/runs/csv";
-import { listRunsOfStudent } from "@/lib/server/runs/queries";
+import { CardWriter, grey, markdownToPlain } from "@/lib/server/pdf/card-pdf";
+import { measuredValueLine, measuredValues } from "@/lib/domain/runs/measured";
+import { recordHours, revisionsLine, signedAtText } from "@/lib/domain/runs/record-csv";
+import { stepSchema } from "@/lib/domain/validation/cards";
+import { foldStoredRuns, listRunsOfStudent } from "@/lib/server/runs/queries";
 import { readsRecordOf } from "@/lib/server/runs/scope";
 
 const noSubject = "No subject";
@@ -32,6 +34,8 @@ export async function studentRecord({ actor, studentId }: { actor: Actor; studen
       instructorName: users.name,
       estimatedMinutes: taskCardVersions.estimatedMinutes,
       actualMinutes: signOffs.actualMinutes,
+      revisionsCited: signOffs.revisionsCited,
+      steps: taskCardVersions.steps,
     })
     .from(signOffs)
     .innerJoin(runs, eq(runs.id, signOffs.runId))
@@ -40,10 +44,23 @@ export async function studentRecord({ actor, studentId }: { actor: Actor; studen
     .innerJoin(users, eq(users.id, signOffs.instructorId))
     .where(eq(runs.studentId, studentId))
     .orderBy(asc(curriculumSubjects.name), asc(signOffs.signedAt));
+  // The measured values are folded from the events, as the review screen folds them: every signed-off
+  // run's events in one read, each folded over its own version's steps.
+  const stepsOf = new Map(signed.map((s) => [s.runId, ((s.steps ?? []) as unknown[]).map((step) => stepSchema.parse(step))]));
+  const folds = await foldStoredRuns(
+    db,
+    signed.map((s) => ({ runId: s.runId, steps: stepsOf.get(s.runId)! })),
+  );
   const bySubject = new Map<string, StudentRecordDto["subjects"][number]["signedOff"]>();
-  for (const s of signed) {
+  for (const { steps: _steps, revisionsCited, ...s } of signed) {
+    const steps = stepsOf.get(s.runId)!.map((step) => ({ ...step, text: markdownToPlain(step.text) }));
     const list = bySubject.get(s.subjectName ?? noSubject) ?? [];
-    list.push({ ...s, signedAt: s.signedAt.toISOString() });
+    list.push({
+      ...s,
+      signedAt: s.signedAt.toISOString(),
+      revisionsCited: revisionsCited as SignOffDto["revisionsCited"],
+      measured: measuredValues(steps, folds.get(s.runId)?.steps ?? {}),
+    });
     bySubject.set(s.subjectName ?? noSubject, list);
   }
   const all = await listRunsOfStudent(db, studentId);
@@ -60,23 +77,7 @@ export async function studentRecord({ actor, studentId }: { actor: Actor; studen
   };
 }
 
-const hours = (minutes: number) => (minutes / 60).toFixed(1);
-
-export function studentRecordCsv(record: StudentRecordDto): string {
-  const rows = record.subjects.flatMap((s) =>
-    s.signedOff.map((c) => [
-      record.student.name,
-      s.subjectName,
-      c.title,
-      c.versionNumber,
-      c.signedAt.slice(0, 10),
-      c.instructorName,
-      c.estimatedMinutes != null ? hours(c.estimatedMinutes) : "",
-      hours(c.actualMinutes),
-    ]),
-  );
-  return toCsv(["Student", "Subject", "Task card", "Version", "Signed off", "Instructor", "Estimated hours", "Actual hours"], rows);
-}
+const hours = recordHours;
 
 export async function studentRecordPdf(record: StudentRecordDto, printedAt = new Date()): Promise<Uint8Array> {
   const doc = await PDFDocument.create();
@@ -98,10 +99,14 @@ export async function studentRecordPdf(record: StudentRecordDto, printedAt = new
   for (const subject of record.subjects) {
     w.text(subject.subjectName, { size: 13, bold: true });
     for (const c of subject.signedOff) {
+      w.text(`${c.title} (version ${c.versionNumber})`, { bold: true, indent: 12 });
       w.text(
-        `${c.title} (version ${c.versionNumber}) - signed off ${c.signedAt.slice(0, 10)} by ${c.instructorName}; ${c.estimatedMinutes != null ? `estimated ${hours(c.estimatedMinutes)} h, ` : ""}actual ${hours(c.actualMinutes)} h`,
-        { indent: 12 },
+        `Signed off ${signedAtText(c.signedAt)} by ${c.instructorName}; ${c.estimatedMinutes != null ? `estimated ${hours(c.estimatedMinutes)} h, ` : ""}actual ${hours(c.actualMinutes)} h`,
+        { indent: 24 },
       );
+      w.text(`Manual revisions cited: ${revisionsLine(c.revisionsCited) || "none"}`, { indent: 24 });
+      for (const m of c.measured) w.text(measuredValueLine(m), { indent: 24 });
+      w.gap(4);
     }
     w.gap(6);
   }

@@ -6,11 +6,13 @@ import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
 import { isUuid } from "@/lib/server/http";
 import { studentRecord } from "@/lib/server/runs/records";
+import { verdictWords } from "@/lib/domain/runs/measured";
+import { recordHours, revisionsLine, signedAtText } from "@/lib/domain/runs/record-csv";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Training record" };
 
-const hours = (minutes: number) => `${(minutes / 60).toFixed(1)} h`;
+const hours = (minutes: number) => `${recordHours(minutes)} h`;
 
 export default async function StudentRecordPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
@@ -65,7 +67,36 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
                     </>
                   ),
                 },
-                { header: "Signed off", className: "whitespace-nowrap", cell: (c) => c.signedAt.slice(0, 10) },
+                {
+                  header: "Manual revisions cited",
+                  cell: (c) =>
+                    c.revisionsCited.length ? (
+                      <ul>
+                        {c.revisionsCited.map((r) => (
+                          <li key={r.revisionId}>{revisionsLine([r])}</li>
+                        ))}
+                      </ul>
+                    ) : (
+                      "—"
+                    ),
+                },
+                {
+                  header: "Measured values",
+                  cell: (c) =>
+                    c.measured.length ? (
+                      <ul className="flex flex-col gap-1">
+                        {c.measured.map((m) => (
+                          <li key={m.stepId} className={m.verdict === "within_limits" ? "" : "font-bold text-danger"}>
+                            Step {m.stepNumber}, {m.label}: {m.value ?? "—"} <span className="text-ink-soft">(limits {m.limit.text})</span>,{" "}
+                            {verdictWords[m.verdict]}
+                          </li>
+                        ))}
+                      </ul>
+                    ) : (
+                      "—"
+                    ),
+                },
+                { header: "Signed off", className: "whitespace-nowrap", cell: (c) => signedAtText(c.signedAt) },
                 { header: "By", cell: (c) => c.instructorName },
                 { header: "Estimated", cell: (c) => (c.estimatedMinutes != null ? hours(c.estimatedMinutes) : "—") },
                 { header: "Actual", cell: (c) => hours(c.actualMinutes) },

@@ -1,7 +1,8 @@
 import { handle } from "@/app/_adapters/handle";
 import { api } from "@/lib/contracts/endpoints";
 import { fileResponse, fileSlug } from "@/lib/server/file-response";
-import { studentRecord, studentRecordCsv, studentRecordPdf } from "@/lib/server/runs/records";
+import { studentRecordCsv } from "@/lib/domain/runs/record-csv";
+import { studentRecord, studentRecordPdf } from "@/lib/server/runs/records";
 
 /** JSON by default; ?format=csv or ?format=pdf for export. */
 export const GET = handle(api.runs.studentRecord, async ({ actor, params: { id }, query: { format } }) => {
