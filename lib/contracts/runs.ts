@@ -26,6 +26,24 @@ export interface WorkItemDto {
   estimatedMinutes: number | null;
 }
 
+/** An open run on an older version of its card, and what moving it to the newest version does. */
+export interface RunToMoveDto {
+  runId: string;
+  studentName: string;
+  status: RunStatus;
+  versionNumber: number;
+  dueOn: string | null;
+  note: string;
+  /** Step numbers in the new version that changed: done again. */
+  restartSteps: number[];
+  /** Step numbers only the new version has. */
+  addedSteps: number[];
+  /** How many steps of the old version the new one no longer has. */
+  removedSteps: number;
+  /** How many steps keep their work. */
+  keptSteps: number;
+}
+
 /** An inspection point done on a cart and waiting for the instructor's buy-off. */
 export interface BuyOffCallDto {
   runId: string;

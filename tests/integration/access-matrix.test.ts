@@ -231,6 +231,19 @@ export const accessMatrix: Row[] = [
   { method: "POST", route: "/api/assignments", path: () => "/api/assignments", json: {}, expect: only({ instructor: 422, admin: 422 }) },
   { method: "GET", route: "/api/my-work", path: () => "/api/my-work", expect: only({ student: 200 }) },
   { method: "GET", route: "/api/review", path: () => "/api/review", expect: only({ instructor: 200, admin: 200 }) },
+  {
+    method: "GET",
+    route: "/api/cards/[id]/runs-to-move",
+    path: (i) => `/api/cards/${i.cardId}/runs-to-move`,
+    expect: only({ instructor: 200, admin: 200 }),
+  },
+  {
+    method: "POST",
+    route: "/api/cards/[id]/move-runs",
+    path: (i) => `/api/cards/${i.cardId}/move-runs`,
+    json: {},
+    expect: only({ instructor: 422, admin: 422 }),
+  },
   { method: "GET", route: "/api/review/buy-offs", path: () => "/api/review/buy-offs", expect: only({ instructor: 200, admin: 200 }) },
   // A run is seen by its student and by reviewers; anyone else is told it does not exist.
   {

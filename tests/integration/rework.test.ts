@@ -203,3 +203,83 @@ describe("rework and readings", () => {
     expect(page).toContain("OUT OF LIMITS");
   });
 });
+
+describe("moving open work to a new card version", () => {
+  it("keeps work on unchanged steps, restarts changed ones, and only for the instructor's own students", async () => {
+    const ids = [randomUUID(), randomUUID(), randomUUID()];
+    const [subject] = await getDb().select().from(curriculumSubjects).limit(1);
+    const content = {
+      title: uniqueTitle("Move card"),
+      applicability: [],
+      ataChapter: "32",
+      subjectId: subject!.id,
+      estimatedMinutes: 20,
+      steps: [
+        { id: ids[0], text: "Chock the wheels.", references: [] },
+        {
+          id: ids[1],
+          text: "Measure the tyre pressure.",
+          references: [],
+          measurement: { label: "Pressure", unit: "psi", min: 30, max: 34 },
+        },
+        { id: ids[2], text: "Fit the valve cap.", references: [] },
+      ],
+    };
+    const made = await call("POST", "/api/cards", { cookie: teacher.cookie, json: { content } });
+    const cardId = ((await made.json()) as { card: CardDto }).card.id;
+    expect((await call("POST", `/api/cards/${cardId}/publish`, { cookie: teacher.cookie })).status).toBe(200);
+    const note = `Move ${randomUUID().slice(0, 6)}`;
+    expect(
+      (await call("POST", "/api/assignments", { cookie: teacher.cookie, json: { cardId, studentIds: [learner.id], note } })).status,
+    ).toBe(201);
+    const work = ((await (await call("GET", "/api/my-work", { cookie: learner.cookie })).json()) as { work: WorkItemDto[] }).work;
+    const runId = work.find((w) => w.note === note)!.runId;
+    const before = new Date(Date.now() - 60_000).toISOString();
+    await send(runId, [
+      event("step.checked", { stepId: ids[0] }),
+      event("value.recorded", { stepId: ids[1], payload: { value: "32 psi" } }),
+      event("step.checked", { stepId: ids[1] }),
+    ]);
+
+    // Version 2: the limits of step 2 change and a step is added.
+    const v2 = {
+      ...content,
+      steps: [
+        content.steps[0],
+        { ...content.steps[1], measurement: { label: "Pressure", unit: "psi", min: 40, max: 44 } },
+        content.steps[2],
+        { id: randomUUID(), text: "Record the pressure in the log.", references: [] },
+      ],
+    };
+    expect((await call("PUT", `/api/cards/${cardId}/draft`, { cookie: teacher.cookie, json: { content: v2 } })).status).toBe(200);
+    expect((await call("POST", `/api/cards/${cardId}/publish`, { cookie: teacher.cookie })).status).toBe(200);
+
+    const listed = (await (await call("GET", `/api/cards/${cardId}/runs-to-move`, { cookie: teacher.cookie })).json()) as {
+      target: number;
+      runs: { runId: string; restartSteps: number[]; addedSteps: number[]; keptSteps: number }[];
+    };
+    expect(listed.target).toBe(2);
+    expect(listed.runs.find((r) => r.runId === runId)).toMatchObject({ restartSteps: [2], addedSteps: [4], keptSteps: 2 });
+    const strangers = (await (await call("GET", `/api/cards/${cardId}/runs-to-move`, { cookie: stranger.cookie })).json()) as {
+      runs: unknown[];
+    };
+    expect(strangers.runs).toHaveLength(0);
+    expect((await call("POST", `/api/cards/${cardId}/move-runs`, { cookie: stranger.cookie, json: { runIds: [runId] } })).status).toBe(404);
+    expect((await call("POST", `/api/cards/${cardId}/move-runs`, { cookie: learner.cookie, json: { runIds: [runId] } })).status).toBe(403);
+
+    const moved = await call("POST", `/api/cards/${cardId}/move-runs`, { cookie: teacher.cookie, json: { runIds: [runId] } });
+    expect(moved.status).toBe(200);
+    expect(await moved.json()).toMatchObject({ version: 2, moved: [{ runId, restartSteps: [2] }] });
+    expect((await call("POST", `/api/cards/${cardId}/move-runs`, { cookie: teacher.cookie, json: { runIds: [runId] } })).status).toBe(409);
+
+    // Offline work on the old step 2, stamped before the move and sent after it, does not count on the new one.
+    await send(runId, [event("step.checked", { stepId: ids[1], clientTime: before })]);
+    const d = await detail(runId);
+    expect(d.version.number).toBe(2);
+    const state = stateOf(d);
+    expect(state.steps[ids[0]!]!.checked).toBe(true);
+    expect(state.steps[ids[1]!]).toMatchObject({ checked: false, value: null, reopened: { why: "new version" } });
+    expect(state.ignored.at(-1)?.reason).toMatch(/earlier card version/);
+    expect(d.version.steps).toHaveLength(4);
+  });
+});

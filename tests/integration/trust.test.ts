@@ -153,7 +153,10 @@ describe("a signed record cannot be bent by a cart's clock", () => {
     ).toBe(200);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: teacher.cookie, json: { stepId: stepIds[0] } })).status).toBe(200);
     // The back-dated uncheck would have made the sign-off refuse "step 2 is not done".
-    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: teacher.cookie, json: { comment: "ok", password: teacher.password } })).status).toBe(200);
+    expect(
+      (await call("POST", `/api/runs/${runId}/sign-off`, { cookie: teacher.cookie, json: { comment: "ok", password: teacher.password } }))
+        .status,
+    ).toBe(200);
     const shown = await detail(learner.cookie, runId);
     expect(shown.run.status).toBe("signed_off");
     const [signed] = await getDb().select().from(signOffs).where(eq(signOffs.runId, runId));
@@ -175,7 +178,9 @@ describe("a signed record cannot be bent by a cart's clock", () => {
     expect((await send(learner.cookie, runId, backDated)).status).toBe(200);
     expect((await send(learner.cookie, runId, [...honest, event("run.submitted", ago(10))])).status).toBe(200);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: teacher.cookie, json: { stepId: stepIds[0] } })).status).toBe(200);
-    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: teacher.cookie, json: { password: teacher.password } })).status).toBe(200);
+    expect(
+      (await call("POST", `/api/runs/${runId}/sign-off`, { cookie: teacher.cookie, json: { password: teacher.password } })).status,
+    ).toBe(200);
     const [signed] = await getDb().select({ minutes: signOffs.actualMinutes }).from(signOffs).where(eq(signOffs.runId, runId));
     // The cart's stamps alone add up to 400 × 20 minutes; the run was assigned a moment ago.
     expect(signed!.minutes).toBeLessThanOrEqual(2);
@@ -209,7 +214,9 @@ describe("instructors act on their own classes; authors own their cards", () => 
     expect((await call("GET", `/api/runs/${runId}/photos/${randomUUID()}`, { cookie: them })).status).toBe(404);
     expect((await call("POST", `/api/runs/${runId}/buy-off`, { cookie: them, json: { stepId: stepIds[0] } })).status).toBe(404);
     expect((await call("POST", `/api/runs/${runId}/return`, { cookie: them, json: { comment: "not mine" } })).status).toBe(404);
-    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: them, json: { password: otherTeacher.password } })).status).toBe(404);
+    expect((await call("POST", `/api/runs/${runId}/sign-off`, { cookie: them, json: { password: otherTeacher.password } })).status).toBe(
+      404,
+    );
     for (const format of ["", "?format=csv", "?format=pdf"]) {
       expect((await call("GET", `/api/records/students/${learner.id}${format}`, { cookie: them })).status).toBe(404);
     }

@@ -1,4 +1,6 @@
 import { describe, expect, it } from "vitest";
+import { compareSteps } from "@/lib/domain/runs/move";
+import type { Step } from "@/lib/domain/validation/cards";
 import { cannotMarkDone, foldRun, orderEvents, reopenedStepIds, type CardStepForRun, type RunEvent } from "@/lib/domain/runs/fold";
 
 const steps: CardStepForRun[] = [
@@ -354,5 +356,60 @@ describe("readings, rework and calls for a buy-off", () => {
     expect(foldRun(called, steps, instructors)).toMatchObject({ waitingAt: "s2", calledAt: at(2) });
     const undone = foldRun([...called, ev("step.unchecked", 3, { stepId: "s2" })], steps, instructors);
     expect(undone).toMatchObject({ waitingAt: null, calledAt: null });
+  });
+});
+
+describe("a move to a new card version", () => {
+  it("restarts the steps that changed, keeps the rest, and opens a handed-in run again", () => {
+    const state = foldRun(
+      [...story, ev("run.moved", 30, { userId: instructor, payload: { fromVersion: 1, toVersion: 2, reopenStepIds: ["s1"] } })],
+      steps,
+      instructors,
+    );
+    expect(state.status).toBe("in_progress");
+    // The old readings were judged against the old limits: not carried, and not judged again.
+    expect(state.steps.s1).toMatchObject({ checked: false, value: null, readings: [], reopened: { why: "new version" } });
+    expect(state.steps.s3!.checked).toBe(true);
+    expect(state.ignored).toEqual([]);
+    const fromStudent = foldRun([ev("run.moved", 1, { payload: { reopenStepIds: ["s1"] } })], steps, instructors);
+    expect(fromStudent.ignored[0]!.reason).toBe("only an instructor may do this");
+  });
+
+  it("does not count offline work on a changed step that was done before the move and sent after it", () => {
+    const moved = { ...ev("run.moved", 10, { userId: instructor, payload: { reopenStepIds: ["s3"] } }), serverTime: at(10) };
+    const late = { ...ev("step.checked", 5, { stepId: "s3" }), serverTime: at(12) };
+    const kept = { ...ev("step.checked", 6, { stepId: "s1" }), serverTime: at(12) };
+    const state = foldRun([moved, late, kept], steps, instructors);
+    expect(state.steps.s3!.checked).toBe(false);
+    expect(state.ignored.map((i) => i.reason)).toEqual([
+      "arrived after the move to a new card version: done on the earlier card version; this step changed in the new one",
+    ]);
+    expect(state.steps.s1!.checked).toBe(true);
+  });
+});
+
+describe("comparing card versions for a move", () => {
+  const step = (id: string, over: Partial<Step> = {}): Step => ({
+    id,
+    text: `Do ${id}.`,
+    notices: [],
+    references: [],
+    measurement: null,
+    calculator: null,
+    inspectionPoint: false,
+    timerMinutes: null,
+    ...over,
+  });
+  it("keeps unchanged steps, restarts changed or rechecked ones, and lists added and removed ones", () => {
+    const old = [step("a"), step("b"), step("c"), step("d", { references: [{ revisionId: "r1", page: 4, quote: "" }] })];
+    const next = [
+      step("a"),
+      step("b", { measurement: { label: "Gap", unit: "in", min: 0.01, max: 0.02, nominal: null, tolerance: null } }),
+      step("d", { references: [{ revisionId: "r2", page: 5, quote: "" }] }),
+      step("e"),
+    ];
+    expect(compareSteps(old, next, new Set())).toEqual({ kept: ["a", "d"], restarted: ["b"], added: ["e"], removed: ["c"] });
+    // A cited page whose content changed in a new revision restarts the step even when the card's words did not.
+    expect(compareSteps(old, next, new Set(["d"])).restarted).toEqual(["b", "d"]);
   });
 });

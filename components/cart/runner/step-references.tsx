@@ -47,6 +47,16 @@ export function StepReferences({
           );
         })}
       </div>
+      {references.some((r) => !r.current) ? (
+        <p className="notice-error">
+          Superseded:{" "}
+          {references
+            .filter((r) => !r.current)
+            .map((r) => `page ${r.page} of ${r.manualTitle}, ${r.revisionLabel}`)
+            .join("; ")}
+          . A newer revision of the manual is current; ask your instructor before you follow this page.
+        </p>
+      ) : null}
       {packet && openPage && openPage > 0 ? <PacketPage file={packet} page={openPage} label={`Cited manual page`} /> : null}
     </div>
   );

@@ -2,10 +2,18 @@
 import { z } from "zod";
 import { runStatuses } from "@/lib/domain/vocabulary";
 import { endpoint, file, isUuid, json, uuidSegment } from "@/lib/contracts/endpoint";
-import { buyOffSchema, createAssignmentSchema, eventBatchSchema, returnRunSchema, signOffSchema } from "@/lib/domain/validation/runs";
+import {
+  buyOffSchema,
+  createAssignmentSchema,
+  eventBatchSchema,
+  moveRunsSchema,
+  returnRunSchema,
+  signOffSchema,
+} from "@/lib/domain/validation/runs";
 import type {
   AssignmentDto,
   BuyOffCallDto,
+  RunToMoveDto,
   ClassRecordDto,
   EventBatchResultDto,
   PhotoDto,
@@ -57,6 +65,26 @@ export const runsApi = {
     answer: json<{ runs: WorkItemDto[] }>(),
     who: "instructor, admin",
     doc: `200 \`{ "runs": [ … as above, with "studentName" ] }\` (an instructor's own classes' students and runs they assigned): \`submitted\` (default, oldest first), \`in_progress\`, \`returned\`, \`signed_off\``,
+  }),
+  runsToMove: endpoint({
+    method: "GET",
+    path: "/api/cards/:id/runs-to-move",
+    access: "assignments:manage",
+    params: { id: uuidSegment("That task card") },
+    headers: { "Cache-Control": "private, no-store" },
+    answer: json<{ target: number; runs: RunToMoveDto[] }>(),
+    who: "instructor, admin",
+    doc: `200 \`{ "target", "runs": [ { "runId", "studentName", "status", "versionNumber", "dueOn", "note", "restartSteps", "addedSteps", "removedSteps", "keptSteps" } ] }\`: open runs (not signed off) on older versions of the card, in the instructor's scope, with what a move to the newest published version (\`target\`) restarts: steps whose words, limits, notices or quotes changed, or whose cited page a newer manual revision changed or removed`,
+  }),
+  moveRuns: endpoint({
+    method: "POST",
+    path: "/api/cards/:id/move-runs",
+    access: "assignments:manage",
+    params: { id: uuidSegment("That task card") },
+    body: { kind: "json", schema: moveRunsSchema },
+    answer: json<{ version: number; moved: { runId: string; restartSteps: number[] }[] }>(),
+    who: "instructor, admin",
+    doc: `\`{ "runIds": [ … ] }\` (1–500) → 200: each run moves to the newest published version; work on unchanged steps is kept, changed steps are done again (a handed-in run with one is open again), audited. 404 for a run outside the instructor's scope or of another card, 409 for a signed-off run or one already on the newest version; nothing moves unless all can`,
   }),
   buyOffQueue: endpoint({
     method: "GET",

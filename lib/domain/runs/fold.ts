@@ -23,6 +23,7 @@ export const runEventTypes = [
   "inspection.bought_off",
   "run.submitted",
   "run.returned",
+  "run.moved",
   "run.signed_off",
 ] as const;
 export type RunEventType = (typeof runEventTypes)[number];
@@ -67,8 +68,11 @@ export interface StepState {
   /** The student asked the instructor to come and buy off this inspection point. */
   called: { at: string } | null;
   boughtOff: { by: string; at: string } | null;
-  /** The instructor sent the run back naming this step: it is to be done again, buy-off included. */
-  reopened: { at: string; by: string } | null;
+  /**
+   * The step is to be done again, buy-off included: the instructor sent the run back naming it
+   * ("rework"), or the run moved to a card version in which the step changed ("new version").
+   */
+  reopened: { at: string; by: string; why: "rework" | "new version" } | null;
   /** A note written since the current reading: an out-of-limit reading needs one before the step is done. */
   notedSinceReading: boolean;
 }
@@ -118,6 +122,21 @@ export function cannotMarkDone(step: Pick<CardStepForRun, "measurement">, s: Ste
     : "The reading was not understood: record it again, or write a note of why, before marking the step done.";
 }
 
+/** A step done again from the start; its readings stay in its history unless they were judged against other limits. */
+function restart(s: StepState, reopened: NonNullable<StepState["reopened"]>, keepReadings: boolean) {
+  Object.assign(s, {
+    checked: false,
+    checkedAt: null,
+    checkedBy: null,
+    value: null,
+    readings: keepReadings ? s.readings : [],
+    called: null,
+    boughtOff: null,
+    notedSinceReading: false,
+    reopened,
+  });
+}
+
 /** Text of a run.returned event's list of steps to do again, as ids; anything else is dropped. */
 export function reopenedStepIds(payload: Record<string, unknown> | undefined): string[] {
   const ids = payload?.reopenStepIds;
@@ -129,6 +148,7 @@ const reviewMoments = {
   "run.submitted": "hand-in",
   "inspection.bought_off": "buy-off",
   "run.returned": "return",
+  "run.moved": "move to a new card version",
   "run.signed_off": "sign-off",
 } as const;
 export type ReviewMoment = (typeof reviewMoments)[keyof typeof reviewMoments];
@@ -211,9 +231,18 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
     eventCount: 0,
   };
   const byId = new Map(steps.map((s) => [s.id, s]));
-  for (const { event: e, lateAfter } of orderEvents(events)) {
+  const movedSteps = new Set<string>();
+  const ordered = orderEvents(events);
+  // Work on a step before a move that restarted it was done on the old version's step: it is
+  // history, not judged again against the new version's limits.
+  const restartedAt = new Map<string, number>();
+  ordered.forEach(({ event: e }, i) => {
+    if (e.type === "run.moved" && instructors.has(e.userId)) for (const id of reopenedStepIds(e.payload)) restartedAt.set(id, i);
+  });
+  for (const [i, { event: e, lateAfter }] of ordered.entries()) {
     state.eventCount++;
     if (lateAfter) state.late.push({ id: e.id, after: lateAfter.moment, at: lateAfter.receivedAt });
+    if (e.stepId && (restartedAt.get(e.stepId) ?? -1) > i) continue;
     // A late event that is set aside says so: it was stamped before the review moment it arrived after.
     const setAside = (reason: string) =>
       state.ignored.push({ id: e.id, reason: lateAfter ? `arrived after the ${lateAfter.moment}: ${reason}` : reason });
@@ -231,6 +260,23 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
       state.status = "submitted";
       continue;
     }
+    if (e.type === "run.moved") {
+      if (!isInstructor) {
+        setAside("only an instructor may do this");
+        continue;
+      }
+      // The run now follows a newer card version: the steps that changed in it are done again (their
+      // readings were judged against the old limits), and a handed-in run with such a step is open again.
+      const restarted = reopenedStepIds(e.payload);
+      for (const id of restarted) {
+        const s = state.steps[id];
+        if (!s) continue;
+        movedSteps.add(id);
+        restart(s, { at: e.clientTime, by: e.userId, why: "new version" }, false);
+      }
+      if (restarted.length && state.status === "submitted") state.status = "in_progress";
+      continue;
+    }
     if (e.type === "run.returned" || e.type === "run.signed_off") {
       if (!isInstructor) {
         setAside("only an instructor may do this");
@@ -243,17 +289,7 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
         // readings stay in the step's history so the second attempt is seen beside the first.
         for (const id of reopenedStepIds(e.payload)) {
           const s = state.steps[id];
-          if (!s) continue;
-          Object.assign(s, {
-            checked: false,
-            checkedAt: null,
-            checkedBy: null,
-            value: null,
-            called: null,
-            boughtOff: null,
-            notedSinceReading: false,
-            reopened: { at: e.clientTime, by: e.userId },
-          });
+          if (s) restart(s, { at: e.clientTime, by: e.userId, why: "rework" }, true);
         }
       } else {
         state.status = "signed_off";
@@ -268,6 +304,11 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
     }
     if (!step || !s) {
       setAside("no such step on this card version");
+      continue;
+    }
+    // Work done offline on the old version of a step that changed, sent after the move, is not work on the new one.
+    if (lateAfter?.moment === "move to a new card version" && movedSteps.has(step.id)) {
+      setAside("done on the earlier card version; this step changed in the new one");
       continue;
     }
     if (e.type !== "inspection.bought_off") {

@@ -6,7 +6,9 @@ import { earliestToday } from "@/lib/domain/validation/dates";
 
 // What a cart may send. Buy-off, return and sign-off are made on the server by their own routes,
 // after their checks (the step is done, the run is handed in) and with an audit entry.
-export const cartEventTypes = runEventTypes.filter((t) => t !== "run.returned" && t !== "run.signed_off" && t !== "inspection.bought_off");
+export const cartEventTypes = runEventTypes.filter(
+  (t) => t !== "run.returned" && t !== "run.signed_off" && t !== "inspection.bought_off" && t !== "run.moved",
+);
 export const maxEventsPerBatch = 500;
 const maxPayloadChars = 4000;
 
@@ -104,6 +106,12 @@ export const signOffSchema = reviewCommentSchema.extend({
     .string({ error: "Type your password to sign off." })
     .min(1, "Type your password to sign off.")
     .max(200, "That is not your password."),
+});
+export const moveRunsSchema = z.object({
+  runIds: z
+    .array(z.uuid("A run id is a UUID."), { error: "Name the runs to move as a list." })
+    .min(1, "Choose at least one student's run to move.")
+    .max(500, "At most 500 runs at a time."),
 });
 export const buyOffSchema = z.object({ stepId: z.uuid("Name the inspection point's step.") });
 

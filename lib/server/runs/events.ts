@@ -15,7 +15,7 @@ import { noticeBuyOffCall } from "@/lib/server/runs/buy-offs";
 export const signedOffConflict = () =>
   new AppError("conflict", "This run is signed off. Its record cannot change; ask your instructor to assign the card again.");
 
-export const reviewEventTypes = new Set(["inspection.bought_off", "run.returned", "run.signed_off"]);
+export const reviewEventTypes = new Set(["inspection.bought_off", "run.returned", "run.signed_off", "run.moved"]);
 
 /** Stores what the fold says back onto the run row, for lists and queues. */
 export async function writeFold(tx: Tx, runId: string, state: RunState, events: RunEvent[]) {

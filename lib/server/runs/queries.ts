@@ -2,7 +2,17 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type Db, type Tx } from "@/db";
-import { assignments, curriculumSubjects, runEvents, runPhotos, runs, signOffs, taskCardVersions, users } from "@/db/schema";
+import {
+  assignments,
+  citationRechecks,
+  curriculumSubjects,
+  runEvents,
+  runPhotos,
+  runs,
+  signOffs,
+  taskCardVersions,
+  users,
+} from "@/db/schema";
 import { type Actor } from "@/lib/domain/access/permissions";
 import { getVersionById } from "@/lib/server/cards/read";
 import type { CardVersionDto } from "@/lib/contracts/cards";
@@ -190,7 +200,7 @@ export async function getRunDetail({ actor, runId }: { actor: Actor; runId: stri
   const db = getDb();
   const run = await loadRun(db, actor, runId);
   const [item] = await workItemQuery(db).where(eq(runs.id, runId));
-  const version = await getVersionById(run.versionId, db);
+  const version = await staleStepsMarked(db, await getVersionById(run.versionId, db), run.status);
   const { rows, reviewers, state } = await foldStored(db, runId, version);
   const photos = await db
     .select({ id: runPhotos.id, stepId: runPhotos.stepId, contentType: runPhotos.contentType, bytes: runPhotos.bytes })
@@ -210,6 +220,22 @@ export async function getRunDetail({ actor, runId }: { actor: Actor; runId: stri
     keepOnCarts: packet.keepOnCarts,
     state,
   };
+}
+
+/**
+ * A run on a version whose cited pages a newer manual revision changed keeps the "ask before you go
+ * on" notice on those steps until it is moved to a newer card version or signed off, even after the
+ * author rechecked the card (which clears it on the card's newest version only).
+ */
+async function staleStepsMarked(db: Db, version: CardVersionDto, status: RunStatus): Promise<CardVersionDto> {
+  if (status === "signed_off") return version;
+  const rows = await db
+    .selectDistinct({ stepId: citationRechecks.stepId })
+    .from(citationRechecks)
+    .where(eq(citationRechecks.versionId, version.id));
+  if (!rows.length) return version;
+  const stale = new Set(rows.map((r) => r.stepId));
+  return { ...version, steps: version.steps.map((s) => (stale.has(s.id) ? { ...s, underRecheck: true } : s)) };
 }
 
 /** The run's offline packet as PDF bytes: only the pages its card version cites. */

@@ -8,6 +8,8 @@ import { listColleagues } from "@/lib/server/accounts";
 import { getCard, getCardVersion } from "@/lib/server/cards/read";
 import { CardActions } from "../_components/card-actions";
 import { CoauthorsForm } from "../_components/coauthors-form";
+import { MoveRuns } from "../_components/move-runs";
+import { listRunsToMove } from "@/lib/server/runs/move";
 import { isUuid } from "@/lib/server/http";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
@@ -31,6 +33,7 @@ export default async function CardPage({
     ? await getCardVersion({ actor: user, cardId: id, number: wanted }).catch(() => notFound())
     : (card.published ?? card.draft);
   if (!shown) notFound();
+  const toMove = can(user, "assignments:manage") && card.published ? await listRunsToMove({ actor: user, cardId: id }) : null;
 
   return (
     <div className="flex flex-col gap-5">
@@ -92,6 +95,7 @@ export default async function CardPage({
           </div>
         </section>
       ) : null}
+      {toMove ? <MoveRuns cardId={id} target={toMove.target} runs={toMove.runs} /> : null}
       <CardView version={shown} />
     </div>
   );

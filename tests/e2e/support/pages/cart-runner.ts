@@ -88,6 +88,19 @@ export class CartRunnerPage {
       .click();
   }
 
+  /** Opens the calculator inside the step (it is part of the cart's code, so it works offline). */
+  async openCalculator(step: number) {
+    await this.step(step)
+      .getByText(/^Calculator for this step/)
+      .click();
+  }
+
+  async callInstructor(step: number) {
+    await this.step(step)
+      .getByRole("button", { name: `Call my instructor to buy off step ${step}` })
+      .click();
+  }
+
   async handIn() {
     await this.page.getByRole("button", { name: "Hand in for inspection" }).click();
   }
