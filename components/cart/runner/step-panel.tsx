@@ -97,7 +97,10 @@ export function StepPanel({
 
       {state.reopened && !state.checked ? (
         <p role="note" className="rounded-md border-4 border-danger bg-danger-pale px-4 py-3 font-semibold">
-          Your instructor sent this step back for rework: do it again{step.measurement ? " and record a new reading" : ""}
+          {state.reopened.why === "new version"
+            ? "This step changed in the card's new version your instructor moved you to: do it again"
+            : "Your instructor sent this step back for rework: do it again"}
+          {step.measurement ? " and record a new reading" : ""}
           {step.inspectionPoint ? ", then call them for a new buy-off" : ""}.
         </p>
       ) : null}

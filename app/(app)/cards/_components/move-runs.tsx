@@ -29,7 +29,13 @@ export function MoveRuns({ cardId, target, runs }: { cardId: string; target: num
   const [chosen, setChosen] = useState<Set<string>>(() => new Set());
   const [busy, setBusy] = useState(false);
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
-  if (!runs.length) return null;
+  // Once every run has moved the list goes, but what the move did stays said.
+  if (!runs.length)
+    return message ? (
+      <p role={message.ok ? "status" : "alert"} className={message.ok ? "notice-ok" : "notice-error"}>
+        {message.text}
+      </p>
+    ) : null;
   const toggle = (id: string) =>
     setChosen((old) => {
       const next = new Set(old);
