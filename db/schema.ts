@@ -20,16 +20,6 @@ import {
 } from "drizzle-orm/pg-core";
 import { documentTypes, revisionStatuses, roles, runStatuses, userStatuses } from "@/lib/domain/vocabulary";
 
-/**
- * The school's own settings, one row (id "school"): the time zone its days and times are told in.
- * Stored times stay UTC; this is how screens, mails and "is it overdue" read them.
- */
-export const schoolSettings = pgTable("school_settings", {
-  id: text("id").primaryKey().default("school"),
-  timeZone: text("time_zone").notNull().default("UTC"),
-  ...timestamps,
-});
-
 export const userRole = pgEnum("user_role", roles);
 export const userStatus = pgEnum("user_status", userStatuses);
 export const tokenPurpose = pgEnum("token_purpose", ["invitation", "password_reset"]);
@@ -41,6 +31,16 @@ const timestamps = {
     .defaultNow()
     .$onUpdate(() => new Date()),
 };
+
+/**
+ * The school's own settings, one row (id "school"): the time zone its days and times are told in.
+ * Stored times stay UTC; this is how screens, mails and "is it overdue" read them.
+ */
+export const schoolSettings = pgTable("school_settings", {
+  id: text("id").primaryKey().default("school"),
+  timeZone: text("time_zone").notNull().default("UTC"),
+  ...timestamps,
+});
 
 export const users = pgTable(
   "users",
