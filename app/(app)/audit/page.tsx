@@ -70,9 +70,27 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
               className: "whitespace-nowrap",
               cell: (e) => `${e.createdAt.toISOString().replace("T", " ").slice(0, 19)} UTC`,
             },
-            { header: "Who", cell: (e) => e.actorName ?? "—" },
-            { header: "What", cell: (e) => <code>{e.action}</code> },
-            { header: "Details", className: "text-sm", cell: (e) => <code>{JSON.stringify(e.details)}</code> },
+            {
+              header: "What happened",
+              cell: (e) => (
+                <>
+                  <p>{e.summary}</p>
+                  {e.detailLines.length ? (
+                    <details className="text-sm">
+                      <summary className="cursor-pointer text-ink-soft">Details</summary>
+                      <dl className="mt-1 grid grid-cols-[max-content_1fr] gap-x-3 gap-y-1">
+                        {e.detailLines.map((line, i) => (
+                          <div key={i} className="contents">
+                            <dt className="font-semibold">{line.label}</dt>
+                            <dd className="whitespace-pre-wrap">{line.value}</dd>
+                          </div>
+                        ))}
+                      </dl>
+                    </details>
+                  ) : null}
+                </>
+              ),
+            },
           ]}
         />
       </div>

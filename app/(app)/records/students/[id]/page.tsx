@@ -6,7 +6,7 @@ import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
 import { isUuid } from "@/lib/server/http";
 import { studentRecord } from "@/lib/server/runs/records";
-import { verdictWords } from "@/lib/domain/runs/measured";
+import { measuredValueLine } from "@/lib/domain/runs/measured";
 import { recordHours, revisionsLine, signedAtText } from "@/lib/domain/runs/record-csv";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
@@ -87,8 +87,7 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
                       <ul className="flex flex-col gap-1">
                         {c.measured.map((m) => (
                           <li key={m.stepId} className={m.verdict === "within_limits" ? "" : "font-bold text-danger"}>
-                            Step {m.stepNumber}, {m.label}: {m.value ?? "—"} <span className="text-ink-soft">(limits {m.limit.text})</span>,{" "}
-                            {verdictWords[m.verdict]}
+                            {measuredValueLine(m)}
                           </li>
                         ))}
                       </ul>
