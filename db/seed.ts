@@ -9,7 +9,7 @@ import { seedCards } from "./demo/seed-cards";
 import { seedRuns } from "./demo/seed-runs";
 import { seedLibrary } from "./demo/seed-library";
 import { closeDb, getDb } from "./index";
-import { classes, classMembers, users } from "./schema";
+import { classes, classMembers, schoolSettings, users } from "./schema";
 
 const demoClasses = [
   {
@@ -78,6 +78,9 @@ async function main() {
   console.log(missing.length ? `seeded ${missing.length} demo accounts` : "demo accounts already present");
   const revisionsAdded = await seedLibrary(db);
   console.log(revisionsAdded ? `queued ${revisionsAdded} demo manual revisions for ingest` : "demo manuals already present");
+  // The demo school keeps its hangar's clock; an admin changes it under School settings.
+  const zoned = await db.insert(schoolSettings).values({ id: "school", timeZone: "America/Chicago" }).onConflictDoNothing().returning();
+  console.log(zoned.length ? "set the demo school's time zone" : "school settings already present");
   const cardsAdded = await seedCards(db);
   console.log(cardsAdded ? `seeded ${cardsAdded} demo task cards` : "demo task cards already present");
   const assignmentsAdded = await seedRuns(db);

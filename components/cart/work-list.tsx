@@ -5,6 +5,7 @@ import { useEffect, useMemo, useState } from "react";
 import type { CartData } from "@/lib/client/cart/store";
 import { StatusBadge } from "@/components/status-badge";
 import type { WorkItemDto } from "@/lib/contracts/runs";
+import { dateTimeIn, zoneLabel } from "@/lib/domain/time";
 
 interface Doc {
   id: string;
@@ -16,7 +17,17 @@ interface Doc {
 }
 
 /** "My work" grouped by what is left to do, with a search over the cards and pages stored here. */
-export function WorkList({ data, items, savedAt }: { data: CartData; items: WorkItemDto[]; savedAt: string | null }) {
+export function WorkList({
+  data,
+  items,
+  savedAt,
+  timeZone,
+}: {
+  data: CartData;
+  items: WorkItemDto[];
+  savedAt: string | null;
+  timeZone: string;
+}) {
   const groups: { title: string; items: WorkItemDto[] }[] = [
     { title: "Open", items: items.filter((w) => !["submitted", "signed_off"].includes(w.status)) },
     { title: "Waiting for inspection", items: items.filter((w) => w.status === "submitted") },
@@ -58,7 +69,11 @@ export function WorkList({ data, items, savedAt }: { data: CartData; items: Work
           </ul>
         </section>
       ))}
-      {savedAt ? <p className="hint">Stored on this laptop {savedAt.slice(0, 16).replace("T", " ")} UTC.</p> : null}
+      {savedAt ? (
+        <p className="hint">
+          Stored on this laptop {dateTimeIn(timeZone, savedAt)} {zoneLabel(timeZone)}.
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -99,6 +99,8 @@ export interface RunDetailDto {
   packet: { url: string; pages: PacketPageDto[] } | null;
   /** Revisions of manuals a librarian marked "keep on carts": carts store the whole file. */
   keepOnCarts: { revisionId: string; manualTitle: string; url: string }[];
+  /** The school's time zone: the cart tells times in it, offline too. */
+  timeZone: string;
 }
 
 export interface EventBatchResultDto {

@@ -17,7 +17,20 @@ const roles = [
   {
     email: "admin@hangarleaf.test",
     role: "Admin",
-    nav: ["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records", "Accounts", "Audit log", "Outbox"],
+    nav: [
+      "Home",
+      "Search",
+      "Library",
+      "Task cards",
+      "Review",
+      "Calculators",
+      "Classes",
+      "Records",
+      "Accounts",
+      "Audit log",
+      "School settings",
+      "Outbox",
+    ],
   },
 ];
 

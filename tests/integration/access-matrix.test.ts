@@ -244,6 +244,9 @@ export const accessMatrix: Row[] = [
     json: {},
     expect: only({ instructor: 422, admin: 422 }),
   },
+  { method: "GET", route: "/api/settings", path: () => "/api/settings", expect: { ...all(200), anonymous: 401 } },
+  // A body the schema refuses: the row says who gets that far, without changing the school's zone.
+  { method: "PUT", route: "/api/settings", path: () => "/api/settings", json: {}, expect: only({ admin: 422 }) },
   { method: "GET", route: "/api/review/buy-offs", path: () => "/api/review/buy-offs", expect: only({ instructor: 200, admin: 200 }) },
   // A run is seen by its student and by reviewers; anyone else is told it does not exist.
   {

@@ -11,6 +11,7 @@ const expected: Record<string, Role[]> = {
   "classes:view": ["instructor", "admin"],
   "classes:view-all": ["admin"],
   "audit:view": ["admin"],
+  "settings:manage": ["admin"],
   "outbox:view": ["admin"],
   "library:view": ["student", "instructor", "librarian", "admin"],
   "library:manage": ["librarian", "admin"],
@@ -75,6 +76,7 @@ describe("permissions", () => {
       "Records",
       "Accounts",
       "Audit log",
+      "School settings",
     ]);
     expect(labels("admin", true)).toContain("Outbox");
     expect(labels("student", true)).not.toContain("Outbox");

@@ -6,13 +6,13 @@ import { statusLabel } from "@/components/status-badge";
 import type { RunStatus } from "@/lib/domain/runs/fold";
 import { listReviewQueue } from "@/lib/server/runs/queries";
 import { listBuyOffCalls } from "@/lib/server/runs/buy-offs";
+import { schoolTimeZone } from "@/lib/server/settings";
+import { dateTimeIn } from "@/lib/domain/time";
 
 export const metadata: Metadata = { title: "Review" };
 
 const tabStatuses: RunStatus[] = ["submitted", "in_progress", "returned", "signed_off"];
 const tabs = tabStatuses.map((status) => ({ status, label: statusLabel("run", status, "review") }));
-
-const shortTime = (iso: string | null) => (iso ? iso.slice(0, 16).replace("T", " ") : "—");
 
 export default async function ReviewPage({ searchParams }: { searchParams: Promise<{ status?: string; tab?: string }> }) {
   const user = await requirePageUser("runs:review", "/review");
@@ -24,6 +24,8 @@ export default async function ReviewPage({ searchParams }: { searchParams: Promi
     listBuyOffCalls({ actor: user }),
   ]);
   const called = points.filter((p) => p.calledAt).length;
+  const zone = await schoolTimeZone();
+  const shortTime = (iso: string | null) => (iso ? dateTimeIn(zone, iso) : "—");
   return (
     <div className="flex flex-col gap-5">
       <div className="flex flex-wrap items-center gap-3">
@@ -116,7 +118,7 @@ export default async function ReviewPage({ searchParams }: { searchParams: Promi
               {
                 header: "Last change",
                 className: "whitespace-nowrap",
-                cell: (r) => (r.lastEventAt ? r.lastEventAt.slice(0, 16).replace("T", " ") : "—"),
+                cell: (r) => shortTime(r.lastEventAt),
               },
             ]}
           />

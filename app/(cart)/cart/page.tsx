@@ -10,7 +10,7 @@ import type { WorkItemDto } from "@/lib/contracts/runs";
 export default function MyWorkPage() {
   const { ready, data, user } = useCart();
   const online = useOnline();
-  const [work, setWork] = useState<{ items: WorkItemDto[]; savedAt: string } | null | undefined>(undefined);
+  const [work, setWork] = useState<{ items: WorkItemDto[]; savedAt: string; timeZone?: string } | null | undefined>(undefined);
   const [problem, setProblem] = useState<string | null>(null);
   useEffect(() => {
     if (!data) return;
@@ -36,7 +36,7 @@ export default function MyWorkPage() {
       {work === undefined ? (
         <p role="status">Loading…</p>
       ) : (
-        <WorkList data={data} items={work?.items ?? []} savedAt={work?.savedAt ?? null} />
+        <WorkList data={data} items={work?.items ?? []} savedAt={work?.savedAt ?? null} timeZone={work?.timeZone ?? "UTC"} />
       )}
     </div>
   );

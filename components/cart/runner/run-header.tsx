@@ -1,4 +1,5 @@
 import { StatusBadge } from "@/components/status-badge";
+import { dateTimeIn } from "@/lib/domain/time";
 import type { RunDetailDto } from "@/lib/contracts/runs";
 import type { RunEvent, RunStatus } from "@/lib/domain/runs/fold";
 
@@ -41,7 +42,7 @@ export function RunHeader({ detail, status, returned }: { detail: RunDetailDto; 
       ) : null}
       {detail.signOff ? (
         <p role="note" className="rounded-md border-4 border-ok bg-ok-pale px-4 py-3 text-lg font-semibold">
-          Signed off by {detail.signOff.instructorName} on {detail.signOff.signedAt.slice(0, 10)}.
+          Signed off by {detail.signOff.instructorName} on {dateTimeIn(detail.timeZone ?? "UTC", detail.signOff.signedAt)}.
           {detail.signOff.comment ? ` “${detail.signOff.comment}”` : ""}
         </p>
       ) : null}

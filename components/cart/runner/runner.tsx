@@ -62,6 +62,7 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
                     : null
               }
               studentName={detail.run.studentName}
+              timeZone={detail.timeZone ?? "UTC"}
               blocked={blocked ? waitingIndex + 1 : null}
               now={now}
               packet={packet}

@@ -8,6 +8,7 @@ import { CalculatorPanel } from "@/components/calculators/calculator-panel";
 import { ResultPickContext } from "@/components/calculators/parts";
 import { calculators } from "@/lib/domain/calc";
 import { initialsOf } from "@/lib/domain/names";
+import { clockIn, dateTimeIn } from "@/lib/domain/time";
 import { cannotMarkDone } from "@/lib/domain/runs/fold";
 import { sortNotices } from "@/lib/domain/validation/cards";
 import { StepNotes } from "./step-notes";
@@ -26,6 +27,7 @@ export function StepPanel({
   locked,
   lockedWhy,
   studentName,
+  timeZone,
   blocked,
   now,
   packet,
@@ -43,6 +45,7 @@ export function StepPanel({
   /** Why the whole run takes no more work (handed in, signed off), said under each control it stops. */
   lockedWhy: string | null;
   studentName: string;
+  timeZone: string;
   blocked: number | null;
   now: number;
   packet: Blob | null;
@@ -165,10 +168,10 @@ export function StepPanel({
           className={`flex flex-col gap-3 rounded-md px-4 py-3 font-semibold ${state.boughtOff ? "bg-ok-pale text-ok" : "border-4 border-deck"}`}
         >
           {state.boughtOff ? (
-            `Bought off ${state.boughtOff.at.slice(0, 16).replace("T", " ")}.`
+            `Bought off ${dateTimeIn(timeZone, state.boughtOff.at)}.`
           ) : state.called ? (
             <span>
-              You called your instructor at {state.called.at.slice(11, 16)}.{" "}
+              You called your instructor at {clockIn(timeZone, state.called.at)}.{" "}
               {online ? "They have been told; wait here with the work open." : "They are told as soon as this cart is back online."}
             </span>
           ) : (

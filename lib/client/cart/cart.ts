@@ -69,8 +69,8 @@ const activeStatuses = new Set(["not_started", "in_progress", "returned", "submi
 export async function refreshWork(data: CartData): Promise<WorkItemDto[]> {
   const response = await fetch("/api/my-work", { cache: "no-store" });
   if (!response.ok) throw new Error(`my work answered ${response.status}`);
-  const { work } = (await response.json()) as { work: WorkItemDto[] };
-  await data.saveWork(work);
+  const { work, timeZone } = (await response.json()) as { work: WorkItemDto[]; timeZone?: string };
+  await data.saveWork(work, timeZone);
   for (const item of work.filter((w) => activeStatuses.has(w.status))) {
     await refreshRun(data, item.runId).catch(() => undefined);
   }

@@ -120,9 +120,9 @@ export function cartData(userId: string) {
         channel?.close();
       };
     },
-    work: () => get<{ items: WorkItemDto[]; savedAt: string }>("work", store),
-    saveWork: async (items: WorkItemDto[]) => {
-      await set("work", { items, savedAt: new Date().toISOString() }, store);
+    work: () => get<{ items: WorkItemDto[]; savedAt: string; timeZone?: string }>("work", store),
+    saveWork: async (items: WorkItemDto[], timeZone = "UTC") => {
+      await set("work", { items, savedAt: new Date().toISOString(), timeZone }, store);
       changed();
     },
     run: (runId: string) => get<RunDetailDto & { savedAt: string }>(`run:${runId}`, store),

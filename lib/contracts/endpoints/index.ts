@@ -7,12 +7,14 @@ import { classesApi } from "@/lib/contracts/endpoints/classes";
 import { libraryApi } from "@/lib/contracts/endpoints/library";
 import { runsApi } from "@/lib/contracts/endpoints/runs";
 import { sessionApi } from "@/lib/contracts/endpoints/session";
+import { settingsApi } from "@/lib/contracts/endpoints/settings";
 
 export const api = {
   session: sessionApi,
   accounts: accountsApi,
   classes: classesApi,
   audit: auditApi,
+  settings: settingsApi,
   library: libraryApi,
   cards: cardsApi,
   runs: runsApi,

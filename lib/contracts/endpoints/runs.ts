@@ -53,9 +53,9 @@ export const runsApi = {
     path: "/api/my-work",
     access: "runs:do",
     headers: { "Cache-Control": "private, no-store" },
-    answer: json<{ work: WorkItemDto[] }>(),
+    answer: json<{ work: WorkItemDto[]; timeZone: string }>(),
     who: "student",
-    doc: `200 \`{ "work": [ { "runId", "cardId", "title", "versionNumber", "newerVersion", "subjectName", "dueOn", "note", "status", "workStatus": "not_started\\|in_progress\\|returned\\|submitted\\|signed_off\\|overdue", "lastEventAt", "estimatedMinutes" } ] }\``,
+    doc: `200 \`{ "work": [ { "runId", "cardId", "title", "versionNumber", "newerVersion", "subjectName", "dueOn", "note", "status", "workStatus": "not_started\\|in_progress\\|returned\\|submitted\\|signed_off\\|overdue", "lastEventAt", "estimatedMinutes" } ], "timeZone" }\`: \`overdue\` once the due day has ended in the school's time zone (\`timeZone\`, which the cart tells times in)`,
   }),
   reviewQueue: endpoint({
     method: "GET",

@@ -22,6 +22,8 @@ const rules = {
   /** Every class, not only those one is staff of: classes, their runs, reviews, records and assignments. */
   "classes:view-all": ["admin"],
   "audit:view": ["admin"],
+  /** The school's settings: its time zone. */
+  "settings:manage": ["admin"],
   /** Read the library: manuals, revisions that are ready, their pages and files. */
   "library:view": ["student", "instructor", "librarian", "admin"],
   /** Upload manuals and revisions, retry a failed ingest, see revisions that are not ready. */
@@ -90,6 +92,7 @@ const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boo
   { item: { href: "/records", label: "Records" }, permission: "records:view" },
   { item: { href: "/accounts", label: "Accounts" }, permission: "accounts:manage" },
   { item: { href: "/audit", label: "Audit log" }, permission: "audit:view" },
+  { item: { href: "/settings", label: "School settings" }, permission: "settings:manage" },
   { item: { href: "/outbox", label: "Outbox" }, permission: "outbox:view", onlyWithOutbox: true },
 ];
 

@@ -23,6 +23,8 @@ import { foldRun, orderEvents, type CardStepForRun, type RunEvent, type RunState
 import { packetBytes, packetFor } from "@/lib/server/runs/packet";
 import { reviewScope, reviewsRun } from "@/lib/server/runs/scope";
 import { workStatusOf } from "@/lib/domain/runs/work-status";
+import { dayIn } from "@/lib/domain/time";
+import { schoolTimeZone } from "@/lib/server/settings";
 import { reviewEventTypes } from "@/lib/server/runs/events";
 
 const runNotFound = () => new AppError("not_found", "That run was not found.");
@@ -58,12 +60,13 @@ function workItemQuery(db: Db | Tx) {
 
 type WorkRow = Awaited<ReturnType<ReturnType<typeof workItemQuery>["execute"]>>[number];
 
-function toWorkItem(r: WorkRow): WorkItemDto {
+/** `today` is the school's day (lib/domain/time.ts dayIn): a card due today is overdue once the school's today ends. */
+function toWorkItem(r: WorkRow, today: string): WorkItemDto {
   const { newest, ...rest } = r;
   return {
     ...rest,
     newerVersion: newest != null && newest > r.versionNumber ? newest : null,
-    workStatus: workStatusOf(r.status, r.dueOn),
+    workStatus: workStatusOf(r.status, r.dueOn, today),
     lastEventAt: r.lastEventAt?.toISOString() ?? null,
   };
 }
@@ -73,7 +76,8 @@ export async function listMyWork({ actor }: { actor: Actor }): Promise<WorkItemD
   const rows = await workItemQuery(getDb())
     .where(eq(runs.studentId, actor.id))
     .orderBy(sql`${runs.status} = 'signed_off'`, sql`${assignments.dueOn} nulls last`, desc(runs.createdAt));
-  return rows.map(toWorkItem);
+  const today = dayIn(await schoolTimeZone());
+  return rows.map((r) => toWorkItem(r, today));
 }
 
 /** Runs waiting for an instructor: submitted ones, oldest first, and inspection points waiting on a cart. */
@@ -82,12 +86,14 @@ export async function listReviewQueue({ actor, status = "submitted" }: { actor: 
     .where(and(eq(runs.status, status), reviewScope(actor)))
     .orderBy(asc(runs.submittedAt), asc(runs.lastEventAt))
     .limit(500);
-  return rows.map(toWorkItem);
+  const today = dayIn(await schoolTimeZone());
+  return rows.map((r) => toWorkItem(r, today));
 }
 
 export async function listRunsOfStudent(db: Db | Tx, studentId: string): Promise<WorkItemDto[]> {
   const rows = await workItemQuery(db).where(eq(runs.studentId, studentId)).orderBy(desc(runs.createdAt));
-  return rows.map(toWorkItem);
+  const today = dayIn(await schoolTimeZone());
+  return rows.map((r) => toWorkItem(r, today));
 }
 
 /**
@@ -208,8 +214,10 @@ export async function getRunDetail({ actor, runId }: { actor: Actor; runId: stri
     .where(eq(runPhotos.runId, runId))
     .orderBy(asc(runPhotos.createdAt));
   const packet = await packetFor(db, version);
+  const timeZone = await schoolTimeZone();
   return {
-    run: toWorkItem(item!),
+    run: toWorkItem(item!, dayIn(timeZone)),
+    timeZone,
     version,
     // In the fold's order, so a late event is listed after the review moment it arrived behind.
     events: orderEvents(rows.map((r) => ({ ...toRunEvent(r.event), userName: r.userName }))).map((o) => o.event),

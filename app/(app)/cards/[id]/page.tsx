@@ -9,6 +9,8 @@ import { getCard, getCardVersion } from "@/lib/server/cards/read";
 import { CardActions } from "../_components/card-actions";
 import { CoauthorsForm } from "../_components/coauthors-form";
 import { MoveRuns } from "../_components/move-runs";
+import { dayIn } from "@/lib/domain/time";
+import { schoolTimeZone } from "@/lib/server/settings";
 import { listRunsToMove } from "@/lib/server/runs/move";
 import { isUuid } from "@/lib/server/http";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
@@ -33,6 +35,7 @@ export default async function CardPage({
     ? await getCardVersion({ actor: user, cardId: id, number: wanted }).catch(() => notFound())
     : (card.published ?? card.draft);
   if (!shown) notFound();
+  const zone = await schoolTimeZone();
   const toMove = can(user, "assignments:manage") && card.published ? await listRunsToMove({ actor: user, cardId: id }) : null;
 
   return (
@@ -82,7 +85,8 @@ export default async function CardPage({
                     aria-current={ver.number === shown.number ? "page" : undefined}
                     className={`btn btn-small ${ver.number === shown.number ? "btn-primary" : "btn-secondary"}`}
                   >
-                    v{ver.number} · {ver.status === "published" ? `published ${ver.publishedAt?.slice(0, 10)}` : "draft"}
+                    v{ver.number} ·{" "}
+                    {ver.status === "published" ? `published ${ver.publishedAt ? dayIn(zone, ver.publishedAt) : ""}` : "draft"}
                   </Link>
                 </li>
               ))}

@@ -10,6 +10,7 @@ import { getRunDetail } from "@/lib/server/runs/queries";
 import { sortNotices } from "@/lib/domain/validation/cards";
 import { reopenedStepIds, type Reading } from "@/lib/domain/runs/fold";
 import { initialsOf } from "@/lib/domain/names";
+import { clockIn, dateTimeIn, zoneLabel } from "@/lib/domain/time";
 import { ReviewActions } from "../_components/review-actions";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
@@ -30,7 +31,6 @@ const eventLabel: Record<string, string> = {
   "run.signed_off": "signed off",
 };
 
-const shortTime = (iso: string) => iso.slice(0, 16).replace("T", " ");
 const verdict = (r: Reading) =>
   r.judgement.status === "in" ? "within limits" : r.judgement.status === "out" ? "OUT OF LIMITS" : "not understood";
 
@@ -41,6 +41,8 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
   const detail = await getRunDetail({ actor: user, runId }).catch(notFoundOnMissing);
   const { version, state, run } = detail;
   const stepNumber = new Map(version.steps.map((s, i) => [s.id, i + 1]));
+  const zone = detail.timeZone;
+  const shortTime = (iso: string) => dateTimeIn(zone, iso);
   const names = new Map(detail.events.map((e) => [e.userId, e.userName]));
   const nameOf = (id: string) => names.get(id) ?? (id === run.studentId ? run.studentName : "someone");
   const lateById = new Map(state.late.map((l) => [l.id, l]));
@@ -68,7 +70,7 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
       </header>
       {detail.signOff ? (
         <p role="note" className="rounded-md border-4 border-ok bg-ok-pale px-4 py-3 font-semibold">
-          Signed off by {detail.signOff.instructorName} on {detail.signOff.signedAt.slice(0, 16).replace("T", " ")} UTC (version{" "}
+          Signed off by {detail.signOff.instructorName} on {shortTime(detail.signOff.signedAt)} {zoneLabel(zone)} (version{" "}
           {detail.signOff.versionNumber}). The record cannot change.
         </p>
       ) : null}
@@ -148,8 +150,8 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                 ) : null}
                 {s.timer ? (
                   <p>
-                    Timer {s.timer.minutes} min started {s.timer.startedAt.slice(11, 16)}
-                    {s.timer.stoppedAt ? `, stopped ${s.timer.stoppedAt.slice(11, 16)}` : ""}
+                    Timer {s.timer.minutes} min started {clockIn(zone, s.timer.startedAt)}
+                    {s.timer.stoppedAt ? `, stopped ${clockIn(zone, s.timer.stoppedAt)}` : ""}
                   </p>
                 ) : null}
                 {s.notes.map((n, j) => (
@@ -191,8 +193,7 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
             const setAside = ignoredById.get(e.id);
             return (
               <li key={e.id} className="text-sm">
-                <span className="font-mono">{e.clientTime.slice(0, 16).replace("T", " ")}</span> · {e.userName}{" "}
-                {eventLabel[e.type] ?? e.type}
+                <span className="font-mono">{shortTime(e.clientTime)}</span> · {e.userName} {eventLabel[e.type] ?? e.type}
                 {e.stepId ? ` step ${stepNumber.get(e.stepId) ?? "?"}` : ""}
                 {typeof e.payload?.value === "string" ? `: ${e.payload.value}` : ""}
                 {typeof e.payload?.comment === "string" && e.payload.comment ? `: “${e.payload.comment}”` : ""}
@@ -203,7 +204,7 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                   : ""}
                 {late ? (
                   <strong className="ml-2 rounded border border-line px-1">
-                    {`arrived after the ${late.after} of ${late.at.slice(0, 16).replace("T", " ")}${e.serverTime ? ` (received ${e.serverTime.slice(0, 16).replace("T", " ")})` : ""}`}
+                    {`arrived after the ${late.after} of ${shortTime(late.at)}${e.serverTime ? ` (received ${shortTime(e.serverTime)})` : ""}`}
                   </strong>
                 ) : null}
                 {setAside ? (
@@ -216,8 +217,8 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
         </ol>
         {state.ignored.length ? (
           <p className="hint mt-2">
-            {state.ignored.length} event(s) set aside and not part of the record: each says why above. Times are the cart&apos;s clock
-            (UTC); an event the server received after a buy-off, hand-in or sign-off never changes what was reviewed.
+            {state.ignored.length} event(s) set aside and not part of the record: each says why above. Times are the cart&apos;s clock (
+            {zoneLabel(zone)}); an event the server received after a buy-off, hand-in or sign-off never changes what was reviewed.
           </p>
         ) : null}
       </section>
