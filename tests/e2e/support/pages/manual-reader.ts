@@ -42,12 +42,45 @@ export class ManualReaderPage {
     await this.page.keyboard.press("PageUp");
   }
 
-  /** Jumps to a page through the strip of pages beside the reader. */
+  /** Jumps to a page through the page pictures in the side panel. */
   async goToPage(pageNumber: number) {
+    await this.openPanel("Page pictures");
     await this.page
       .getByRole("navigation", { name: "Pages" })
       .getByRole("button", { name: `Page ${pageNumber}`, exact: true })
       .click();
+  }
+
+  /** Opens the side panel on one of its tabs (it starts open on a wide screen, closed on a cart's or a phone's). */
+  async openPanel(tab: "Contents" | "Page pictures") {
+    const tabs = this.page.getByRole("tablist", { name: "Ways in" });
+    if (!(await tabs.isVisible())) await this.page.getByRole("button", { name: "☰ Contents" }).click();
+    await tabs.getByRole("tab", { name: tab }).click();
+  }
+
+  /** Goes to a subject through the contents (chapter, then subject by its code). */
+  async goToSubject(code: string) {
+    await this.openPanel("Contents");
+    const contents = this.page.getByRole("navigation", { name: "Contents" });
+    const chapter = contents.getByText(code.slice(0, 2), { exact: true });
+    const button = contents.getByRole("button", { name: new RegExp(`^${escapeRegExp(code)}\\b`) });
+    if (!(await button.isVisible())) await chapter.click();
+    await button.click();
+  }
+
+  async zoomIn() {
+    await this.page.getByRole("button", { name: "Zoom in" }).click();
+  }
+
+  /** Which page fills the middle of the reader's view: the one being read. */
+  async pageInView(): Promise<number | null> {
+    return this.page.evaluate(() => {
+      const box = document.querySelector('[aria-label^="PDF pages, page"]')!.getBoundingClientRect();
+      const y = box.top + box.height / 3;
+      const x = box.left + box.width / 2;
+      const hit = document.elementsFromPoint(x, y).find((e) => e instanceof HTMLElement && e.dataset.page);
+      return hit instanceof HTMLElement ? Number(hit.dataset.page) : null;
+    });
   }
 
   /** Opens the same page as text, for reading aloud or a slow connection. */

@@ -1,15 +1,17 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { MarkedText } from "@/components/marked-text";
 import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
 import { PdfReaderLoader } from "@/components/pdf-reader-loader";
-import { highlightWords, markStems } from "@/lib/domain/library/highlight";
+import { markStems } from "@/lib/domain/library/highlight";
 import { getManual, getPage, getReadableRevision } from "@/lib/server/library/manuals";
 import { findCorrections } from "@/search/postgres";
 import { parseQuery } from "@/search/query";
 import { CiteOnCard } from "./_components/cite-on-card";
+import { PageText } from "./_components/page-text";
+import { revisionOutline } from "@/lib/server/library/outline";
+import { pageInRevision } from "@/lib/server/revisions/follow";
 import { isUuid } from "@/lib/server/http";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
@@ -35,8 +37,9 @@ export default async function ManualPageView({
     getReadableRevision({ actor: user, id: revisionId }),
     getPage({ revisionId, pageNumber }),
     getManual({ id: manualId }),
+    revisionOutline(revisionId),
   ]).catch(notFoundOnMissing);
-  const [revision, page, manual] = found;
+  const [revision, page, manual, outline] = found;
   // The words a typo was read as ("magento" → magneto) are marked too.
   const corrections = q ? [...(await findCorrections(parseQuery(q).words)).values()].flat() : [];
   if (revision.manualId !== manualId) notFound();
@@ -44,6 +47,9 @@ export default async function ManualPageView({
   const superseded = revision.id !== manual.currentRevisionId;
   const count = revision.pageCount ?? pageNumber;
   const query = q ? `?q=${encodeURIComponent(q)}` : "";
+  // The same content in the current revision, through the page comparisons: a moved page goes to
+  // where it moved, a removed one says so; without comparisons, the same number, said as such.
+  const followed = superseded && current ? await pageInRevision(revision.id, pageNumber, current.id) : null;
 
   return (
     <div className="flex flex-col gap-4">
@@ -70,47 +76,59 @@ export default async function ManualPageView({
       </nav>
 
       {superseded ? (
-        <div role="alert" className="notice-error">
-          This is {revision.label}, a superseded revision. Do not work from it.{" "}
+        <div role="alert" className="notice-error flex flex-wrap items-baseline gap-x-2">
+          <span>This is {revision.label}, a superseded revision. Do not work from it.</span>
           {current ? (
-            <Link
-              href={`/library/${manualId}/${current.id}/${Math.min(pageNumber, current.pageCount ?? pageNumber)}${query}`}
-              prefetch={false}
-            >
-              Open page {Math.min(pageNumber, current.pageCount ?? pageNumber)} of the current revision, {current.label}
-            </Link>
+            followed?.page === null ? (
+              <span>
+                This page is not in the current revision, {current.label}: it was removed.{" "}
+                <Link href={`/library/${manualId}/${current.id}/1${query}`} prefetch={false}>
+                  Open {current.label}
+                </Link>
+              </span>
+            ) : (
+              <Link
+                href={`/library/${manualId}/${current.id}/${followed?.page ?? Math.min(pageNumber, current.pageCount ?? pageNumber)}${query}`}
+                prefetch={false}
+              >
+                {followed
+                  ? `Open page ${followed.page} of the current revision, ${current.label}${
+                      followed.status === "moved"
+                        ? " (the same content, moved there)"
+                        : followed.status === "changed"
+                          ? " (where this content is now; it changed)"
+                          : ""
+                    }`
+                  : `Open page ${Math.min(pageNumber, current.pageCount ?? pageNumber)} of the current revision, ${current.label} (same page number; the revisions were not compared)`}
+              </Link>
+            )
           ) : null}
         </div>
       ) : null}
 
-      <div className="flex flex-wrap items-center gap-3">
-        <h1 className="mr-auto">
+      <div className="flex flex-wrap items-center gap-x-3 gap-y-1">
+        <h1 className="mr-auto text-xl leading-tight">
           {manual.title} · {revision.label}
         </h1>
-        <form action="/search" className="flex items-end gap-2" role="search" aria-label="Search in this manual">
+        <form action="/search" className="flex items-center gap-2" role="search" aria-label="Search in this manual">
           <input type="hidden" name="manual" value={manualId} />
-          <label className="field">
-            <span className="label">Search in this manual</span>
-            <input name="q" className="input w-64" defaultValue={q} />
+          <label htmlFor="search-in-manual" className="sr-only">
+            Search in this manual
           </label>
-          <button type="submit" className="btn btn-primary">
+          <input id="search-in-manual" name="q" className="input w-56 py-1" defaultValue={q} placeholder="Search in this manual" />
+          <button type="submit" className="btn btn-primary btn-small">
             Search
           </button>
         </form>
-        <a href={`/api/revisions/${revisionId}/file#page=${pageNumber}`} className="btn btn-secondary" target="_blank" rel="noreferrer">
-          Open the whole PDF
+        <a
+          href={`/api/revisions/${revisionId}/file#page=${pageNumber}`}
+          className="btn btn-secondary btn-small"
+          target="_blank"
+          rel="noreferrer"
+        >
+          Download the PDF
         </a>
       </div>
-
-      {can(user, "cards:author") ? (
-        <CiteOnCard
-          userId={user.id}
-          revisionId={revisionId}
-          revisionLabel={revision.label}
-          superseded={superseded}
-          initialPage={pageNumber}
-        />
-      ) : null}
 
       <PdfReaderLoader
         fileUrl={revision.readerFileKey ? `/api/revisions/${revisionId}/file?copy=reader` : `/api/revisions/${revisionId}/file`}
@@ -121,19 +139,23 @@ export default async function ManualPageView({
         baseHref={`/library/${manualId}/${revisionId}`}
         thumbnailBase={`/api/revisions/${revisionId}/pages`}
         query={query}
+        outline={outline}
+        revisionLabel={revision.label}
+        isCurrent={!superseded}
+        barExtra={
+          can(user, "cards:author") ? (
+            <CiteOnCard
+              userId={user.id}
+              revisionId={revisionId}
+              revisionLabel={revision.label}
+              superseded={superseded}
+              initialPage={pageNumber}
+            />
+          ) : null
+        }
       />
 
-      <details className="panel">
-        <summary className="cursor-pointer py-2 font-semibold">
-          Text of page {pageNumber} (for reading aloud, copying, or a slow connection)
-        </summary>
-        <article className="mt-2 whitespace-pre-line leading-relaxed" aria-label={`Text of page ${pageNumber}`}>
-          {page.ocr ? (
-            <p className="hint mb-2">This page is a scan; its text was read by OCR and may hold errors. Check against the PDF.</p>
-          ) : null}
-          <MarkedText snippet={highlightWords(page.text, q, corrections)} />
-        </article>
-      </details>
+      <PageText revisionId={revisionId} initial={{ page: pageNumber, text: page.text, ocr: page.ocr }} q={q} corrections={corrections} />
     </div>
   );
 }
