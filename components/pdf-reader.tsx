@@ -29,6 +29,25 @@ function readerWorker() {
 }
 if (typeof window !== "undefined") readerWorker();
 
+// The text layer lays the page's words over the drawing in a browser font, stretched line by line
+// to the PDF's widths. With the system's stand-in for Helvetica (another sans-serif with other
+// letter widths) the marks on searched words drifted off the glyphs by a letter or so along a line.
+// pdf.js ships Liberation Sans, drawn to Helvetica's and Arial's widths: once it is loaded, the text
+// layer measures and lays out sans-serif text in it, so each letter sits over its glyph. Pages drawn
+// before it arrives keep the stand-in (measured and shown in the same font, so still consistent).
+if (typeof window !== "undefined" && "FontFace" in window) {
+  const face = new FontFace("Hangarleaf Text Sans", "url(/standard_fonts/LiberationSans-Regular.ttf)");
+  document.fonts.add(face);
+  void face.load().then(
+    () =>
+      (pdfjs.TextLayer as unknown as { fontFamilyMap: Map<string, string> }).fontFamilyMap.set(
+        "sans-serif",
+        '"Hangarleaf Text Sans", sans-serif',
+      ),
+    () => undefined,
+  );
+}
+
 const gap = 16;
 const nearby = 2; // pages drawn above and below the visible ones
 

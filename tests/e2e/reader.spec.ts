@@ -64,6 +64,18 @@ test("zoom and fit keep the page being read; the contents and the keys move thro
     "aria-current",
     "location",
   );
+  // The text layer is laid out in a font with the PDF's letter widths, so marks sit on the glyphs:
+  // pdf.js then barely stretches a line (a stand-in font needs 5–15 %).
+  const drawn = reader.drawnPage(target);
+  await expect(drawn.locator(".textLayer span").first()).toBeAttached();
+  const layout = await drawn.evaluate((element) => {
+    const spans = [...element.querySelectorAll<HTMLElement>(".textLayer span")].filter((s) => (s.textContent ?? "").length > 20);
+    const scales = spans.map((s) => Number(/scaleX\(([\d.]+)\)/.exec(s.style.transform)?.[1] ?? 1)).sort((a, b) => a - b);
+    return { font: spans[0]?.style.fontFamily ?? "", median: scales[Math.floor(scales.length / 2)] ?? 0 };
+  });
+  expect(layout.font).toContain("Hangarleaf Text Sans");
+  expect(layout.median).toBeGreaterThan(0.97);
+  expect(layout.median).toBeLessThan(1.03);
   await reader.showPageText();
   await expect(page.getByRole("article", { name: `Text of page ${target}` })).toContainText("32-40-00");
   await expect(page.getByRole("toolbar", { name: "Reader" })).toContainText("Rev 4 · current");
