@@ -15,6 +15,9 @@ import type { CardDto } from "@/lib/contracts/cards";
 import type { StudentRecordDto, WorkItemDto } from "@/lib/contracts/runs";
 import { call, demo, makeAccount, signIn } from "../support/http";
 import { uniqueTitle } from "../support/library";
+import { signedAtText } from "@/lib/domain/runs/record-csv";
+
+const schoolZone = "America/Chicago";
 
 const exec = promisify(execFile);
 
@@ -212,7 +215,8 @@ describe("a signed-off run in the student's record", () => {
     expect(answer.headers.get("content-type")).toBe("application/pdf");
     const text = (await pdfText(new Uint8Array(await answer.arrayBuffer()))).replace(/\s+/g, " ");
     expect(text).toContain(`${title} (version 1)`);
-    expect(text).toContain(`Signed off ${signedAt.slice(0, 16).replace("T", " ")} UTC by ${teacher.name}`);
+    // On the school's clock (the demo seed's zone), the zone named.
+    expect(text).toContain(`Signed off ${signedAtText(signedAt, schoolZone)} by ${teacher.name}`);
     expect(text).toContain(`Manual revisions cited: ${revision.manualTitle} ${revision.label}, pages 2, 5`);
     expect(text).toContain("Step 1, Cable tension: 36 lb (limits 30 to 40 lb), within limits");
     expect(text).toContain("Step 3, Edge distance: 0.55 in (limits 0.375 ± 0.125 in), OUT OF LIMITS");
@@ -224,7 +228,7 @@ describe("a signed-off run in the student's record", () => {
     const text = visibleText(await page.text());
     expect(text).toContain(`${revision.manualTitle} ${revision.label}, pages 2, 5`);
     expect(text).toContain("Step 1, Cable tension: 36 lb (limits 30 to 40 lb), within limits");
-    expect(text).toContain(`${signedAt.slice(0, 16).replace("T", " ")} UTC`);
+    expect(text).toContain(signedAtText(signedAt, schoolZone));
     const stranger = await person("instructor", "Stranger instructor");
     expect((await call("GET", `/api/records/students/${learner.id}?format=csv`, { cookie: stranger.cookie })).status).toBe(404);
   });

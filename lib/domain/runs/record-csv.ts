@@ -1,12 +1,16 @@
 // A student's training record as text: the CSV export and the phrases the PDF and the screen share. Pure.
+import { dateTimeIn, zoneLabel } from "@/lib/domain/time";
 import type { SignOffDto, StudentRecordDto } from "@/lib/contracts/runs";
 import { toCsv } from "@/lib/domain/runs/csv";
 import { verdictWords } from "@/lib/domain/runs/measured";
 
 export const recordHours = (minutes: number) => (minutes / 60).toFixed(1);
 
-/** A sign-off time as the review screen shows it: "2026-12-01 14:05 UTC". */
-export const signedAtText = (iso: string) => `${iso.slice(0, 16).replace("T", " ")} UTC`;
+/**
+ * A sign-off time as the screens show it, on the school's clock with the zone named: "2026-12-01
+ * 08:05 CST". The CSV keeps UTC (its header says so): a spreadsheet compares times without zones.
+ */
+export const signedAtText = (iso: string, zone = "UTC") => `${dateTimeIn(zone, iso)} ${zoneLabel(zone, new Date(iso))}`;
 
 /** "HT-20 Trainer Maintenance Manual Rev 4, pages 2, 5; …" */
 export function revisionsLine(cited: SignOffDto["revisionsCited"]): string {

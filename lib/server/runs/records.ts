@@ -9,6 +9,8 @@ import { AppError } from "@/lib/domain/errors";
 import { CardWriter, grey, markdownToPlain } from "@/lib/server/pdf/card-pdf";
 import { measuredValueLine, measuredValues } from "@/lib/domain/runs/measured";
 import { recordHours, revisionsLine, signedAtText } from "@/lib/domain/runs/record-csv";
+import { dayIn } from "@/lib/domain/time";
+import { schoolTimeZone } from "@/lib/server/settings";
 import { stepSchema } from "@/lib/domain/validation/cards";
 import { foldStoredRuns, listRunsOfStudent } from "@/lib/server/runs/queries";
 import { readsRecordOf } from "@/lib/server/runs/scope";
@@ -80,6 +82,7 @@ export async function studentRecord({ actor, studentId }: { actor: Actor; studen
 const hours = recordHours;
 
 export async function studentRecordPdf(record: StudentRecordDto, printedAt = new Date()): Promise<Uint8Array> {
+  const zone = await schoolTimeZone();
   const doc = await PDFDocument.create();
   doc.setTitle(`Training record: ${record.student.name}`);
   doc.setProducer("Hangarleaf");
@@ -87,7 +90,7 @@ export async function studentRecordPdf(record: StudentRecordDto, printedAt = new
     doc,
     await doc.embedFont(StandardFonts.Helvetica),
     await doc.embedFont(StandardFonts.HelveticaBold),
-    `Training record of ${record.student.name} - printed ${printedAt.toISOString().slice(0, 10)}`,
+    `Training record of ${record.student.name} - printed ${dayIn(zone, printedAt)}`,
   );
   w.text("TRAINING RECORD", { size: 9, bold: true, color: grey });
   w.text(record.student.name, { size: 17, bold: true });
@@ -101,7 +104,7 @@ export async function studentRecordPdf(record: StudentRecordDto, printedAt = new
     for (const c of subject.signedOff) {
       w.text(`${c.title} (version ${c.versionNumber})`, { bold: true, indent: 12 });
       w.text(
-        `Signed off ${signedAtText(c.signedAt)} by ${c.instructorName}; ${c.estimatedMinutes != null ? `estimated ${hours(c.estimatedMinutes)} h, ` : ""}actual ${hours(c.actualMinutes)} h`,
+        `Signed off ${signedAtText(c.signedAt, zone)} by ${c.instructorName}; ${c.estimatedMinutes != null ? `estimated ${hours(c.estimatedMinutes)} h, ` : ""}actual ${hours(c.actualMinutes)} h`,
         { indent: 24 },
       );
       w.text(`Manual revisions cited: ${revisionsLine(c.revisionsCited) || "none"}`, { indent: 24 });

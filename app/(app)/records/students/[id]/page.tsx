@@ -8,6 +8,7 @@ import { isUuid } from "@/lib/server/http";
 import { studentRecord } from "@/lib/server/runs/records";
 import { measuredValueLine } from "@/lib/domain/runs/measured";
 import { recordHours, revisionsLine, signedAtText } from "@/lib/domain/runs/record-csv";
+import { schoolTimeZone } from "@/lib/server/settings";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Training record" };
@@ -19,6 +20,7 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
   const user = await requirePageUser("records:view", `/records/students/${id}`);
   if (!isUuid(id)) notFound();
   const record = await studentRecord({ actor: user, studentId: id }).catch(notFoundOnMissing);
+  const zone = await schoolTimeZone();
   const own = user.id === id;
   return (
     <div className="flex flex-col gap-5">
@@ -95,7 +97,7 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
                       "—"
                     ),
                 },
-                { header: "Signed off", className: "whitespace-nowrap", cell: (c) => signedAtText(c.signedAt) },
+                { header: "Signed off", className: "whitespace-nowrap", cell: (c) => signedAtText(c.signedAt, zone) },
                 { header: "By", cell: (c) => c.instructorName },
                 { header: "Estimated", cell: (c) => (c.estimatedMinutes != null ? hours(c.estimatedMinutes) : "—") },
                 { header: "Actual", cell: (c) => hours(c.actualMinutes) },
@@ -105,8 +107,8 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
         ))}
         {record.subjects.length === 0 ? <p className="hint">No task card is signed off yet.</p> : null}
       </section>
-      <section aria-label="Open and returned runs" className="panel">
-        <h2>Open and returned</h2>
+      <section aria-label="Open work and work sent back for rework" className="panel">
+        <h2>Open and sent back for rework</h2>
         <ul className="flex flex-col gap-1">
           {[...record.returned, ...record.open].map((r) => (
             <li key={r.runId}>
