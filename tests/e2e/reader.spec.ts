@@ -16,9 +16,7 @@ async function trainerRevisions(): Promise<{ manualId: string; rev3: string; rev
   expect((await api.post("/api/session", { data: { email: "student@hangarleaf.test", password: demoPassword } })).status()).toBe(200);
   const { manuals } = (await (await api.get("/api/manuals")).json()) as { manuals: { id: string; title: string }[] };
   const manualId = manuals.find((m) => m.title === trainer.title)!.id;
-  const { manual } = (await (await api.get(`/api/manuals/${manualId}`)).json()) as {
-    manual: { revisions: { id: string; label: string }[] };
-  };
+  const manual = (await (await api.get(`/api/manuals/${manualId}`)).json()) as { revisions: { id: string; label: string }[] };
   return {
     manualId,
     rev3: manual.revisions.find((r) => r.label === "Rev 3")!.id,
