@@ -9,6 +9,11 @@ import { ensureChromium, ensureNodeModules, ensurePdfTools, ensurePostgres, thro
 import { freePort, stopAll, supervise, waitForHttp } from "./steps/services.mjs";
 import { buildServiceWorker, copyPdfAssets } from "./steps/build.mjs";
 
+// `npm test -- --e2e-only [spec files…]`: the same preparation and build, then only Playwright on
+// the named specs (all when none are named); for working on a screen without the whole suite.
+const e2eOnly = process.argv.includes("--e2e-only");
+const specs = process.argv.slice(2).filter((a) => !a.startsWith("--"));
+
 const results = [];
 let cluster = null;
 let home = null;
@@ -32,6 +37,24 @@ function readJson(file) {
     return existsSync(file) ? JSON.parse(readFileSync(file, "utf8")) : null;
   } catch {
     return null;
+  }
+}
+
+async function waitForDemoIngest(url) {
+  const { default: pg } = await import("pg");
+  const client = new pg.Client({ connectionString: url });
+  await client.connect();
+  try {
+    for (let i = 0; i < 600; i++) {
+      const { rows } = await client.query(
+        "select count(*)::int as waiting from revisions where status in ('queued', 'processing') or (status = 'ready' and id not in (select revision_id from revision_comparisons))",
+      );
+      if (rows[0].waiting === 0) return;
+      await new Promise((r) => setTimeout(r, 1000));
+    }
+    throw new Error("the demo manuals were not read within 10 minutes");
+  } finally {
+    await client.end();
   }
 }
 
@@ -91,12 +114,13 @@ try {
     tsx("db/seed.ts", env);
     tsx("db/seed.ts", env); // twice: the seed must be idempotent (tests/integration/seed.test.ts checks)
   });
-  await stage("typecheck", () => run(bin("tsc"), ["--noEmit"], { env }));
-  await stage("lint", () => {
-    run(bin("eslint"), ["--max-warnings", "0", "."], { env });
-    // The formatter's line width (.prettierrc.json); `npx prettier --write .` fixes what this finds.
-    run(bin("prettier"), ["--check", "--log-level", "warn", "."], { env });
-  });
+  if (!e2eOnly) await stage("typecheck", () => run(bin("tsc"), ["--noEmit"], { env }));
+  if (!e2eOnly)
+    await stage("lint", () => {
+      run(bin("eslint"), ["--max-warnings", "0", "."], { env });
+      // The formatter's line width (.prettierrc.json); `npx prettier --write .` fixes what this finds.
+      run(bin("prettier"), ["--check", "--log-level", "warn", "."], { env });
+    });
   copyPdfAssets();
   let built = await stage("build", () => run(bin("next"), ["build"], { env }));
   if (built) {
@@ -120,14 +144,19 @@ try {
     await waitForHttp(`${env.HL_OUTBOX_URL}/messages`);
 
     const vitestReport = path.join(reports, "vitest.json");
-    await stage("unit and integration tests (vitest)", () =>
-      runAsync(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${vitestReport}`], { env: testEnv }),
-    );
-    vitest = readJson(vitestReport);
+    if (!e2eOnly) {
+      await stage("unit and integration tests (vitest)", () =>
+        runAsync(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${vitestReport}`], { env: testEnv }),
+      );
+      vitest = readJson(vitestReport);
+    }
 
+    // The whole run gives the worker the vitest stage's minutes to read the demo manuals; alone,
+    // the end-to-end tests wait for it here.
+    if (e2eOnly) await waitForDemoIngest(databaseUrl);
     const playwrightReport = path.join(reports, "playwright.json");
     await stage("end-to-end tests (Playwright, Chromium)", () =>
-      runAsync(bin("playwright"), ["test"], { env: { ...testEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport } }),
+      runAsync(bin("playwright"), ["test", ...specs], { env: { ...testEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport } }),
     );
     playwright = readJson(playwrightReport);
   }
