@@ -426,7 +426,7 @@ export function PdfReader({
       <div
         role="toolbar"
         aria-label="Reader"
-        className="sticky top-0 z-20 flex flex-wrap items-center gap-x-2 gap-y-1 rounded-md border-2 border-line bg-white px-2 py-1 shadow-sm"
+        className="sticky top-0 z-20 flex flex-wrap items-center gap-x-2 gap-y-1 rounded-md border-2 border-line bg-white px-2 py-0.5 shadow-sm"
       >
         <button
           type="button"

@@ -52,29 +52,8 @@ export default async function ManualPageView({
   const followed = superseded && current ? await pageInRevision(revision.id, pageNumber, current.id) : null;
 
   return (
-    <div className="flex flex-col gap-4">
-      <nav aria-label="Breadcrumb" className="flex flex-wrap gap-x-3">
-        <Link href="/library" prefetch={false} className="py-2">
-          Library
-        </Link>
-        <span aria-hidden="true" className="py-2">
-          ›
-        </span>
-        <Link href={`/library/${manualId}`} prefetch={false} className="py-2">
-          {manual.title}
-        </Link>
-        {q ? (
-          <>
-            <span aria-hidden="true" className="py-2">
-              ›
-            </span>
-            <Link href={`/search?q=${encodeURIComponent(q)}`} prefetch={false} className="py-2">
-              Back to the results
-            </Link>
-          </>
-        ) : null}
-      </nav>
-
+    // Compact on purpose: on a 1024×768 cart screen the manual page starts in the top third.
+    <div className="-mt-4 flex flex-col gap-2">
       {superseded ? (
         <div role="alert" className="notice-error flex flex-wrap items-baseline gap-x-2">
           <span>This is {revision.label}, a superseded revision. Do not work from it.</span>
@@ -106,16 +85,33 @@ export default async function ManualPageView({
         </div>
       ) : null}
 
-      <div className="flex flex-wrap items-center gap-x-3 gap-y-1">
-        <h1 className="mr-auto text-xl leading-tight">
-          {manual.title} · {revision.label}
+      <div className="flex flex-wrap items-center gap-x-3 gap-y-1 lg:flex-nowrap">
+        <nav aria-label="Breadcrumb" className="flex items-center gap-x-2">
+          <Link href="/library" prefetch={false} className="inline-flex min-h-11 items-center">
+            Library
+          </Link>
+          <span aria-hidden="true">›</span>
+          {q ? (
+            <>
+              <Link href={`/search?q=${encodeURIComponent(q)}`} prefetch={false} className="inline-flex min-h-11 items-center">
+                Back to the results
+              </Link>
+              <span aria-hidden="true">›</span>
+            </>
+          ) : null}
+        </nav>
+        <h1 className="min-w-0 flex-1 truncate text-xl leading-tight" title={`${manual.title} · ${revision.label}`}>
+          <Link href={`/library/${manualId}`} prefetch={false} className="text-ink no-underline hover:underline">
+            {manual.title}
+          </Link>{" "}
+          · {revision.label}
         </h1>
         <form action="/search" className="flex items-center gap-2" role="search" aria-label="Search in this manual">
           <input type="hidden" name="manual" value={manualId} />
           <label htmlFor="search-in-manual" className="sr-only">
             Search in this manual
           </label>
-          <input id="search-in-manual" name="q" className="input w-56 py-1" defaultValue={q} placeholder="Search in this manual" />
+          <input id="search-in-manual" name="q" className="input w-44 py-1" defaultValue={q} placeholder="Search in this manual" />
           <button type="submit" className="btn btn-primary btn-small">
             Search
           </button>
