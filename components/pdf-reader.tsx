@@ -488,7 +488,7 @@ export function PdfReader({
             {here.title}
           </span>
         ) : null}
-        <span className="ml-auto flex items-center gap-1">
+        <span className="ml-auto flex flex-wrap items-center gap-1">
           <button type="button" className="btn btn-secondary btn-small" aria-label="Zoom out" onClick={() => zoomBy(-0.25)}>
             −
           </button>

@@ -117,6 +117,13 @@ test("on a 1024×768 cart screen the manual page starts in the top third, and on
   // Nothing sticks out sideways: the page scrolls inside the reader, not the whole screen.
   const overflow = await small.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
   expect(overflow).toBeLessThanOrEqual(1);
+  // Every control of the reader's bar is inside the screen.
+  const outside = await small
+    .getByRole("toolbar", { name: "Reader" })
+    .evaluate(
+      (bar) => [...bar.querySelectorAll("button, input")].filter((e) => e.getBoundingClientRect().right > window.innerWidth + 1).length,
+    );
+  expect(outside).toBe(0);
   await small.screenshot({ path: test.info().outputPath("reader-390x844.png") });
   await phone.close();
 });
