@@ -74,6 +74,7 @@ test("zoom and fit keep the page being read; the contents and the keys move thro
   expect(layout.font).toContain("Hangarleaf Text Sans");
   expect(layout.median).toBeGreaterThan(0.97);
   expect(layout.median).toBeLessThan(1.03);
+  await page.screenshot({ path: test.info().outputPath("reader-1366-contents.png") });
   await reader.showPageText();
   await expect(page.getByRole("article", { name: `Text of page ${target}` })).toContainText("32-40-00");
   await expect(page.getByRole("toolbar", { name: "Reader" })).toContainText("Rev 4 · current");
