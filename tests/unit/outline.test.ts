@@ -18,7 +18,7 @@ describe("a manual's contents from its page headings", () => {
     expect(outline[0]!.subjects).toEqual([{ code: "05-10-00", title: "Time Limits", firstPage: 2, lastPage: 4 }]);
     expect(outline[1]!.subjects.map((s) => [s.code, s.title, s.firstPage, s.lastPage])).toEqual([
       ["32-10-00", "Main Gear", 5, 5],
-      ["32-40-00", "Wheels And Brakes", 6, 6],
+      ["32-40-00", "Wheels and Brakes", 6, 6],
     ]);
     expect(subjectAt(outline, 4)?.code).toBe("05-10-00");
     expect(subjectAt(outline, 1)).toBeNull();
