@@ -23,8 +23,16 @@ const coded = /^\s*(\d{2})-(\d{2})-(\d{2})\b\s*(.*)$/;
 /** The part of a heading after the subject's title: " - PROCEDURE", " (continued)". */
 const partSuffix = /\s+(?:-|–|—)\s+[^-–—]*$|\s*\((?:cont(?:inued|'d)?\.?)\)\s*$/i;
 
+const small = new Set(["and", "or", "of", "the", "for", "to", "in", "on", "with", "a", "an", "at", "by"]);
+/** "WHEELS AND BRAKES" → "Wheels and Brakes"; a heading already in mixed case is kept as written. */
 const titleCase = (s: string) =>
-  s === s.toUpperCase() ? s.toLowerCase().replace(/(^|[\s/(-])(\p{L})/gu, (_, a, b) => a + b.toUpperCase()) : s;
+  s === s.toUpperCase()
+    ? s
+        .toLowerCase()
+        .split(/(\s+)/)
+        .map((w, i) => (i > 0 && small.has(w) ? w : w.replace(/(^|[/(-])(\p{L})/gu, (_, a: string, b: string) => a + b.toUpperCase())))
+        .join("")
+    : s;
 
 /** Chapter names where the standard numbering is common practice (ATA iSpec 2200 chapter titles, from memory). */
 const chapterNames: Record<string, string> = {
