@@ -1,19 +1,11 @@
 // At the aircraft, offline: the student works a step's calculator inside the run and puts its
 // result into the reading, finishes an inspection point and calls the instructor. Back online the
 // call reaches the instructor's home and the buy-off queue; the buy-off from there reaches the cart.
-import { expect, request as apiRequest, test, type APIRequestContext } from "@playwright/test";
+import { expect, test } from "@playwright/test";
+import { apiAs as api } from "./support/api";
 import { CartRunnerPage } from "./support/pages/cart-runner";
 import { ReviewPage } from "./support/pages/review";
-import { demoPassword, SignInPage } from "./support/pages/sign-in";
-
-const baseURL = process.env.HL_BASE_URL ?? "http://localhost:3000";
-
-async function api(email: string): Promise<APIRequestContext> {
-  const context = await apiRequest.newContext({ baseURL });
-  const answer = await context.post("/api/session", { data: { email, password: demoPassword } });
-  expect(answer.status()).toBe(200);
-  return context;
-}
+import { SignInPage } from "./support/pages/sign-in";
 
 test("the calculator works inside an offline run, and a call for a buy-off reaches the instructor's queue", async ({ browser }) => {
   test.setTimeout(180_000);

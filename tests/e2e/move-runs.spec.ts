@@ -1,17 +1,9 @@
 // After a card changes, the instructor moves a student's open run to the new version from the
 // card's page; the student's cart keeps the work on the unchanged step and asks for the changed one again.
-import { expect, request as apiRequest, test, type APIRequestContext } from "@playwright/test";
+import { expect, test } from "@playwright/test";
+import { apiAs as api } from "./support/api";
 import { CartRunnerPage } from "./support/pages/cart-runner";
-import { demoPassword, SignInPage } from "./support/pages/sign-in";
-
-const baseURL = process.env.HL_BASE_URL ?? "http://localhost:3000";
-
-async function api(email: string): Promise<APIRequestContext> {
-  const context = await apiRequest.newContext({ baseURL });
-  const answer = await context.post("/api/session", { data: { email, password: demoPassword } });
-  expect(answer.status()).toBe(200);
-  return context;
-}
+import { SignInPage } from "./support/pages/sign-in";
 
 test("an instructor moves a student's open run to the card's new version, keeping the unchanged work", async ({ browser }) => {
   test.setTimeout(120_000);

@@ -3,19 +3,11 @@
 // sent exactly once; the instructor returns the run, the student fixes it, the instructor signs
 // off; the student's record shows it. Then a second student signs in on the same browser profile
 // and finds none of the first one's data.
-import { expect, request as apiRequest, test, type APIRequestContext } from "@playwright/test";
+import { expect, test } from "@playwright/test";
+import { apiAs as api } from "./support/api";
 import { CartRunnerPage } from "./support/pages/cart-runner";
 import { ReviewPage } from "./support/pages/review";
-import { demoPassword, SignInPage } from "./support/pages/sign-in";
-
-const baseURL = process.env.HL_BASE_URL ?? "http://localhost:3000";
-
-async function api(email: string): Promise<APIRequestContext> {
-  const context = await apiRequest.newContext({ baseURL });
-  const answer = await context.post("/api/session", { data: { email, password: demoPassword } });
-  expect(answer.status()).toBe(200);
-  return context;
-}
+import { SignInPage } from "./support/pages/sign-in";
 
 test("a run on the cart survives going offline, syncs once, is returned, fixed and signed off", async ({ browser }) => {
   test.setTimeout(180_000);
