@@ -12,9 +12,12 @@ export const searchParamsSchema = z.object({
   revision: z.uuid("revision is a revision id.").optional(),
   type: z.enum(documentTypes, { error: "That is not a document type." }).optional(),
   model: z.string().trim().min(1).max(60).optional(),
+  // "5" is chapter 05, as people say it.
   ata: z
     .string()
-    .regex(/^\d{2}$/, "An ATA chapter is two digits.")
+    .trim()
+    .regex(/^\d{1,2}$/, "An ATA chapter is one or two digits, e.g. 32 or 5.")
+    .transform((v) => v.padStart(2, "0"))
     .optional(),
   includeSuperseded: flag,
   limit: z.coerce
