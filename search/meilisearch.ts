@@ -1,14 +1,21 @@
 // Search in Meilisearch, for a school network that outgrows one database: one document per page,
 // through the official client. Typos, prefixes, phrases and exclusion are Meilisearch's own; the
-// abbreviations go in as synonyms. Selected by MEILI_URL (search/index.ts).
+// abbreviations and the concept families go in as synonyms (one way: a family finds its members,
+// not the other way round). Selected by MEILI_URL (search/index.ts). Ranking is Meilisearch's own
+// rules (words, typo, proximity, attribute, exactness), which already put the words side by side
+// and the exact words first. Pages with most of the words come from its "last" matching strategy,
+// after asking which words no page has; which words a hit lacks is read from the matched positions,
+// so it is an approximation (a matched word counts when it starts like the searched one).
 import { asc, eq } from "drizzle-orm";
 import { Meilisearch } from "meilisearch";
 import { getDb } from "@/db";
 import { manuals, pages, revisions } from "@/db/schema";
-import type { SearchEngine, SearchHit } from "./engine";
+import type { SearchEngine, SearchFilters, SearchHit } from "./engine";
 import { totalLimit } from "./engine";
 import abbreviations from "./abbreviations.json";
-import { markEnd, markStart, snippetToHtml, type ParsedQuery } from "./query";
+import { revisionsInScope } from "./postgres";
+import { expansionTableOf, markEnd, markStart, snippetToHtml, type ParsedQuery } from "./query";
+import { findSections } from "./sections";
 
 interface PageDocument {
   id: string;
@@ -30,11 +37,38 @@ const documentId = (revisionId: string, page: number) => `${revisionId}_${page}`
 const quote = (v: string) => `"${v.replaceAll("\\", "\\\\").replaceAll('"', '\\"')}"`;
 
 function synonyms(): Record<string, string[]> {
-  const table: Record<string, string[]> = {};
-  for (const [word, expansions] of Object.entries(abbreviations as Record<string, unknown>)) {
-    if (!word.startsWith("_") && Array.isArray(expansions)) table[word] = expansions as string[];
-  }
-  return table;
+  return Object.fromEntries(expansionTableOf(abbreviations as Record<string, unknown>));
+}
+
+/** A term of the query as Meilisearch reads it, with the words that count as finding it. */
+interface Term {
+  label: string;
+  q: string;
+  words: string[];
+}
+
+function termsOf(query: ParsedQuery): Term[] {
+  return [
+    ...query.words.map((w) => ({ label: w.text, q: w.text, words: [w.text, ...w.expansions].flatMap((x) => x.split(/[\s-]+/)) })),
+    ...query.phrases.map((p) => ({ label: p, q: quote(p), words: p.split(/\s+/) })),
+  ];
+}
+
+/** Whether a matched piece of text stands for a term: it starts like one of the term's words (endings and small typos aside). */
+function matches(term: Term, matched: string[]): boolean {
+  const starts = term.words.filter(Boolean).map((w) => w.toLowerCase().slice(0, Math.min(4, w.length)));
+  return matched.some((m) => starts.some((s) => m.startsWith(s)));
+}
+
+function filterOf(filters: SearchFilters): string | undefined {
+  const filter: string[] = [];
+  if (filters.revisionId) filter.push(`revisionId = ${quote(filters.revisionId)}`);
+  else if (!filters.includeSuperseded) filter.push("current = true");
+  if (filters.manualId) filter.push(`manualId = ${quote(filters.manualId)}`);
+  if (filters.documentType) filter.push(`documentType = ${quote(filters.documentType)}`);
+  if (filters.model) filter.push(`applicability = ${quote(filters.model)}`);
+  if (filters.ata) filter.push(`ataChapters = ${quote(filters.ata)}`);
+  return filter.join(" AND ") || undefined;
 }
 
 export function meilisearchEngine(options: { url: string; key?: string; index: string }): SearchEngine {
@@ -123,41 +157,61 @@ export function meilisearchEngine(options: { url: string; key?: string; index: s
 
     async search(query: ParsedQuery, filters, { limit, offset }) {
       await configure();
-      const q = [
-        ...query.words.map((w) => w.text),
-        ...query.phrases.map((p) => quote(p)),
-        ...query.excluded.map((e) => (e.includes(" ") ? `-${quote(e)}` : `-${e}`)),
-      ].join(" ");
-      const filter: string[] = [];
-      if (filters.revisionId) filter.push(`revisionId = ${quote(filters.revisionId)}`);
-      else if (!filters.includeSuperseded) filter.push("current = true");
-      if (filters.manualId) filter.push(`manualId = ${quote(filters.manualId)}`);
-      if (filters.documentType) filter.push(`documentType = ${quote(filters.documentType)}`);
-      if (filters.model) filter.push(`applicability = ${quote(filters.model)}`);
-      if (filters.ata) filter.push(`ataChapters = ${quote(filters.ata)}`);
-      const result = await index.search(q, {
-        filter: filter.join(" AND ") || undefined,
-        limit,
-        offset,
-        attributesToCrop: ["text"],
-        cropLength: 30,
-        attributesToHighlight: ["text"],
-        highlightPreTag: markStart,
-        highlightPostTag: markEnd,
-        showRankingScore: true,
-      });
-      const hits: SearchHit[] = result.hits.map((hit) => ({
-        manualId: hit.manualId,
-        revisionId: hit.revisionId,
-        manualTitle: hit.manualTitle,
-        revisionLabel: hit.revisionLabel,
-        current: hit.current,
-        page: hit.page,
-        snippet: snippetToHtml(String((hit._formatted as Partial<PageDocument> | undefined)?.text ?? hit.text.slice(0, 200))),
-        score: Number((hit._rankingScore ?? 0).toFixed(4)),
-      }));
-      const total = result.estimatedTotalHits ?? hits.length;
-      return { hits, total: Math.min(total, totalLimit), totalCapped: total > totalLimit };
+      const terms = termsOf(query);
+      const excluded = query.excluded.map((e) => (e.includes(" ") ? `-${quote(e)}` : `-${e}`));
+      const filter = filterOf(filters);
+      const goesTo = query.section ? await findSections(query.section, await revisionsInScope(filters)) : [];
+      const ask = (present: Term[], strategy: "all" | "last") =>
+        index.search([...present.map((t) => t.q), ...excluded].join(" "), {
+          filter,
+          limit,
+          offset,
+          matchingStrategy: strategy,
+          attributesToCrop: ["text"],
+          cropLength: 30,
+          attributesToHighlight: ["text"],
+          highlightPreTag: markStart,
+          highlightPostTag: markEnd,
+          showRankingScore: true,
+          showMatchesPosition: strategy === "last",
+        });
+      const answer = (result: Awaited<ReturnType<typeof ask>>, present: Term[] | null, missing: string[]) => {
+        const hits: SearchHit[] = result.hits.map((hit) => {
+          const matched = Object.entries(hit._matchesPosition ?? {}).flatMap(([field, positions]) =>
+            (positions ?? []).map((p) =>
+              String(hit[field as keyof PageDocument] ?? "")
+                .substr(p.start, p.length)
+                .toLowerCase(),
+            ),
+          );
+          return {
+            manualId: hit.manualId,
+            revisionId: hit.revisionId,
+            manualTitle: hit.manualTitle,
+            revisionLabel: hit.revisionLabel,
+            current: hit.current,
+            page: hit.page,
+            snippet: snippetToHtml(String((hit._formatted as Partial<PageDocument> | undefined)?.text ?? hit.text.slice(0, 200))),
+            score: Number((hit._rankingScore ?? 0).toFixed(4)),
+            missing: [...missing, ...(present ?? []).filter((t) => !matches(t, matched)).map((t) => t.label)],
+          };
+        });
+        const total = result.estimatedTotalHits ?? hits.length;
+        return { hits, total: Math.min(total, totalLimit), totalCapped: total > totalLimit };
+      };
+
+      const all = await ask(terms, "all");
+      const total = all.estimatedTotalHits ?? all.hits.length;
+      // As in PostgreSQL: the pages with most of the words only when those with all of them do not fill a page.
+      if (total >= limit || (terms.length < 2 && total > 0)) return { ...answer(all, null, []), partial: false, missing: [], goesTo };
+      const found = await Promise.all(
+        terms.map(async (t) => ((await index.search(t.q, { filter, limit: 0 })).estimatedTotalHits ?? 0) > 0),
+      );
+      const missing = terms.filter((_, i) => !found[i]).map((t) => t.label);
+      const present = terms.filter((_, i) => found[i]);
+      if (!missing.length && present.length < 2) return { ...answer(all, null, []), partial: false, missing, goesTo };
+      if (!present.length) return { hits: [], total: 0, totalCapped: false, partial: false, missing, goesTo };
+      return { ...answer(await ask(present, "last"), present, missing), partial: true, missing, goesTo };
     },
   };
 }

@@ -119,6 +119,12 @@ describe.each(engines)("search engine: %s", (name, engine) => {
     expect((await run("zorvex")).hits.every((h) => h.revisionId === secondId)).toBe(true);
   });
 
+  it.skipIf(!engine)("shows the pages with the other words when one is on no page, and names it", async () => {
+    const answer = await run("quillometer xqjvzzw");
+    expect(answer.missing).toEqual(["xqjvzzw"]);
+    expect(answer.hits.map((h) => [h.page, h.missing])).toEqual([[3, ["xqjvzzw"]]]);
+  });
+
   it.skipIf(!engine)("marks the matched words in the snippet", async () => {
     const [hit] = (await run("quillometer")).hits;
     expect(hit?.snippet).toContain("<mark>quillometer</mark>");
@@ -140,6 +146,8 @@ describe("GET /api/search", () => {
     expect(body.hits[0]).toHaveProperty("snippet");
     expect(body.hits[0]).toHaveProperty("score");
     expect(body.tookMs).toBeGreaterThanOrEqual(0);
+    expect(body).toMatchObject({ partial: false, missing: [], goesTo: [] });
+    expect(body.hits[0]).toHaveProperty("missing", []);
   });
 
   it.each([
@@ -150,7 +158,8 @@ describe("GET /api/search", () => {
     ["q=x&limit=51", "limit"],
     ["q=x&offset=-1", "offset"],
     ["q=x&type=novel", "type"],
-    ["q=x&ata=3", "ata"],
+    ["q=x&ata=123", "ata"],
+    ["q=x&ata=3a", "ata"],
     ["q=x&manual=nope", "manual"],
   ])("refuses ?%s with 422 naming %s", async (query, field) => {
     const response = await call("GET", `/api/search?${query}`, { cookie: student });
