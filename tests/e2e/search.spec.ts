@@ -1,4 +1,6 @@
 import { expect, test } from "@playwright/test";
+import { demoManuals, secondRevisionOfTrainer } from "@/db/demo/manual-content";
+import { sectionPage } from "@/db/demo/manual-pdf";
 import { ManualReaderPage } from "./support/pages/manual-reader";
 import { SignInPage } from "./support/pages/sign-in";
 
@@ -67,4 +69,28 @@ test("a superseded page says so and links to the current revision", async ({ pag
   await reader.openCurrentRevision("Rev 4");
   await expect(reader.heading()).toContainText("Rev 4");
   await expect(page).toHaveURL(new RegExp(`/library/${manualId}/[0-9a-f-]+/5`));
+});
+
+test("a search with a word no page has shows the pages with the other words and names it; an ATA code goes to its section", async ({
+  page,
+}) => {
+  const signIn = new SignInPage(page);
+  await signIn.open("/sign-in?next=%2Fsearch");
+  await signIn.signIn("student@hangarleaf.test");
+  const box = page.getByRole("combobox", { name: "What are you looking for?" });
+  // A made-up word, far from every word of the library, so no typo correction reaches it.
+  await box.fill("magneto timing xqjvzzw ");
+  await expect(page.getByText("No page has 'xqjvzzw'; showing pages with the other words")).toBeVisible();
+  const first = page.getByRole("listbox", { name: "Search results" }).getByRole("option").first();
+  await expect(first).toContainText("MAGNETO TIMING");
+  await expect(first).toContainText("Does not have: xqjvzzw");
+
+  await box.fill("32-10-00");
+  const jump = page.getByRole("navigation", { name: "Manual sections" }).getByRole("link", { name: /Go to 32-10-00: MAIN LANDING GEAR/ });
+  await expect(jump).toContainText("HT-20 Trainer Maintenance Manual · Rev 4");
+  await jump.click();
+  // The section's first page in the current revision, as the demo manual lays it out.
+  const firstPage = sectionPage(secondRevisionOfTrainer(demoManuals.find((m) => m.title.startsWith("HT-20"))!), "32-10-00", "description");
+  await expect(page).toHaveURL(new RegExp(`/library/[0-9a-f-]+/[0-9a-f-]+/${firstPage}\\?q=32-10-00`));
+  await expect(new ManualReaderPage(page).heading()).toContainText("HT-20 Trainer Maintenance Manual · Rev 4");
 });

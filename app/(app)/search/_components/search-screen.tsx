@@ -7,7 +7,7 @@ import { MarkedText } from "@/components/marked-text";
 import { documentTypes } from "@/lib/domain/vocabulary";
 import { ApiError } from "@/lib/client/api";
 import { documentTypeLabels } from "@/lib/domain/validation/library";
-import { useSearch, type SearchHitDto, type SearchInput } from "./use-search";
+import { useSearch, type SearchHitDto, type SearchInput, type SearchResponseDto } from "./use-search";
 
 function useDebounced<T>(value: T, ms: number): T {
   const [debounced, setDebounced] = useState(value);
@@ -20,6 +20,26 @@ function useDebounced<T>(value: T, ms: number): T {
 
 export function readerLink(hit: Pick<SearchHitDto, "manualId" | "revisionId" | "page">, q: string) {
   return `/library/${hit.manualId}/${hit.revisionId}/${hit.page}?q=${encodeURIComponent(q)}`;
+}
+
+/** 'a', 'a' or 'b', 'a', 'b' or 'c': the words no page has, as said. */
+function wordList(words: string[]): string {
+  const quotedWords = words.map((w) => `'${w}'`);
+  return quotedWords.length < 2 ? (quotedWords[0] ?? "") : `${quotedWords.slice(0, -1).join(", ")} or ${quotedWords.at(-1)}`;
+}
+
+/** What the answer says in words: how many pages, and which words were not found. */
+function summary(data: SearchResponseDto): string {
+  const count = `${data.totalCapped ? "More than " : ""}${data.total} ${data.total === 1 ? "page" : "pages"}`;
+  if (data.missing.length && !data.hits.length) return `No page has ${wordList(data.missing)}. Try another spelling or other words.`;
+  if (data.total === 0) return "No page matches. Try fewer words or another spelling.";
+  if (data.missing.length) return `No page has ${wordList(data.missing)}; showing pages with the other words (${count.toLowerCase()}).`;
+  if (data.partial) {
+    return data.hits.some((h) => !h.missing.length)
+      ? `Few pages have every word: they come first, then pages with most of the words (${count.toLowerCase()}).`
+      : `No page has all the words; showing pages with most of them (${count.toLowerCase()}).`;
+  }
+  return `${count} found`;
 }
 
 export function SearchScreen({ manuals }: { manuals: { id: string; title: string }[] }) {
@@ -98,8 +118,8 @@ export function SearchScreen({ manuals }: { manuals: { id: string; title: string
           aria-describedby="search-help"
         />
         <p id="search-help" className="hint">
-          Typos are forgiven. Use &quot;quotes&quot; for a phrase and -word to leave a word out. Arrow keys move through the results; Enter
-          opens one.
+          Typos are forgiven. Use &quot;quotes&quot; for a phrase and -word to leave a word out. An ATA code such as 32-10-00 goes to that
+          section. Arrow keys move through the results; Enter opens one.
         </p>
         <div className="grid gap-3 md:grid-cols-4">
           <div className="field">
@@ -145,7 +165,7 @@ export function SearchScreen({ manuals }: { manuals: { id: string; title: string
               maxLength={2}
               value={input.ata}
               onChange={set("ata")}
-              placeholder="e.g. 32"
+              placeholder="e.g. 32 or 5"
             />
           </div>
         </div>
@@ -158,12 +178,31 @@ export function SearchScreen({ manuals }: { manuals: { id: string; title: string
           </p>
         ) : search.data && debounced.q ? (
           <p>
-            {search.data.total === 0
-              ? "No page matches. Try fewer words or another spelling."
-              : `${search.data.totalCapped ? "More than " : ""}${search.data.total} ${search.data.total === 1 ? "page" : "pages"} found${search.isFetching ? " · updating…" : ""}`}
+            {summary(search.data)}
+            {search.isFetching ? " · updating…" : ""}
           </p>
         ) : null}
       </div>
+
+      {search.data?.goesTo.length && debounced.q ? (
+        <nav aria-label="Manual sections" className="flex flex-col gap-2">
+          {search.data.goesTo.map((jump) => (
+            <Link
+              key={jump.revisionId}
+              href={readerLink(jump, debounced.q)}
+              className="panel flex flex-col gap-1 border-teal no-underline text-ink hover:border-amber"
+            >
+              <span className="text-xl font-semibold text-teal underline">
+                Go to {jump.code}: {jump.heading.replace(jump.code, "").trim() || "the section"}
+              </span>
+              <span>
+                {jump.manualTitle} · {jump.revisionLabel}
+                {jump.current ? "" : " (superseded)"} · page {jump.page}
+              </span>
+            </Link>
+          ))}
+        </nav>
+      ) : null}
 
       <ol id="search-results" ref={results} role="listbox" aria-label="Search results" className="flex flex-col gap-5">
         {groups.map(([manualId, group]) => (
@@ -187,6 +226,7 @@ export function SearchScreen({ manuals }: { manuals: { id: string; title: string
                     <span className="whitespace-pre-line text-[0.95rem]">
                       <MarkedText snippet={hit.snippet} />
                     </span>
+                    {hit.missing.length ? <span className="hint">Does not have: {hit.missing.join(", ")}</span> : null}
                   </Link>
                 </li>
               ))}
