@@ -67,6 +67,7 @@ test("the calculator works inside an offline run, and a call for a buy-off reach
   // Later steps wait; the student calls the instructor from the cart.
   await runner.callInstructor(2);
   await expect(runner.step(2).getByText(/told as soon as this cart is back online/)).toBeVisible();
+  await page.screenshot({ path: test.info().outputPath("cart-offline-call.png"), fullPage: true });
 
   await context.setOffline(false);
   await page.evaluate(() => window.dispatchEvent(new Event("online")));
@@ -83,10 +84,12 @@ test("the calculator works inside an offline run, and a call for a buy-off reach
   await expect(row).toContainText("Step 2");
   await expect(row).toContainText("Called");
   await expect(row).toContainText("Engine shop, stand 2");
+  await reviewer.screenshot({ path: test.info().outputPath("buy-off-queue.png") });
   await row.getByRole("link").first().click();
   await reviewer.waitForURL(new RegExp(`/review/${runId}`));
   await reviewer.getByRole("button", { name: "Buy off step 2" }).click();
   await expect(reviewer.getByText("Step 2 bought off.")).toBeVisible();
+  await reviewer.screenshot({ path: test.info().outputPath("review-run.png"), fullPage: true });
   await review.openBuyOffQueue();
   await expect(reviewer.getByRole("row", { name: new RegExp(title) })).toHaveCount(0);
 
