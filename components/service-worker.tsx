@@ -10,7 +10,30 @@ import { endPendingSignOut } from "@/lib/client/cart/cart";
  */
 export function ServiceWorker() {
   useEffect(() => {
-    if ("serviceWorker" in navigator) void navigator.serviceWorker.register("/sw.js", { scope: "/" }).catch(() => undefined);
+    if (!("serviceWorker" in navigator)) return;
+    let stopped = false;
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    // An install fails as a whole when one precached file does not arrive (a busy server, a cart
+    // on flaky Wi-Fi), and the browser does not try again until the next page load. Try again here
+    // a few times, so a cart that stays on one page still ends up working offline.
+    const register = (attempt: number) => {
+      if (stopped) return;
+      navigator.serviceWorker
+        .register("/sw.js", { scope: "/" })
+        .then((registration) => {
+          const installing = registration.installing;
+          installing?.addEventListener("statechange", () => {
+            if (installing.state === "redundant" && !registration.active && attempt < 4)
+              timer = setTimeout(() => register(attempt + 1), 3000 * attempt);
+          });
+        })
+        .catch(() => undefined);
+    };
+    register(1);
+    return () => {
+      stopped = true;
+      clearTimeout(timer);
+    };
   }, []);
   return null;
 }

@@ -11,7 +11,10 @@ import { buildServiceWorker, copyPdfAssets } from "./steps/build.mjs";
 
 // `npm test -- --e2e-only [spec files…]`: the same preparation and build, then only Playwright on
 // the named specs (all when none are named); for working on a screen without the whole suite.
+// `npm test -- --vitest-only [test files…]`: the same, with only vitest on the named files.
 const e2eOnly = process.argv.includes("--e2e-only");
+const vitestOnly = process.argv.includes("--vitest-only");
+const partial = e2eOnly || vitestOnly;
 const specs = process.argv.slice(2).filter((a) => !a.startsWith("--"));
 
 const results = [];
@@ -114,8 +117,8 @@ try {
     tsx("db/seed.ts", env);
     tsx("db/seed.ts", env); // twice: the seed must be idempotent (tests/integration/seed.test.ts checks)
   });
-  if (!e2eOnly) await stage("typecheck", () => run(bin("tsc"), ["--noEmit"], { env }));
-  if (!e2eOnly)
+  if (!partial) await stage("typecheck", () => run(bin("tsc"), ["--noEmit"], { env }));
+  if (!partial)
     await stage("lint", () => {
       run(bin("eslint"), ["--max-warnings", "0", "."], { env });
       // The formatter's line width (.prettierrc.json); `npx prettier --write .` fixes what this finds.
@@ -146,7 +149,11 @@ try {
     const vitestReport = path.join(reports, "vitest.json");
     if (!e2eOnly) {
       await stage("unit and integration tests (vitest)", () =>
-        runAsync(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${vitestReport}`], { env: testEnv }),
+        runAsync(
+          bin("vitest"),
+          ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${vitestReport}`, ...(vitestOnly ? specs : [])],
+          { env: testEnv },
+        ),
       );
       vitest = readJson(vitestReport);
     }
@@ -155,10 +162,12 @@ try {
     // the end-to-end tests wait for it here.
     if (e2eOnly) await waitForDemoIngest(databaseUrl);
     const playwrightReport = path.join(reports, "playwright.json");
-    await stage("end-to-end tests (Playwright, Chromium)", () =>
-      runAsync(bin("playwright"), ["test", ...specs], { env: { ...testEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport } }),
-    );
-    playwright = readJson(playwrightReport);
+    if (!vitestOnly) {
+      await stage("end-to-end tests (Playwright, Chromium)", () =>
+        runAsync(bin("playwright"), ["test", ...specs], { env: { ...testEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport } }),
+      );
+      playwright = readJson(playwrightReport);
+    }
   }
 
   log("── summary");

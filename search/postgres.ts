@@ -74,7 +74,7 @@ function phraseOf(terms: SearchTerm[]): SQL | null {
  * rest only ranks them: `phrase` (the words side by side, each with its alternatives, so "mag
  * timing" also stands for "magneto timing"), `typed` (the words as typed, so a page that has them
  * ranks above one found only through an expansion, a family or a typo correction) and `headingWords`
- * (the words unstemmed, checked in the heading, so "timing" ranks above "time").
+ * (the words as typed, looked for in the heading's letters, so "timing" ranks above "time").
  */
 export interface SearchPlan {
   match: SQL;
@@ -82,7 +82,7 @@ export interface SearchPlan {
   excluded: SQL | null;
   typed: SQL | null;
   phrase: SQL | null;
-  headingWords: SQL[];
+  headingWords: string[];
 }
 
 export async function buildTsQuery(query: ParsedQuery): Promise<SearchPlan | null> {
@@ -108,7 +108,7 @@ export async function buildTsQuery(query: ParsedQuery): Promise<SearchPlan | nul
           sql` || `,
         )})`
       : null;
-  return { match, terms, excluded, typed, phrase: phraseOf(terms), headingWords: query.words.map((w) => typedQuery(w, "simple")) };
+  return { match, terms, excluded, typed, phrase: phraseOf(terms), headingWords: query.words.map((w) => w.text) };
 }
 
 /** Matches in scope, counted up to one past `totalLimit` (reading every page of a common word is not worth it). */
@@ -158,14 +158,17 @@ const rank = (tsquery: SQL) => sql`ts_rank_cd('{0.1, 0.2, 0.4, 1.0}', p.search_v
  * A candidate's score, in steps: 4 when the words stand together (the phrase, or an expansion's
  * phrase), up to 2 for the share of the words the heading has as typed (not a stem of them), then
  * below 1 each the rank of the typed words (not their expansions, families or corrections) and the
- * rank of everything that matched. Needs `h.hv`, the heading's unstemmed vector (see `fromPages`).
+ * rank of everything that matched.
  */
 function score(plan: SearchPlan, ranked: SQL, phrase: SQL | null): SQL {
   const parts: SQL[] = [rank(ranked)];
   if (phrase) parts.push(sql`(case when p.search_vector @@ ${phrase} then 4 else 0 end)`);
   if (plan.headingWords.length) {
+    // A plain ILIKE on the short heading: parsing it into an unstemmed vector for each candidate
+    // cost more than all the other ranking parts together. Query words hold no % or _ (see clean()
+    // in search/query.ts), and "timing" inside "timings" still counts as the word typed.
     const found = sql.join(
-      plan.headingWords.map((w) => sql`(h.hv @@ ${w})::int`),
+      plan.headingWords.map((w) => sql`(p.heading ilike ${`%${w}%`})::int`),
       sql` + `,
     );
     parts.push(sql`(2.0 * (${found}) / ${plan.headingWords.length})`);
@@ -173,9 +176,6 @@ function score(plan: SearchPlan, ranked: SQL, phrase: SQL | null): SQL {
   if (plan.typed) parts.push(rank(plan.typed));
   return sql`(${sql.join(parts, sql` + `)})`;
 }
-
-/** Pages with their heading's unstemmed vector, made once a row (OFFSET 0 keeps the planner from copying it into each use). */
-const fromPages = sql`pages p cross join lateral (select to_tsvector('simple', p.heading) as hv offset 0) h`;
 
 /** How many of the terms a page has (the partial answer orders by it first). */
 const termsMatched = (terms: SearchTerm[]) =>
@@ -230,7 +230,7 @@ export function rankedSql(
   // Ranked inside each branch, on the row already read: joining back to pages for the vector made
   // the planner scan the whole table.
   const branch = (where: SQL) => sql`
-      (select p.revision_id, p.page_number, ${score(plan, any, partial ? phraseOf(partial.present) : plan.phrase)} as score, ${matched} as matched from ${fromPages}
+      (select p.revision_id, p.page_number, ${score(plan, any, partial ? phraseOf(partial.present) : plan.phrase)} as score, ${matched} as matched from pages p
         where ${where} and ${scope}
         limit ${rankedCandidates})`;
   const branches = [branch(headingMatch), branch(sql`p.search_vector @@ ${all}`)];

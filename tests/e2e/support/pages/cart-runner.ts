@@ -18,11 +18,21 @@ export class CartRunnerPage {
 
   /** Resolves once the service worker controls the page, so that it answers when the network goes. */
   async waitForServiceWorker() {
-    await this.page.evaluate(async () => {
-      await navigator.serviceWorker.ready;
-      if (!navigator.serviceWorker.controller)
-        await new Promise((r) => navigator.serviceWorker.addEventListener("controllerchange", r, { once: true }));
+    const controlled = () =>
+      this.page
+        .waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, { timeout: 45_000 })
+        .then(() => true)
+        .catch(() => false);
+    if (await controlled()) return;
+    // A student would reload a cart page that does not say it is ready offline; so does the test,
+    // once, before it says what the registration was doing.
+    await this.page.reload();
+    if (await controlled()) return;
+    const states = await this.page.evaluate(async () => {
+      const r = await navigator.serviceWorker.getRegistration();
+      return r ? { installing: r.installing?.state, waiting: r.waiting?.state, active: r.active?.state } : "no registration";
     });
+    throw new Error(`the service worker does not control the cart page after a reload: ${JSON.stringify(states)}`);
   }
 
   heading(name: string | RegExp) {
