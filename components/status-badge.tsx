@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import type { CardListStatus } from "@/lib/contracts/cards";
 import type { PageStatus } from "@/lib/domain/revisions/compare";
-import type { RevisionStatus, RunStatus, UserStatus } from "@/lib/domain/vocabulary";
+import { runStatusLabels, type RevisionStatus, type RunStatus, type UserStatus } from "@/lib/domain/vocabulary";
 
 // Every status word the screens show, and its colour, once. No "use client" and no hooks: server
 // pages and client components both render it. Run, account and revision statuses are keyed by the
@@ -29,19 +29,23 @@ const teal = "bg-teal-pale text-teal-dark";
 const looks = {
   // Said to the student in My work; the run page adds what to do next, the review queue is the instructor's.
   run: {
-    not_started: { label: "Ready to start", tone: "bg-panel text-ink border border-ink-soft", on: { "run-page": { tone: teal } } },
-    in_progress: { label: "In work", tone: teal },
+    not_started: {
+      label: runStatusLabels.not_started,
+      tone: "bg-panel text-ink border border-ink-soft",
+      on: { "run-page": { tone: teal } },
+    },
+    in_progress: { label: runStatusLabels.in_progress, tone: teal },
     returned: {
-      label: "Sent back for rework",
+      label: runStatusLabels.returned,
       tone: danger,
       on: { "run-page": { label: "Sent back for rework: see your instructor's comment" } },
     },
     submitted: {
-      label: "Waiting for inspection",
+      label: runStatusLabels.submitted,
       tone: amber,
       on: { "run-page": { label: "Waiting for your instructor's inspection", tone: teal } },
     },
-    signed_off: { label: "Signed off", tone: ok },
+    signed_off: { label: runStatusLabels.signed_off, tone: ok },
     overdue: { label: "Past due", tone: "bg-danger text-white" },
   } satisfies Record<RunStatus | "overdue", Entry>,
   account: {

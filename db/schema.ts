@@ -450,6 +450,11 @@ export const assignments = pgTable(
     dueOn: date("due_on", { mode: "string" }),
     note: text("note").notNull().default(""),
     assignedBy: uuid("assigned_by").references(() => users.id, { onDelete: "set null" }),
+    // Withdrawn, not deleted: runs not yet signed off leave the students' work and the queues,
+    // their events stay, and signed-off runs stay in the records as they were.
+    withdrawnAt: timestamp("withdrawn_at", { withTimezone: true }),
+    withdrawnBy: uuid("withdrawn_by").references(() => users.id, { onDelete: "set null" }),
+    withdrawReason: text("withdraw_reason").notNull().default(""),
     ...timestamps,
   },
   (t) => [index("assignments_version_idx").on(t.versionId)],

@@ -41,6 +41,8 @@ export interface CardVersionDto {
   consumables: string[];
   protectiveEquipment: string[];
   steps: StepDto[];
+  /** What a draft still needs before it can be published (always [] for a published version). */
+  problems: { field: string; message: string }[];
   editCount: number;
   publishedAt: string | null;
   publishedByName: string | null;

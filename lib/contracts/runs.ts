@@ -120,6 +120,14 @@ export interface AssignmentDto {
   assignedByName: string | null;
   createdAt: string;
   counts: Record<RunStatus, number>;
+  /** Withdrawn assignments leave the students' work; signed-off runs stay in the records. */
+  withdrawnAt: string | null;
+  withdrawReason: string;
+}
+
+/** One assignment with its students, for editing it and for saying what withdrawing it does. */
+export interface AssignmentDetailDto extends AssignmentDto {
+  students: { runId: string; studentId: string; name: string; status: RunStatus }[];
 }
 
 export interface StudentRecordDto {

@@ -24,3 +24,12 @@ export type RevisionStatus = (typeof revisionStatuses)[number];
 
 export const runStatuses = ["not_started", "in_progress", "submitted", "returned", "signed_off"] as const;
 export type RunStatus = (typeof runStatuses)[number];
+
+/** A run's status in the shop's words, as the badges and messages say it. */
+export const runStatusLabels: Record<RunStatus, string> = {
+  not_started: "Ready to start",
+  in_progress: "In work",
+  submitted: "Waiting for inspection",
+  returned: "Sent back for rework",
+  signed_off: "Signed off",
+};

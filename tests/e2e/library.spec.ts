@@ -12,12 +12,15 @@ test("a librarian uploads a manual and watches it become ready", async ({ page }
 
   const form = page.getByRole("form", { name: "Upload a manual" });
   await form.getByRole("button", { name: "Upload manual" }).click();
-  await expect(form.getByText("Give the title.")).toBeVisible(); // checked before anything is sent
+  // Checked before anything is sent: beside each field, and all of them in a summary at the top.
+  await expect(form.getByRole("alert")).toContainText(/\d fields need a change:/);
+  await expect(form.getByRole("alert")).toContainText("Title: Give the title.");
+  await expect(form.locator("#title-error")).toHaveText("Give the title.");
 
   await form.getByLabel("Title").fill(title);
   await form.getByLabel("Document type").selectOption("school_procedure");
   await form.getByLabel("Applies to (optional)").fill("HT-20");
-  await form.getByLabel("ATA chapters (optional)").fill("32");
+  await form.getByLabel("ATA chapters (optional)").fill("32, 5");
   await form.getByLabel("Revision label").fill("Rev 1");
   await form.getByLabel("Revision date").fill("2026-11-20");
   const pdf = Buffer.from(await makePdf(["32-40-00 WHEEL BEARINGS\nClean and repack", "Inspect the cups", "Install and torque"]));
@@ -29,8 +32,11 @@ test("a librarian uploads a manual and watches it become ready", async ({ page }
     "Rev 1 is ready: 3 pages, now the current revision",
     { timeout: 30_000 },
   );
+  // Emptied for the next upload once the revision is read.
+  await expect(form.getByLabel("Title")).toHaveValue("");
   await form.getByRole("link", { name: "Open the manual" }).click();
   await expect(page.getByRole("heading", { level: 1, name: title })).toBeVisible();
+  await expect(page.getByText("ATA 32, 05")).toBeVisible();
   await expect(page.getByRole("row").filter({ hasText: "Rev 1" })).toContainText("Current");
 });
 
@@ -54,9 +60,13 @@ test("a student browses the library but cannot upload", async ({ page }) => {
   await signIn.open("/sign-in?next=%2Flibrary");
   await signIn.signIn("student@hangarleaf.test");
   await expect(page.getByRole("heading", { level: 1, name: "Library" })).toBeVisible();
-  await expect(page.getByRole("link", { name: "HT-20 Trainer Maintenance Manual" })).toBeVisible();
+  await expect(page.getByRole("link", { name: "HT-20 Trainer Maintenance Manual", exact: true })).toBeVisible();
   await expect(page.getByRole("link", { name: "Upload a manual" })).toHaveCount(0);
-  await page.getByRole("link", { name: "HT-20 Trainer Maintenance Manual" }).click();
+  // The manual opens in the reader; its revisions are one link away.
+  await page.getByRole("link", { name: "HT-20 Trainer Maintenance Manual", exact: true }).click();
+  await expect(page).toHaveURL(/\/library\/[0-9a-f-]+\/[0-9a-f-]+\/1$/);
+  await page.goBack();
+  await page.getByRole("link", { name: "Revisions and details of HT-20 Trainer Maintenance Manual" }).click();
   await expect(page.getByRole("row").filter({ hasText: "Rev 4" })).toContainText("Current");
   await expect(page.getByRole("row").filter({ hasText: "Rev 3" })).toContainText("Superseded");
   expect((await page.goto("/library/upload"))?.status()).toBe(403);

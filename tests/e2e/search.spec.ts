@@ -58,11 +58,10 @@ test("a superseded page says so and links to the current revision", async ({ pag
   const signIn = new SignInPage(page);
   await signIn.open("/sign-in?next=%2Flibrary");
   await signIn.signIn("student@hangarleaf.test");
-  await page.getByRole("link", { name: "HT-20 Trainer Maintenance Manual" }).click();
+  await page.getByRole("link", { name: "Revisions and details of HT-20 Trainer Maintenance Manual" }).click();
   const old = page.getByRole("row").filter({ hasText: "Rev 3" });
-  const href = await old.getByRole("link", { name: "Open PDF" }).getAttribute("href");
-  const revisionId = /revisions\/([0-9a-f-]+)\/file/.exec(href ?? "")?.[1];
-  const manualId = /library\/([0-9a-f-]+)/.exec(page.url())?.[1];
+  const href = await old.getByRole("link", { name: "Read Rev 3" }).getAttribute("href");
+  const [, manualId, revisionId] = /library\/([0-9a-f-]+)\/([0-9a-f-]+)\/1$/.exec(href ?? "") ?? [];
   const reader = new ManualReaderPage(page);
   await reader.open(manualId!, revisionId!, 5);
   await expect(reader.supersededAlert()).toContainText("This is Rev 3, a superseded revision.");

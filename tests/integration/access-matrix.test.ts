@@ -42,6 +42,8 @@ interface Ids {
   studentId: string;
   /** A run of the demo student's (tests/../db/demo/seed-runs.ts). */
   runId: string;
+  /** That run's assignment, made by the demo instructor for the day class. */
+  assignmentId: string;
 }
 
 const only = (allowed: Partial<Record<Role | "anonymous", number>>, denied = 403): Record<Role | "anonymous", number> => ({
@@ -229,6 +231,34 @@ export const accessMatrix: Row[] = [
   },
   { method: "GET", route: "/api/assignments", path: () => "/api/assignments", expect: only({ instructor: 200, admin: 200 }) },
   { method: "POST", route: "/api/assignments", path: () => "/api/assignments", json: {}, expect: only({ instructor: 422, admin: 422 }) },
+  {
+    method: "GET",
+    route: "/api/assignments/[id]",
+    path: (i) => `/api/assignments/${i.assignmentId}`,
+    expect: only({ instructor: 200, admin: 200 }),
+    cross: { otherInstructor: 404 },
+  },
+  {
+    method: "PATCH",
+    route: "/api/assignments/[id]",
+    path: (i) => `/api/assignments/${i.assignmentId}`,
+    json: {},
+    expect: only({ instructor: 422, admin: 422 }),
+  },
+  {
+    method: "PATCH",
+    route: "/api/assignments/[id]",
+    path: (i) => `/api/assignments/${i.nobody}`,
+    json: { dueOn: null, note: "" },
+    expect: only({ instructor: 404, admin: 404 }),
+  },
+  {
+    method: "POST",
+    route: "/api/assignments/[id]/withdraw",
+    path: (i) => `/api/assignments/${i.assignmentId}/withdraw`,
+    json: {},
+    expect: only({ instructor: 422, admin: 422 }),
+  },
   { method: "GET", route: "/api/my-work", path: () => "/api/my-work", expect: only({ student: 200 }) },
   { method: "GET", route: "/api/review", path: () => "/api/review", expect: only({ instructor: 200, admin: 200 }) },
   {
@@ -374,10 +404,15 @@ beforeAll(async () => {
     .from(taskCardVersions)
     .where(and(eq(taskCardVersions.title, "Magneto-to-engine timing check"), eq(taskCardVersions.number, 1)));
   const [student] = await getDb().select({ id: users.id }).from(users).where(eq(users.email, demo.student));
-  const [run] = await getDb().select({ id: runs.id }).from(runs).where(eq(runs.studentId, student!.id)).limit(1);
+  const [run] = await getDb()
+    .select({ id: runs.id, assignmentId: runs.assignmentId })
+    .from(runs)
+    .where(eq(runs.studentId, student!.id))
+    .limit(1);
   ids = {
     studentId: student!.id,
     runId: run!.id,
+    assignmentId: run!.assignmentId,
     cardId: card!.id,
     adminId: admin!.id,
     dayClassId: day!.id,

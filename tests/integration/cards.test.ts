@@ -122,17 +122,15 @@ describe("task cards", () => {
     expect(again.draft!.editCount).toBe(before.editCount);
   });
 
-  it("rejects bad input with the field named", async () => {
+  it("rejects what could never be stored, with the field named", async () => {
     const cases: [unknown, RegExp][] = [
-      [{ content: { ...content(), title: "" } }, /title/],
-      [{ content: { ...content(), ataChapter: "2B" } }, /ataChapter/],
-      [{ content: { ...content(), steps: [step({ measurement: { label: "Gap", unit: "furlongs", min: 1 } })] } }, /steps/],
-      [{ content: { ...content(), steps: [step({ measurement: { label: "Gap", unit: "in", min: 2, max: 1 } })] } }, /steps/],
-      [{ content: { ...content(), steps: [step({ measurement: { label: "Gap", unit: "in" } })] } }, /steps/],
+      [{ content: { ...content(), ataChapter: "123" } }, /ataChapter/],
       [{ content: { ...content(), steps: [step({ notices: [{ kind: "danger", text: "x" }] })] } }, /steps/],
-      [{ content: { ...content(), steps: [step({ timerMinutes: -1 })] } }, /steps/],
+      [{ content: { ...content(), steps: [step({ measurement: { label: "Gap", unit: "in", min: "one" } })] } }, /steps/],
       [{ content: { ...content(), steps: "one" } }, /steps/],
       [{ content: { ...content(), subjectId: "not-an-id" } }, /subjectId/],
+      [{ content: { ...content(), title: "x".repeat(161) } }, /title/],
+      [{ content: { ...content(), title: "Nul\u0000inside" } }, /content/],
     ];
     for (const [json, field] of cases) {
       const response = await call("POST", "/api/cards", { cookie: instructor, json });
@@ -140,14 +138,6 @@ describe("task cards", () => {
       const body = (await response.json()) as { error: { message: string; fields?: Record<string, string> } };
       expect(Object.keys(body.error.fields ?? {}).join(" ")).toMatch(field);
     }
-    // The step is named in people's numbering.
-    const inverted = await call("POST", "/api/cards", {
-      cookie: instructor,
-      json: { content: content({ steps: [step(), step({ measurement: { label: "Gap", unit: "in", min: 2, max: 1 } })] }) },
-    });
-    expect(((await inverted.json()) as { error: { fields: Record<string, string> } }).error.fields.steps).toBe(
-      "Step 2: The minimum is above the maximum.",
-    );
     const unknownSubject = await call("POST", "/api/cards", {
       cookie: instructor,
       json: { content: content({ subjectId: randomUUID() }) },
@@ -170,6 +160,57 @@ describe("task cards", () => {
       json: { content: content({ steps: [step({ text: "x".repeat(600 * 1024) })] }) },
     });
     expect(huge.status).toBe(413);
+  });
+
+  it("saves an unfinished draft as typed, lists what it still needs, and publishing names every one", async () => {
+    const unfinished = content({
+      title: "",
+      ataChapter: "2B",
+      estimatedMinutes: -5,
+      steps: [
+        step(),
+        step({ text: "", measurement: { label: "Gap", unit: "in", min: 2, max: 1 } }),
+        step({ notices: [{ kind: "warning", text: "" }], measurement: { label: "", unit: "furlongs" }, timerMinutes: 0 }),
+      ],
+    });
+    const card = await createCard(unfinished);
+    const draft = card.draft!;
+    // Nothing typed is dropped: the unknown unit and the inverted limits are stored as written.
+    expect(draft.title).toBe("");
+    expect(draft.ataChapter).toBe("2B");
+    expect(draft.steps[1]!.measurement).toMatchObject({ min: 2, max: 1, unit: "in" });
+    expect(draft.steps[2]!.measurement).toMatchObject({ label: "", unit: "furlongs" });
+    expect(draft.problems.map((p) => p.field)).toEqual([
+      "title",
+      "ataChapter",
+      "estimatedMinutes",
+      "steps.2.text",
+      "steps.2.measurement",
+      "steps.3.notices",
+      "steps.3.measurement",
+      "steps.3.timerMinutes",
+    ]);
+    expect(draft.problems.find((p) => p.field === "steps.2.measurement")!.message).toBe("Step 2: The minimum is above the maximum.");
+    expect(draft.problems.find((p) => p.field === "steps.3.measurement")!.message).toMatch(
+      /^Step 3: Say what is measured; the unit "furlongs" is not known .*; give a minimum/,
+    );
+
+    const refused = await call("POST", `/api/cards/${card.id}/publish`, { cookie: instructor });
+    expect(refused.status).toBe(422);
+    const body = (await refused.json()) as { error: { message: string; fields: Record<string, string> } };
+    expect(Object.keys(body.error.fields)).toEqual(draft.problems.map((p) => p.field));
+    expect(body.error.message).toMatch(/^Not ready to publish: Give the card a title\. \(and 7 more\)$/);
+
+    // One chapter digit is chapter 05; once everything is there, the list is empty and it publishes.
+    const fixed = await call("PUT", `/api/cards/${card.id}/draft`, {
+      cookie: instructor,
+      json: { content: content({ ataChapter: "5" }), editCount: draft.editCount },
+    });
+    expect(fixed.status).toBe(200);
+    const version = ((await fixed.json()) as { version: CardVersionDto }).version;
+    expect(version.ataChapter).toBe("05");
+    expect(version.problems).toEqual([]);
+    expect((await call("POST", `/api/cards/${card.id}/publish`, { cookie: instructor })).status).toBe(200);
   });
 
   it("publishes only a complete draft, then freezes it: 409 from the API, and the database refuses too", async () => {
@@ -343,9 +384,12 @@ describe("task cards", () => {
     expect(restored.status).toBe(200);
   });
 
-  it("prints a version as a PDF with its notices, blanks, limits and references", async () => {
+  it("prints a version as a PDF with its notices, blanks, limits and references, in a font that has every character", async () => {
     const card = await createCard(
       content({
+        tools: ["Torque wrench 30–150 ft-lb", "Dial indicator ±0.001 in", "Crowfoot ½ in"],
+        consumables: ["Safety wire Ø 0.032 in", "Anti-seize, 60 °F minimum"],
+        protectiveEquipment: ["Safety glasses", "Nitrile gloves"],
         steps: [
           step({
             text: "Torque the **mount bolts** ≤ 45 ft-lb in sequence.",
@@ -374,12 +418,24 @@ describe("task cards", () => {
       await writeFile(file, bytes);
       const { stdout } = await run("pdftotext", ["-layout", file, "-"]);
       const text = stdout.replace(/\s+/g, " ");
+      // No character is swapped for "?", and each tool, consumable and item of equipment is its own line.
+      expect(text).not.toContain("?");
+      const lines = stdout.split("\n").map((l) => l.trim());
+      for (const item of [
+        "Torque wrench 30–150 ft-lb",
+        "Dial indicator ±0.001 in",
+        "Crowfoot ½ in",
+        "Safety wire Ø 0.032 in",
+        "Anti-seize, 60 °F minimum",
+        "Nitrile gloves",
+      ])
+        expect(lines).toContain(item);
       expect(text).toContain(card.draft!.title);
       expect(text).toMatch(/Training use/);
       // Shown in the trade's order, before the step text.
       expect(text.indexOf("WARNING")).toBeLessThan(text.indexOf("CAUTION"));
       expect(text.indexOf("CAUTION")).toBeLessThan(text.indexOf("NOTE Clean dry threads"));
-      expect(text.indexOf("NOTE Clean dry threads")).toBeLessThan(text.indexOf("Torque the mount bolts <= 45"));
+      expect(text.indexOf("NOTE Clean dry threads")).toBeLessThan(text.indexOf("Torque the mount bolts ≤ 45"));
       expect(text).toMatch(/Mount bolt torque: measured _+ ft-lb limits 40 to 45 ft-lb/);
       expect(text).toMatch(/Instructor buy-off/);
       expect(text).toMatch(/Timer 10 min/);

@@ -128,7 +128,12 @@ beforeAll(async () => {
   expect((await call("POST", `/api/cards/${cardId}/publish`, { cookie: teacher.cookie })).status).toBe(200);
   const note = `Bay ${tag}`;
   expect(
-    (await call("POST", "/api/assignments", { cookie: teacher.cookie, json: { cardId, studentIds: [learner.id], note } })).status,
+    (
+      await call("POST", "/api/assignments", {
+        cookie: teacher.cookie,
+        json: { cardId, studentIds: [learner.id], note, confirmDuplicates: true },
+      })
+    ).status,
   ).toBe(201);
   const work = ((await (await call("GET", "/api/my-work", { cookie: learner.cookie })).json()) as { work: WorkItemDto[] }).work;
   runId = work.find((w) => w.note === note)!.runId;

@@ -66,7 +66,7 @@ async function newRun(): Promise<string> {
   const note = `Bay ${randomUUID().slice(0, 6)}`;
   const made = await call("POST", "/api/assignments", {
     cookie: teacher.cookie,
-    json: { cardId: card.id, studentIds: [learner.id], note },
+    json: { cardId: card.id, studentIds: [learner.id], note, confirmDuplicates: true },
   });
   expect(made.status).toBe(201);
   const work = ((await (await call("GET", "/api/my-work", { cookie: learner.cookie })).json()) as { work: WorkItemDto[] }).work;
@@ -234,7 +234,12 @@ describe("moving open work to a new card version", () => {
     expect((await call("POST", `/api/cards/${cardId}/publish`, { cookie: teacher.cookie })).status).toBe(200);
     const note = `Move ${randomUUID().slice(0, 6)}`;
     expect(
-      (await call("POST", "/api/assignments", { cookie: teacher.cookie, json: { cardId, studentIds: [learner.id], note } })).status,
+      (
+        await call("POST", "/api/assignments", {
+          cookie: teacher.cookie,
+          json: { cardId, studentIds: [learner.id], note, confirmDuplicates: true },
+        })
+      ).status,
     ).toBe(201);
     const work = ((await (await call("GET", "/api/my-work", { cookie: learner.cookie })).json()) as { work: WorkItemDto[] }).work;
     const runId = work.find((w) => w.note === note)!.runId;

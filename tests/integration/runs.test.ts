@@ -46,7 +46,7 @@ const event = (type: string, over: Record<string, unknown> = {}) => ({
 });
 
 async function assign(json: Record<string, unknown>, cookie = instructor) {
-  return call("POST", "/api/assignments", { cookie, json: { cardId: card.id, ...json } });
+  return call("POST", "/api/assignments", { cookie, json: { cardId: card.id, confirmDuplicates: true, ...json } });
 }
 
 async function myWork(cookie: string) {

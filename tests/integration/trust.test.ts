@@ -49,7 +49,10 @@ async function detail(cookie: string, runId: string) {
 
 async function newRun(student = learner, by = teacher): Promise<string> {
   const note = `trust ${randomUUID().slice(0, 8)}`;
-  const made = await call("POST", "/api/assignments", { cookie: by.cookie, json: { cardId: card.id, studentIds: [student.id], note } });
+  const made = await call("POST", "/api/assignments", {
+    cookie: by.cookie,
+    json: { cardId: card.id, studentIds: [student.id], note, confirmDuplicates: true },
+  });
   expect(made.status).toBe(201);
   const work = ((await (await call("GET", "/api/my-work", { cookie: student.cookie })).json()) as { work: WorkItemDto[] }).work;
   return work.find((w) => w.note === note)!.runId;

@@ -34,8 +34,12 @@ export default async function LibraryPage() {
           columns={[
             {
               header: "Title",
+              // A manual opens where it is read: the reader at its first page, with the contents beside it.
               cell: (m) => (
-                <Link href={`/library/${m.id}`} className="inline-flex min-h-11 items-center font-semibold">
+                <Link
+                  href={m.currentRevisionId ? `/library/${m.id}/${m.currentRevisionId}/1` : `/library/${m.id}`}
+                  className="inline-flex min-h-11 items-center font-semibold"
+                >
                   {m.title}
                 </Link>
               ),
@@ -45,6 +49,18 @@ export default async function LibraryPage() {
             { header: "ATA", cell: (m) => m.ataChapters.join(", ") || "—" },
             { header: "Current revision", cell: (m) => (m.currentLabel ? `${m.currentLabel} (${m.currentDate})` : "none yet") },
             { header: "Pages", cell: (m) => m.pageCount ?? "—" },
+            {
+              header: "Details",
+              cell: (m) => (
+                <Link
+                  href={`/library/${m.id}`}
+                  className="inline-flex min-h-11 items-center"
+                  aria-label={`Revisions and details of ${m.title}`}
+                >
+                  Revisions and details
+                </Link>
+              ),
+            },
             manages && {
               header: "State",
               // No revision yet shows as ready, as a manual with nothing waiting.

@@ -3,6 +3,9 @@
 import { z } from "zod";
 import { calculatorSlugs } from "@/lib/domain/calc";
 import { resolveUnit } from "@/lib/domain/calc/units";
+import { ataChapterOf } from "@/lib/domain/validation/ata";
+
+export { ataChapterOf };
 
 export const noticeKinds = ["warning", "caution", "note"] as const;
 export type NoticeKind = (typeof noticeKinds)[number];
@@ -21,9 +24,13 @@ const textList = (what: string, maxItems: number) =>
     .default([])
     .transform((items) => [...new Set(items.filter(Boolean))]);
 
+// A draft keeps whatever the author has typed so far: only what could never be stored (sizes,
+// counts, ids) is refused here. What a card needs before students run it is checked by
+// cardProblems, which the editor shows as a list and publishing requires to be empty.
+
 export const noticeSchema = z.object({
   kind: z.enum(noticeKinds, { error: "A notice is a WARNING, CAUTION or NOTE." }),
-  text: shortText("the notice text", 1000).min(1, "Write what the notice says."),
+  text: shortText("the notice text", 1000).default(""),
 });
 
 export const referenceSchema = z.object({
@@ -34,23 +41,17 @@ export const referenceSchema = z.object({
 
 const finite = z.number().finite().nullable().optional();
 
+/** A measured value as drafted: the unit as typed when it is not one we know (cardProblems says so). */
 export const measurementSchema = z
   .object({
-    label: shortText("what is measured", 120).min(1, "Say what is measured."),
-    unit: z
-      .string()
-      .trim()
-      .refine((u) => resolveUnit(u) !== null, "That unit is not known (try in, mm, in-lb, N·m, °F, psi, lb)."),
+    label: shortText("what is measured", 120).default(""),
+    unit: z.string().trim().max(40, "A unit has at most 40 characters.").default(""),
     min: finite,
     max: finite,
     nominal: finite,
     tolerance: finite,
   })
-  .refine((m) => m.min != null || m.max != null || (m.nominal != null && m.tolerance != null), {
-    message: "Give a minimum, a maximum, or a nominal value with its tolerance.",
-  })
-  .refine((m) => m.min == null || m.max == null || m.min <= m.max, { message: "The minimum is above the maximum." })
-  .transform((m) => ({ ...m, unit: resolveUnit(m.unit)! }));
+  .transform((m) => ({ ...m, unit: resolveUnit(m.unit) ?? m.unit }));
 
 export const stepSchema = z.object({
   id: z.uuid("Each step has an id."),
@@ -60,27 +61,15 @@ export const stepSchema = z.object({
   measurement: measurementSchema.nullable().optional().default(null),
   calculator: z.enum(calculatorSlugs).nullable().optional().default(null),
   inspectionPoint: z.boolean().default(false),
-  timerMinutes: z
-    .number()
-    .min(0.5, "A timer runs at least half a minute.")
-    .max(600, "A timer runs at most 600 minutes.")
-    .nullable()
-    .optional()
-    .default(null),
+  timerMinutes: z.number().finite().nullable().optional().default(null),
 });
 
 export const cardContentSchema = z.object({
-  title: shortText("a title", 160).min(1, "Give the card a title."),
+  title: shortText("a title", 160).default(""),
   applicability: textList("models", 20),
-  ataChapter: z.union([z.literal(""), z.string().regex(/^\d{2}$/, "An ATA chapter is two digits, such as 27.")]).default(""),
+  ataChapter: z.string().trim().max(2, "An ATA chapter is two digits, such as 27.").default("").transform(ataChapterOf),
   subjectId: z.uuid("Choose a curriculum subject.").nullable().default(null),
-  estimatedMinutes: z
-    .number()
-    .int("Whole minutes.")
-    .min(1, "At least one minute.")
-    .max(6000, "At most 6000 minutes.")
-    .nullable()
-    .default(null),
+  estimatedMinutes: z.number().int("Whole minutes.").min(-1_000_000).max(1_000_000).nullable().default(null),
   tools: textList("tools", 40),
   consumables: textList("consumables", 40),
   protectiveEquipment: textList("items of protective equipment", 20),
@@ -96,14 +85,59 @@ export type Step = z.output<typeof stepSchema>;
 export type StepReference = z.output<typeof referenceSchema>;
 export type Measurement = z.output<typeof measurementSchema>;
 
-/** What publishing adds to a draft: a subject, a chapter, and steps that say something. */
-export const publishableCardSchema = cardContentSchema.superRefine((card, ctx) => {
-  if (!card.subjectId) ctx.addIssue({ code: "custom", path: ["subjectId"], message: "Choose a curriculum subject before publishing." });
-  if (!card.ataChapter) ctx.addIssue({ code: "custom", path: ["ataChapter"], message: "Give the ATA chapter before publishing." });
-  if (card.steps.length === 0) ctx.addIssue({ code: "custom", path: ["steps"], message: "Add at least one step before publishing." });
+/**
+ * One thing to finish before a card can be published. `field` is where the editor shows it:
+ * "title", "subjectId", "ataChapter", "estimatedMinutes", "steps", or "steps.N.<part>" (N from 1).
+ */
+export interface CardProblem {
+  field: string;
+  message: string;
+}
+
+function measurementProblems(m: Measurement): string[] {
+  const out: string[] = [];
+  if (!m.label) out.push("say what is measured");
+  if (!m.unit) out.push("give the unit");
+  else if (resolveUnit(m.unit) === null) out.push(`the unit "${m.unit}" is not known (try in, mm, in-lb, N·m, °F, psi, lb)`);
+  const range = m.min != null || m.max != null;
+  const tolerance = m.nominal != null && m.tolerance != null;
+  if (!range && !tolerance) out.push("give a minimum, a maximum, or a nominal value with its tolerance");
+  if (m.min != null && m.max != null && m.min > m.max) out.push("the minimum is above the maximum");
+  if (m.tolerance != null && m.tolerance < 0) out.push("a tolerance is not negative");
+  return out;
+}
+
+const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
+/** Everything a draft still needs before students may run it, in the order of the editor. Pure. */
+export function cardProblems(card: CardContent): CardProblem[] {
+  const out: CardProblem[] = [];
+  if (!card.title) out.push({ field: "title", message: "Give the card a title." });
+  if (!card.subjectId) out.push({ field: "subjectId", message: "Choose a curriculum subject." });
+  if (!card.ataChapter) out.push({ field: "ataChapter", message: "Give the ATA chapter." });
+  else if (!/^\d{2}$/.test(card.ataChapter)) out.push({ field: "ataChapter", message: "An ATA chapter is two digits, such as 27." });
+  if (card.estimatedMinutes != null && (card.estimatedMinutes < 1 || card.estimatedMinutes > 6000))
+    out.push({ field: "estimatedMinutes", message: "The estimated time is from 1 to 6000 minutes." });
+  if (card.steps.length === 0) out.push({ field: "steps", message: "Add at least one step." });
   card.steps.forEach((step, i) => {
-    if (!step.text.trim()) ctx.addIssue({ code: "custom", path: ["steps"], message: `Step ${i + 1} has no instruction.` });
+    const n = i + 1;
+    if (!step.text.trim()) out.push({ field: `steps.${n}.text`, message: `Step ${n}: write the instruction.` });
+    step.notices.forEach((notice) => {
+      if (!notice.text) out.push({ field: `steps.${n}.notices`, message: `Step ${n}: a ${noticeLabels[notice.kind]} has no text.` });
+    });
+    if (step.measurement) {
+      const missing = measurementProblems(step.measurement);
+      if (missing.length) out.push({ field: `steps.${n}.measurement`, message: `Step ${n}: ${capital(missing.join("; "))}.` });
+    }
+    if (step.timerMinutes != null && (step.timerMinutes < 0.5 || step.timerMinutes > 600))
+      out.push({ field: `steps.${n}.timerMinutes`, message: `Step ${n}: a timer runs from half a minute to 600 minutes.` });
   });
+  return out;
+}
+
+/** A card ready for students: the draft's schema and no problem left. */
+export const publishableCardSchema = cardContentSchema.superRefine((card, ctx) => {
+  for (const p of cardProblems(card)) ctx.addIssue({ code: "custom", path: p.field.split("."), message: p.message });
 });
 
 export const saveDraftSchema = z.object({

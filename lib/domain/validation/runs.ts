@@ -74,8 +74,29 @@ export const createAssignmentSchema = z
       .refine(noNul, "A NUL character cannot be stored.")
       .optional()
       .default(""),
+    /** Assign even to students who already have this card open (otherwise 409 names them). */
+    confirmDuplicates: z.boolean().optional().default(false),
   })
   .refine((a) => a.classId || a.studentIds.length, { message: "Choose a class or at least one student.", path: ["classId"] });
+
+/** The whole of what may change (the edit form sends both): `dueOn` null or "" takes the due date away. */
+export const updateAssignmentSchema = z.object({
+  dueOn: optionalDate,
+  note: z
+    .string({ error: "Send the note (empty for none)." })
+    .trim()
+    .max(300, "Keep the note to 300 characters (an aircraft or a station).")
+    .refine(noNul, "A NUL character cannot be stored."),
+});
+
+export const withdrawAssignmentSchema = z.object({
+  reason: z
+    .string({ error: "Say why the assignment is withdrawn." })
+    .trim()
+    .min(1, "Say why the assignment is withdrawn: the students see it.")
+    .max(300, "Keep the reason to 300 characters.")
+    .refine(noNul, "A NUL character cannot be stored."),
+});
 
 export const reviewCommentSchema = z.object({
   comment: z

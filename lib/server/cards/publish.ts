@@ -7,8 +7,7 @@ import { recordAudit } from "@/lib/server/audit";
 import { type Actor } from "@/lib/domain/access/permissions";
 import type { CardVersionDto } from "@/lib/contracts/cards";
 import { AppError } from "@/lib/domain/errors";
-import { parseWith } from "@/lib/server/http";
-import { publishableCardSchema } from "@/lib/domain/validation/cards";
+import { cardProblems } from "@/lib/domain/validation/cards";
 import { asConflict, lockCard } from "@/lib/server/cards/access";
 import { getVersionById } from "@/lib/server/cards/read";
 import { citationsFor, versionToContent } from "@/lib/server/cards/draft";
@@ -23,7 +22,15 @@ export async function publishDraft({ actor, cardId }: { actor: Actor; cardId: st
         .from(taskCardVersions)
         .where(and(eq(taskCardVersions.cardId, cardId), eq(taskCardVersions.status, "draft")));
       if (!draft) throw new AppError("conflict", "There is no draft to publish: the newest version is already published.");
-      const content = parseWith(publishableCardSchema, versionToContent(draft));
+      const content = versionToContent(draft);
+      // Every problem at once, each under its own field, so the author fixes them in one pass.
+      const problems = cardProblems(content);
+      if (problems.length) {
+        const fields: Record<string, string> = {};
+        for (const p of problems) fields[p.field] ??= p.message;
+        const more = problems.length > 1 ? ` (and ${problems.length - 1} more)` : "";
+        throw new AppError("invalid", `Not ready to publish: ${problems[0]!.message}${more}`, { fields });
+      }
       // Citations are checked again: a page cited last week must still exist in a ready revision.
       await citationsFor(tx, draft.id, content.steps);
       await tx

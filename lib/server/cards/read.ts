@@ -6,7 +6,7 @@ import { citationRechecks, curriculumSubjects, manuals, revisions, taskCards, ta
 import { type Actor } from "@/lib/domain/access/permissions";
 import type { CardDto, CardListStatus, CardSummaryDto, CardVersionDto, ReferenceDto, StepDto } from "@/lib/contracts/cards";
 import { AppError } from "@/lib/domain/errors";
-import { sortNotices, stepSchema } from "@/lib/domain/validation/cards";
+import { cardProblems, sortNotices, stepSchema } from "@/lib/domain/validation/cards";
 import { notFound, isAuthor, editsCard, coauthorsOf } from "@/lib/server/cards/access";
 
 /** Card list rows. Students see published, unarchived cards as they were last published. */
@@ -188,6 +188,20 @@ async function toVersionDto(db: Db | Tx, row: VersionRow): Promise<CardVersionDt
     consumables: row.consumables,
     protectiveEquipment: row.protectiveEquipment,
     steps: stepDtos,
+    problems:
+      row.status === "draft"
+        ? cardProblems({
+            title: row.title,
+            applicability: row.applicability,
+            ataChapter: row.ataChapter,
+            subjectId: row.subjectId,
+            estimatedMinutes: row.estimatedMinutes,
+            tools: row.tools,
+            consumables: row.consumables,
+            protectiveEquipment: row.protectiveEquipment,
+            steps,
+          })
+        : [],
     editCount: row.editCount,
     publishedAt: row.publishedAt?.toISOString() ?? null,
     publishedByName: row.publishedByName,

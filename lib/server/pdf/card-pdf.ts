@@ -1,7 +1,10 @@
 // A task card version as a clean printable PDF (pdf-lib): header, the training notice, tools and
 // protective equipment, each step with its notices before it, blanks for values and initials, the
 // manual references, and a sign-off block. Plain TypeScript, no Next imports.
-import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf-lib";
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import fontkit from "@pdf-lib/fontkit";
+import { PDFDocument, rgb, type PDFFont, type PDFPage } from "pdf-lib";
 import { calculators } from "@/lib/domain/calc";
 import { describeLimit } from "@/lib/domain/calc/limits";
 import { unitLabel } from "@/lib/domain/calc/units";
@@ -30,36 +33,38 @@ export function markdownToPlain(markdown: string): string {
     .trim();
 }
 
-const replacements: Record<string, string> = {
-  "≤": "<=",
-  "≥": ">=",
-  "→": "->",
-  "←": "<-",
-  "⌈": "",
-  "⌉": "",
-  Σ: "sum ",
-  "√": "sqrt",
-  "−": "-",
-  "″": '"',
-  "′": "'",
-  "✓": "v",
-};
+// Liberation Sans, the TrueType font pdf.js ships (the reader's text layer uses it too): it has
+// Latin, Greek, Cyrillic and the trade's symbols (≤ ± ° √ Σ µ ½ −), so a card prints what it says.
+// The standard PDF fonts speak WinAnsi only, which printed "?" for anything else.
+const fontFile = (name: string) => path.join(process.cwd(), "node_modules", "pdfjs-dist", "standard_fonts", name);
+let fonts: { regular: Uint8Array; bold: Uint8Array; has: (codePoint: number) => boolean } | null = null;
+function cardFonts() {
+  if (!fonts) {
+    const regular = readFileSync(fontFile("LiberationSans-Regular.ttf"));
+    const bold = readFileSync(fontFile("LiberationSans-Bold.ttf"));
+    const face = fontkit.create(regular);
+    fonts = { regular, bold, has: (cp) => face.hasGlyphForCodePoint(cp) };
+  }
+  return fonts;
+}
 
-/** Helvetica speaks WinAnsi only: other characters are spelled out or dropped, never a crash. */
-function printable(font: PDFFont, text: string): string {
+/** The card's fonts in a document, subset so that only the glyphs used go into the file. */
+export async function embedCardFonts(doc: PDFDocument): Promise<{ regular: PDFFont; bold: PDFFont }> {
+  doc.registerFontkit(fontkit);
+  const { regular, bold } = cardFonts();
+  return { regular: await doc.embedFont(regular, { subset: true }), bold: await doc.embedFont(bold, { subset: true }) };
+}
+
+/** The few characters the font lacks, spelled out. */
+const replacements: Record<string, string> = { "⌈": "", "⌉": "", "✓": "√", "✔": "√", "☐": "[ ]" };
+
+/** Every character the font has prints as itself; the rest is spelled out or shown as "?", never a crash. */
+function printable(text: string): string {
+  const { has } = cardFonts();
   let out = "";
-  for (const ch of text.replace(/\t/g, "  ")) {
-    const swap = replacements[ch];
-    if (swap !== undefined) {
-      out += swap;
-      continue;
-    }
-    try {
-      font.encodeText(ch);
-      out += ch;
-    } catch {
-      out += "?";
-    }
+  for (const ch of text.replace(/\t/g, "  ").replace(/\r\n?/g, "\n")) {
+    if (ch === "\n" || has(ch.codePointAt(0)!)) out += ch;
+    else out += replacements[ch] ?? "?";
   }
   return out;
 }
@@ -90,7 +95,7 @@ export class CardWriter {
 
   wrap(text: string, font: PDFFont, size: number, maxWidth: number): string[] {
     // An empty paragraph stays as a blank line.
-    return printable(font, text)
+    return printable(text)
       .split("\n")
       .flatMap((paragraph) => {
         const lines = wrapLine(paragraph, font, size, maxWidth);
@@ -117,6 +122,22 @@ export class CardWriter {
 
   gap(h = 6) {
     this.y -= h;
+  }
+
+  /** A list to tick off at the aircraft: one item a line, each with its own box. */
+  checklist(items: readonly string[], indent = 8) {
+    const size = 10.5;
+    const box = 9;
+    for (const item of items) {
+      const lines = this.wrap(item, this.regular, size, width - indent - box - 8);
+      this.ensure(lines.length * (size + 5));
+      this.page.drawRectangle({ x: margin + indent, y: this.y - size, width: box, height: box, borderColor: black, borderWidth: 0.9 });
+      for (const line of lines) {
+        this.page.drawText(line, { x: margin + indent + box + 8, y: this.y - size, size, font: this.regular });
+        this.y -= size + 4;
+      }
+      this.y -= 1;
+    }
   }
 
   rule() {
@@ -147,7 +168,7 @@ export class CardWriter {
   finish() {
     const total = this.pages.length;
     this.pages.forEach((page, i) => {
-      const label = printable(this.regular, `${this.footer}   ·   page ${i + 1} of ${total}`);
+      const label = printable(`${this.footer}   ·   page ${i + 1} of ${total}`);
       page.drawText(label, { x: margin, y: margin - 20, size: 8.5, font: this.regular, color: grey });
     });
   }
@@ -158,8 +179,7 @@ export async function renderCardPdf(version: CardVersionDto, { printedAt = new D
   doc.setTitle(`${version.title} (version ${version.number})`);
   doc.setProducer("Hangarleaf");
   doc.setCreationDate(printedAt);
-  const regular = await doc.embedFont(StandardFonts.Helvetica);
-  const bold = await doc.embedFont(StandardFonts.HelveticaBold);
+  const { regular, bold } = await embedCardFonts(doc);
   const state =
     version.status === "published"
       ? `version ${version.number}, published ${version.publishedAt?.slice(0, 10) ?? ""}`
@@ -192,7 +212,7 @@ export async function renderCardPdf(version: CardVersionDto, { printedAt = new D
   ] as const) {
     if (!items.length) continue;
     w.text(label, { bold: true, size: 11 });
-    w.text(items.map((i) => `• ${i}`).join("\n"), { indent: 8 });
+    w.checklist(items);
     w.gap(4);
   }
   w.rule();

@@ -2,7 +2,7 @@
 // progress, and the mail a student's call from the cart sends. The run row keeps the step it waits
 // at and when the student called (lib/server/runs/events.ts writeFold), so the queue is one query.
 import "server-only";
-import { and, asc, eq, isNotNull, ne, sql } from "drizzle-orm";
+import { and, asc, eq, isNotNull, isNull, ne, sql } from "drizzle-orm";
 import { getDb } from "@/db";
 import { assignments, runs, taskCardVersions, users } from "@/db/schema";
 import type { Actor } from "@/lib/domain/access/permissions";
@@ -34,7 +34,7 @@ export async function listBuyOffCalls({ actor }: { actor: Actor }): Promise<BuyO
     .innerJoin(assignments, eq(assignments.id, runs.assignmentId))
     .innerJoin(taskCardVersions, eq(taskCardVersions.id, runs.versionId))
     .innerJoin(users, eq(users.id, runs.studentId))
-    .where(and(isNotNull(runs.waitingStepId), ne(runs.status, "signed_off"), reviewScope(actor)))
+    .where(and(isNotNull(runs.waitingStepId), ne(runs.status, "signed_off"), isNull(assignments.withdrawnAt), reviewScope(actor)))
     .orderBy(sql`${runs.calledAt} is null`, asc(runs.calledAt), asc(runs.lastEventAt))
     .limit(500);
   return rows.map((r) => ({
@@ -51,7 +51,7 @@ export async function countBuyOffCalls({ actor }: { actor: Actor }): Promise<{ w
     .select({ waiting: sql<number>`count(*)::int`, called: sql<number>`count(${runs.calledAt})::int` })
     .from(runs)
     .innerJoin(assignments, eq(assignments.id, runs.assignmentId))
-    .where(and(isNotNull(runs.waitingStepId), ne(runs.status, "signed_off"), reviewScope(actor)));
+    .where(and(isNotNull(runs.waitingStepId), ne(runs.status, "signed_off"), isNull(assignments.withdrawnAt), reviewScope(actor)));
   return row ?? { waiting: 0, called: 0 };
 }
 

@@ -10,6 +10,7 @@ import { AppError, databaseErrorCode } from "@/lib/domain/errors";
 import type { RunEventInput } from "@/lib/domain/validation/runs";
 import { type RunEvent, type RunState } from "@/lib/domain/runs/fold";
 import { loadRun, stepsOnly, foldStored } from "@/lib/server/runs/queries";
+import { assertNotWithdrawn } from "@/lib/server/runs/assign";
 import { noticeBuyOffCall } from "@/lib/server/runs/buy-offs";
 
 export const signedOffConflict = () =>
@@ -68,6 +69,7 @@ export async function appendEvents({
       const fresh = [...new Map(events.filter((e) => !knownIds.has(e.id)).map((e) => [e.id, e])).values()];
       if (fresh.length && run.studentId !== actor.id) throw new AppError("forbidden", "Only the student doing this run records its work.");
       if (fresh.length && run.status === "signed_off") throw signedOffConflict();
+      if (fresh.length) await assertNotWithdrawn(tx, run.assignmentId);
       if (fresh.length) {
         // One receipt time for the batch, read after the run's lock: the fold orders batches by it,
         // and the transaction's start time (the column default) can be earlier than a batch that

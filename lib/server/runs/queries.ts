@@ -1,6 +1,6 @@
 // Reading runs: work lists, the review queue, one run folded from its events, its packet.
 import "server-only";
-import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNull, or, sql } from "drizzle-orm";
 import { getDb, type Db, type Tx } from "@/db";
 import {
   assignments,
@@ -58,6 +58,9 @@ function workItemQuery(db: Db | Tx) {
     .leftJoin(curriculumSubjects, eq(curriculumSubjects.id, taskCardVersions.subjectId));
 }
 
+/** A withdrawn assignment's runs leave the lists, except those signed off: they are records. */
+const notWithdrawn = or(isNull(assignments.withdrawnAt), eq(runs.status, "signed_off"));
+
 type WorkRow = Awaited<ReturnType<ReturnType<typeof workItemQuery>["execute"]>>[number];
 
 /** `today` is the school's day (lib/domain/time.ts dayIn): a card due today is overdue once the school's today ends. */
@@ -74,7 +77,7 @@ function toWorkItem(r: WorkRow, today: string): WorkItemDto {
 /** A student's own runs, the ones still to do first. */
 export async function listMyWork({ actor }: { actor: Actor }): Promise<WorkItemDto[]> {
   const rows = await workItemQuery(getDb())
-    .where(eq(runs.studentId, actor.id))
+    .where(and(eq(runs.studentId, actor.id), notWithdrawn))
     .orderBy(sql`${runs.status} = 'signed_off'`, sql`${assignments.dueOn} nulls last`, desc(runs.createdAt));
   const today = dayIn(await schoolTimeZone());
   return rows.map((r) => toWorkItem(r, today));
@@ -83,7 +86,7 @@ export async function listMyWork({ actor }: { actor: Actor }): Promise<WorkItemD
 /** Runs waiting for an instructor: submitted ones, oldest first, and inspection points waiting on a cart. */
 export async function listReviewQueue({ actor, status = "submitted" }: { actor: Actor; status?: RunStatus }): Promise<WorkItemDto[]> {
   const rows = await workItemQuery(getDb())
-    .where(and(eq(runs.status, status), reviewScope(actor)))
+    .where(and(eq(runs.status, status), notWithdrawn, reviewScope(actor)))
     .orderBy(asc(runs.submittedAt), asc(runs.lastEventAt))
     .limit(500);
   const today = dayIn(await schoolTimeZone());
@@ -91,7 +94,9 @@ export async function listReviewQueue({ actor, status = "submitted" }: { actor: 
 }
 
 export async function listRunsOfStudent(db: Db | Tx, studentId: string): Promise<WorkItemDto[]> {
-  const rows = await workItemQuery(db).where(eq(runs.studentId, studentId)).orderBy(desc(runs.createdAt));
+  const rows = await workItemQuery(db)
+    .where(and(eq(runs.studentId, studentId), notWithdrawn))
+    .orderBy(desc(runs.createdAt));
   const today = dayIn(await schoolTimeZone());
   return rows.map((r) => toWorkItem(r, today));
 }

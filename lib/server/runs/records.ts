@@ -1,12 +1,12 @@
 import "server-only";
 import { and, asc, eq, ne } from "drizzle-orm";
-import { PDFDocument, StandardFonts } from "pdf-lib";
+import { PDFDocument } from "pdf-lib";
 import { getDb } from "@/db";
 import { classes, classMembers, curriculumSubjects, runs, signOffs, taskCardVersions, users } from "@/db/schema";
 import { can, type Actor } from "@/lib/domain/access/permissions";
 import type { ClassRecordDto, SignOffDto, StudentRecordDto } from "@/lib/contracts/runs";
 import { AppError } from "@/lib/domain/errors";
-import { CardWriter, grey, markdownToPlain } from "@/lib/server/pdf/card-pdf";
+import { CardWriter, embedCardFonts, grey, markdownToPlain } from "@/lib/server/pdf/card-pdf";
 import { measuredValueLine, measuredValues } from "@/lib/domain/runs/measured";
 import { recordHours, revisionsLine, signedAtText } from "@/lib/domain/runs/record-csv";
 import { dayIn } from "@/lib/domain/time";
@@ -86,12 +86,8 @@ export async function studentRecordPdf(record: StudentRecordDto, printedAt = new
   const doc = await PDFDocument.create();
   doc.setTitle(`Training record: ${record.student.name}`);
   doc.setProducer("Hangarleaf");
-  const w = new CardWriter(
-    doc,
-    await doc.embedFont(StandardFonts.Helvetica),
-    await doc.embedFont(StandardFonts.HelveticaBold),
-    `Training record of ${record.student.name} - printed ${dayIn(zone, printedAt)}`,
-  );
+  const fonts = await embedCardFonts(doc);
+  const w = new CardWriter(doc, fonts.regular, fonts.bold, `Training record of ${record.student.name} - printed ${dayIn(zone, printedAt)}`);
   w.text("TRAINING RECORD", { size: 9, bold: true, color: grey });
   w.text(record.student.name, { size: 17, bold: true });
   w.text(

@@ -13,6 +13,7 @@ import { cannotMarkDone, orderEvents, type RunEvent, type RunState } from "@/lib
 import { workingMinutes } from "@/lib/domain/runs/hours";
 import { signedOffConflict, writeFold, isSignedOffError, receiptTime } from "@/lib/server/runs/events";
 import { loadRun, foldStored } from "@/lib/server/runs/queries";
+import { assertNotWithdrawn } from "@/lib/server/runs/assign";
 import { confirmOwnPassword } from "@/lib/server/auth/sign-in";
 
 /**
@@ -36,6 +37,7 @@ async function appendReviewEvent(
 async function reviewContext(tx: Tx, actor: Actor, runId: string) {
   const run = await loadRun(tx, actor, runId, { lock: true });
   if (run.status === "signed_off") throw signedOffConflict();
+  await assertNotWithdrawn(tx, run.assignmentId);
   const version = await getVersionById(run.versionId, tx);
   return { run, version, ...(await foldStored(tx, runId, version)) };
 }

@@ -7,13 +7,15 @@ import { runsApi } from "@/lib/contracts/endpoints/runs";
 
 interface Props {
   cardId: string;
+  /** The school's today: the first day a due date may be. */
+  today: string;
   versions: number[];
   classes: { id: string; name: string }[];
   students: { id: string; name: string; className: string }[];
 }
 
 /** To a whole class, or to chosen students; a due date and a place (aircraft, station) are optional. */
-export function AssignForm({ cardId, versions, classes, students }: Props) {
+export function AssignForm({ cardId, today, versions, classes, students }: Props) {
   const router = useRouter();
   const [classId, setClassId] = useState(classes[0]?.id ?? "");
   const [chosen, setChosen] = useState<Set<string>>(new Set());
@@ -23,39 +25,63 @@ export function AssignForm({ cardId, versions, classes, students }: Props) {
   const [note, setNote] = useState("");
   const [busy, setBusy] = useState(false);
   const [result, setResult] = useState<{ ok: boolean; text: string; fields?: Record<string, string> } | null>(null);
+  // Set when the server named students who already have the card open: the next submit assigns anyway.
+  const [duplicates, setDuplicates] = useState<string | null>(null);
+  const className = classes.find((c) => c.id === classId)?.name;
+  const chosenNames = students.filter((s) => chosen.has(s.id)).map((s) => s.name);
+  const giving =
+    to === "class"
+      ? className
+        ? `Giving it to every student of ${className}.`
+        : "Choose a class."
+      : chosenNames.length
+        ? `Giving it to ${chosenNames.length === 1 ? chosenNames[0] : `${chosenNames.length} students: ${chosenNames.join(", ")}`}.`
+        : "Tick the students to give it to.";
+  const submit = async (confirmDuplicates: boolean) => {
+    setBusy(true);
+    setResult(null);
+    setDuplicates(null);
+    try {
+      const { assignment } = await call(runsApi.createAssignment, {
+        body: {
+          cardId,
+          versionNumber,
+          classId: to === "class" ? classId || null : null,
+          studentIds: to === "students" ? [...chosen] : [],
+          dueOn,
+          note,
+          confirmDuplicates,
+        },
+      });
+      setResult({
+        ok: true,
+        text: `Assigned: ${assignment.runs} ${assignment.runs === 1 ? "student has" : "students have"} it in their work.`,
+      });
+      router.refresh();
+      setChosen(new Set());
+      setDueOn("");
+      setNote("");
+    } catch (error) {
+      if (error instanceof ApiError && error.status === 409 && error.fields.confirmDuplicates) {
+        setDuplicates(error.fields.confirmDuplicates);
+        return;
+      }
+      // The field's own words ("Choose a class…"), not the API's "classId: …" form.
+      setResult(
+        error instanceof ApiError
+          ? { ok: false, text: Object.values(error.fields)[0] ?? error.message, fields: error.fields }
+          : { ok: false, text: "That did not work." },
+      );
+    } finally {
+      setBusy(false);
+    }
+  };
   return (
     <form
       className="panel flex flex-col gap-4"
-      onSubmit={async (e) => {
+      onSubmit={(e) => {
         e.preventDefault();
-        setBusy(true);
-        setResult(null);
-        try {
-          const { assignment } = await call(runsApi.createAssignment, {
-            body: {
-              cardId,
-              versionNumber,
-              classId: to === "class" ? classId || null : null,
-              studentIds: to === "students" ? [...chosen] : [],
-              dueOn,
-              note,
-            },
-          });
-          setResult({
-            ok: true,
-            text: `Assigned: ${assignment.runs} ${assignment.runs === 1 ? "student has" : "students have"} it in their work.`,
-          });
-          router.refresh();
-        } catch (error) {
-          // The field's own words ("Choose a class…"), not the API's "classId: …" form.
-          setResult(
-            error instanceof ApiError
-              ? { ok: false, text: Object.values(error.fields)[0] ?? error.message, fields: error.fields }
-              : { ok: false, text: "That did not work." },
-          );
-        } finally {
-          setBusy(false);
-        }
+        void submit(false);
       }}
     >
       <fieldset className="flex flex-col gap-2">
@@ -127,6 +153,7 @@ export function AssignForm({ cardId, versions, classes, students }: Props) {
           <input
             id="assign-due"
             type="date"
+            min={today}
             className="input"
             value={dueOn}
             onChange={(e) => setDueOn(e.target.value)}
@@ -141,9 +168,26 @@ export function AssignForm({ cardId, versions, classes, students }: Props) {
           <input id="assign-note" className="input" value={note} maxLength={300} onChange={(e) => setNote(e.target.value)} />
         </div>
       </div>
-      <button type="submit" className="btn btn-primary self-start" disabled={busy}>
-        Assign
-      </button>
+      <p className="font-semibold" aria-live="polite">
+        {giving}
+      </p>
+      {duplicates ? (
+        <div role="alertdialog" aria-labelledby="assign-duplicates" className="notice-todo flex flex-col gap-2">
+          <p id="assign-duplicates">{duplicates}</p>
+          <div className="flex flex-wrap gap-2">
+            <button type="button" className="btn btn-primary" disabled={busy} onClick={() => void submit(true)}>
+              Assign anyway
+            </button>
+            <button type="button" className="btn btn-secondary" onClick={() => setDuplicates(null)}>
+              Change who gets it
+            </button>
+          </div>
+        </div>
+      ) : (
+        <button type="submit" className="btn btn-primary self-start" disabled={busy || (to === "students" && chosen.size === 0)}>
+          Assign
+        </button>
+      )}
       {result ? (
         <p role={result.ok ? "status" : "alert"} className={result.ok ? "notice-ok" : "notice-error"}>
           {result.text}

@@ -1,6 +1,5 @@
 "use client";
 
-import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { useFieldArray, useForm } from "react-hook-form";
@@ -12,6 +11,7 @@ import { writeCitingTarget } from "@/lib/client/citing-target";
 import { StepEditor, type ManualOption } from "./step-editor";
 import { useSaveDraft } from "./use-cards";
 import { cardsApi } from "@/lib/contracts/endpoints/cards";
+import { useLeaveGuard } from "@/components/use-leave-guard";
 
 type SaveState =
   { kind: "saved"; at: Date | null } | { kind: "unsaved" } | { kind: "saving" } | { kind: "error"; message: string; conflict: boolean };
@@ -46,7 +46,11 @@ export function CardEditor({
   const [versionNumber, setVersionNumber] = useState(card.draft?.number ?? null);
   const [tab, setTab] = useState<"edit" | "preview">("edit");
   const [publishing, setPublishing] = useState(false);
+  const [confirming, setConfirming] = useState(false);
   const [publishError, setPublishError] = useState<string | null>(null);
+  // What the saved draft still needs before publishing: shown as a list, never a reason to refuse a save.
+  const [problems, setProblems] = useState(base.status === "draft" ? base.problems : []);
+  const dirty = useRef(false);
 
   const saveNow = useCallback(async (): Promise<boolean> => {
     if (timer.current) clearTimeout(timer.current);
@@ -62,6 +66,7 @@ export function CardEditor({
         const version: CardVersionDto = await save.mutateAsync({ content: toContent(getValues()), editCount: editCount.current });
         editCount.current = version.editCount;
         setVersionNumber(version.number);
+        setProblems(version.problems);
         setState({ kind: "saved", at: new Date() });
         return true;
       } catch (error) {
@@ -78,6 +83,7 @@ export function CardEditor({
         again.current = false;
         ok = await saveOnce();
       } while (again.current && ok);
+      if (ok) dirty.current = false;
       return ok;
     })();
     running.current = work;
@@ -92,6 +98,7 @@ export function CardEditor({
     return subscribe({
       formState: { values: true },
       callback: () => {
+        dirty.current = true;
         setState((s) => (s.kind === "error" && s.conflict ? s : { kind: "unsaved" }));
         if (timer.current) clearTimeout(timer.current);
         timer.current = setTimeout(() => void saveNow(), autosaveDelayMs);
@@ -99,13 +106,9 @@ export function CardEditor({
     });
   }, [subscribe, saveNow]);
 
-  useEffect(() => {
-    const warn = (event: BeforeUnloadEvent) => {
-      if (timer.current || running.current) event.preventDefault();
-    };
-    window.addEventListener("beforeunload", warn);
-    return () => window.removeEventListener("beforeunload", warn);
-  }, []);
+  // Typing waits up to the autosave delay before it is sent; leaving in that moment, or after a
+  // save that failed, asks first.
+  useLeaveGuard(() => dirty.current || running.current !== null);
 
   const citeFromReader = async (stepId: string) => {
     if (!(await saveNow())) return;
@@ -113,8 +116,21 @@ export function CardEditor({
     router.push("/library");
   };
 
+  /** Saves, then asks: a published version is what students run, and it never changes. */
+  const askToPublish = async () => {
+    setPublishError(null);
+    if (!(await saveNow())) return;
+    setConfirming(true);
+  };
+
+  const done = async () => {
+    if (dirty.current && !(await saveNow()) && !window.confirm("Your last changes could not be saved. Leave the editor anyway?")) return;
+    router.push(`/cards/${card.id}`);
+  };
+
   const publish = async () => {
     setPublishError(null);
+    setConfirming(false);
     setPublishing(true);
     try {
       if (!(await saveNow())) return;
@@ -131,6 +147,10 @@ export function CardEditor({
     }
   };
 
+  const todo = (field: string) => {
+    const p = problems.find((x) => x.field === field);
+    return p ? <span className="field-todo">To finish: {p.message}</span> : null;
+  };
   const subjectName = (id: string) => subjects.find((s) => s.id === id)?.name ?? null;
   const status =
     state.kind === "saved"
@@ -177,12 +197,44 @@ export function CardEditor({
         <button type="button" className="btn btn-secondary" onClick={() => void saveNow()} disabled={state.kind === "saving"}>
           Save now
         </button>
-        <button type="button" className="btn btn-primary" onClick={() => void publish()} disabled={publishing}>
-          {publishing ? "Publishing…" : "Publish"}
+        <button
+          type="button"
+          className="btn btn-primary"
+          onClick={() => void askToPublish()}
+          disabled={publishing || confirming || problems.length > 0}
+          aria-describedby={problems.length ? "publish-why-not" : undefined}
+        >
+          {publishing ? "Publishing…" : "Publish…"}
         </button>
-        <Link href={`/cards/${card.id}`} className="btn btn-secondary">
+        <button type="button" className="btn btn-secondary" onClick={() => void done()}>
           Done
-        </Link>
+        </button>
+        {problems.length ? (
+          <details className="notice-todo w-full" id="publish-why-not">
+            <summary className="cursor-pointer">
+              {problems.length === 1 ? "One thing" : `${problems.length} things`} to finish before publishing (the draft is saved as it is)
+            </summary>
+            <ul className="mt-2 list-disc pl-6" aria-label="To finish before publishing">
+              {problems.map((p) => (
+                <li key={`${p.field} ${p.message}`}>{p.message}</li>
+              ))}
+            </ul>
+          </details>
+        ) : null}
+        {confirming ? (
+          <div role="alertdialog" aria-labelledby="publish-question" className="notice-todo flex w-full flex-wrap items-center gap-3">
+            <p id="publish-question" className="mr-auto">
+              Publish version {versionNumber ?? base.number} of “{getValues("title")}”? Students assigned this card will run this version,
+              and it cannot be changed afterwards: a later change makes a new version.
+            </p>
+            <button type="button" className="btn btn-primary" onClick={() => void publish()} autoFocus>
+              Publish now
+            </button>
+            <button type="button" className="btn btn-secondary" onClick={() => setConfirming(false)}>
+              Not yet
+            </button>
+          </div>
+        ) : null}
         {/* In the bar that stays on screen: a reason nobody sees is no reason at all. */}
         {publishError ? (
           <p role="alert" className="notice-error w-full">
@@ -199,7 +251,7 @@ export function CardEditor({
             <label className="field sm:col-span-2">
               <span className="label">Title</span>
               <input className="input text-lg" {...register("title")} />
-              {formState.errors.title ? <span className="field-error">{formState.errors.title.message}</span> : null}
+              {formState.errors.title ? <span className="field-error">{formState.errors.title.message}</span> : todo("title")}
             </label>
             <label className="field">
               <span className="label">Curriculum subject</span>
@@ -211,10 +263,12 @@ export function CardEditor({
                   </option>
                 ))}
               </select>
+              {todo("subjectId")}
             </label>
             <label className="field">
               <span className="label">ATA chapter</span>
               <input className="input w-28" inputMode="numeric" maxLength={2} placeholder="27" {...register("ataChapter")} />
+              {todo("ataChapter")}
             </label>
             <label className="field">
               <span className="label">Applicability (models, comma-separated)</span>
@@ -223,6 +277,7 @@ export function CardEditor({
             <label className="field">
               <span className="label">Estimated time (minutes)</span>
               <input className="input w-36" inputMode="numeric" {...register("estimatedMinutes")} />
+              {todo("estimatedMinutes")}
             </label>
             <label className="field">
               <span className="label">Protective equipment (one per line)</span>
@@ -251,6 +306,7 @@ export function CardEditor({
               onMove={(from, to) => steps.move(from, to)}
               onRemove={() => steps.remove(index)}
               onCiteFromReader={(stepId) => void citeFromReader(stepId)}
+              problems={problems.filter((p) => p.field.startsWith(`steps.${index + 1}.`)).map((p) => p.message)}
             />
           ))}
           <button type="button" className="btn btn-secondary self-start" onClick={() => steps.append(emptyStep())}>

@@ -138,7 +138,7 @@ export function toPreview(form: CardForm, base: CardVersionDto, subjectName: str
   return {
     ...base,
     status: "draft",
-    title: content.title,
+    title: content.title ?? "",
     applicability: content.applicability ?? [],
     ataChapter: content.ataChapter ?? "",
     subjectId: content.subjectId ?? null,

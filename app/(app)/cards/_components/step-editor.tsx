@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { useFieldArray, useWatch, type Control, type UseFormRegister, type UseFormSetValue } from "react-hook-form";
 import { calculators, calculatorSlugs } from "@/lib/domain/calc";
-import { allUnits, unitLabel } from "@/lib/domain/calc/units";
+import { allUnits, parseNumber, unitLabel } from "@/lib/domain/calc/units";
 import { noticeKinds, noticeLabels } from "@/lib/domain/validation/cards";
 import type { CardForm } from "./card-form";
 
@@ -25,10 +25,18 @@ interface Props {
   onMove: (from: number, to: number) => void;
   onRemove: () => void;
   onCiteFromReader: (stepId: string) => void;
+  /** What this step still needs before the card can be published (from the last save). */
+  problems: string[];
+}
+
+/** A number field's text that is not a number is kept as typed but not saved as one: say so beside it. */
+function NumberHint({ text }: { text: string }) {
+  if (!text.trim() || parseNumber(text) !== null) return null;
+  return <span className="field-error">Not a number yet: write it as 12.5, 3/8 or 1 1/2.</span>;
 }
 
 /** One step of the editor: its notices, instruction, references, measurement and options. */
-export function StepEditor({ index, count, control, register, setValue, manuals, onMove, onRemove, onCiteFromReader }: Props) {
+export function StepEditor({ index, count, control, register, setValue, manuals, onMove, onRemove, onCiteFromReader, problems }: Props) {
   const n = index + 1;
   const notices = useFieldArray({ control, name: `steps.${index}.notices` });
   const references = useFieldArray({ control, name: `steps.${index}.references` });
@@ -90,6 +98,13 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
           Remove
         </button>
       </div>
+      {problems.length ? (
+        <ul className="notice-todo list-none" aria-label={`To finish on step ${n} before publishing`}>
+          {problems.map((p) => (
+            <li key={p}>{p}</li>
+          ))}
+        </ul>
+      ) : null}
 
       <section className="flex flex-col gap-2" aria-label={`Notices of step ${n}`}>
         <p className="hint">
@@ -232,10 +247,12 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
                 <label className="field">
                   <span className="label">Minimum</span>
                   <input className="input" inputMode="decimal" {...register(`steps.${index}.measurement.min`)} />
+                  <NumberHint text={step.measurement.min} />
                 </label>
                 <label className="field">
                   <span className="label">Maximum</span>
                   <input className="input" inputMode="decimal" {...register(`steps.${index}.measurement.max`)} />
+                  <NumberHint text={step.measurement.max} />
                 </label>
               </>
             ) : (
@@ -243,10 +260,12 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
                 <label className="field">
                   <span className="label">Nominal</span>
                   <input className="input" inputMode="decimal" {...register(`steps.${index}.measurement.nominal`)} />
+                  <NumberHint text={step.measurement.nominal} />
                 </label>
                 <label className="field">
                   <span className="label">± Tolerance</span>
                   <input className="input" inputMode="decimal" {...register(`steps.${index}.measurement.tolerance`)} />
+                  <NumberHint text={step.measurement.tolerance} />
                 </label>
               </>
             )}

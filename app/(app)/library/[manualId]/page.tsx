@@ -9,6 +9,7 @@ import { getManual } from "@/lib/server/library/manuals";
 import { documentTypeLabels } from "@/lib/domain/validation/library";
 import { KeepOnCarts } from "../_components/keep-on-carts";
 import { RetryButton } from "../_components/retry-button";
+import { RefreshWhileReading } from "../_components/refresh-while-reading";
 import { UploadForm } from "../_components/upload-form";
 import { isUuid } from "@/lib/server/http";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
@@ -42,10 +43,15 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
         <p className="text-lg">
           {current ? (
             <>
-              Current revision: <strong>{current.label}</strong> of {current.revisionDate}, {current.pageCount} pages.{" "}
-              <a href={`/api/revisions/${current.id}/file`} target="_blank" rel="noreferrer">
-                Open the PDF
-              </a>
+              Current revision: <strong>{current.label}</strong> of {current.revisionDate}, {current.pageCount} pages.
+              <span className="mt-2 flex flex-wrap items-center gap-4">
+                <Link href={`/library/${manual.id}/${current.id}/1`} className="btn btn-primary">
+                  Read it
+                </Link>
+                <a href={`/api/revisions/${current.id}/file`} download className="inline-flex min-h-11 items-center">
+                  Download the PDF
+                </a>
+              </span>
             </>
           ) : (
             "No revision is ready yet."
@@ -55,6 +61,7 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
 
       <section aria-labelledby="history" className="panel flex flex-col gap-3 overflow-x-auto">
         <h2 id="history">Revisions</h2>
+        {shown.some((r) => r.status === "queued" || r.status === "processing") ? <RefreshWhileReading /> : null}
         <Table
           rows={shown}
           rowKey={(r) => r.id}
@@ -90,8 +97,20 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
               cell: (r) =>
                 r.status === "ready" ? (
                   <span className="flex flex-wrap gap-x-4">
-                    <a href={`/api/revisions/${r.id}/file`} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center">
-                      Open PDF
+                    <Link
+                      href={`/library/${manual.id}/${r.id}/1`}
+                      className="inline-flex min-h-11 items-center font-semibold"
+                      aria-label={`Read ${r.label}`}
+                    >
+                      Read
+                    </Link>
+                    <a
+                      href={`/api/revisions/${r.id}/file`}
+                      download
+                      className="inline-flex min-h-11 items-center"
+                      aria-label={`Download the PDF of ${r.label}`}
+                    >
+                      PDF
                     </a>
                     <Link href={`/library/${manual.id}/${r.id}/changes`} className="inline-flex min-h-11 items-center">
                       What changed

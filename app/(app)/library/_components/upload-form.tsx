@@ -3,7 +3,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { FormField } from "@/components/form-field";
@@ -69,6 +69,31 @@ export function UploadForm({ mode }: { mode: Mode }) {
     },
   });
   const { errors, isSubmitting } = form.formState;
+  const fieldLabels: Record<string, string> = {
+    title: "Title",
+    documentType: "Document type",
+    applicability: "Applies to",
+    ataChapters: "ATA chapters",
+    revisionLabel: "Revision label",
+    revisionDate: "Revision date",
+    file: "PDF file",
+  };
+  // Every refused field, at the top as well as beside the field: on a long form the one beside it
+  // can be out of sight.
+  const refused = Object.entries(errors)
+    .map(([field, e]) => ({ field, message: (e as { message?: string } | undefined)?.message }))
+    .filter((e): e is { field: string; message: string } => !!e.message && !problem?.endsWith(e.message));
+
+  // Once the revision is read (or failed), the page behind the form shows it, and the form is
+  // emptied for the next upload; the message about this one stays.
+  const finished = useRef<string | null>(null);
+  const revisionState = status.data?.status;
+  useEffect(() => {
+    if (!revisionId || (revisionState !== "ready" && revisionState !== "failed") || finished.current === revisionId) return;
+    finished.current = revisionId;
+    if (revisionState === "ready") form.reset();
+    router.refresh();
+  }, [revisionId, revisionState, form, router]);
 
   const onSubmit = form.handleSubmit(async () => {
     setProblem(null);
@@ -110,10 +135,25 @@ export function UploadForm({ mode }: { mode: Mode }) {
       aria-label={mode.kind === "manual" ? "Upload a manual" : "Upload a new revision"}
     >
       <div aria-live="assertive">
-        {problem ? (
-          <p className="notice-error" role="alert">
-            {problem}
-          </p>
+        {problem || refused.length ? (
+          <div className="notice-error" role="alert">
+            {problem ? <p>{problem}</p> : null}
+            {refused.length ? (
+              <>
+                <p>{refused.length === 1 ? "One field needs a change:" : `${refused.length} fields need a change:`}</p>
+                <ul className="list-disc pl-6 font-normal">
+                  {refused.map((e) => (
+                    <li key={e.field}>
+                      <a href={`#${e.field}`} onClick={() => form.setFocus(e.field as keyof FormInput)}>
+                        {fieldLabels[e.field] ?? e.field}
+                      </a>
+                      : {e.message}
+                    </li>
+                  ))}
+                </ul>
+              </>
+            ) : null}
+          </div>
         ) : null}
       </div>
       {mode.kind === "manual" ? (
@@ -165,10 +205,11 @@ export function UploadForm({ mode }: { mode: Mode }) {
         {mode.kind === "manual" ? "Upload manual" : "Upload revision"}
       </button>
 
-      {progress ? (
+      {progress && revision?.status !== "ready" ? (
         <div className="flex flex-col gap-2" aria-live="polite">
           <label htmlFor="upload-progress" className="label">
             {revisionId ? "Uploaded" : "Uploading"}: {formatBytes(progress.sent)} of {formatBytes(progress.total)}
+            {!revisionId && progress.total > 0 && progress.sent >= progress.total ? " · the server is checking the file…" : ""}
           </label>
           <progress id="upload-progress" className="h-4 w-full" max={progress.total || 1} value={progress.sent} />
         </div>
@@ -195,6 +236,11 @@ export function UploadForm({ mode }: { mode: Mode }) {
               {manualId ? (
                 <Link href={`/library/${manualId}`} onClick={() => router.refresh()}>
                   Open the manual
+                </Link>
+              ) : null}{" "}
+              {manualId && revision.current ? (
+                <Link href={`/library/${manualId}/${revision.id}/1`} className="ml-2">
+                  Read it
                 </Link>
               ) : null}
             </p>

@@ -71,7 +71,30 @@ export class CardEditorPage {
     return this.page.getByRole("article", { name: `Task card ${title}` }).getByRole("listitem", { name: `Step ${n}` });
   }
 
+  /** The publish button, which asks once more before a version is frozen. */
+  publishButton() {
+    return this.page.getByRole("button", { name: "Publish…" });
+  }
+
+  /** Publishes: the button, then "Publish now" in the question it asks. */
   async publish() {
-    await this.page.getByRole("button", { name: "Publish" }).click();
+    await this.publishButton().click();
+    await this.publishQuestion().getByRole("button", { name: "Publish now" }).click();
+  }
+
+  publishQuestion() {
+    return this.page.getByRole("alertdialog");
+  }
+
+  /** What the saved draft still needs before publishing (opened, so the items can be read). */
+  async toFinish() {
+    const summary = this.page.getByText(/to finish before publishing/);
+    await summary.click();
+    return this.page.getByRole("list", { name: "To finish before publishing" });
+  }
+
+  /** The link back to the list of cards, in the breadcrumb above the editor. */
+  cardsLink() {
+    return this.page.getByRole("navigation", { name: "Breadcrumb" }).getByRole("link", { name: "Task cards" });
   }
 }

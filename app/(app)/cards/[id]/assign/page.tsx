@@ -8,6 +8,9 @@ import { getClassById, listClasses } from "@/lib/server/classes";
 import { isUuid } from "@/lib/server/http";
 import { listAssignments } from "@/lib/server/runs/assign";
 import { AssignForm } from "../../_components/assign-form";
+import { AssignmentActions } from "../../_components/assignment-actions";
+import { dayIn } from "@/lib/domain/time";
+import { schoolTimeZone } from "@/lib/server/settings";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Assign a task card" };
@@ -29,6 +32,7 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
     ).values(),
   ];
   const assignments = await listAssignments({ actor: user, cardId: id });
+  const today = dayIn(await schoolTimeZone());
   const published = card.versions.filter((v) => v.status === "published").map((v) => v.number);
   return (
     <div className="flex flex-col gap-5">
@@ -43,7 +47,13 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
           {card.archivedAt ? "This card is archived and cannot be assigned." : "Publish the card before assigning it."}
         </p>
       ) : (
-        <AssignForm cardId={id} versions={published} classes={classes.map((c) => ({ id: c.id, name: c.name }))} students={students} />
+        <AssignForm
+          cardId={id}
+          today={today}
+          versions={published}
+          classes={classes.map((c) => ({ id: c.id, name: c.name }))}
+          students={students}
+        />
       )}
       <section aria-label="Assignments of this card" className="panel overflow-x-auto">
         <h2>Given so far</h2>
@@ -58,6 +68,7 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
             { header: "Due", cell: (a) => a.dueOn ?? "—" },
             { header: "Note", cell: (a) => a.note || "—" },
             { header: "Signed off / all", cell: (a) => `${a.counts.signed_off} / ${Object.values(a.counts).reduce((x, y) => x + y, 0)}` },
+            { header: "Change", cell: (a) => <AssignmentActions assignment={a} today={today} /> },
           ]}
         />
       </section>
