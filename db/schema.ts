@@ -171,6 +171,11 @@ export const manuals = pgTable(
     currentRevisionId: uuid("current_revision_id").references((): AnyPgColumn => revisions.id, { onDelete: "set null" }),
     // A librarian's choice: carts store the whole current PDF, not only the pages cards cite.
     keepOnCarts: boolean("keep_on_carts").notNull().default(false),
+    // Withdrawn from the library by a librarian: out of the list and of search, still readable
+    // where a card cites it, and restorable. Nothing of it is deleted.
+    withdrawnAt: timestamp("withdrawn_at", { withTimezone: true }),
+    withdrawnBy: uuid("withdrawn_by").references((): AnyPgColumn => users.id, { onDelete: "set null" }),
+    withdrawReason: text("withdraw_reason").notNull().default(""),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     ...timestamps,
   },
@@ -250,6 +255,37 @@ export const searchWords = pgTable("search_words", {
  * One row, whose number triggers raise whenever something a search can find or show changes
  * (migration 0008): the search engine keeps answers under it (search/postgres.ts).
  */
+/**
+ * A reader's bookmark or note on a manual page, kept on the revision it was made on and followed
+ * to later revisions through the page comparisons (lib/server/library/marks.ts). A note with a
+ * class is shown to that class's members; everything else is its writer's own.
+ */
+export const pageMarks = pgTable(
+  "page_marks",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    manualId: uuid("manual_id")
+      .notNull()
+      .references(() => manuals.id, { onDelete: "cascade" }),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
+    pageNumber: integer("page_number").notNull(),
+    kind: text("kind").notNull(),
+    text: text("text").notNull().default(""),
+    classId: uuid("class_id").references((): AnyPgColumn => classes.id, { onDelete: "set null" }),
+    ...timestamps,
+  },
+  (t) => [
+    index("page_marks_manual_idx").on(t.manualId, t.userId),
+    check("page_marks_kind", sql`${t.kind} in ('bookmark', 'note')`),
+    check("page_marks_page", sql`${t.pageNumber} >= 1`),
+  ],
+);
+
 export const searchGeneration = pgTable(
   "search_generation",
   {

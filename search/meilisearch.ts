@@ -6,7 +6,7 @@
 // and the exact words first. Pages with most of the words come from its "last" matching strategy,
 // after asking which words no page has; which words a hit lacks is read from the matched positions,
 // so it is an approximation (a matched word counts when it starts like the searched one).
-import { asc, eq } from "drizzle-orm";
+import { asc, eq, isNotNull } from "drizzle-orm";
 import { Meilisearch } from "meilisearch";
 import { getDb } from "@/db";
 import { manuals, pages, revisions } from "@/db/schema";
@@ -60,8 +60,10 @@ function matches(term: Term, matched: string[]): boolean {
   return matched.some((m) => starts.some((s) => m.startsWith(s)));
 }
 
-function filterOf(filters: SearchFilters): string | undefined {
+function filterOf(filters: SearchFilters, withdrawn: string[] = []): string | undefined {
   const filter: string[] = [];
+  // Withdrawn manuals leave search, except inside one revision (the reader's own search).
+  if (withdrawn.length && !filters.revisionId) filter.push(`NOT manualId IN [${withdrawn.map(quote).join(", ")}]`);
   if (filters.revisionId) filter.push(`revisionId = ${quote(filters.revisionId)}`);
   else if (!filters.includeSuperseded) filter.push("current = true");
   if (filters.manualId) filter.push(`manualId = ${quote(filters.manualId)}`);
@@ -159,7 +161,9 @@ export function meilisearchEngine(options: { url: string; key?: string; index: s
       await configure();
       const terms = termsOf(query);
       const excluded = query.excluded.map((e) => (e.includes(" ") ? `-${quote(e)}` : `-${e}`));
-      const filter = filterOf(filters);
+      // The few withdrawn manuals are read from PostgreSQL each time: the page documents carry no flag to keep in step.
+      const withdrawn = (await getDb().select({ id: manuals.id }).from(manuals).where(isNotNull(manuals.withdrawnAt))).map((m) => m.id);
+      const filter = filterOf(filters, withdrawn);
       const goesTo = query.section ? await findSections(query.section, await revisionsInScope(filters)) : [];
       const ask = (present: Term[], strategy: "all" | "last") =>
         index.search([...present.map((t) => t.q), ...excluded].join(" "), {

@@ -126,6 +126,8 @@ async function revisionsInScope(filters: SearchFilters): Promise<string[]> {
   const where: SQL[] = [sql`r.status = 'ready'`];
   if (filters.revisionId) where.push(sql`r.id = ${filters.revisionId}`);
   else if (!filters.includeSuperseded) where.push(sql`r.id = m.current_revision_id`);
+  // Withdrawn manuals leave search, except inside one revision (the reader's own search).
+  if (!filters.revisionId) where.push(sql`m.withdrawn_at is null`);
   if (filters.manualId) where.push(sql`m.id = ${filters.manualId}`);
   if (filters.documentType) where.push(sql`m.document_type = ${filters.documentType}`);
   if (filters.model) where.push(sql`${filters.model} = any(m.applicability)`);

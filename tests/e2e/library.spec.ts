@@ -52,7 +52,11 @@ test("an upload that is not a PDF is refused in plain words", async ({ page }) =
     .getByLabel("PDF file")
     .setInputFiles({ name: "notes.pdf", mimeType: "application/pdf", buffer: Buffer.from("shopping list\n".repeat(200)) });
   await form.getByRole("button", { name: "Upload manual" }).click();
-  await expect(form.getByRole("alert").filter({ hasText: /./ })).toHaveText("That file is not a PDF. Upload the manual as a PDF file.");
+  const alert = form.getByRole("alert").filter({ hasText: /./ });
+  await expect(alert).toContainText("That file is not a PDF. Upload the manual as a PDF file.");
+  // The field the server refused is named at the top and beside it.
+  await expect(alert).toContainText("PDF file: Not a PDF.");
+  await expect(form.locator("#file-error")).toHaveText("Not a PDF.");
 });
 
 test("a student browses the library but cannot upload", async ({ page }) => {

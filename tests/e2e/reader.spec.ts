@@ -80,6 +80,28 @@ test("zoom and fit keep the page being read; the contents and the keys move thro
   await expect(page.getByRole("toolbar", { name: "Reader" })).toContainText("Rev 4 · current");
 });
 
+test("a bookmark made on a superseded page follows its content to the current revision", async ({ page }) => {
+  const { manualId, rev3, rev4: current } = await trainerRevisions();
+  // 32-40-00 moved further on in Rev 4 (see the test below).
+  const old = sectionPage(trainer, "32-40-00");
+  const now = sectionPage(rev4, "32-40-00");
+  expect(now).not.toBe(old);
+  await signedIn(page, `/library/${manualId}/${rev3}/${old}`);
+  await page.getByRole("button", { name: `☆ Bookmark page ${old}` }).click();
+  await expect(page.getByRole("button", { name: `★ Page ${old} bookmarked` })).toBeVisible();
+  await page.goto(`/library/${manualId}/${current}/1`);
+  await page.getByRole("button", { name: /^Bookmarks and notes/ }).click();
+  const list = page.getByRole("region", { name: "Bookmarks and notes in this manual" });
+  await expect(list).toContainText(`moved here from Rev 3, page ${old}`);
+  await list
+    .getByRole("link", { name: `★ page ${now}` })
+    .first()
+    .click();
+  await expect(page).toHaveURL(new RegExp(`/library/${manualId}/${current}/${now}$`));
+  await expect(page.getByRole("button", { name: `★ Page ${now} bookmarked` })).toBeVisible();
+  await page.screenshot({ path: test.info().outputPath("reader-bookmarks.png") });
+});
+
 test("a superseded page links to where its content moved in the current revision", async ({ page }) => {
   const { manualId, rev3 } = await trainerRevisions();
   // Rev 4 added a section in chapter 12: the wheels-and-brakes pages of Rev 3 moved further on.

@@ -364,6 +364,41 @@ export const accessMatrix: Row[] = [
     json: {},
     expect: only({ librarian: 422, admin: 422 }),
   },
+  {
+    method: "PATCH",
+    route: "/api/manuals/[id]",
+    path: (i) => `/api/manuals/${i.manualId}`,
+    json: {},
+    expect: only({ librarian: 422, admin: 422 }),
+  },
+  {
+    method: "GET",
+    route: "/api/manuals/[id]/citations",
+    path: (i) => `/api/manuals/${i.manualId}/citations`,
+    expect: only({ librarian: 200, admin: 200 }),
+  },
+  {
+    method: "POST",
+    route: "/api/manuals/[id]/withdraw",
+    path: (i) => `/api/manuals/${i.manualId}/withdraw`,
+    json: {},
+    expect: only({ librarian: 422, admin: 422 }),
+  },
+  {
+    method: "GET",
+    route: "/api/manuals/[id]/marks",
+    path: (i) => `/api/manuals/${i.manualId}/marks?revision=${i.revisionId}`,
+    expect: { ...all(200), anonymous: 401 },
+  },
+  { method: "POST", route: "/api/marks", path: () => "/api/marks", json: {}, expect: { ...all(422), anonymous: 401 } },
+  { method: "DELETE", route: "/api/marks/[id]", path: (i) => `/api/marks/${i.nobody}`, expect: { ...all(404), anonymous: 401 } },
+  // The demo manual is in the library: nothing to restore.
+  {
+    method: "POST",
+    route: "/api/manuals/[id]/restore",
+    path: (i) => `/api/manuals/${i.manualId}/restore`,
+    expect: only({ librarian: 409, admin: 409 }),
+  },
 ];
 
 const cookies: Partial<Record<Who, string>> = {};

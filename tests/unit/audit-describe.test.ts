@@ -205,6 +205,45 @@ const cases: Record<string, { entry: ReturnType<typeof entry>; summary: string; 
       ["Due", "2026-12-18"],
     ],
   },
+  "assignment.changed": {
+    entry: entry("assignment.changed", "assignment", id(80), {
+      dueOn: { from: "2026-12-18", to: "2026-12-23" },
+      note: { from: "Bay 1", to: "Bay 1" },
+    }),
+    summary: "Elena Brandt changed an assignment",
+    details: [["Due", "2026-12-18 → 2026-12-23"]],
+  },
+  "assignment.withdrawn": {
+    entry: entry("assignment.withdrawn", "assignment", id(80), {
+      reason: "The aircraft went back to the flight line.",
+      runs: { not_started: 3, in_progress: 1, signed_off: 2 },
+    }),
+    summary: "Elena Brandt withdrew an assignment",
+    details: [
+      ["Why", "The aircraft went back to the flight line."],
+      ["Runs", "4 taken off the students' work, 2 signed off kept"],
+    ],
+  },
+  "manual.changed": {
+    entry: entry(
+      "manual.changed",
+      "manual",
+      id(10),
+      { title: "HT-20 Trainer Maintenance Manual", ataChapters: { from: ["32"], to: ["32", "05"] } },
+      "Avery Lund",
+    ),
+    summary: "Avery Lund corrected the details of 'HT-20 Trainer Maintenance Manual'",
+    details: [["ATA chapters", "32 → 32, 05"]],
+  },
+  "manual.withdrawn": {
+    entry: entry("manual.withdrawn", "manual", id(10), { reason: "Replaced." }, "Avery Lund"),
+    summary: "Avery Lund withdrew 'HT-20 Trainer Maintenance Manual' from the library",
+    details: [["Why", "Replaced."]],
+  },
+  "manual.restored": {
+    entry: entry("manual.restored", "manual", id(10), {}, "Avery Lund"),
+    summary: "Avery Lund restored 'HT-20 Trainer Maintenance Manual' to the library",
+  },
   "settings.updated": {
     entry: entry("settings.updated", "settings", null, { timeZone: "America/Chicago" }, "Morgan Vale"),
     summary: "Morgan Vale set the school's time zone to America/Chicago",

@@ -12,7 +12,8 @@ export const metadata: Metadata = { title: "Library" };
 export default async function LibraryPage() {
   const user = await requirePageUser("library:view", "/library");
   const manages = can(user, "library:manage");
-  const rows = (await listManuals()).filter((m) => manages || m.currentRevisionId);
+  // Withdrawn manuals are out of the library for readers; the library staff see them, marked, to restore.
+  const rows = (await listManuals()).filter((m) => manages || (m.currentRevisionId && !m.withdrawnAt));
   return (
     <div className="flex flex-col gap-6">
       <div className="flex flex-wrap items-center gap-4">
@@ -41,6 +42,7 @@ export default async function LibraryPage() {
                   className="inline-flex min-h-11 items-center font-semibold"
                 >
                   {m.title}
+                  {m.withdrawnAt ? <span className="badge bg-danger-pale text-danger ml-2">Withdrawn</span> : null}
                 </Link>
               ),
             },

@@ -1,12 +1,13 @@
 // The library endpoints (lib/contracts/endpoint.ts says how one is declared).
 import { z } from "zod";
-import { pageNumberSchema } from "@/lib/domain/validation/library";
+import { createMarkSchema, manualFieldsSchema, pageNumberSchema, withdrawManualSchema } from "@/lib/domain/validation/library";
 import { searchParamsSchema } from "@/lib/domain/validation/search";
 import { endpoint, file, json, schemaSegment, uuidSegment } from "@/lib/contracts/endpoint";
 import { keepOnCartsSchema } from "@/lib/domain/validation/runs";
 import type { JsonObject } from "@/lib/contracts/endpoint";
 import type { ComparisonDto, RevisionStatusDto } from "@/lib/contracts/library";
 import type { SearchResult } from "@/lib/contracts/search";
+import type { PageMarkDto } from "@/lib/contracts/marks";
 
 export const libraryApi = {
   listManuals: endpoint({
@@ -114,6 +115,74 @@ export const libraryApi = {
     answer: json<ComparisonDto>(),
     who: "signed in",
     doc: `200 \`{ "previousRevisionId", "pages": [ { "status": "unchanged\\|changed\\|moved\\|added\\|removed", "oldPage", "newPage", "similarity" } ], "summary": { "unchanged", "changed", "moved", "added", "removed" } }\`: the revision against the ready one before it (\`previousRevisionId\` null for a first revision), pages in the new revision's order with removed pages in their old place. Page numbers, labels, dates and running headers do not count as change. 404 until the comparison job has run (a moment after the revision is ready)`,
+  }),
+  updateManual: endpoint({
+    method: "PATCH",
+    path: "/api/manuals/:id",
+    access: "library:manage",
+    params: { id: uuidSegment("That manual") },
+    body: { kind: "json", schema: manualFieldsSchema },
+    answer: json<{ manual: { id: string; title: string } }>(),
+    who: "librarian, admin",
+    doc: `\`{ "title", "documentType", "applicability", "ataChapters" }\` (the last two comma-separated, as in the upload) → 200: the manual's details corrected, audited with what changed. 409 a title already in the library, 422 a field named in \`fields\``,
+  }),
+  manualCitations: endpoint({
+    method: "GET",
+    path: "/api/manuals/:id/citations",
+    access: "library:manage",
+    params: { id: uuidSegment("That manual") },
+    answer: json<{ cards: { cardId: string; title: string; versionNumber: number; status: string; openRuns: number }[] }>(),
+    who: "librarian, admin",
+    doc: `200 \`{ "cards": [ { "cardId", "title", "versionNumber", "status", "openRuns" } ] }\`: the card versions (not archived) that cite the manual, and their runs not yet signed off: what withdrawing it touches`,
+  }),
+  withdrawManual: endpoint({
+    method: "POST",
+    path: "/api/manuals/:id/withdraw",
+    access: "library:manage",
+    params: { id: uuidSegment("That manual") },
+    body: { kind: "json", schema: withdrawManualSchema },
+    answer: json<{ id: string; withdrawn: boolean }>(),
+    who: "librarian, admin",
+    doc: `\`{ "reason" }\` → 200: the manual leaves the library list and search (cards that cite it still open its pages, which say it is withdrawn); nothing is deleted. Audited; 409 when already withdrawn`,
+  }),
+  restoreManual: endpoint({
+    method: "POST",
+    path: "/api/manuals/:id/restore",
+    access: "library:manage",
+    params: { id: uuidSegment("That manual") },
+    answer: json<{ id: string; withdrawn: boolean }>(),
+    who: "librarian, admin",
+    doc: `→ 200: a withdrawn manual back in the library and search. Audited; 409 when it is not withdrawn`,
+  }),
+  listMarks: endpoint({
+    method: "GET",
+    path: "/api/manuals/:id/marks",
+    access: "library:view",
+    params: { id: uuidSegment("That manual") },
+    query: z.object({ revision: z.uuid("Name the revision being read.") }),
+    headers: { "Cache-Control": "private, no-store" },
+    answer: json<{ marks: PageMarkDto[] }>(),
+    who: "signed in (their own marks, and notes shown to their classes)",
+    doc: `?revision= → 200 \`{ "marks": [ { "id", "kind": "bookmark\|note", "text", "authorName", "mine", "className", "made": { "revisionId", "revisionLabel", "page" }, "here": { "page", "status": "unchanged\|moved\|changed\|removed" } \| null, "createdAt" } ] }\`: each mark placed in the revision asked about through the page comparisons (\`here\` null when they do not reach it)`,
+  }),
+  createMark: endpoint({
+    method: "POST",
+    path: "/api/marks",
+    access: "library:view",
+    body: { kind: "json", schema: createMarkSchema },
+    answer: json<{ mark: { id: string } }>(),
+    status: 201,
+    who: "signed in; a note shown to a class: that class's instructors, admins",
+    doc: `\`{ "revisionId", "page", "kind": "bookmark\|note", "text"?, "classId"? }\` → 201 \`{ "mark": { "id" } }\` (a second bookmark of the same page answers the first). 422 a page the revision lacks, a note without text, a class the writer does not teach; 409 past 500 marks in one manual`,
+  }),
+  deleteMark: endpoint({
+    method: "DELETE",
+    path: "/api/marks/:id",
+    access: "library:view",
+    params: { id: uuidSegment("That mark") },
+    answer: json<{ removed: true }>(),
+    who: "signed in, their own marks",
+    doc: `→ 200 \`{ "removed": true }\`; 404 for a mark that is not the asker's`,
   }),
   keepOnCarts: endpoint({
     method: "PUT",

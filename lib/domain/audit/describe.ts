@@ -288,6 +288,49 @@ const wordings: Record<string, Wording> = {
     };
   },
 
+  "assignment.changed": (e, c) => {
+    const change = (v: unknown) => (v && typeof v === "object" ? (v as { from?: unknown; to?: unknown }) : {});
+    const due = change(e.details.dueOn);
+    const note = change(e.details.note);
+    const lines = [
+      ...(due.from !== due.to ? d("Due", `${str(due.from) ?? "no due date"} → ${str(due.to) ?? "no due date"}`) : []),
+      ...(note.from !== note.to ? d("Aircraft or station", `${str(note.from) ?? "none"} → ${str(note.to) ?? "none"}`) : []),
+    ];
+    return { summary: `${c.actor} changed ${c.subject}`, details: lines };
+  },
+  "assignment.withdrawn": (e, c) => {
+    const counts = e.details.runs && typeof e.details.runs === "object" ? (e.details.runs as Record<string, unknown>) : {};
+    const signed = num(counts.signed_off) ?? 0;
+    const all = Object.values(counts).reduce<number>((n, v) => n + (num(v) ?? 0), 0);
+    return {
+      summary: `${c.actor} withdrew ${c.subject}`,
+      details: [
+        ...d("Why", str(e.details.reason)),
+        ...d("Runs", all ? `${all - signed} taken off the students' work, ${signed} signed off kept` : null),
+      ],
+    };
+  },
+  "manual.changed": (e, c) => {
+    const labels: Record<string, string> = {
+      title: "Title",
+      documentType: "Document type",
+      applicability: "Applies to",
+      ataChapters: "ATA chapters",
+    };
+    const shown = (v: unknown) => (Array.isArray(v) ? strings(v).join(", ") || "none" : (str(v) ?? "none"));
+    return {
+      summary: `${c.actor} corrected the details of ${c.subject}`,
+      details: Object.entries(e.details)
+        .filter(([k, v]) => labels[k] && v && typeof v === "object" && !Array.isArray(v))
+        .flatMap(([k, v]) => d(labels[k]!, `${shown((v as { from?: unknown }).from)} → ${shown((v as { to?: unknown }).to)}`)),
+    };
+  },
+  "manual.withdrawn": (e, c) => ({
+    summary: `${c.actor} withdrew ${c.subject} from the library`,
+    details: d("Why", str(e.details.reason)),
+  }),
+  "manual.restored": (_e, c) => ({ summary: `${c.actor} restored ${c.subject} to the library`, details: [] }),
+
   "settings.updated": (e, c) => {
     const zone = str(e.details.timeZone);
     return {

@@ -51,3 +51,29 @@ export const pageNumberSchema = z.coerce
   .int("A page number is a whole number from 1.")
   .min(1, "A page number is a whole number from 1.")
   .max(1_000_000);
+
+export const withdrawManualSchema = z.object({
+  reason: z
+    .string({ error: "Say why the manual is withdrawn." })
+    .trim()
+    .min(1, "Say why the manual is withdrawn: readers of its pages see it.")
+    .max(300, "Keep the reason to 300 characters."),
+});
+
+export const markKinds = ["bookmark", "note"] as const;
+export type MarkKind = (typeof markKinds)[number];
+
+export const createMarkSchema = z
+  .object({
+    revisionId: z.uuid("Name the revision the page is in."),
+    page: z.number({ error: "Name the page." }).int("A page is a whole number.").min(1, "Pages start at 1.").max(1_000_000),
+    kind: z.enum(markKinds, { error: "A mark is a bookmark or a note." }),
+    text: z.string().trim().max(2000, "Keep a note to 2000 characters.").optional().default(""),
+    /** A note shown to this class (its instructors and admins only). */
+    classId: z.uuid("Choose one of your classes.").nullable().optional().default(null),
+  })
+  .refine((m) => m.kind !== "note" || m.text.length > 0, { message: "Write the note.", path: ["text"] })
+  .refine((m) => m.kind !== "bookmark" || m.classId === null, {
+    message: "A bookmark is your own; a note can be shown to a class.",
+    path: ["classId"],
+  });

@@ -1,11 +1,11 @@
 import "server-only";
 import { and, asc, desc, eq, sql } from "drizzle-orm";
 import { getDb } from "@/db";
-import { manuals, pages, revisions, users } from "@/db/schema";
+import { cardCitations, manuals, pages, revisions, runs, taskCards, taskCardVersions, users } from "@/db/schema";
 import type { DocumentType, RevisionStatus } from "@/lib/domain/vocabulary";
 import { recordAudit } from "@/lib/server/audit";
 import { can, type Actor } from "@/lib/domain/access/permissions";
-import { AppError } from "@/lib/domain/errors";
+import { AppError, databaseErrorCode } from "@/lib/domain/errors";
 import { queueIngest } from "@/lib/server/ingest/queue";
 
 export interface ManualFields {
@@ -157,6 +157,8 @@ const manualColumns = {
   ataChapters: manuals.ataChapters,
   currentRevisionId: manuals.currentRevisionId,
   keepOnCarts: manuals.keepOnCarts,
+  withdrawnAt: manuals.withdrawnAt,
+  withdrawReason: manuals.withdrawReason,
 };
 
 export async function listManuals() {
@@ -285,5 +287,91 @@ export async function setKeepOnCarts({ actor, id, keepOnCarts }: { actor: Actor;
       details: { title: row.title },
     });
     return row;
+  });
+}
+
+const manualNotFound = () => new AppError("not_found", "That manual was not found.");
+
+/** A librarian's correction of a manual's details; the title stays one of a kind in the library. */
+export async function updateManualDetails({ actor, id, fields }: { actor: Actor; id: string; fields: ManualFields }) {
+  try {
+    return await getDb().transaction(async (tx) => {
+      const [before] = await tx.select().from(manuals).where(eq(manuals.id, id)).for("update");
+      if (!before) throw manualNotFound();
+      await tx
+        .update(manuals)
+        .set({ ...fields, updatedAt: new Date() })
+        .where(eq(manuals.id, id));
+      const changed = Object.fromEntries(
+        (Object.keys(fields) as (keyof ManualFields)[])
+          .filter((k) => JSON.stringify(before[k]) !== JSON.stringify(fields[k]))
+          .map((k) => [k, { from: before[k], to: fields[k] }]),
+      );
+      if (Object.keys(changed).length)
+        await recordAudit(tx, {
+          actorId: actor.id,
+          action: "manual.changed",
+          subjectType: "manual",
+          subjectId: id,
+          details: { title: fields.title, ...changed },
+        });
+      return { id, ...fields };
+    });
+  } catch (error) {
+    if (databaseErrorCode(error) === "23505")
+      throw new AppError("conflict", `The library already has a manual titled "${fields.title}".`, {
+        fields: { title: "Already in the library." },
+      });
+    throw error;
+  }
+}
+
+/** What cites a manual: the card versions in use (drafts and published, not archived) and the open runs on them. */
+export async function manualCitations({ id }: { id: string }) {
+  await assertManualExists({ id });
+  const cards = await getDb()
+    .selectDistinct({
+      cardId: taskCardVersions.cardId,
+      title: taskCardVersions.title,
+      versionNumber: taskCardVersions.number,
+      status: taskCardVersions.status,
+      openRuns: sql<number>`(select count(*)::int from ${runs} r where r.version_id = ${taskCardVersions.id} and r.status <> 'signed_off')`,
+    })
+    .from(cardCitations)
+    .innerJoin(taskCardVersions, eq(taskCardVersions.id, cardCitations.versionId))
+    .innerJoin(taskCards, eq(taskCards.id, taskCardVersions.cardId))
+    .where(and(eq(cardCitations.manualId, id), sql`${taskCards.archivedAt} is null`))
+    .orderBy(asc(taskCardVersions.title), asc(taskCardVersions.number));
+  return { cards };
+}
+
+/**
+ * Withdraws a manual from the library: it leaves the list and search, its pages stay readable
+ * for the cards that cite them (each reader page says it is withdrawn), nothing is deleted, and a
+ * librarian can restore it.
+ */
+export async function setManualWithdrawn({ actor, id, reason }: { actor: Actor; id: string; reason: string | null }) {
+  return getDb().transaction(async (tx) => {
+    const [before] = await tx.select().from(manuals).where(eq(manuals.id, id)).for("update");
+    if (!before) throw manualNotFound();
+    const withdraw = reason !== null;
+    if (withdraw && before.withdrawnAt) throw new AppError("conflict", "That manual is already withdrawn.");
+    if (!withdraw && !before.withdrawnAt) throw new AppError("conflict", "That manual is in the library; there is nothing to restore.");
+    await tx
+      .update(manuals)
+      .set(
+        withdraw
+          ? { withdrawnAt: new Date(), withdrawnBy: actor.id, withdrawReason: reason }
+          : { withdrawnAt: null, withdrawnBy: null, withdrawReason: "" },
+      )
+      .where(eq(manuals.id, id));
+    await recordAudit(tx, {
+      actorId: actor.id,
+      action: withdraw ? "manual.withdrawn" : "manual.restored",
+      subjectType: "manual",
+      subjectId: id,
+      details: withdraw ? { title: before.title, reason } : { title: before.title },
+    });
+    return { id, withdrawn: withdraw };
   });
 }

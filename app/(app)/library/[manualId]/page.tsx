@@ -8,6 +8,7 @@ import { requirePageUser } from "@/app/_adapters/session";
 import { getManual } from "@/lib/server/library/manuals";
 import { documentTypeLabels } from "@/lib/domain/validation/library";
 import { KeepOnCarts } from "../_components/keep-on-carts";
+import { ManualAdmin } from "../_components/manual-admin";
 import { RetryButton } from "../_components/retry-button";
 import { RefreshWhileReading } from "../_components/refresh-while-reading";
 import { UploadForm } from "../_components/upload-form";
@@ -34,7 +35,27 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
       </Link>
       <div className="flex flex-col gap-1">
         <h1>{manual.title}</h1>
-        {manages ? <KeepOnCarts manualId={manual.id} kept={manual.keepOnCarts} /> : null}
+        {manual.withdrawnAt ? (
+          <p className="notice-error" role="note">
+            Withdrawn from the library on {manual.withdrawnAt.toISOString().slice(0, 10)}
+            {manual.withdrawReason ? `: ${manual.withdrawReason}` : ""}. Its pages stay readable for the task cards that cite them.
+          </p>
+        ) : null}
+        {manages ? (
+          <div className="flex flex-col gap-3">
+            <KeepOnCarts manualId={manual.id} kept={manual.keepOnCarts} />
+            <ManualAdmin
+              manual={{
+                id: manual.id,
+                title: manual.title,
+                documentType: manual.documentType,
+                applicability: manual.applicability,
+                ataChapters: manual.ataChapters,
+                withdrawnAt: manual.withdrawnAt?.toISOString() ?? null,
+              }}
+            />
+          </div>
+        ) : null}
         <p className="text-ink-soft">
           {documentTypeLabels[manual.documentType]}
           {manual.applicability.length ? ` · applies to ${manual.applicability.join(", ")}` : ""}

@@ -2,7 +2,7 @@ import { handle } from "@/app/_adapters/handle";
 import { api } from "@/lib/contracts/endpoints";
 import { can } from "@/lib/domain/access/permissions";
 import { AppError } from "@/lib/domain/errors";
-import { getManual } from "@/lib/server/library/manuals";
+import { getManual, updateManualDetails } from "@/lib/server/library/manuals";
 
 export const GET = handle(api.library.getManual, async ({ actor, params: { id } }) => {
   const manual = await getManual({ id });
@@ -22,3 +22,7 @@ export const GET = handle(api.library.getManual, async ({ actor, params: { id } 
       })),
   };
 });
+
+export const PATCH = handle(api.library.updateManual, async ({ actor, params: { id }, body }) => ({
+  manual: await updateManualDetails({ actor, id, fields: body }),
+}));

@@ -6,6 +6,8 @@ import { requirePageUser } from "@/app/_adapters/session";
 import { PdfReaderLoader } from "@/components/pdf-reader-loader";
 import { markStems } from "@/lib/domain/library/highlight";
 import { getManual, getPage, getReadableRevision } from "@/lib/server/library/manuals";
+import { listClasses } from "@/lib/server/classes";
+import { PageMarks } from "./_components/page-marks";
 import { findCorrections } from "@/search/postgres";
 import { parseQuery } from "@/search/query";
 import { CiteOnCard } from "./_components/cite-on-card";
@@ -50,10 +52,18 @@ export default async function ManualPageView({
   // The same content in the current revision, through the page comparisons: a moved page goes to
   // where it moved, a removed one says so; without comparisons, the same number, said as such.
   const followed = superseded && current ? await pageInRevision(revision.id, pageNumber, current.id) : null;
+  // An instructor can show a note to a class they teach.
+  const teaches = can(user, "assignments:manage") ? (await listClasses({ actor: user })).map((c) => ({ id: c.id, name: c.name })) : [];
 
   return (
     // Compact on purpose: on a 1024×768 cart screen the manual page starts in the top third.
     <div className="-mt-4 flex flex-col gap-2">
+      {manual.withdrawnAt ? (
+        <p role="alert" className="notice-error">
+          This manual was withdrawn from the library on {manual.withdrawnAt.toISOString().slice(0, 10)}
+          {manual.withdrawReason ? `: ${manual.withdrawReason}` : ""}. Ask the librarian or your instructor before working from it.
+        </p>
+      ) : null}
       {superseded ? (
         <div role="alert" className="notice-error flex flex-wrap items-baseline gap-x-2">
           <span>This is {revision.label}, a superseded revision. Do not work from it.</span>
@@ -139,15 +149,24 @@ export default async function ManualPageView({
         revisionLabel={revision.label}
         isCurrent={!superseded}
         barExtra={
-          can(user, "cards:author") ? (
-            <CiteOnCard
-              userId={user.id}
+          <div className="flex flex-col gap-1">
+            {can(user, "cards:author") ? (
+              <CiteOnCard
+                userId={user.id}
+                revisionId={revisionId}
+                revisionLabel={revision.label}
+                superseded={superseded}
+                initialPage={pageNumber}
+              />
+            ) : null}
+            <PageMarks
+              manualId={manualId}
               revisionId={revisionId}
-              revisionLabel={revision.label}
-              superseded={superseded}
               initialPage={pageNumber}
+              baseHref={`/library/${manualId}/${revisionId}`}
+              classes={teaches}
             />
-          ) : null
+          </div>
         }
       />
 

@@ -1,0 +1,5 @@
+import { handle } from "@/app/_adapters/handle";
+import { api } from "@/lib/contracts/endpoints";
+import { setManualWithdrawn } from "@/lib/server/library/manuals";
+
+export const POST = handle(api.library.restoreManual, async ({ actor, params: { id } }) => setManualWithdrawn({ actor, id, reason: null }));
