@@ -163,7 +163,7 @@ export const libraryApi = {
     headers: { "Cache-Control": "private, no-store" },
     answer: json<{ marks: PageMarkDto[] }>(),
     who: "signed in (their own marks, and notes shown to their classes)",
-    doc: `?revision= → 200 \`{ "marks": [ { "id", "kind": "bookmark\|note", "text", "authorName", "mine", "className", "made": { "revisionId", "revisionLabel", "page" }, "here": { "page", "status": "unchanged\|moved\|changed\|removed" } \| null, "createdAt" } ] }\`: each mark placed in the revision asked about through the page comparisons (\`here\` null when they do not reach it)`,
+    doc: `?revision= → 200 \`{ "marks": [ { "id", "kind": "bookmark\\|note", "text", "authorName", "mine", "className", "made": { "revisionId", "revisionLabel", "page" }, "here": { "page", "status": "unchanged\\|moved\\|changed\\|removed" } \\| null, "createdAt" } ] }\`: each mark placed in the revision asked about through the page comparisons (\`here\` null when they do not reach it)`,
   }),
   createMark: endpoint({
     method: "POST",
@@ -173,7 +173,7 @@ export const libraryApi = {
     answer: json<{ mark: { id: string } }>(),
     status: 201,
     who: "signed in; a note shown to a class: that class's instructors, admins",
-    doc: `\`{ "revisionId", "page", "kind": "bookmark\|note", "text"?, "classId"? }\` → 201 \`{ "mark": { "id" } }\` (a second bookmark of the same page answers the first). 422 a page the revision lacks, a note without text, a class the writer does not teach; 409 past 500 marks in one manual`,
+    doc: `\`{ "revisionId", "page", "kind": "bookmark\\|note", "text"?, "classId"? }\` → 201 \`{ "mark": { "id" } }\` (a second bookmark of the same page answers the first). 422 a page the revision lacks, a note without text, a class the writer does not teach; 409 past 500 marks in one manual`,
   }),
   deleteMark: endpoint({
     method: "DELETE",
