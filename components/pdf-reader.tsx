@@ -70,6 +70,8 @@ export interface PdfReaderProps {
   isCurrent: boolean;
   /** More controls for the bar (citing this page while a card is open). */
   barExtra?: ReactNode;
+  /** Small controls in the bar's first row, before the zoom (bookmarks and notes). */
+  barTools?: ReactNode;
 }
 
 /** The strip of page pictures beside the pages; a picture not made yet shows the page number only. */
@@ -242,6 +244,7 @@ export function PdfReader({
   revisionLabel,
   isCurrent,
   barExtra,
+  barTools,
 }: PdfReaderProps) {
   const scroller = useRef<HTMLDivElement>(null);
   const [box, setBox] = useState({ width: 800, height: 600 });
@@ -488,6 +491,7 @@ export function PdfReader({
             {here.title}
           </span>
         ) : null}
+        {barTools}
         <span className="ml-auto flex flex-wrap items-center gap-1">
           <button type="button" className="btn btn-secondary btn-small" aria-label="Zoom out" onClick={() => zoomBy(-0.25)}>
             −
@@ -505,7 +509,8 @@ export function PdfReader({
             Fit page
           </button>
         </span>
-        {barExtra ? <div className="w-full">{barExtra}</div> : null}
+        {/* Items of the bar's own row; a part that needs the whole width (the citing panel) says so itself. */}
+        {barExtra}
       </div>
       {error ? (
         <p className="notice-error" role="alert">

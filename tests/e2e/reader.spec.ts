@@ -87,10 +87,14 @@ test("a bookmark made on a superseded page follows its content to the current re
   const now = sectionPage(rev4, "32-40-00");
   expect(now).not.toBe(old);
   await signedIn(page, `/library/${manualId}/${rev3}/${old}`);
-  await page.getByRole("button", { name: `☆ Bookmark page ${old}` }).click();
+  const marks = page.getByRole("button", { name: /Marks$|NOTE on this page/ });
+  await marks.click();
+  // The integration tests may have bookmarked this page for the same student already.
+  const bookmark = page.getByRole("button", { name: new RegExp(`Bookmark page ${old}$|Page ${old} bookmarked$`) });
+  if ((await bookmark.textContent())?.startsWith("☆")) await bookmark.click();
   await expect(page.getByRole("button", { name: `★ Page ${old} bookmarked` })).toBeVisible();
   await page.goto(`/library/${manualId}/${current}/1`);
-  await page.getByRole("button", { name: /^Bookmarks and notes/ }).click();
+  await marks.click();
   const list = page.getByRole("region", { name: "Bookmarks and notes in this manual" });
   await expect(list).toContainText(`moved here from Rev 3, page ${old}`);
   await list
@@ -98,6 +102,8 @@ test("a bookmark made on a superseded page follows its content to the current re
     .first()
     .click();
   await expect(page).toHaveURL(new RegExp(`/library/${manualId}/${current}/${now}$`));
+  await expect(marks).toHaveText("★ Marks");
+  await marks.click();
   await expect(page.getByRole("button", { name: `★ Page ${now} bookmarked` })).toBeVisible();
   await page.screenshot({ path: test.info().outputPath("reader-bookmarks.png") });
 });

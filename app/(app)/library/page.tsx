@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { StatusBadge } from "@/components/status-badge";
 import { Table } from "@/components/table";
+import { CitingBanner } from "./_components/citing-banner";
 import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
 import { listManuals } from "@/lib/server/library/manuals";
@@ -24,6 +25,7 @@ export default async function LibraryPage() {
           </Link>
         ) : null}
       </div>
+      {can(user, "cards:author") ? <CitingBanner userId={user.id} /> : null}
       <p className="text-ink-soft">
         Every manual shows its current revision. Older revisions stay readable from the manual&apos;s page, marked superseded.
       </p>

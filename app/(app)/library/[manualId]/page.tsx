@@ -3,6 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { statusLabel } from "@/components/status-badge";
 import { Table } from "@/components/table";
+import { CitingBanner } from "../_components/citing-banner";
 import { can } from "@/lib/domain/access/permissions";
 import { requirePageUser } from "@/app/_adapters/session";
 import { getManual } from "@/lib/server/library/manuals";
@@ -33,6 +34,7 @@ export default async function ManualPage({ params }: { params: Promise<{ manualI
       <Link href="/library" className="self-start py-2">
         ← Library
       </Link>
+      {can(user, "cards:author") ? <CitingBanner userId={user.id} /> : null}
       <div className="flex flex-col gap-1">
         <h1>{manual.title}</h1>
         {manual.withdrawnAt ? (

@@ -149,24 +149,24 @@ export default async function ManualPageView({
         revisionLabel={revision.label}
         isCurrent={!superseded}
         barExtra={
-          <div className="flex flex-col gap-1">
-            {can(user, "cards:author") ? (
-              <CiteOnCard
-                userId={user.id}
-                revisionId={revisionId}
-                revisionLabel={revision.label}
-                superseded={superseded}
-                initialPage={pageNumber}
-              />
-            ) : null}
-            <PageMarks
-              manualId={manualId}
+          can(user, "cards:author") ? (
+            <CiteOnCard
+              userId={user.id}
               revisionId={revisionId}
+              revisionLabel={revision.label}
+              superseded={superseded}
               initialPage={pageNumber}
-              baseHref={`/library/${manualId}/${revisionId}`}
-              classes={teaches}
             />
-          </div>
+          ) : null
+        }
+        barTools={
+          <PageMarks
+            manualId={manualId}
+            revisionId={revisionId}
+            initialPage={pageNumber}
+            baseHref={`/library/${manualId}/${revisionId}`}
+            classes={teaches}
+          />
         }
       />
 

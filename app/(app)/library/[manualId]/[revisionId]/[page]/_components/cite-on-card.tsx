@@ -81,7 +81,7 @@ export function CiteOnCard({
 
   return (
     <section
-      className="flex flex-wrap items-end gap-3 rounded-md border-4 border-teal bg-teal-pale p-3"
+      className="flex w-full flex-wrap items-end gap-3 rounded-md border-4 border-teal bg-teal-pale p-3"
       aria-label="Cite this page on a task card"
     >
       <p className="w-full font-semibold">
