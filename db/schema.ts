@@ -588,3 +588,127 @@ export const signOffs = pgTable("sign_offs", {
   actualMinutes: integer("actual_minutes").notNull().default(0),
   comment: text("comment").notNull().default(""),
 });
+
+// The tool room (issue 19). Tools and kits are lent to students; a kit is counted back in tool by
+// tool, and a tool not returned opens a hold that keeps the student's run from being handed in
+// until an instructor clears it. A precision tool's calibration date decides whether a reading
+// taken with it can be recorded.
+
+export const toolKits = pgTable(
+  "tool_kits",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    /** The number on the box and its label, such as K-03: what a scanner types. */
+    number: text("number").notNull(),
+    name: text("name").notNull(),
+    location: text("location").notNull().default(""),
+    ...timestamps,
+  },
+  (t) => [uniqueIndex("tool_kits_number_key").on(t.number)],
+);
+
+export const tools = pgTable(
+  "tools",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    number: text("number").notNull(),
+    description: text("description").notNull(),
+    /** The kit it is kept in; null for a tool lent on its own. */
+    kitId: uuid("kit_id").references(() => toolKits.id, { onDelete: "set null" }),
+    /** A precision tool: recorded readings need it within calibration. */
+    calibrated: boolean("calibrated").notNull().default(false),
+    calibrationIntervalDays: integer("calibration_interval_days"),
+    calibrationDueOn: date("calibration_due_on", { mode: "string" }),
+    status: text("status").notNull().default("in_service"),
+    outOfServiceReason: text("out_of_service_reason").notNull().default(""),
+    ...timestamps,
+  },
+  (t) => [
+    uniqueIndex("tools_number_key").on(t.number),
+    index("tools_kit_idx").on(t.kitId),
+    check("tools_status", sql`${t.status} in ('in_service', 'out_of_service')`),
+    check("tools_interval", sql`${t.calibrationIntervalDays} is null or ${t.calibrationIntervalDays} between 1 and 3660`),
+  ],
+);
+
+/** A calibration as its certificate states it; the newest sets the tool's next due date. Never changed. */
+export const toolCalibrations = pgTable(
+  "tool_calibrations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    toolId: uuid("tool_id")
+      .notNull()
+      .references(() => tools.id, { onDelete: "restrict" }),
+    calibratedOn: date("calibrated_on", { mode: "string" }).notNull(),
+    calibratedBy: text("calibrated_by").notNull(),
+    certificate: text("certificate").notNull(),
+    nextDueOn: date("next_due_on", { mode: "string" }).notNull(),
+    recordedBy: uuid("recorded_by")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("tool_calibrations_tool_idx").on(t.toolId, t.calibratedOn)],
+);
+
+/** A kit or a single tool lent to a student, for a run or for the day, until it is counted back in. */
+export const toolCheckouts = pgTable(
+  "tool_checkouts",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    kitId: uuid("kit_id").references(() => toolKits.id, { onDelete: "restrict" }),
+    toolId: uuid("tool_id").references(() => tools.id, { onDelete: "restrict" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    /** Team mates working with the same kit, named on the check-out; the student above answers for it. */
+    teamNote: text("team_note").notNull().default(""),
+    runId: uuid("run_id").references(() => runs.id, { onDelete: "restrict" }),
+    /** The tools lent, listed when lent (a kit's contents at that moment). */
+    toolIds: jsonb("tool_ids").$type<string[]>().notNull(),
+    dueAt: timestamp("due_at", { withTimezone: true }).notNull(),
+    checkedOutAt: timestamp("checked_out_at", { withTimezone: true }).notNull().defaultNow(),
+    checkedOutBy: uuid("checked_out_by")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    returnedAt: timestamp("returned_at", { withTimezone: true }),
+    returnedBy: uuid("returned_by").references(() => users.id, { onDelete: "restrict" }),
+    overdueMailedAt: timestamp("overdue_mailed_at", { withTimezone: true }),
+  },
+  (t) => [
+    index("tool_checkouts_user_idx").on(t.userId, t.returnedAt),
+    index("tool_checkouts_open_idx").on(t.dueAt).where(sql`${t.returnedAt} is null`),
+    check("tool_checkouts_what", sql`(${t.kitId} is null) <> (${t.toolId} is null)`),
+  ],
+);
+
+/** A tool not counted back in: holds the student's run until an instructor says found or lost. */
+export const toolHolds = pgTable(
+  "tool_holds",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    checkoutId: uuid("checkout_id")
+      .notNull()
+      .references(() => toolCheckouts.id, { onDelete: "restrict" }),
+    toolId: uuid("tool_id")
+      .notNull()
+      .references(() => tools.id, { onDelete: "restrict" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    runId: uuid("run_id").references(() => runs.id, { onDelete: "restrict" }),
+    openedAt: timestamp("opened_at", { withTimezone: true }).notNull().defaultNow(),
+    openedBy: uuid("opened_by")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    clearedAt: timestamp("cleared_at", { withTimezone: true }),
+    clearedBy: uuid("cleared_by").references(() => users.id, { onDelete: "restrict" }),
+    outcome: text("outcome"),
+    note: text("note").notNull().default(""),
+  },
+  (t) => [
+    index("tool_holds_open_idx").on(t.userId).where(sql`${t.clearedAt} is null`),
+    check("tool_holds_outcome", sql`${t.outcome} is null or ${t.outcome} in ('found', 'lost')`),
+    check("tool_holds_cleared", sql`(${t.clearedAt} is null) = (${t.outcome} is null)`),
+  ],
+);

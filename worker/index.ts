@@ -7,6 +7,7 @@ import { getEnv } from "@/lib/server/env";
 import { failRevision, findStaleRevisions, maxAttempts } from "@/lib/server/ingest/ingest-revision";
 import { queueIngest } from "@/lib/server/ingest/queue";
 import { createQueues, deadLetterQueue, jobs, type JobName } from "@/lib/server/jobs";
+import { mailOverdueLoans } from "@/lib/server/tools/lending";
 import { handlers } from "./handlers";
 
 async function main() {
@@ -51,6 +52,9 @@ async function main() {
         console.log(`revision ${stale.id}: its worker went quiet; queued again`);
       }
     }
+    // Tool-room loans past their due time: mailed once to the student and their instructors.
+    const mailed = await mailOverdueLoans();
+    if (mailed) console.log(`tool room: ${mailed} overdue loan${mailed === 1 ? "" : "s"} mailed`);
   };
   const sweeper = setInterval(() => void sweep().catch((error: unknown) => console.error("sweep failed", error)), 30_000);
   void sweep().catch((error: unknown) => console.error("sweep failed", error));

@@ -21,6 +21,8 @@ export interface StepDto {
   measurement: Measurement | null;
   calculator: CalculatorSlug | null;
   inspectionPoint: boolean;
+  /** The reading is taken with a precision tool within calibration, named by its tool-room number. */
+  calibratedTool: boolean;
   timerMinutes: number | null;
   /** A newer revision changed, moved or removed a page this step cites, and nobody rechecked it yet. */
   underRecheck: boolean;

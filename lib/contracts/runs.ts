@@ -2,6 +2,7 @@
 import type { CardVersionDto } from "@/lib/contracts/cards";
 import type { RunEvent, RunStatus } from "@/lib/domain/runs/fold";
 import type { MeasuredValue } from "@/lib/domain/runs/measured";
+import type { RunToolsDto } from "@/lib/contracts/tools";
 
 /** What "my work" shows: the run's status, and overdue when the due date passed before submitting. */
 export type WorkStatus = RunStatus | "overdue";
@@ -101,6 +102,8 @@ export interface RunDetailDto {
   keepOnCarts: { revisionId: string; manualTitle: string; url: string }[];
   /** The school's time zone: the cart tells times in it, offline too. */
   timeZone: string;
+  /** The tools the student has out, the card's tool lines against them, and missing-tool holds on the run. */
+  tools: RunToolsDto;
 }
 
 export interface EventBatchResultDto {

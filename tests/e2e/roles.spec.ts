@@ -8,7 +8,7 @@ const roles = [
     role: "Student",
     nav: ["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Records"],
   },
-  { email: "librarian@hangarleaf.test", role: "Librarian", nav: ["Home", "Search", "Library", "Task cards", "Calculators"] },
+  { email: "librarian@hangarleaf.test", role: "Librarian", nav: ["Home", "Search", "Library", "Task cards", "Calculators", "Tool room"] },
   {
     email: "instructor@hangarleaf.test",
     role: "Instructor",
@@ -26,6 +26,7 @@ const roles = [
       "Calculators",
       "Classes",
       "Records",
+      "Tool room",
       "Accounts",
       "Audit log",
       "School settings",

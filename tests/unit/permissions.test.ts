@@ -24,6 +24,9 @@ const expected: Record<string, Role[]> = {
   "records:view": ["student", "instructor", "admin"],
   "records:view-all": ["instructor", "admin"],
   "subjects:manage": ["admin"],
+  "tools:view": ["student", "instructor", "librarian", "admin"],
+  "tools:lend": ["librarian", "admin"],
+  "tools:clear-holds": ["instructor", "admin"],
 };
 
 describe("permissions", () => {
@@ -63,7 +66,7 @@ describe("permissions", () => {
   it("gives each role its own navigation", () => {
     const labels = (role: Role, outbox = false) => navigationFor(actor(role), { outbox }).map((n) => n.label);
     expect(labels("student")).toEqual(["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Records"]);
-    expect(labels("librarian")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators"]);
+    expect(labels("librarian")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators", "Tool room"]);
     expect(labels("instructor")).toEqual(["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records"]);
     expect(labels("admin")).toEqual([
       "Home",
@@ -74,6 +77,7 @@ describe("permissions", () => {
       "Calculators",
       "Classes",
       "Records",
+      "Tool room",
       "Accounts",
       "Audit log",
       "School settings",

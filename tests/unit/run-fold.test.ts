@@ -397,6 +397,7 @@ describe("comparing card versions for a move", () => {
     measurement: null,
     calculator: null,
     inspectionPoint: false,
+    calibratedTool: false,
     timerMinutes: null,
     ...over,
   });

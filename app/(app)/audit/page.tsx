@@ -13,6 +13,7 @@ const kindLabels: Record<AuditKind, string> = {
   cards: "Task cards and publications",
   assignments: "Assignments",
   runs: "Buy-offs, returns and sign-offs",
+  tools: "Tool room: loans, holds, calibrations",
 };
 
 export default async function AuditPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {

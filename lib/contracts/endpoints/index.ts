@@ -8,6 +8,7 @@ import { libraryApi } from "@/lib/contracts/endpoints/library";
 import { runsApi } from "@/lib/contracts/endpoints/runs";
 import { sessionApi } from "@/lib/contracts/endpoints/session";
 import { settingsApi } from "@/lib/contracts/endpoints/settings";
+import { toolsApi } from "@/lib/contracts/endpoints/tools";
 
 export const api = {
   session: sessionApi,
@@ -18,6 +19,7 @@ export const api = {
   library: libraryApi,
   cards: cardsApi,
   runs: runsApi,
+  tools: toolsApi,
 };
 
 export const allEndpoints: Endpoint[] = Object.values(api).flatMap((group) => Object.values(group) as Endpoint[]);

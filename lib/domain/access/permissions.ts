@@ -45,6 +45,15 @@ const rules = {
   /** Records: students see their own; instructors those of the students they review; admins all. */
   "records:view": ["student", "instructor", "admin"],
   "records:view-all": ["instructor", "admin"],
+  /** See the tool room's tools and kits (what a card's tool line names). */
+  "tools:view": ["student", "instructor", "librarian", "admin"],
+  /**
+   * The tool-room attendant's work: tools and kits, labels, calibrations, lending and counting back
+   * in. The school's librarian keeps the tool room as well as the library (no role of its own).
+   */
+  "tools:lend": ["librarian", "admin"],
+  /** Clear a missing-tool hold (found, or lost with a note): the instructors of the student's classes (lib/server/runs/scope.ts). */
+  "tools:clear-holds": ["instructor", "admin"],
   /** The link to the local outbox (the page itself is open while the fake SMTP server runs). */
   "outbox:view": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
@@ -90,6 +99,7 @@ const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boo
   { item: { href: "/calculators", label: "Calculators" } },
   { item: { href: "/classes", label: "Classes" }, permission: "classes:view" },
   { item: { href: "/records", label: "Records" }, permission: "records:view" },
+  { item: { href: "/tools", label: "Tool room" }, permission: "tools:lend" },
   { item: { href: "/accounts", label: "Accounts" }, permission: "accounts:manage" },
   { item: { href: "/audit", label: "Audit log" }, permission: "audit:view" },
   { item: { href: "/settings", label: "School settings" }, permission: "settings:manage" },

@@ -339,6 +339,47 @@ const wordings: Record<string, Wording> = {
     };
   },
 
+  "tool.created": (e, c) => ({ summary: `${c.actor} added the tool ${str(e.details.number) ?? ""} to the tool room`.replace("  ", " "), details: [] }),
+  "tool.changed": (e, c) => ({ summary: `${c.actor} changed the details of the tool ${str(e.details.number) ?? ""}`.trim(), details: [] }),
+  "tool.out_of_service": (e, c) => ({
+    summary: `${c.actor} took the tool ${str(e.details.number) ?? ""} out of service`.replace("  ", " "),
+    details: d("Why", str(e.details.reason)),
+  }),
+  "tool.in_service": (e, c) => ({ summary: `${c.actor} put the tool ${str(e.details.number) ?? ""} back in service`.replace("  ", " "), details: [] }),
+  "tool.calibrated": (e, c) => ({
+    summary: `${c.actor} recorded a calibration of the tool ${str(e.details.number) ?? ""}`.replace("  ", " "),
+    details: [
+      ...d("Calibrated on", str(e.details.calibratedOn)),
+      ...d("Certificate", str(e.details.certificate)),
+      ...d("Next due", str(e.details.nextDueOn)),
+    ],
+  }),
+  "kit.created": (e, c) => ({ summary: `${c.actor} added the kit ${str(e.details.number) ?? ""} to the tool room`.replace("  ", " "), details: [] }),
+  "tool.checked_out": (e, c) => {
+    const student = c.names.people[str(e.details.studentId) ?? ""] ?? "a student";
+    return { summary: `${c.actor} lent tools to ${student}`, details: d("Tools", strings(e.details.tools).join(", ")) };
+  },
+  "tool.checked_in": (e, c) => {
+    const student = c.names.people[str(e.details.studentId) ?? ""] ?? "a student";
+    return { summary: `${c.actor} counted back in every tool lent to ${student}`, details: [] };
+  },
+  "tool.missing": (e, c) => {
+    const student = c.names.people[str(e.details.studentId) ?? ""] ?? "a student";
+    const missing = strings(e.details.missing);
+    return {
+      summary: `${c.actor} counted in the tools lent to ${student}: ${plural(missing.length, "tool")} missing`,
+      details: d("Missing", missing.join(", ")),
+    };
+  },
+  "tool.hold_cleared": (e, c) => {
+    const student = c.names.people[str(e.details.studentId) ?? ""] ?? "a student";
+    const lost = str(e.details.outcome) === "lost";
+    return {
+      summary: `${c.actor} cleared a missing-tool hold on ${possessive(student)} work: the tool was ${lost ? "lost" : "found"}`,
+      details: d("Note", str(e.details.note)),
+    };
+  },
+
   "run.bought_off": (e, c) => {
     const stepId = str(e.details.stepId);
     const index = stepId ? (c.names.runs[e.subjectId ?? ""]?.stepIds.indexOf(stepId) ?? -1) : -1;

@@ -51,6 +51,8 @@ export interface Reading {
   text: string;
   judgement: Judgement;
   at: string;
+  /** The tool-room number of the precision tool it was taken with (the server writes it from the tool room). */
+  tool: string | null;
 }
 
 export interface StepState {
@@ -348,7 +350,8 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
           setAside("this step records no value");
           break;
         }
-        s.value = { text: value, judgement: judgeValue(value, step.measurement), at: e.clientTime };
+        const tool = text(e.payload, "toolNumber") || null;
+        s.value = { text: value, judgement: judgeValue(value, step.measurement), at: e.clientTime, tool };
         s.readings.push(s.value);
         s.notedSinceReading = false;
         break;

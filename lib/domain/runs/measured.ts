@@ -33,6 +33,8 @@ export interface MeasuredValue {
   value: string | null;
   /** When the cart recorded it (the cart's clock). */
   recordedAt: string | null;
+  /** The precision tool it was taken with, by its tool-room number: which wrench torqued this nut. */
+  toolNumber: string | null;
   verdict: Verdict;
 }
 
@@ -61,6 +63,7 @@ export function measuredValues(
         },
         value: reading?.text ?? null,
         recordedAt: reading?.at ?? null,
+        toolNumber: reading?.tool ?? null,
         verdict: verdictOf(reading?.judgement),
       },
     ];
@@ -69,5 +72,6 @@ export function measuredValues(
 
 /** "Step 3, Edge distance: 0.375 in (limits 0.25 to 0.5 in), within limits": one measured value in a line. */
 export function measuredValueLine(m: MeasuredValue): string {
-  return `Step ${m.stepNumber}, ${m.label}: ${m.value ?? "-"} (limits ${m.limit.text}), ${verdictWords[m.verdict]}`;
+  const tool = m.toolNumber ? `, with ${m.toolNumber}` : "";
+  return `Step ${m.stepNumber}, ${m.label}: ${m.value ?? "-"} (limits ${m.limit.text}), ${verdictWords[m.verdict]}${tool}`;
 }

@@ -34,11 +34,12 @@ export const recordCsvHeader = [
   "Value",
   "Limit",
   "Verdict",
+  "Tool",
 ] as const;
 
 /**
  * One line per measured step of each signed-off card (a card that measures nothing has one line,
- * its last five cells empty). Every line carries its card's cells, so a line read alone (filtered
+ * its last six cells empty). Every line carries its card's cells, so a line read alone (filtered
  * on "OUT OF LIMITS", say) still says whose, which version and who signed it; the hours therefore
  * repeat on each line of a card.
  */
@@ -56,8 +57,8 @@ export function studentRecordCsv(record: StudentRecordDto): string {
         c.estimatedMinutes != null ? recordHours(c.estimatedMinutes) : "",
         recordHours(c.actualMinutes),
       ];
-      if (!c.measured.length) return [[...card, "", "", "", "", ""]];
-      return c.measured.map((m) => [...card, m.stepNumber, m.label, m.value ?? "", m.limit.text, verdictWords[m.verdict]]);
+      if (!c.measured.length) return [[...card, "", "", "", "", "", ""]];
+      return c.measured.map((m) => [...card, m.stepNumber, m.label, m.value ?? "", m.limit.text, verdictWords[m.verdict], m.toolNumber ?? ""]);
     }),
   );
   return toCsv(recordCsvHeader, rows);

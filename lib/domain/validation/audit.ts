@@ -8,6 +8,7 @@ export const auditKinds = {
   cards: ["card.", "subject."],
   assignments: ["assignment."],
   runs: ["run."],
+  tools: ["tool.", "kit."],
 } as const;
 export type AuditKind = keyof typeof auditKinds;
 

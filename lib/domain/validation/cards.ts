@@ -61,6 +61,8 @@ export const stepSchema = z.object({
   measurement: measurementSchema.nullable().optional().default(null),
   calculator: z.enum(calculatorSlugs).nullable().optional().default(null),
   inspectionPoint: z.boolean().default(false),
+  /** The reading is taken with a precision tool (torque wrench, micrometer): the cart asks which one, within calibration. */
+  calibratedTool: z.boolean().default(false),
   timerMinutes: z.number().finite().nullable().optional().default(null),
 });
 
@@ -129,6 +131,8 @@ export function cardProblems(card: CardContent): CardProblem[] {
       const missing = measurementProblems(step.measurement);
       if (missing.length) out.push({ field: `steps.${n}.measurement`, message: `Step ${n}: ${capital(missing.join("; "))}.` });
     }
+    if (step.calibratedTool && !step.measurement)
+      out.push({ field: `steps.${n}.calibratedTool`, message: `Step ${n}: a calibrated tool is asked for with a measured value; add what is measured.` });
     if (step.timerMinutes != null && (step.timerMinutes < 0.5 || step.timerMinutes > 600))
       out.push({ field: `steps.${n}.timerMinutes`, message: `Step ${n}: a timer runs from half a minute to 600 minutes.` });
   });

@@ -122,3 +122,31 @@ export function buyOffCallMail(input: {
     ),
   };
 }
+
+/** A tool-room loan not counted back in by its due time: to the student, and to their instructors. */
+export function toolsOverdueMail(input: {
+  to: string;
+  name: string;
+  studentName: string;
+  forStudent: boolean;
+  what: string;
+  dueAt: string;
+  tools: string[];
+  link: string;
+}): MailMessage {
+  const whose = input.forStudent ? "You have" : `${input.studentName} has`;
+  return {
+    to: input.to,
+    subject: input.forStudent ? `Bring back ${input.what} to the tool room` : `${input.studentName} has not brought back ${input.what}`,
+    ...withLink(
+      [
+        `Hello ${input.name},`,
+        `${whose} not brought ${input.what} back to the tool room. It was due at ${input.dueAt}.`,
+        `It holds: ${input.tools.join("; ")}.`,
+        "A tool left in an engine or a wing is foreign-object damage waiting to happen: check the work area, then count the tools back in at the desk.",
+      ],
+      { label: "Open the tool room", href: input.link },
+      [],
+    ),
+  };
+}

@@ -59,7 +59,7 @@ export async function embedCardFonts(doc: PDFDocument): Promise<{ regular: PDFFo
 const replacements: Record<string, string> = { "⌈": "", "⌉": "", "✓": "√", "✔": "√", "☐": "[ ]" };
 
 /** Every character the font has prints as itself; the rest is spelled out or shown as "?", never a crash. */
-function printable(text: string): string {
+export function printable(text: string): string {
   const { has } = cardFonts();
   let out = "";
   for (const ch of text.replace(/\t/g, "  ").replace(/\r\n?/g, "\n")) {

@@ -12,6 +12,7 @@ import { type RunEvent, type RunState } from "@/lib/domain/runs/fold";
 import { loadRun, stepsOnly, foldStored } from "@/lib/server/runs/queries";
 import { assertNotWithdrawn } from "@/lib/server/runs/assign";
 import { noticeBuyOffCall } from "@/lib/server/runs/buy-offs";
+import { checkReadingTools, handInHeld, holdsOnRun } from "@/lib/server/tools/lending";
 
 export const signedOffConflict = () =>
   new AppError("conflict", "This run is signed off. Its record cannot change; ask your instructor to assign the card again.");
@@ -70,13 +71,20 @@ export async function appendEvents({
       if (fresh.length && run.studentId !== actor.id) throw new AppError("forbidden", "Only the student doing this run records its work.");
       if (fresh.length && run.status === "signed_off") throw signedOffConflict();
       if (fresh.length) await assertNotWithdrawn(tx, run.assignmentId);
+      // A tool not counted back in at the tool room holds the hand-in until an instructor clears it.
+      if (fresh.some((e) => e.type === "run.submitted")) {
+        const holds = await holdsOnRun(tx, { id: runId, studentId: run.studentId });
+        if (holds.length) throw handInHeld(holds);
+      }
+      const steps = fresh.length ? await stepsOnly(tx, run.versionId) : null;
       if (fresh.length) {
         // One receipt time for the batch, read after the run's lock: the fold orders batches by it,
         // and the transaction's start time (the column default) can be earlier than a batch that
         // held the lock first.
         const serverTime = await receiptTime(tx, runId);
+        const checked = await checkReadingTools(tx, fresh, steps!.steps, serverTime);
         await tx.insert(runEvents).values(
-          fresh.map((e) => ({
+          checked.map((e) => ({
             id: e.id,
             runId,
             userId: actor.id,
@@ -89,7 +97,7 @@ export async function appendEvents({
         );
       }
       if (!fresh.length) return { result: { stored: 0, duplicates: events.length, status: run.status }, called: null };
-      const { events: all, state } = await foldStored(tx, runId, await stepsOnly(tx, run.versionId));
+      const { events: all, state } = await foldStored(tx, runId, steps!);
       await writeFold(tx, runId, state, all);
       // A new call for the instructor: this batch made the run wait at a step the student called for.
       const called = state.calledAt && (!run.calledAt || run.waitingStepId !== state.waitingAt) ? state.waitingAt : null;

@@ -24,6 +24,7 @@ import { packetBytes, packetFor } from "@/lib/server/runs/packet";
 import { reviewScope, reviewsRun } from "@/lib/server/runs/scope";
 import { workStatusOf } from "@/lib/domain/runs/work-status";
 import { dayIn } from "@/lib/domain/time";
+import { runTools } from "@/lib/server/tools/lending";
 import { schoolTimeZone } from "@/lib/server/settings";
 import { reviewEventTypes } from "@/lib/server/runs/events";
 
@@ -231,6 +232,7 @@ export async function getRunDetail({ actor, runId }: { actor: Actor; runId: stri
     signOff: await signOffOf(db, runId),
     packet: packet.pages.length ? { url: `/api/runs/${runId}/packet`, pages: packet.pages } : null,
     keepOnCarts: packet.keepOnCarts,
+    tools: await runTools(db, run, version.tools),
     state,
   };
 }

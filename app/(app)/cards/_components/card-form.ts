@@ -26,6 +26,7 @@ export interface StepField {
   measurement: { label: string; unit: string; mode: "range" | "tolerance"; min: string; max: string; nominal: string; tolerance: string };
   calculator: CalculatorSlug | "";
   inspectionPoint: boolean;
+  calibratedTool: boolean;
   timerMinutes: string;
 }
 
@@ -58,6 +59,7 @@ export function emptyStep(): StepField {
     measurement: { label: "", unit: "in", mode: "range", min: "", max: "", nominal: "", tolerance: "" },
     calculator: "",
     inspectionPoint: false,
+    calibratedTool: false,
     timerMinutes: "",
   };
 }
@@ -92,6 +94,7 @@ export function fromVersion(v: CardVersionDto): CardForm {
         },
         calculator: s.calculator ?? "",
         inspectionPoint: s.inspectionPoint,
+        calibratedTool: s.calibratedTool,
         timerMinutes: s.timerMinutes?.toString() ?? "",
       };
     }),
@@ -127,6 +130,7 @@ export function toContent(form: CardForm): CardContentInput {
       measurement: measurementOf(s),
       calculator: s.calculator || null,
       inspectionPoint: s.inspectionPoint,
+      calibratedTool: s.calibratedTool,
       timerMinutes: numberOrNull(s.timerMinutes),
     })),
   };
@@ -170,6 +174,7 @@ export function toPreview(form: CardForm, base: CardVersionDto, subjectName: str
           : null,
         calculator: s.calculator || null,
         inspectionPoint: s.inspectionPoint,
+        calibratedTool: s.calibratedTool,
         timerMinutes: numberOrNull(s.timerMinutes),
         underRecheck: base.steps.find((b) => b.id === s.uid)?.underRecheck ?? false,
       };

@@ -298,6 +298,17 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
           />
           Inspection point (instructor buy-off)
         </label>
+        {step.hasMeasurement ? (
+          <label className="flex min-h-11 items-center gap-3 self-end font-semibold">
+            <input
+              type="checkbox"
+              className="h-6 w-6"
+              checked={step.calibratedTool}
+              onChange={(e) => setValue(`steps.${index}.calibratedTool`, e.target.checked, { shouldDirty: true })}
+            />
+            Taken with a calibrated tool (the cart asks which one)
+          </label>
+        ) : null}
       </div>
     </fieldset>
   );
