@@ -677,7 +677,9 @@ export const toolCheckouts = pgTable(
   },
   (t) => [
     index("tool_checkouts_user_idx").on(t.userId, t.returnedAt),
-    index("tool_checkouts_open_idx").on(t.dueAt).where(sql`${t.returnedAt} is null`),
+    index("tool_checkouts_open_idx")
+      .on(t.dueAt)
+      .where(sql`${t.returnedAt} is null`),
     check("tool_checkouts_what", sql`(${t.kitId} is null) <> (${t.toolId} is null)`),
   ],
 );
@@ -707,7 +709,9 @@ export const toolHolds = pgTable(
     note: text("note").notNull().default(""),
   },
   (t) => [
-    index("tool_holds_open_idx").on(t.userId).where(sql`${t.clearedAt} is null`),
+    index("tool_holds_open_idx")
+      .on(t.userId)
+      .where(sql`${t.clearedAt} is null`),
     check("tool_holds_outcome", sql`${t.outcome} is null or ${t.outcome} in ('found', 'lost')`),
     check("tool_holds_cleared", sql`(${t.clearedAt} is null) = (${t.outcome} is null)`),
   ],

@@ -8,6 +8,7 @@ import { getQueue } from "@/lib/server/jobs";
 import { seedCards } from "./demo/seed-cards";
 import { seedRuns } from "./demo/seed-runs";
 import { seedLibrary } from "./demo/seed-library";
+import { seedTools } from "./demo/seed-tools";
 import { closeDb, getDb } from "./index";
 import { classes, classMembers, schoolSettings, users } from "./schema";
 
@@ -85,6 +86,8 @@ async function main() {
   console.log(cardsAdded ? `seeded ${cardsAdded} demo task cards` : "demo task cards already present");
   const assignmentsAdded = await seedRuns(db);
   console.log(assignmentsAdded ? `seeded ${assignmentsAdded} demo assignments and their runs` : "demo assignments already present");
+  const kitsAdded = await seedTools(db);
+  console.log(kitsAdded ? `seeded the demo tool room (${kitsAdded} kits)` : "demo tool room already present");
   await (await getQueue()).stop({ graceful: false, wait: true });
   await closeDb();
 }

@@ -5,12 +5,16 @@ import { can } from "@/lib/domain/access/permissions";
 import { listClassesOfUser } from "@/lib/server/classes";
 import { listMyWork, listReviewQueue } from "@/lib/server/runs/queries";
 import { countBuyOffCalls } from "@/lib/server/runs/buy-offs";
+import { ToolHolds } from "@/components/tool-holds";
+import { dateTimeIn } from "@/lib/domain/time";
+import { schoolTimeZone } from "@/lib/server/settings";
+import { listHolds } from "@/lib/server/tools/lending";
 
 const roleIntro: Record<Role, string> = {
   student: "The task cards your instructors assign are under My work; it also opens on the cart without a network.",
   instructor:
     "Runs waiting for your inspection and inspection points waiting for buy-off are under Review; assign cards from a card's page.",
-  librarian: "You keep the school's manuals current; the library opens here as it is built.",
+  librarian: "You keep the school's manuals current and run the tool room: lending, counting back in, calibrations.",
   admin: "You manage accounts, roles and classes, and can read the audit log.",
 };
 
@@ -22,6 +26,9 @@ export default async function HomePage() {
   const work = can(user, "runs:do") ? await listMyWork({ actor: user }) : null;
   const waiting = can(user, "runs:review") ? (await listReviewQueue({ actor: user })).length : null;
   const buyOffs = can(user, "runs:review") ? await countBuyOffCalls({ actor: user }) : null;
+  // Missing tools hold hand-ins: instructors clear them here, students see their own.
+  const holds = can(user, "tools:clear-holds") || can(user, "runs:do") ? await listHolds({ actor: user }) : [];
+  const zone = holds.length ? await schoolTimeZone() : "UTC";
   const open = work?.filter((w) => w.status !== "signed_off" && w.status !== "submitted") ?? [];
   return (
     <div className="flex flex-col gap-6">
@@ -73,6 +80,16 @@ export default async function HomePage() {
           <Link href="/review?tab=buy-offs" className="btn btn-primary text-lg">
             Buy-off queue
           </Link>
+        </section>
+      ) : null}
+      {holds.length ? (
+        <section aria-labelledby="tool-holds" className="panel flex flex-col gap-3">
+          <h2 id="tool-holds">{holds.length === 1 ? "A tool is missing" : `${holds.length} tools are missing`}</h2>
+          <ToolHolds
+            holds={holds}
+            canClear={can(user, "tools:clear-holds")}
+            openedAt={Object.fromEntries(holds.map((h) => [h.id, dateTimeIn(zone, h.openedAt)]))}
+          />
         </section>
       ) : null}
       {shortcuts.length ? (

@@ -36,6 +36,7 @@ interface DemoStep {
   measurement?: { label: string; unit: string; min?: number; max?: number; nominal?: number; tolerance?: number };
   calculator?: "rivets" | "bend" | "torque" | "penetrant" | "coil-shot" | "units";
   inspectionPoint?: boolean;
+  calibratedTool?: boolean;
   timerMinutes?: number;
 }
 interface DemoCard {
@@ -278,7 +279,8 @@ export const demoCards: DemoCard[] = [
     ataChapter: "32",
     applicability: ["HT-20"],
     estimatedMinutes: 120,
-    tools: ["Wing jacks and jack pads", "10x magnifying glass", "Torque wrench, 0-250 in-lb, calibrated"],
+    // Lines starting with a tool-room number are checked against what the student has out (seed-tools.ts).
+    tools: ["K-02 Landing gear kit (jack pads, 10x glass, cotter pin puller)", "Wing jacks", "TW-1 Torque wrench, 0-250 in-lb, calibrated"],
     consumables: ["New cotter pins"],
     protectiveEquipment: ["Safety glasses", "Safety shoes"],
     steps: [
@@ -309,6 +311,7 @@ export const demoCards: DemoCard[] = [
         ],
         refs: [{ manual: trainer, label: rev3, code: "32-10-00", part: "limits", quote: "Axle nut torque" }],
         measurement: { label: "Axle nut torque", unit: "in-lb", min: 150, max: 180 },
+        calibratedTool: true,
       },
     ],
   },
@@ -455,6 +458,7 @@ export async function seedCards(db: Db): Promise<number> {
       measurement: s.measurement ?? null,
       calculator: s.calculator ?? null,
       inspectionPoint: s.inspectionPoint ?? false,
+      calibratedTool: s.calibratedTool ?? false,
       timerMinutes: s.timerMinutes ?? null,
     }));
     const input: CardContentInput = {

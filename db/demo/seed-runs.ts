@@ -48,6 +48,15 @@ const demoAssignments: DemoAssignment[] = [
     note: "NDT room",
     progress: { "student@hangarleaf.test": "started" },
   },
+  {
+    // The tool room's demo lends the landing gear kit for this run and counts it in a tool short (seed-tools.ts).
+    card: "Main landing gear inspection on jacks",
+    by: "instructor@hangarleaf.test",
+    students: ["student2@hangarleaf.test"],
+    dueInDays: 5,
+    note: "Hangar 1, trainer HL-TR2",
+    progress: {},
+  },
 ];
 
 const day = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);

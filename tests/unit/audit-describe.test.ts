@@ -244,6 +244,61 @@ const cases: Record<string, { entry: ReturnType<typeof entry>; summary: string; 
     entry: entry("manual.restored", "manual", id(10), {}, "Avery Lund"),
     summary: "Avery Lund restored 'HT-20 Trainer Maintenance Manual' to the library",
   },
+  "tool.created": {
+    entry: entry("tool.created", "tool", id(40), { number: "TW-2" }, "Avery Lund"),
+    summary: "Avery Lund added the tool TW-2 to the tool room",
+  },
+  "tool.changed": {
+    entry: entry("tool.changed", "tool", id(40), { number: "TW-2" }, "Avery Lund"),
+    summary: "Avery Lund changed the details of the tool TW-2",
+  },
+  "tool.out_of_service": {
+    entry: entry("tool.out_of_service", "tool", id(40), { number: "TW-2", reason: "Dropped" }, "Avery Lund"),
+    summary: "Avery Lund took the tool TW-2 out of service",
+    details: [["Why", "Dropped"]],
+  },
+  "tool.in_service": {
+    entry: entry("tool.in_service", "tool", id(40), {}, "Avery Lund"),
+    summary: "Avery Lund put a tool back in service",
+  },
+  "tool.calibrated": {
+    entry: entry(
+      "tool.calibrated",
+      "tool",
+      id(40),
+      { number: "TW-1", calibratedOn: "2026-12-01", certificate: "C-9", nextDueOn: "2027-12-01" },
+      "Avery Lund",
+    ),
+    summary: "Avery Lund recorded a calibration of the tool TW-1",
+    details: [
+      ["Calibrated on", "2026-12-01"],
+      ["Certificate", "C-9"],
+      ["Next due", "2027-12-01"],
+    ],
+  },
+  "kit.created": {
+    entry: entry("kit.created", "kit", id(41), { number: "K-03" }, "Avery Lund"),
+    summary: "Avery Lund added the kit K-03 to the tool room",
+  },
+  "tool.checked_out": {
+    entry: entry("tool.checked_out", "checkout", id(42), { studentId: people.jordan, tools: ["T-201", "T-202"] }, "Avery Lund"),
+    summary: "Avery Lund lent tools to Jordan Pike",
+    details: [["Tools", "T-201, T-202"]],
+  },
+  "tool.checked_in": {
+    entry: entry("tool.checked_in", "checkout", id(42), { studentId: people.jordan, missing: [] }, "Avery Lund"),
+    summary: "Avery Lund counted back in every tool lent to Jordan Pike",
+  },
+  "tool.missing": {
+    entry: entry("tool.missing", "checkout", id(42), { studentId: people.jordan, missing: ["T-202"] }, "Avery Lund"),
+    summary: "Avery Lund counted in the tools lent to Jordan Pike: 1 tool missing",
+    details: [["Missing", "T-202"]],
+  },
+  "tool.hold_cleared": {
+    entry: entry("tool.hold_cleared", "tool_hold", id(43), { studentId: people.jordan, outcome: "lost", note: "Searched the hangar" }),
+    summary: "Elena Brandt cleared a missing-tool hold on Jordan Pike's work: the tool was lost",
+    details: [["Note", "Searched the hangar"]],
+  },
   "settings.updated": {
     entry: entry("settings.updated", "settings", null, { timeZone: "America/Chicago" }, "Morgan Vale"),
     summary: "Morgan Vale set the school's time zone to America/Chicago",

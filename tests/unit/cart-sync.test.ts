@@ -4,10 +4,20 @@
 import { describe, expect, it } from "vitest";
 import { backoffDelay, syncOnce, syncUntilDone, type Answer, type PendingEvent, type SyncPort } from "@/lib/client/cart/sync";
 
-function fakeCart(count: number, answer: (runId: string, ids: string[], call: number) => Answer | "lost") {
+function fakeCart(
+  count: number,
+  answer: (runId: string, ids: string[], call: number) => Answer | "lost",
+  types: Record<string, string> = {},
+) {
   let queue: PendingEvent[] = Array.from({ length: count }, (_, i) => ({
     runId: i % 2 ? "run-b" : "run-a",
-    event: { id: `e${i}`, type: "step.checked", stepId: null, payload: {}, clientTime: new Date(1_800_000_000_000 + i).toISOString() },
+    event: {
+      id: `e${i}`,
+      type: types[`e${i}`] ?? "step.checked",
+      stepId: null,
+      payload: {},
+      clientTime: new Date(1_800_000_000_000 + i).toISOString(),
+    },
   }));
   const stored = new Set<string>();
   const refused: string[] = [];
@@ -83,6 +93,22 @@ describe("a bad event in a batch", () => {
     const cart = fakeCart(8, (_runId, ids) => (ids.includes("e4") ? { status: 422, message: "bad event" } : { status: 200 }));
     expect(await syncOnce(cart.port, { size: 8 })).toEqual({ sent: 7, refused: 1, stop: null });
     expect(cart.refused).toEqual(["e4"]);
+    expect(cart.stored.size).toBe(7);
+  });
+});
+
+describe("a hand-in held by a missing tool", () => {
+  it("is set aside alone; the work sent with it is stored", async () => {
+    // e6 is run-a's hand-in: the server answers 409 for any batch holding it (a missing-tool hold).
+    const cart = fakeCart(
+      8,
+      (_runId, ids) => (ids.includes("e6") ? { status: 409, message: "T-202 was not counted back in" } : { status: 200 }),
+      {
+        e6: "run.submitted",
+      },
+    );
+    expect(await syncOnce(cart.port, { size: 8 })).toEqual({ sent: 7, refused: 1, stop: null });
+    expect(cart.refused).toEqual(["e6"]);
     expect(cart.stored.size).toBe(7);
   });
 });

@@ -29,7 +29,7 @@ describe("measured values of a run", () => {
     const state = foldRun(
       [
         event(1, "value.recorded", ids[0]!, { value: "0.05 in" }),
-        event(2, "value.recorded", ids[0]!, { value: "1.02 mm" }),
+        event(2, "value.recorded", ids[0]!, { value: "1.02 mm", toolId: "t-101-id", toolNumber: "T-101" }),
         event(3, "value.recorded", ids[2]!, { value: "0.6" }),
       ],
       forFold,
@@ -45,6 +45,7 @@ describe("measured values of a run", () => {
         limit: { unit: "in", nominal: 0.04, tolerance: 0.002, min: null, max: null, text: "0.04 ± 0.002 in" },
         value: "1.02 mm",
         recordedAt: "2026-12-02T08:02:00.000Z",
+        toolNumber: "T-101",
         verdict: "within_limits",
       },
       expect.objectContaining({
@@ -55,6 +56,8 @@ describe("measured values of a run", () => {
       }),
     ]);
     expect(measuredValueLine(measured[1]!)).toBe("Step 3, Edge distance: 0.6 (limits 0.25 to 0.5 in), OUT OF LIMITS");
+    // Traceability: which micrometer measured it.
+    expect(measuredValueLine(measured[0]!)).toBe("Step 1, Thickest sheet: 1.02 mm (limits 0.04 ± 0.002 in), within limits, with T-101");
   });
 
   it("says when nothing was recorded or the reading was not understood", () => {
@@ -85,7 +88,10 @@ const record: StudentRecordDto = {
             { revisionId: "r1", manualTitle: "Sheet-Metal Practices", label: "Rev 1", pages: [2, 5] },
             { revisionId: "r2", manualTitle: "Shop Handbook", label: "Rev B", pages: [7] },
           ],
-          measured: measuredValues(steps, foldRun([event(1, "value.recorded", ids[0]!, { value: "0.041 in" })], forFold, new Set()).steps),
+          measured: measuredValues(
+            steps,
+            foldRun([event(1, "value.recorded", ids[0]!, { value: "0.041 in", toolNumber: "T-101" })], forFold, new Set()).steps,
+          ),
         },
         {
           runId: "30000000-0000-4000-8000-000000000002",
@@ -111,14 +117,14 @@ describe("the record's CSV", () => {
     const lines = studentRecordCsv(record).split("\r\n");
     expect(lines[0]).toBe(recordCsvHeader.join(","));
     expect(lines[0]).toBe(
-      "Student,Subject,Task card,Version,Revisions cited,Signed off (UTC),Instructor,Estimated hours,Actual hours,Step,Measured,Value,Limit,Verdict",
+      "Student,Subject,Task card,Version,Revisions cited,Signed off (UTC),Instructor,Estimated hours,Actual hours,Step,Measured,Value,Limit,Verdict,Tool",
     );
     const card =
       'Riley Amsel,Sheet metal structures,Riveted splice patch,2,"Sheet-Metal Practices Rev 1, pages 2, 5; Shop Handbook Rev B, page 7",2026-12-03 14:05,Elena Brandt,4.0,1.6';
-    expect(lines[1]).toBe(`${card},1,Thickest sheet,0.041 in,0.04 ± 0.002 in,within limits`);
-    expect(lines[2]).toBe(`${card},3,Edge distance,,0.25 to 0.5 in,no reading recorded`);
+    expect(lines[1]).toBe(`${card},1,Thickest sheet,0.041 in,0.04 ± 0.002 in,within limits,T-101`);
+    expect(lines[2]).toBe(`${card},3,Edge distance,,0.25 to 0.5 in,no reading recorded,`);
     // A card that measures nothing has one line; a title typed as a formula stays text.
-    expect(lines[3]).toBe(`Riley Amsel,Sheet metal structures,'=cmd|' /C calc'!A0,1,,2026-12-04 09:00,Elena Brandt,,0.5,,,,,`);
+    expect(lines[3]).toBe(`Riley Amsel,Sheet metal structures,'=cmd|' /C calc'!A0,1,,2026-12-04 09:00,Elena Brandt,,0.5,,,,,,`);
     expect(lines[4]).toBe("");
     expect(lines).toHaveLength(5);
   });

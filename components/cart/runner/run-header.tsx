@@ -48,9 +48,9 @@ export function RunHeader({ detail, status, returned }: { detail: RunDetailDto; 
       ) : null}
 
       <div className="grid gap-3 sm:grid-cols-3">
+        <RunTools detail={detail} />
         {[
           ["Protective equipment", version.protectiveEquipment],
-          ["Tools", version.tools],
           ["Consumables", version.consumables],
         ].map(([title, items]) =>
           (items as string[]).length ? (
@@ -66,5 +66,48 @@ export function RunHeader({ detail, status, returned }: { detail: RunDetailDto; 
         )}
       </div>
     </>
+  );
+}
+
+const lineWords = { have: "you have it out", missing: "not checked out to you", free_text: "" } as const;
+
+/**
+ * The card's tools, each line naming a tool-room number checked against what the student has out
+ * ("have" / "missing"), so a missing wrench is fetched before the work starts, not half way.
+ */
+function RunTools({ detail }: { detail: RunDetailDto }) {
+  const lines = detail.tools?.lines ?? detail.version.tools.map((text) => ({ text, number: null, status: "free_text" as const }));
+  const out = detail.tools?.checkedOut ?? [];
+  if (!lines.length && !out.length) return null;
+  return (
+    <section aria-label="Tools" className="panel">
+      <h2 className="text-lg font-bold">Tools</h2>
+      <ul className="flex flex-col gap-1">
+        {lines.map((line) => (
+          <li key={line.text} className="flex gap-2">
+            <span
+              aria-hidden
+              className={`font-bold ${line.status === "have" ? "text-ok" : line.status === "missing" ? "text-danger" : ""}`}
+            >
+              {line.status === "have" ? "✓" : line.status === "missing" ? "✗" : "•"}
+            </span>
+            <span>
+              {line.text}
+              {line.status !== "free_text" ? (
+                <span className={line.status === "missing" ? " font-semibold text-danger" : " text-ink-soft"}>
+                  {" "}
+                  ({lineWords[line.status]})
+                </span>
+              ) : null}
+            </span>
+          </li>
+        ))}
+      </ul>
+      {out.length ? (
+        <p className="hint mt-2">Checked out to you: {out.map((t) => t.number).join(", ")}.</p>
+      ) : detail.tools ? (
+        <p className="hint mt-2">Nothing is checked out to you at the tool room.</p>
+      ) : null}
+    </section>
   );
 }

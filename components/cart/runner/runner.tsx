@@ -71,6 +71,7 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
               onAct={act}
               data={data}
               runId={runId}
+              tools={detail.tools?.checkedOut ?? []}
             />
           );
         })}
@@ -78,7 +79,14 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
 
       {mode === "one" && steps.length > 1 ? <StepPager index={index} total={steps.length} onIndex={setIndex} /> : null}
 
-      {!locked ? <HandIn waitingIndex={waitingIndex} allDone={allDone} onHandIn={() => void act("run.submitted")} /> : null}
+      {!locked ? (
+        <HandIn
+          waitingIndex={waitingIndex}
+          allDone={allDone}
+          holds={detail.tools?.holds ?? []}
+          onHandIn={() => void act("run.submitted")}
+        />
+      ) : null}
       {!online ? <p className="hint">Offline: everything you do is kept on this laptop and sent when the network is back.</p> : null}
       <SyncNow data={data} online={online} />
     </article>

@@ -11,6 +11,8 @@ import { initialsOf } from "@/lib/domain/names";
 import { clockIn, dateTimeIn } from "@/lib/domain/time";
 import { cannotMarkDone } from "@/lib/domain/runs/fold";
 import { sortNotices } from "@/lib/domain/validation/cards";
+import type { RunToolsDto } from "@/lib/contracts/tools";
+import { dayIn } from "@/lib/domain/time";
 import { StepNotes } from "./step-notes";
 import { StepPhoto } from "./step-photo";
 import { StepReading } from "./step-reading";
@@ -36,6 +38,7 @@ export function StepPanel({
   onAct,
   data,
   runId,
+  tools,
 }: {
   number: number;
   total: number;
@@ -54,6 +57,7 @@ export function StepPanel({
   onAct: Act;
   data: CartData;
   runId: string;
+  tools: RunToolsDto["checkedOut"];
 }) {
   const disabled = locked || blocked !== null;
   // A bought-off step stays as the instructor saw it (the fold ignores changes); notes still go.
@@ -133,6 +137,9 @@ export function StepPanel({
           value={reading}
           setValue={setReading}
           onAct={onAct}
+          calibratedTool={!!step.calibratedTool}
+          tools={tools}
+          today={dayIn(timeZone)}
         />
       ) : null}
 

@@ -81,6 +81,18 @@ export async function syncOnce(port: SyncPort, { size = batchSize }: { size?: nu
       const first = await send(runId, batch.slice(0, half));
       return first === "done" ? send(runId, batch.slice(half)) : first;
     }
+    // A hand-in refused (a missing-tool hold, 409) must not take the work sent with it along:
+    // the work goes again on its own, the hand-in alone is set aside with the reason.
+    if (answer.status === 409 && batch.length > 1 && batch.some((e) => e.type === "run.submitted")) {
+      const work = batch.filter((e) => e.type !== "run.submitted");
+      const first = work.length ? await send(runId, work) : "done";
+      return first === "done"
+        ? send(
+            runId,
+            batch.filter((e) => e.type === "run.submitted"),
+          )
+        : first;
+    }
     if (answer.status >= 400) {
       // 409 after sign-off, 404 for a run this account cannot see, 422 for an event the server
       // will never take: re-sending would block the queue forever, so they are set aside.

@@ -46,6 +46,11 @@ const pair = (v: unknown): [string, string] | null =>
   Array.isArray(v) && v.length === 2 && v.every((x) => typeof x === "string") ? [v[0] as string, v[1] as string] : null;
 
 const quoted = (title: string) => `'${title}'`;
+/** "the tool TW-2", "the kit K-03", or "a tool" when the entry has no number. */
+const toolWords = (e: { details: Record<string, unknown> }, kind: "tool" | "kit") => {
+  const n = str(e.details.number);
+  return n ? `the ${kind} ${n}` : `a ${kind}`;
+};
 const capitalised = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
 const possessive = (name: string) => `${name}'s`;
 const roleWord = (role: unknown) => (typeof role === "string" && role in roleLabels ? roleLabels[role as Role].toLowerCase() : null);
@@ -339,22 +344,22 @@ const wordings: Record<string, Wording> = {
     };
   },
 
-  "tool.created": (e, c) => ({ summary: `${c.actor} added the tool ${str(e.details.number) ?? ""} to the tool room`.replace("  ", " "), details: [] }),
-  "tool.changed": (e, c) => ({ summary: `${c.actor} changed the details of the tool ${str(e.details.number) ?? ""}`.trim(), details: [] }),
+  "tool.created": (e, c) => ({ summary: `${c.actor} added ${toolWords(e, "tool")} to the tool room`, details: [] }),
+  "tool.changed": (e, c) => ({ summary: `${c.actor} changed the details of ${toolWords(e, "tool")}`, details: [] }),
   "tool.out_of_service": (e, c) => ({
-    summary: `${c.actor} took the tool ${str(e.details.number) ?? ""} out of service`.replace("  ", " "),
+    summary: `${c.actor} took ${toolWords(e, "tool")} out of service`,
     details: d("Why", str(e.details.reason)),
   }),
-  "tool.in_service": (e, c) => ({ summary: `${c.actor} put the tool ${str(e.details.number) ?? ""} back in service`.replace("  ", " "), details: [] }),
+  "tool.in_service": (e, c) => ({ summary: `${c.actor} put ${toolWords(e, "tool")} back in service`, details: [] }),
   "tool.calibrated": (e, c) => ({
-    summary: `${c.actor} recorded a calibration of the tool ${str(e.details.number) ?? ""}`.replace("  ", " "),
+    summary: `${c.actor} recorded a calibration of ${toolWords(e, "tool")}`,
     details: [
       ...d("Calibrated on", str(e.details.calibratedOn)),
       ...d("Certificate", str(e.details.certificate)),
       ...d("Next due", str(e.details.nextDueOn)),
     ],
   }),
-  "kit.created": (e, c) => ({ summary: `${c.actor} added the kit ${str(e.details.number) ?? ""} to the tool room`.replace("  ", " "), details: [] }),
+  "kit.created": (e, c) => ({ summary: `${c.actor} added ${toolWords(e, "kit")} to the tool room`, details: [] }),
   "tool.checked_out": (e, c) => {
     const student = c.names.people[str(e.details.studentId) ?? ""] ?? "a student";
     return { summary: `${c.actor} lent tools to ${student}`, details: d("Tools", strings(e.details.tools).join(", ")) };

@@ -58,7 +58,15 @@ export function studentRecordCsv(record: StudentRecordDto): string {
         recordHours(c.actualMinutes),
       ];
       if (!c.measured.length) return [[...card, "", "", "", "", "", ""]];
-      return c.measured.map((m) => [...card, m.stepNumber, m.label, m.value ?? "", m.limit.text, verdictWords[m.verdict], m.toolNumber ?? ""]);
+      return c.measured.map((m) => [
+        ...card,
+        m.stepNumber,
+        m.label,
+        m.value ?? "",
+        m.limit.text,
+        verdictWords[m.verdict],
+        m.toolNumber ?? "",
+      ]);
     }),
   );
   return toCsv(recordCsvHeader, rows);

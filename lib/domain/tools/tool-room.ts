@@ -126,3 +126,19 @@ export function isOverdue(checkout: { dueAt: string | Date; returnedAt: string |
 
 /** How long a check-out lasts when the desk does not say: a school day (common practice; our bound, as for offline work). */
 export const defaultLoanHours = offlineHours;
+
+/** A precision tool's calibration in the tool room's words. */
+export function calibrationWords(state: CalibrationState, dueOn: string | null): string {
+  switch (state) {
+    case "not_calibrated":
+      return "—";
+    case "no_date":
+      return "No calibration on record: not usable for readings";
+    case "past":
+      return `PAST DUE since ${dueOn}: not usable for readings`;
+    case "due_soon":
+      return `Due ${dueOn} (within ${calibrationSoonDays} days)`;
+    case "in":
+      return `Due ${dueOn}`;
+  }
+}

@@ -132,7 +132,10 @@ export function cardProblems(card: CardContent): CardProblem[] {
       if (missing.length) out.push({ field: `steps.${n}.measurement`, message: `Step ${n}: ${capital(missing.join("; "))}.` });
     }
     if (step.calibratedTool && !step.measurement)
-      out.push({ field: `steps.${n}.calibratedTool`, message: `Step ${n}: a calibrated tool is asked for with a measured value; add what is measured.` });
+      out.push({
+        field: `steps.${n}.calibratedTool`,
+        message: `Step ${n}: a calibrated tool is asked for with a measured value; add what is measured.`,
+      });
     if (step.timerMinutes != null && (step.timerMinutes < 0.5 || step.timerMinutes > 600))
       out.push({ field: `steps.${n}.timerMinutes`, message: `Step ${n}: a timer runs from half a minute to 600 minutes.` });
   });

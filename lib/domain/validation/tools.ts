@@ -11,7 +11,10 @@ const numberField = (what: string) =>
     .transform((v, ctx) => {
       const code = readCode(v);
       if (!code) {
-        ctx.addIssue({ code: "custom", message: `A ${what} number is letters, a dash and digits, such as ${what === "kit" ? "K-03" : "T-104"}.` });
+        ctx.addIssue({
+          code: "custom",
+          message: `A ${what} number is letters, a dash and digits, such as ${what === "kit" ? "K-03" : "T-104"}.`,
+        });
         return z.NEVER;
       }
       return code;

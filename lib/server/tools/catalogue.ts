@@ -20,7 +20,13 @@ type Out = { checkoutId: string; userName: string; dueAt: string } | null;
 /** Open check-outs by the tools and kits they hold. */
 async function openLoans(db: Db | Tx) {
   const rows = await db
-    .select({ id: toolCheckouts.id, kitId: toolCheckouts.kitId, toolIds: toolCheckouts.toolIds, dueAt: toolCheckouts.dueAt, userName: users.name })
+    .select({
+      id: toolCheckouts.id,
+      kitId: toolCheckouts.kitId,
+      toolIds: toolCheckouts.toolIds,
+      dueAt: toolCheckouts.dueAt,
+      userName: users.name,
+    })
     .from(toolCheckouts)
     .innerJoin(users, eq(users.id, toolCheckouts.userId))
     .where(isNull(toolCheckouts.returnedAt));
@@ -53,7 +59,10 @@ export async function listTools({ dueWithin }: { dueWithin?: number } = {}): Pro
     .where(
       dueWithin === undefined
         ? undefined
-        : and(eq(tools.calibrated, true), sql`coalesce(${tools.calibrationDueOn}, '-infinity'::date) <= ${addDays(today, dueWithin)}::date`),
+        : and(
+            eq(tools.calibrated, true),
+            sql`coalesce(${tools.calibrationDueOn}, '-infinity'::date) <= ${addDays(today, dueWithin)}::date`,
+          ),
     )
     .orderBy(dueWithin === undefined ? asc(tools.number) : asc(tools.calibrationDueOn))
     .limit(5000);
@@ -118,7 +127,9 @@ export async function listKits(): Promise<KitDto[]> {
     number: k.number,
     name: k.name,
     location: k.location,
-    tools: contents.filter((t) => t.kitId === k.id).map((t) => ({ id: t.id, number: t.number, description: t.description, status: t.status as ToolStatus })),
+    tools: contents
+      .filter((t) => t.kitId === k.id)
+      .map((t) => ({ id: t.id, number: t.number, description: t.description, status: t.status as ToolStatus })),
     out: loans.byKit.get(k.id) ?? null,
   }));
 }
@@ -139,7 +150,13 @@ export async function createTool({ actor, input }: { actor: Actor; input: z.outp
           calibrationDueOn: input.calibrationDueOn,
         })
         .returning({ id: tools.id });
-      await recordAudit(tx, { actorId: actor.id, action: "tool.created", subjectType: "tool", subjectId: row!.id, details: { number: input.number } });
+      await recordAudit(tx, {
+        actorId: actor.id,
+        action: "tool.created",
+        subjectType: "tool",
+        subjectId: row!.id,
+        details: { number: input.number },
+      });
       return row!;
     });
   } catch (error) {
@@ -180,7 +197,13 @@ export async function createKit({ actor, input }: { actor: Actor; input: z.outpu
   try {
     return await getDb().transaction(async (tx) => {
       const [row] = await tx.insert(toolKits).values(input).returning({ id: toolKits.id });
-      await recordAudit(tx, { actorId: actor.id, action: "kit.created", subjectType: "kit", subjectId: row!.id, details: { number: input.number } });
+      await recordAudit(tx, {
+        actorId: actor.id,
+        action: "kit.created",
+        subjectType: "kit",
+        subjectId: row!.id,
+        details: { number: input.number },
+      });
       return row!;
     });
   } catch (error) {
@@ -198,10 +221,20 @@ export async function getKitOrThrow(db: Db | Tx, id: string) {
  * Records a calibration from its certificate. The next due date is the certificate's, or the day
  * of calibration plus the tool's interval; the tool takes it when this is its newest calibration.
  */
-export async function recordCalibration({ actor, toolId, input }: { actor: Actor; toolId: string; input: z.output<typeof calibrationSchema> }) {
+export async function recordCalibration({
+  actor,
+  toolId,
+  input,
+}: {
+  actor: Actor;
+  toolId: string;
+  input: z.output<typeof calibrationSchema>;
+}) {
   const today = dayIn(await schoolTimeZone());
   if (input.calibratedOn > today)
-    throw new AppError("invalid", "A calibration is recorded once it is done.", { fields: { calibratedOn: "The day it was calibrated is not in the future." } });
+    throw new AppError("invalid", "A calibration is recorded once it is done.", {
+      fields: { calibratedOn: "The day it was calibrated is not in the future." },
+    });
   return getDb().transaction(async (tx) => {
     const [tool] = await tx.select().from(tools).where(eq(tools.id, toolId)).for("update");
     if (!tool) throw toolNotFound();
@@ -213,7 +246,14 @@ export async function recordCalibration({ actor, toolId, input }: { actor: Actor
       });
     const [row] = await tx
       .insert(toolCalibrations)
-      .values({ toolId, calibratedOn: input.calibratedOn, calibratedBy: input.calibratedBy, certificate: input.certificate, nextDueOn, recordedBy: actor.id })
+      .values({
+        toolId,
+        calibratedOn: input.calibratedOn,
+        calibratedBy: input.calibratedBy,
+        certificate: input.certificate,
+        nextDueOn,
+        recordedBy: actor.id,
+      })
       .returning({ id: toolCalibrations.id });
     const [newest] = await tx
       .select({ nextDueOn: toolCalibrations.nextDueOn })

@@ -46,7 +46,14 @@ export async function toolLabelsPdf({ kitId }: { kitId?: string } = {}): Promise
     const page = slot === 0 ? doc.addPage([pageSize.width, pageSize.height]) : doc.getPage(doc.getPageCount() - 1);
     const x = margin.x + (slot % columns) * cell.width;
     const top = pageSize.height - margin.y - Math.floor(slot / columns) * cell.height;
-    page.drawRectangle({ x: x + 2, y: top - cell.height + 2, width: cell.width - 4, height: cell.height - 4, borderColor: rgb(0.7, 0.7, 0.7), borderWidth: 0.5 });
+    page.drawRectangle({
+      x: x + 2,
+      y: top - cell.height + 2,
+      width: cell.width - 4,
+      height: cell.height - 4,
+      borderColor: rgb(0.7, 0.7, 0.7),
+      borderWidth: 0.5,
+    });
     // Error correction M: a label scuffed in a toolbox still reads.
     const qr = QRCode.create(label.number, { errorCorrectionLevel: "M" });
     const side = cell.height - 22;
@@ -55,7 +62,8 @@ export async function toolLabelsPdf({ kitId }: { kitId?: string } = {}): Promise
     const qy = top - 11 - 4 * module;
     for (let r = 0; r < qr.modules.size; r++)
       for (let c = 0; c < qr.modules.size; c++)
-        if (qr.modules.get(r, c)) page.drawRectangle({ x: qx + c * module, y: qy - (r + 1) * module, width: module, height: module, color: black });
+        if (qr.modules.get(r, c))
+          page.drawRectangle({ x: qx + c * module, y: qy - (r + 1) * module, width: module, height: module, color: black });
     const tx = x + 8 + side + 4;
     const width = cell.width - (tx - x) - 8;
     const fit = (text: string, size: number, font = regular) => {

@@ -12,7 +12,15 @@ import type { CheckoutDto, RunToolsDto, ToolHoldDto } from "@/lib/contracts/tool
 import { can, type Actor } from "@/lib/domain/access/permissions";
 import { AppError } from "@/lib/domain/errors";
 import { dateTimeIn } from "@/lib/domain/time";
-import { defaultLoanHours, isOverdue, readingDay, toolLineStatuses, toolRefusal, type HoldOutcome, type ToolStatus } from "@/lib/domain/tools/tool-room";
+import {
+  defaultLoanHours,
+  isOverdue,
+  readingDay,
+  toolLineStatuses,
+  toolRefusal,
+  type HoldOutcome,
+  type ToolStatus,
+} from "@/lib/domain/tools/tool-room";
 import type { checkoutSchema, clearHoldSchema } from "@/lib/domain/validation/tools";
 import type { z } from "zod";
 import { recordAudit } from "@/lib/server/audit";
@@ -30,7 +38,12 @@ const holdNotFound = () => new AppError("not_found", "That hold was not found.")
 
 /** Open check-outs holding any of these tools or this kit: what stands in the way of lending them again. */
 async function openLoansOf(tx: Tx, toolIds: string[], kitId: string | null) {
-  const held = toolIds.length ? sql`${toolCheckouts.toolIds} ?| array[${sql.join(toolIds.map((id) => sql`${id}`), sql`, `)}]::text[]` : sql`false`;
+  const held = toolIds.length
+    ? sql`${toolCheckouts.toolIds} ?| array[${sql.join(
+        toolIds.map((id) => sql`${id}`),
+        sql`, `,
+      )}]::text[]`
+    : sql`false`;
   return tx
     .select({ id: toolCheckouts.id, toolIds: toolCheckouts.toolIds, userName: users.name, kitId: toolCheckouts.kitId })
     .from(toolCheckouts)
@@ -50,14 +63,20 @@ export async function createCheckout({ actor, input }: { actor: Actor; input: z.
         .innerJoin(assignments, eq(assignments.id, runs.assignmentId))
         .where(eq(runs.id, input.runId));
       if (!run || run.studentId !== student.id)
-        throw new AppError("invalid", "That run is not this student's.", { fields: { runId: "Choose one of the student's runs, or none." } });
+        throw new AppError("invalid", "That run is not this student's.", {
+          fields: { runId: "Choose one of the student's runs, or none." },
+        });
       if (run.status === "signed_off" || run.withdrawnAt)
-        throw new AppError("invalid", "That run is closed: lend for the day instead.", { fields: { runId: "Choose an open run, or none." } });
+        throw new AppError("invalid", "That run is closed: lend for the day instead.", {
+          fields: { runId: "Choose an open run, or none." },
+        });
     }
     const now = Date.now();
     const dueAt = input.dueAt ? new Date(input.dueAt) : new Date(now + defaultLoanHours * 3_600_000);
     if (dueAt.getTime() <= now || dueAt.getTime() > now + maxLoanDays * 86_400_000)
-      throw new AppError("invalid", `A loan is due back after now and within ${maxLoanDays} days.`, { fields: { dueAt: "Give a due time from now to 30 days ahead." } });
+      throw new AppError("invalid", `A loan is due back after now and within ${maxLoanDays} days.`, {
+        fields: { dueAt: "Give a due time from now to 30 days ahead." },
+      });
 
     let lent: { id: string; number: string }[];
     let kitId: string | null = null;
@@ -75,7 +94,10 @@ export async function createCheckout({ actor, input }: { actor: Actor; input: z.
       if (tool.kitId) await tx.select({ id: toolKits.id }).from(toolKits).where(eq(toolKits.id, tool.kitId)).for("update");
       await tx.select({ id: tools.id }).from(tools).where(eq(tools.id, tool.id)).for("update");
       if (tool.status === "out_of_service")
-        throw new AppError("conflict", `${tool.description} ${tool.number} is out of service${tool.outOfServiceReason ? ` (${tool.outOfServiceReason})` : ""}: it cannot be lent.`);
+        throw new AppError(
+          "conflict",
+          `${tool.description} ${tool.number} is out of service${tool.outOfServiceReason ? ` (${tool.outOfServiceReason})` : ""}: it cannot be lent.`,
+        );
       lent = [tool];
     }
     const busy = await openLoansOf(
@@ -171,7 +193,13 @@ export async function getCheckout(id: string, db: Db | Tx = getDb()): Promise<Ch
 }
 
 /** The tool room sees every loan; anyone else their own. */
-export async function listCheckouts({ actor, status = "open" }: { actor: Actor; status?: "open" | "overdue" | "all" }): Promise<CheckoutDto[]> {
+export async function listCheckouts({
+  actor,
+  status = "open",
+}: {
+  actor: Actor;
+  status?: "open" | "overdue" | "all";
+}): Promise<CheckoutDto[]> {
   return checkoutRows(
     getDb(),
     and(
@@ -200,7 +228,9 @@ export async function returnCheckout({
     const missing = [...new Set(missingToolIds)];
     const strangers = missing.filter((t) => !checkout.toolIds.includes(t));
     if (strangers.length)
-      throw new AppError("invalid", "A tool named missing was not lent on this check-out.", { fields: { missingToolIds: "Name only tools of this loan." } });
+      throw new AppError("invalid", "A tool named missing was not lent on this check-out.", {
+        fields: { missingToolIds: "Name only tools of this loan." },
+      });
     await tx.update(toolCheckouts).set({ returnedAt: new Date(), returnedBy: actor.id }).where(eq(toolCheckouts.id, id));
     const opened = missing.length
       ? await tx
@@ -283,12 +313,23 @@ export async function listHolds({ actor, open = true }: { actor: Actor; open?: b
  * An instructor of the student says what became of a missing tool. A lost tool is taken out of
  * service with the note, so it is never lent or used for a reading again until it is found.
  */
-export async function clearHold({ actor, id, input }: { actor: Actor; id: string; input: z.output<typeof clearHoldSchema> }): Promise<ToolHoldDto> {
+export async function clearHold({
+  actor,
+  id,
+  input,
+}: {
+  actor: Actor;
+  id: string;
+  input: z.output<typeof clearHoldSchema>;
+}): Promise<ToolHoldDto> {
   await getDb().transaction(async (tx) => {
     const [hold] = await tx.select().from(toolHolds).where(eq(toolHolds.id, id)).for("update");
     if (!hold || hold.userId === actor.id || !(await readsRecordOf(tx, actor, hold.userId))) throw holdNotFound();
     if (hold.clearedAt) throw new AppError("conflict", "This hold was already cleared.");
-    await tx.update(toolHolds).set({ clearedAt: new Date(), clearedBy: actor.id, outcome: input.outcome, note: input.note }).where(eq(toolHolds.id, id));
+    await tx
+      .update(toolHolds)
+      .set({ clearedAt: new Date(), clearedBy: actor.id, outcome: input.outcome, note: input.note })
+      .where(eq(toolHolds.id, id));
     if (input.outcome === "lost")
       await tx
         .update(tools)
@@ -367,12 +408,9 @@ export async function runTools(db: Db | Tx, run: { id: string; studentId: string
  * inside what the server saw). The stored payload gets the tool's number from the tool room, not
  * from the cart.
  */
-export async function checkReadingTools<E extends { type: string; stepId: string | null; clientTime: string; payload: Record<string, unknown> }>(
-  db: Db | Tx,
-  events: E[],
-  steps: readonly { id: string; calibratedTool?: boolean }[],
-  receivedAt: Date,
-): Promise<E[]> {
+export async function checkReadingTools<
+  E extends { type: string; stepId: string | null; clientTime: string; payload: Record<string, unknown> },
+>(db: Db | Tx, events: E[], steps: readonly { id: string; calibratedTool?: boolean }[], receivedAt: Date): Promise<E[]> {
   const readings = events.filter((e) => e.type === "value.recorded");
   if (!readings.length) return events;
   const needs = new Map(steps.map((s, i) => [s.id, { number: i + 1, calibrated: !!s.calibratedTool }]));
@@ -403,7 +441,13 @@ export async function checkReadingTools<E extends { type: string; stepId: string
     const tool = typeof toolId === "string" ? byId.get(toolId.toLowerCase()) : undefined;
     if (!tool) throw new AppError("invalid", "The tool named with this reading is not in the tool room.");
     const why = toolRefusal(
-      { number: tool.number, description: tool.description, calibrated: tool.calibrated, calibrationDueOn: tool.calibrationDueOn, status: tool.status as ToolStatus },
+      {
+        number: tool.number,
+        description: tool.description,
+        calibrated: tool.calibrated,
+        calibrationDueOn: tool.calibrationDueOn,
+        status: tool.status as ToolStatus,
+      },
       readingDay(zone, e.clientTime, receivedAt),
     );
     if (why) throw new AppError("invalid", why);
@@ -434,12 +478,39 @@ export async function mailOverdueLoans(): Promise<number> {
         sql`select u.email, u.name from users u where u.status = 'active' and u.role = 'instructor'
             and u.id in (select me.user_id from class_members me join class_members s on s.class_id = me.class_id where s.user_id = ${loan.userId})`,
       );
-      const what = loan.kit ? `kit ${loan.kit.number} (${loan.kit.name})` : `${loan.tool?.description ?? "a tool"} ${loan.tool?.number ?? ""}`.trim();
-      const common = { studentName: loan.userName, what, dueAt: dateTimeIn(zone, loan.dueAt), tools: loan.tools.map((t) => `${t.number} ${t.description}`), link };
+      const what = loan.kit
+        ? `kit ${loan.kit.number} (${loan.kit.name})`
+        : `${loan.tool?.description ?? "a tool"} ${loan.tool?.number ?? ""}`.trim();
+      const common = {
+        studentName: loan.userName,
+        what,
+        dueAt: dateTimeIn(zone, loan.dueAt),
+        tools: loan.tools.map((t) => `${t.number} ${t.description}`),
+        link,
+      };
       if (student) await queueMail(toolsOverdueMail({ ...common, to: student.email, name: student.name, forStudent: true }));
       for (const to of instructors.rows) await queueMail(toolsOverdueMail({ ...common, to: to.email, name: to.name, forStudent: false }));
       await tx.update(toolCheckouts).set({ overdueMailedAt: new Date() }).where(eq(toolCheckouts.id, id));
     }
     return due.length;
   });
+}
+
+/** Who the desk can lend to: active students, each with their open runs (a loan may be for one of them). */
+export async function lendingChoices(): Promise<{ id: string; name: string; runs: { id: string; title: string }[] }[]> {
+  const db = getDb();
+  const students = await db
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(and(eq(users.role, "student"), eq(users.status, "active")))
+    .orderBy(asc(users.name))
+    .limit(2000);
+  const open = await db
+    .select({ id: runs.id, studentId: runs.studentId, title: taskCardVersions.title })
+    .from(runs)
+    .innerJoin(assignments, eq(assignments.id, runs.assignmentId))
+    .innerJoin(taskCardVersions, eq(taskCardVersions.id, runs.versionId))
+    .where(and(sql`${runs.status} <> 'signed_off'`, isNull(assignments.withdrawnAt)))
+    .orderBy(asc(taskCardVersions.title));
+  return students.map((s) => ({ ...s, runs: open.filter((r) => r.studentId === s.id).map((r) => ({ id: r.id, title: r.title })) }));
 }
