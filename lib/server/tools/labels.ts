@@ -57,13 +57,13 @@ export async function toolLabelsPdf({ kitId }: { kitId?: string } = {}): Promise
     // Error correction M: a label scuffed in a toolbox still reads.
     const qr = QRCode.create(label.number, { errorCorrectionLevel: "M" });
     const side = cell.height - 22;
-    const module = side / (qr.modules.size + 8); // four modules of quiet zone each side
-    const qx = x + 8 + 4 * module;
-    const qy = top - 11 - 4 * module;
+    const cellSide = side / (qr.modules.size + 8); // four modules of quiet zone each side
+    const qx = x + 8 + 4 * cellSide;
+    const qy = top - 11 - 4 * cellSide;
     for (let r = 0; r < qr.modules.size; r++)
       for (let c = 0; c < qr.modules.size; c++)
         if (qr.modules.get(r, c))
-          page.drawRectangle({ x: qx + c * module, y: qy - (r + 1) * module, width: module, height: module, color: black });
+          page.drawRectangle({ x: qx + c * cellSide, y: qy - (r + 1) * cellSide, width: cellSide, height: cellSide, color: black });
     const tx = x + 8 + side + 4;
     const width = cell.width - (tx - x) - 8;
     const fit = (text: string, size: number, font = regular) => {

@@ -3,7 +3,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm, type FieldValues, type Path, type UseFormReturn } from "react-hook-form";
+import { useForm, useWatch, type FieldValues, type Path, type UseFormReturn } from "react-hook-form";
 import type { z } from "zod";
 import { FormField } from "@/components/form-field";
 import { FormResult } from "@/components/form-result";
@@ -34,7 +34,7 @@ export function AddToolForm({ kits }: { kits: { id: string; number: string; name
     defaultValues: { number: "", description: "", kitId: null, calibrated: false, calibrationIntervalDays: null, calibrationDueOn: null },
   });
   const { errors, isSubmitting } = form.formState;
-  const calibrated = form.watch("calibrated");
+  const calibrated = useWatch({ control: form.control, name: "calibrated" });
   return (
     <form
       noValidate

@@ -9,6 +9,9 @@ import { ToolNav } from "../_components/tool-nav";
 
 export const metadata: Metadata = { title: "Tools and kits" };
 
+/** A PDF from the API, opened in a tab of its own (not a page of the app). */
+const labelSheet = "/api/tools/labels";
+
 export default async function CataloguePage() {
   await requirePageUser("tools:lend", "/tools/catalogue");
   const [kits, tools] = await Promise.all([listKits(), listTools()]);
@@ -25,7 +28,7 @@ export default async function CataloguePage() {
         <p className="w-full text-ink-soft">
           Each label has the number as a QR code and in large type; the desk scans either with a USB scanner or a typed number.
         </p>
-        <a href="/api/tools/labels" className="btn btn-primary">
+        <a href={labelSheet} className="btn btn-primary" target="_blank" rel="noreferrer">
           Label sheet, every kit and tool (PDF)
         </a>
       </section>
