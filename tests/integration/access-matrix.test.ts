@@ -392,6 +392,38 @@ export const accessMatrix: Row[] = [
   },
   { method: "POST", route: "/api/marks", path: () => "/api/marks", json: {}, expect: { ...all(422), anonymous: 401 } },
   { method: "DELETE", route: "/api/marks/[id]", path: (i) => `/api/marks/${i.nobody}`, expect: { ...all(404), anonymous: 401 } },
+  // The tool room: the librarian keeps it; everyone signed in reads the tools; instructors clear holds.
+  { method: "GET", route: "/api/tools", path: () => "/api/tools", expect: { ...all(200), anonymous: 401 } },
+  { method: "POST", route: "/api/tools", path: () => "/api/tools", json: {}, expect: only({ librarian: 422, admin: 422 }) },
+  { method: "GET", route: "/api/tools/[id]", path: (i) => `/api/tools/${i.nobody}`, expect: { ...all(404), anonymous: 401 } },
+  { method: "PATCH", route: "/api/tools/[id]", path: (i) => `/api/tools/${i.nobody}`, json: {}, expect: only({ librarian: 404, admin: 404 }) },
+  {
+    method: "POST",
+    route: "/api/tools/[id]/calibrations",
+    path: (i) => `/api/tools/${i.nobody}/calibrations`,
+    json: {},
+    expect: only({ librarian: 422, admin: 422 }),
+  },
+  { method: "GET", route: "/api/tools/labels", path: () => "/api/tools/labels", expect: only({ librarian: 200, admin: 200 }) },
+  { method: "GET", route: "/api/kits", path: () => "/api/kits", expect: { ...all(200), anonymous: 401 } },
+  { method: "POST", route: "/api/kits", path: () => "/api/kits", json: {}, expect: only({ librarian: 422, admin: 422 }) },
+  { method: "GET", route: "/api/checkouts", path: () => "/api/checkouts", expect: { ...all(200), anonymous: 401 } },
+  { method: "POST", route: "/api/checkouts", path: () => "/api/checkouts", json: {}, expect: only({ librarian: 422, admin: 422 }) },
+  {
+    method: "POST",
+    route: "/api/checkouts/[id]/return",
+    path: (i) => `/api/checkouts/${i.nobody}/return`,
+    json: {},
+    expect: only({ librarian: 404, admin: 404 }),
+  },
+  { method: "GET", route: "/api/tool-holds", path: () => "/api/tool-holds", expect: { ...all(200), anonymous: 401 } },
+  {
+    method: "POST",
+    route: "/api/tool-holds/[id]/clear",
+    path: (i) => `/api/tool-holds/${i.nobody}/clear`,
+    json: { outcome: "found" },
+    expect: only({ instructor: 404, admin: 404 }),
+  },
   // The demo manual is in the library: nothing to restore.
   {
     method: "POST",
