@@ -396,7 +396,13 @@ export const accessMatrix: Row[] = [
   { method: "GET", route: "/api/tools", path: () => "/api/tools", expect: { ...all(200), anonymous: 401 } },
   { method: "POST", route: "/api/tools", path: () => "/api/tools", json: {}, expect: only({ librarian: 422, admin: 422 }) },
   { method: "GET", route: "/api/tools/[id]", path: (i) => `/api/tools/${i.nobody}`, expect: { ...all(404), anonymous: 401 } },
-  { method: "PATCH", route: "/api/tools/[id]", path: (i) => `/api/tools/${i.nobody}`, json: {}, expect: only({ librarian: 404, admin: 404 }) },
+  {
+    method: "PATCH",
+    route: "/api/tools/[id]",
+    path: (i) => `/api/tools/${i.nobody}`,
+    json: {},
+    expect: only({ librarian: 404, admin: 404 }),
+  },
   {
     method: "POST",
     route: "/api/tools/[id]/calibrations",
