@@ -69,6 +69,8 @@ function goodValue(step: Step): string {
 }
 
 function eventsFor(steps: Step[], progress: Progress, studentId: string, instructorId: string) {
+  // Not started: nothing happened on the cart yet.
+  if (progress === "none") return [];
   const start = Date.now() - 3 * 86_400_000;
   let minute = 0;
   const made: Omit<typeof runEvents.$inferInsert, "runId">[] = [];

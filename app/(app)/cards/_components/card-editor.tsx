@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { useFieldArray, useForm } from "react-hook-form";
+import { ToolRoomPicker } from "./tool-room-picker";
 import { CardView } from "@/components/card-view";
 import { ApiError, call } from "@/lib/client/api";
 import type { CardDto, CardVersionDto, SubjectDto } from "@/lib/contracts/cards";
@@ -287,6 +288,12 @@ export function CardEditor({
               <span className="label">Tools (one per line)</span>
               <textarea className="input min-h-24" {...register("tools")} />
             </label>
+            <ToolRoomPicker
+              onPick={(line) => {
+                const current = getValues("tools").trim();
+                if (!current.split("\n").some((l) => l.trim() === line)) setValue("tools", current ? `${current}\n${line}` : line, { shouldDirty: true });
+              }}
+            />
             <label className="field sm:col-span-2">
               <span className="label">Consumables (one per line)</span>
               <textarea className="input min-h-20" {...register("consumables")} />

@@ -12,6 +12,8 @@ import { reopenedStepIds, type Reading } from "@/lib/domain/runs/fold";
 import { initialsOf } from "@/lib/domain/names";
 import { clockIn, dateTimeIn, zoneLabel } from "@/lib/domain/time";
 import { ReviewActions } from "../_components/review-actions";
+import { ToolHolds } from "@/components/tool-holds";
+import { can } from "@/lib/domain/access/permissions";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Review a run" };
@@ -75,6 +77,17 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
         </p>
       ) : null}
 
+      {detail.tools.holds.length ? (
+        <section aria-labelledby="run-holds" className="panel flex flex-col gap-3">
+          <h2 id="run-holds">Held: a tool lent for this work is missing</h2>
+          <ToolHolds
+            holds={detail.tools.holds}
+            canClear={can(user, "tools:clear-holds")}
+            openedAt={Object.fromEntries(detail.tools.holds.map((h) => [h.id, shortTime(h.openedAt)]))}
+          />
+        </section>
+      ) : null}
+
       <ReviewActions
         runId={runId}
         status={state.status}
@@ -120,7 +133,7 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                     <p className={s.value ? (s.value.judgement.status === "in" ? "notice-ok" : "notice-error") : "hint"}>
                       {step.measurement.label} (limits {describeLimit(step.measurement)}):{" "}
                       {s.value
-                        ? `${s.value.text}, ${verdict(s.value)}. ${s.value.judgement.message}`
+                        ? `${s.value.text}, ${verdict(s.value)}. ${s.value.judgement.message}${s.value.tool ? ` Taken with ${s.value.tool}.` : ""}`
                         : s.readings.length
                           ? "no reading since the step was reopened"
                           : "no reading recorded"}
@@ -139,7 +152,10 @@ export default async function ReviewRunPage({ params }: { params: Promise<{ runI
                           {s.readings.map((r, j) => (
                             <tr key={j} className={r.judgement.status === "in" ? "" : "font-bold text-danger"}>
                               <td className="pr-4 font-mono">{shortTime(r.at)}</td>
-                              <td className="pr-4">{r.text}</td>
+                              <td className="pr-4">
+                                {r.text}
+                                {r.tool ? ` (${r.tool})` : ""}
+                              </td>
                               <td>{verdict(r)}</td>
                             </tr>
                           ))}
