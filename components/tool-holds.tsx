@@ -12,26 +12,32 @@ import type { ToolHoldDto } from "@/lib/contracts/tools";
  * room), or lost with a note (the tool goes out of service). Times come formatted from the server.
  */
 export function ToolHolds({ holds, canClear, openedAt }: { holds: ToolHoldDto[]; canClear: boolean; openedAt: Record<string, string> }) {
+  // Said here, not inside the cleared hold: the refreshed list no longer has it.
+  const [said, setSaid] = useState<string | null>(null);
   return (
-    <ul className="flex flex-col gap-3">
-      {holds.map((h) => (
-        <li key={h.id} className="rounded-md border-4 border-danger bg-danger-pale px-4 py-3">
-          <p className="text-lg font-bold">
-            {h.tool.number} {h.tool.description} is missing
-          </p>
-          <p>
-            Lent to {h.userName}
-            {h.runTitle ? ` for "${h.runTitle}"` : " for the day"}; not counted back in ({openedAt[h.id]}, {h.openedByName}).{" "}
-            {h.runTitle ? "That run" : "Their open runs"} cannot be handed in until the hold is cleared.
-          </p>
-          {canClear ? <ClearHold hold={h} /> : null}
-        </li>
-      ))}
-    </ul>
+    <>
+      <FormResult result={said ? { ok: true, message: said } : null} />
+      {holds.length ? null : <p>No tool lent to your students is missing.</p>}
+      <ul className="flex flex-col gap-3">
+        {holds.map((h) => (
+          <li key={h.id} className="rounded-md border-4 border-danger bg-danger-pale px-4 py-3">
+            <p className="text-lg font-bold">
+              {h.tool.number} {h.tool.description} is missing
+            </p>
+            <p>
+              Lent to {h.userName}
+              {h.runTitle ? ` for "${h.runTitle}"` : " for the day"}; not counted back in ({openedAt[h.id]}, {h.openedByName}).{" "}
+              {h.runTitle ? "That run" : "Their open runs"} cannot be handed in until the hold is cleared.
+            </p>
+            {canClear ? <ClearHold hold={h} onCleared={setSaid} /> : null}
+          </li>
+        ))}
+      </ul>
+    </>
   );
 }
 
-function ClearHold({ hold }: { hold: ToolHoldDto }) {
+function ClearHold({ hold, onCleared }: { hold: ToolHoldDto; onCleared: (message: string) => void }) {
   const router = useRouter();
   const [outcome, setOutcome] = useState<"found" | "lost" | "">("");
   const [note, setNote] = useState("");
@@ -50,10 +56,9 @@ function ClearHold({ hold }: { hold: ToolHoldDto }) {
         setBusy(true);
         try {
           await call(toolsApi.clearHold, { params: { id: hold.id }, body: { outcome, note } });
-          setResult({
-            ok: true,
-            message: outcome === "lost" ? "Cleared: the tool is marked lost and out of service." : "Cleared: the tool was found.",
-          });
+          onCleared(
+            `${hold.tool.number}: ${outcome === "lost" ? "cleared, the tool is marked lost and out of service." : "cleared, the tool was found."} ${hold.userName} can hand the run in.`,
+          );
           router.refresh();
         } catch (error) {
           setResult({ ok: false, message: error instanceof ApiError ? error.message : "Not cleared: try again." });

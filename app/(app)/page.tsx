@@ -28,7 +28,7 @@ export default async function HomePage() {
   const buyOffs = can(user, "runs:review") ? await countBuyOffCalls({ actor: user }) : null;
   // Missing tools hold hand-ins: instructors clear them here, students see their own.
   const holds = can(user, "tools:clear-holds") || can(user, "runs:do") ? await listHolds({ actor: user }) : [];
-  const zone = holds.length ? await schoolTimeZone() : "UTC";
+  const zone = await schoolTimeZone();
   const open = work?.filter((w) => w.status !== "signed_off" && w.status !== "submitted") ?? [];
   return (
     <div className="flex flex-col gap-6">

@@ -122,12 +122,12 @@ test("a kit lent for a run, a wrench past calibration refused, a tool missing ho
   await teacher.screenshot({ path: test.info().outputPath("home-hold.png"), fullPage: true });
   await hold.getByLabel("Found, back in the tool room").check();
   await hold.getByRole("button", { name: "Clear the hold" }).click();
-  await expect(teacher.getByText("Cleared: the tool was found.")).toBeVisible();
+  await expect(teacher.getByText("T-104: cleared, the tool was found. Sam Whitlock can hand the run in.")).toBeVisible();
 
   await page.reload();
   await expect(page.getByTestId("tool-hold")).toHaveCount(0);
   await runner.handIn();
-  await expect(runner.runStatus()).toContainText("Waiting for inspection");
+  await expect(runner.runStatus()).toContainText("Waiting for your instructor's inspection");
 
   // Put the wrenches back for the tests after this one.
   const loans = (await (await desk.get("/api/checkouts")).json()) as { checkouts: { id: string; runId: string | null }[] };

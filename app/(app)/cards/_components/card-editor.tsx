@@ -291,7 +291,8 @@ export function CardEditor({
             <ToolRoomPicker
               onPick={(line) => {
                 const current = getValues("tools").trim();
-                if (!current.split("\n").some((l) => l.trim() === line)) setValue("tools", current ? `${current}\n${line}` : line, { shouldDirty: true });
+                if (!current.split("\n").some((l) => l.trim() === line))
+                  setValue("tools", current ? `${current}\n${line}` : line, { shouldDirty: true });
               }}
             />
             <label className="field sm:col-span-2">

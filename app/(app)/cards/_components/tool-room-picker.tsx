@@ -15,7 +15,10 @@ export function ToolRoomPicker({ onPick }: { onPick: (line: string) => void }) {
     ...(kits.data?.kits ?? []).map((k) => ({ value: `${k.number} ${k.name}`, label: `Kit ${k.number}, ${k.name}` })),
     ...(tools.data?.tools ?? [])
       .filter((t) => t.status === "in_service")
-      .map((t) => ({ value: `${t.number} ${t.description}`, label: `${t.number}, ${t.description}${t.calibrated ? " (calibrated)" : ""}` })),
+      .map((t) => ({
+        value: `${t.number} ${t.description}`,
+        label: `${t.number}, ${t.description}${t.calibrated ? " (calibrated)" : ""}`,
+      })),
   ];
   return (
     <label className="field">
@@ -28,7 +31,13 @@ export function ToolRoomPicker({ onPick }: { onPick: (line: string) => void }) {
           if (e.target.value) onPick(e.target.value);
         }}
       >
-        <option value="">{kits.isPending || tools.isPending ? "Loading the tool room…" : options.length ? "Choose a kit or tool…" : "The tool room has nothing listed"}</option>
+        <option value="">
+          {kits.isPending || tools.isPending
+            ? "Loading the tool room…"
+            : options.length
+              ? "Choose a kit or tool…"
+              : "The tool room has nothing listed"}
+        </option>
         {options.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}
