@@ -2,15 +2,16 @@
 // missing, the hand-in held (409) until the student's instructor clears it, a reading refused with
 // a wrench past its calibration (422 naming it) and kept with its number when in calibration, the
 // record naming the wrench; and lending refused when it would lend one thing twice.
+import { execFileSync } from "node:child_process";
 import { randomUUID } from "node:crypto";
 import { eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db";
-import { classes, classMembers, curriculumSubjects, toolCalibrations, tools } from "@/db/schema";
+import { classes, classMembers, curriculumSubjects, toolCalibrations, toolCheckouts, tools, users } from "@/db/schema";
 import type { CardDto } from "@/lib/contracts/cards";
 import type { StudentRecordDto, WorkItemDto } from "@/lib/contracts/runs";
 import type { CheckoutDto, KitDto, ToolDto, ToolHoldDto } from "@/lib/contracts/tools";
-import { call, demo, makeAccount, signIn } from "../support/http";
+import { call, demo, makeAccount, signIn, waitForMail } from "../support/http";
 import { uniqueTitle } from "../support/library";
 
 interface Person {
@@ -297,6 +298,32 @@ describe("the tool room", () => {
     await expect(getDb().execute(sql`delete from tool_calibrations where id = ${calibration.id}`)).rejects.toMatchObject({
       cause: { code: "HLF02" },
     });
+  });
+
+  it("mails a loan past due once, to the student and their instructor", async () => {
+    const { checkout } = await body<{ checkout: CheckoutDto }>(
+      await call("POST", "/api/checkouts", { cookie: desk, json: { toolId: goodWrench, userId: learner.id } }),
+      201,
+    );
+    // An hour late (the API refuses a due time in the past, so it is set here).
+    await getDb()
+      .update(toolCheckouts)
+      .set({ dueAt: new Date(Date.now() - 3_600_000) })
+      .where(eq(toolCheckouts.id, checkout.id));
+    const { checkouts } = await body<{ checkouts: CheckoutDto[] }>(
+      await call("GET", "/api/checkouts?status=overdue", { cookie: desk }),
+      200,
+    );
+    expect(checkouts.find((c) => c.id === checkout.id)?.overdue).toBe(true);
+    // The worker's sweep runs every 30 s.
+    const [learnerRow] = await getDb().select({ email: users.email }).from(users).where(eq(users.id, learner.id));
+    const [teacherRow] = await getDb().select({ email: users.email }).from(users).where(eq(users.id, teacher.id));
+    const mail = await waitForMail(learnerRow!.email, /Bring back/, 45);
+    expect(mail.text).toContain("Torque wrench, 0-250 in-lb");
+    await waitForMail(teacherRow!.email, /has not brought back/, 10);
+    const [row] = await getDb().select().from(toolCheckouts).where(eq(toolCheckouts.id, checkout.id));
+    expect(row!.overdueMailedAt).not.toBeNull();
+    await body(await call("POST", `/api/checkouts/${checkout.id}/return`, { cookie: desk, json: {} }), 200);
   });
 
   it("refuses bad input with the field named, and numbers in use", async () => {
