@@ -184,6 +184,7 @@ describe("a signed-off run in the student's record", () => {
           limit: { unit: "lb", nominal: null, tolerance: null, min: 30, max: 40, text: "30 to 40 lb" },
           value: "36 lb",
           recordedAt: new Date(hourAgo + 2 * 60_000).toISOString(),
+          toolNumber: null,
           verdict: "within_limits",
         },
         expect.objectContaining({
@@ -203,15 +204,15 @@ describe("a signed-off run in the student's record", () => {
     expect(answer.headers.get("content-type")).toMatch(/text\/csv/);
     const lines = (await answer.text()).split("\r\n");
     expect(lines[0]).toBe(
-      "Student,Subject,Task card,Version,Revisions cited,Signed off (UTC),Instructor,Estimated hours,Actual hours,Step,Measured,Value,Limit,Verdict",
+      "Student,Subject,Task card,Version,Revisions cited,Signed off (UTC),Instructor,Estimated hours,Actual hours,Step,Measured,Value,Limit,Verdict,Tool",
     );
     const mine = lines.filter((l) => l.includes(title));
     expect(mine).toHaveLength(2);
     const card = `,${title},1,"${revision.manualTitle} ${revision.label}, pages 2, 5",${signedAt.slice(0, 16).replace("T", " ")},${teacher.name},1.0,`;
     expect(mine[0]).toContain(card);
-    expect(mine[0]).toMatch(/,1,Cable tension,36 lb,30 to 40 lb,within limits$/);
+    expect(mine[0]).toMatch(/,1,Cable tension,36 lb,30 to 40 lb,within limits,$/);
     expect(mine[1]).toContain(card);
-    expect(mine[1]).toMatch(/,3,Edge distance,0\.55 in,0\.375 ± 0\.125 in,OUT OF LIMITS$/);
+    expect(mine[1]).toMatch(/,3,Edge distance,0\.55 in,0\.375 ± 0\.125 in,OUT OF LIMITS,$/);
   });
 
   it("and in the PDF", async () => {

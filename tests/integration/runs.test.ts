@@ -369,7 +369,7 @@ describe("review and sign-off", () => {
     expect(csv.headers.get("content-type")).toMatch(/text\/csv/);
     const text = await csv.text();
     expect(text.split("\r\n")[0]).toBe(
-      "Student,Subject,Task card,Version,Revisions cited,Signed off (UTC),Instructor,Estimated hours,Actual hours,Step,Measured,Value,Limit,Verdict",
+      "Student,Subject,Task card,Version,Revisions cited,Signed off (UTC),Instructor,Estimated hours,Actual hours,Step,Measured,Value,Limit,Verdict,Tool",
     );
     expect(text).toContain(card.published!.title);
     const pdf = await call("GET", `/api/records/students/${students[0]!.id}?format=pdf`, { cookie });

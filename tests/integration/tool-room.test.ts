@@ -346,15 +346,15 @@ describe("the tool room", () => {
     expect(outOfService.status).toBe(422);
   });
 
-  it("prints a label sheet as a PDF", async () => {
-    const sheet = await call("GET", "/api/tools/labels", { cookie: desk });
+  it("prints a label sheet as a PDF, each label with its number in type", async () => {
+    const sheet = await call("GET", `/api/tools/labels?kit=${kit.id}`, { cookie: desk });
     expect(sheet.status).toBe(200);
     expect(sheet.headers.get("content-type")).toBe("application/pdf");
-    expect(
-      Buffer.from(await sheet.arrayBuffer())
-        .subarray(0, 5)
-        .toString(),
-    ).toBe("%PDF-");
+    const bytes = Buffer.from(await sheet.arrayBuffer());
+    expect(bytes.subarray(0, 5).toString()).toBe("%PDF-");
+    const text = execFileSync("pdftotext", ["-", "-"], { input: bytes }).toString();
+    expect(text).toContain(kit.number);
+    for (const t of kit.tools) expect(text).toContain(t.number);
     expect((await call("GET", "/api/tools/labels", { cookie: learner.cookie })).status).toBe(403);
   });
 });
