@@ -716,3 +716,26 @@ export const toolHolds = pgTable(
     check("tool_holds_cleared", sql`(${t.clearedAt} is null) = (${t.outcome} is null)`),
   ],
 );
+
+// The mechanic certification standard (issue 20): the school's copy of its elements, imported
+// from a CSV. An element is never deleted (cards and records point at its code); a later import
+// updates its words.
+export const standardElements = pgTable(
+  "standard_elements",
+  {
+    code: text("code").primaryKey(),
+    section: text("section").notNull(),
+    areaLetter: text("area_letter").notNull(),
+    areaTitle: text("area_title").notNull(),
+    kind: text("kind").notNull(),
+    number: integer("number").notNull(),
+    title: text("title").notNull(),
+    /** Seeded from the demo's excerpt (to be verified against the current standard), not imported by the school. */
+    excerpt: boolean("excerpt").notNull().default(false),
+    ...timestamps,
+  },
+  (t) => [
+    check("standard_elements_kind", sql`${t.kind} in ('knowledge', 'risk', 'skill')`),
+    index("standard_elements_search_idx").using("gin", sql`to_tsvector('english', ${t.code} || ' ' || ${t.areaTitle} || ' ' || ${t.title})`),
+  ],
+);

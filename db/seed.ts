@@ -9,8 +9,10 @@ import { seedCards } from "./demo/seed-cards";
 import { seedRuns } from "./demo/seed-runs";
 import { seedLibrary } from "./demo/seed-library";
 import { seedTools } from "./demo/seed-tools";
+import { standardExcerptCsv } from "./demo/standard-excerpt";
+import { readStandardCsv } from "@/lib/domain/standard/elements";
 import { closeDb, getDb } from "./index";
-import { classes, classMembers, schoolSettings, users } from "./schema";
+import { classes, classMembers, schoolSettings, standardElements, users } from "./schema";
 
 const demoClasses = [
   {
@@ -38,6 +40,16 @@ const demoUsers: { email: string; name: string; role: Role; classes: string[] }[
   { email: "student4@hangarleaf.test", name: "Noor Halvorsen", role: "student", classes: ["AMT Evening Cohort 2027"] },
   { email: "student5@hangarleaf.test", name: "Avery Lund", role: "student", classes: ["AMT Evening Cohort 2027"] },
 ];
+
+/** The excerpt goes in only while the school has imported nothing: a real import is never mixed with it. */
+async function seedStandardExcerpt(db: ReturnType<typeof getDb>): Promise<number> {
+  const [any] = await db.select({ code: standardElements.code }).from(standardElements).limit(1);
+  if (any) return 0;
+  const { elements, refused } = readStandardCsv(standardExcerptCsv);
+  if (refused.length) throw new Error(`the demo excerpt has refused rows: ${JSON.stringify(refused)}`);
+  await db.insert(standardElements).values(elements.map((e) => ({ ...e, excerpt: true })));
+  return elements.length;
+}
 
 async function main() {
   const db = getDb();
@@ -82,6 +94,8 @@ async function main() {
   // The demo school keeps its hangar's clock; an admin changes it under School settings.
   const zoned = await db.insert(schoolSettings).values({ id: "school", timeZone: "America/Chicago" }).onConflictDoNothing().returning();
   console.log(zoned.length ? "set the demo school's time zone" : "school settings already present");
+  const elementsAdded = await seedStandardExcerpt(db);
+  console.log(elementsAdded ? `seeded the standard's demo excerpt (${elementsAdded} elements)` : "standard elements already present");
   const cardsAdded = await seedCards(db);
   console.log(cardsAdded ? `seeded ${cardsAdded} demo task cards` : "demo task cards already present");
   const assignmentsAdded = await seedRuns(db);

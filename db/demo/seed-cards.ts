@@ -1,6 +1,7 @@
 // Demo curriculum subjects and published task cards built on the invented manuals. Invented content
 // only. The cards are written straight to the tables: at seed time the manuals are still queued for
 // ingest, so the library's "cite only ready revisions" check of lib/server/cards/draft.ts cannot pass yet.
+import { demoElementMap } from "./standard-excerpt";
 import { randomUUID } from "node:crypto";
 import { and, eq, inArray } from "drizzle-orm";
 import type { Db } from "@/db";
@@ -446,7 +447,7 @@ export async function seedCards(db: Db): Promise<number> {
       .from(taskCardVersions)
       .where(and(eq(taskCardVersions.title, card.title), eq(taskCardVersions.number, 1)));
     if (exists) continue;
-    const steps = card.steps.map((s) => ({
+    const steps = card.steps.map((s, i) => ({
       id: randomUUID(),
       text: s.text,
       notices: s.notices ?? [],
@@ -459,6 +460,7 @@ export async function seedCards(db: Db): Promise<number> {
       calculator: s.calculator ?? null,
       inspectionPoint: s.inspectionPoint ?? false,
       calibratedTool: s.calibratedTool ?? false,
+      elements: demoElementMap[card.title]?.[i + 1] ?? [],
       timerMinutes: s.timerMinutes ?? null,
     }));
     const input: CardContentInput = {

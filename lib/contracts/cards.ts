@@ -21,6 +21,8 @@ export interface StepDto {
   measurement: Measurement | null;
   calculator: CalculatorSlug | null;
   inspectionPoint: boolean;
+  /** Codes of the certification standard's elements the step shows. */
+  elements: string[];
   /** The reading is taken with a precision tool within calibration, named by its tool-room number. */
   calibratedTool: boolean;
   timerMinutes: number | null;

@@ -28,6 +28,7 @@ const roles = [
       "Records",
       "Tool room",
       "Accounts",
+      "Standard",
       "Audit log",
       "School settings",
       "Outbox",

@@ -344,6 +344,16 @@ export const accessMatrix: Row[] = [
   },
   {
     method: "GET",
+    route: "/api/records/students/[id]/coverage",
+    path: (i) => `/api/records/students/${i.studentId}/coverage`,
+    expect: only({ student: 200, instructor: 200, admin: 200 }),
+    cross: { otherInstructor: 404, otherStudent: 404 },
+  },
+  { method: "GET", route: "/api/standard/elements", path: () => "/api/standard/elements?q=rivet", expect: { ...all(200), anonymous: 401 } },
+  // JSON is not a CSV: the admin is stopped by the type, everyone else by the role.
+  { method: "POST", route: "/api/standard/import", path: () => "/api/standard/import", json: {}, expect: only({ admin: 415 }) },
+  {
+    method: "GET",
     route: "/api/records/classes/[id]",
     path: (i) => `/api/records/classes/${i.dayClassId}`,
     expect: only({ instructor: 200, admin: 200 }),

@@ -299,6 +299,15 @@ const cases: Record<string, { entry: ReturnType<typeof entry>; summary: string; 
     summary: "Elena Brandt cleared a missing-tool hold on Jordan Pike's work: the tool was lost",
     details: [["Note", "Searched the hangar"]],
   },
+  "standard.imported": {
+    entry: entry("standard.imported", "standard", null, { imported: 12, updated: 0, refused: 2 }, "Morgan Vale"),
+    summary: "Morgan Vale imported the certification standard's elements",
+    details: [
+      ["New", "12"],
+      ["Words updated", "0"],
+      ["Rows refused", "2"],
+    ],
+  },
   "settings.updated": {
     entry: entry("settings.updated", "settings", null, { timeZone: "America/Chicago" }, "Morgan Vale"),
     summary: "Morgan Vale set the school's time zone to America/Chicago",

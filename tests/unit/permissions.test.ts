@@ -27,6 +27,7 @@ const expected: Record<string, Role[]> = {
   "tools:view": ["student", "instructor", "librarian", "admin"],
   "tools:lend": ["librarian", "admin"],
   "tools:clear-holds": ["instructor", "admin"],
+  "standard:manage": ["admin"],
 };
 
 describe("permissions", () => {
@@ -79,6 +80,7 @@ describe("permissions", () => {
       "Records",
       "Tool room",
       "Accounts",
+      "Standard",
       "Audit log",
       "School settings",
     ]);

@@ -398,6 +398,7 @@ describe("comparing card versions for a move", () => {
     calculator: null,
     inspectionPoint: false,
     calibratedTool: false,
+    elements: [],
     timerMinutes: null,
     ...over,
   });

@@ -9,6 +9,7 @@ import { runsApi } from "@/lib/contracts/endpoints/runs";
 import { sessionApi } from "@/lib/contracts/endpoints/session";
 import { settingsApi } from "@/lib/contracts/endpoints/settings";
 import { toolsApi } from "@/lib/contracts/endpoints/tools";
+import { standardApi } from "@/lib/contracts/endpoints/standard";
 
 export const api = {
   session: sessionApi,
@@ -20,6 +21,7 @@ export const api = {
   cards: cardsApi,
   runs: runsApi,
   tools: toolsApi,
+  standard: standardApi,
 };
 
 export const allEndpoints: Endpoint[] = Object.values(api).flatMap((group) => Object.values(group) as Endpoint[]);

@@ -54,6 +54,8 @@ const rules = {
   "tools:lend": ["librarian", "admin"],
   /** Clear a missing-tool hold (found, or lost with a note): the instructors of the student's classes (lib/server/runs/scope.ts). */
   "tools:clear-holds": ["instructor", "admin"],
+  /** Import the school's copy of the certification standard's elements. */
+  "standard:manage": ["admin"],
   /** The link to the local outbox (the page itself is open while the fake SMTP server runs). */
   "outbox:view": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
@@ -101,6 +103,7 @@ const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boo
   { item: { href: "/records", label: "Records" }, permission: "records:view" },
   { item: { href: "/tools", label: "Tool room" }, permission: "tools:lend" },
   { item: { href: "/accounts", label: "Accounts" }, permission: "accounts:manage" },
+  { item: { href: "/standard", label: "Standard" }, permission: "standard:manage" },
   { item: { href: "/audit", label: "Audit log" }, permission: "audit:view" },
   { item: { href: "/settings", label: "School settings" }, permission: "settings:manage" },
   { item: { href: "/outbox", label: "Outbox" }, permission: "outbox:view", onlyWithOutbox: true },

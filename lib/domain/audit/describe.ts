@@ -336,6 +336,14 @@ const wordings: Record<string, Wording> = {
   }),
   "manual.restored": (_e, c) => ({ summary: `${c.actor} restored ${c.subject} to the library`, details: [] }),
 
+  "standard.imported": (e, c) => ({
+    summary: `${c.actor} imported the certification standard's elements`,
+    details: [
+      ...d("New", num(e.details.imported)),
+      ...d("Words updated", num(e.details.updated)),
+      ...d("Rows refused", num(e.details.refused)),
+    ],
+  }),
   "settings.updated": (e, c) => {
     const zone = str(e.details.timeZone);
     return {

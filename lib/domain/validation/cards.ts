@@ -4,6 +4,7 @@ import { z } from "zod";
 import { calculatorSlugs } from "@/lib/domain/calc";
 import { resolveUnit } from "@/lib/domain/calc/units";
 import { ataChapterOf } from "@/lib/domain/validation/ata";
+import { elementCodePattern } from "@/lib/domain/standard/elements";
 
 export { ataChapterOf };
 
@@ -61,6 +62,12 @@ export const stepSchema = z.object({
   measurement: measurementSchema.nullable().optional().default(null),
   calculator: z.enum(calculatorSlugs).nullable().optional().default(null),
   inspectionPoint: z.boolean().default(false),
+  /** The certification standard's elements this step shows (AM.II.C.S2): a signed-off run demonstrates them. */
+  elements: z
+    .array(z.string().trim().toUpperCase().max(20, "An element code is short, such as AM.I.A.K1."))
+    .max(20, "At most 20 standard elements on one step.")
+    .default([])
+    .transform((codes) => [...new Set(codes.filter(Boolean))]),
   /** The reading is taken with a precision tool (torque wrench, micrometer): the cart asks which one, within calibration. */
   calibratedTool: z.boolean().default(false),
   timerMinutes: z.number().finite().nullable().optional().default(null),
@@ -131,6 +138,9 @@ export function cardProblems(card: CardContent): CardProblem[] {
       const missing = measurementProblems(step.measurement);
       if (missing.length) out.push({ field: `steps.${n}.measurement`, message: `Step ${n}: ${capital(missing.join("; "))}.` });
     }
+    const badCodes = step.elements.filter((c) => !elementCodePattern.test(c));
+    if (badCodes.length)
+      out.push({ field: `steps.${n}.elements`, message: `Step ${n}: ${badCodes.join(", ")} ${badCodes.length === 1 ? "is not an element code" : "are not element codes"} (such as AM.I.A.K1).` });
     if (step.calibratedTool && !step.measurement)
       out.push({
         field: `steps.${n}.calibratedTool`,

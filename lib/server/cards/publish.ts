@@ -8,6 +8,7 @@ import { type Actor } from "@/lib/domain/access/permissions";
 import type { CardVersionDto } from "@/lib/contracts/cards";
 import { AppError } from "@/lib/domain/errors";
 import { cardProblems } from "@/lib/domain/validation/cards";
+import { unknownElementCodes } from "@/lib/server/standard";
 import { asConflict, lockCard } from "@/lib/server/cards/access";
 import { getVersionById } from "@/lib/server/cards/read";
 import { citationsFor, versionToContent } from "@/lib/server/cards/draft";
@@ -30,6 +31,16 @@ export async function publishDraft({ actor, cardId }: { actor: Actor; cardId: st
         for (const p of problems) fields[p.field] ??= p.message;
         const more = problems.length > 1 ? ` (and ${problems.length - 1} more)` : "";
         throw new AppError("invalid", `Not ready to publish: ${problems[0]!.message}${more}`, { fields });
+      }
+      // A step mapped to an element the school's standard does not have would count for nothing.
+      const unknown = await unknownElementCodes(content.steps.flatMap((s) => s.elements));
+      if (unknown.length) {
+        const message = `Not ready to publish: the standard has no element ${unknown.join(", ")}. Check the code, or import the standard first.`;
+        const fields: Record<string, string> = {};
+        content.steps.forEach((s, i) => {
+          if (s.elements.some((c) => unknown.includes(c))) fields[`steps.${i + 1}.elements`] ??= message;
+        });
+        throw new AppError("invalid", message, { fields });
       }
       // Citations are checked again: a page cited last week must still exist in a ready revision.
       await citationsFor(tx, draft.id, content.steps);

@@ -27,6 +27,8 @@ export interface StepField {
   calculator: CalculatorSlug | "";
   inspectionPoint: boolean;
   calibratedTool: boolean;
+  /** The standard's element codes, comma-separated as typed. */
+  elements: string;
   timerMinutes: string;
 }
 
@@ -47,6 +49,11 @@ const lines = (text: string) =>
     .split("\n")
     .map((s) => s.trim())
     .filter(Boolean);
+const codesOf = (text: string) =>
+  text
+    .split(/[,\s]+/)
+    .map((c) => c.trim().toUpperCase())
+    .filter(Boolean);
 const numberOrNull = (text: string) => (text.trim() ? parseNumber(text) : null);
 
 export function emptyStep(): StepField {
@@ -60,6 +67,7 @@ export function emptyStep(): StepField {
     calculator: "",
     inspectionPoint: false,
     calibratedTool: false,
+    elements: "",
     timerMinutes: "",
   };
 }
@@ -95,6 +103,7 @@ export function fromVersion(v: CardVersionDto): CardForm {
         calculator: s.calculator ?? "",
         inspectionPoint: s.inspectionPoint,
         calibratedTool: s.calibratedTool,
+        elements: s.elements.join(", "),
         timerMinutes: s.timerMinutes?.toString() ?? "",
       };
     }),
@@ -131,6 +140,7 @@ export function toContent(form: CardForm): CardContentInput {
       calculator: s.calculator || null,
       inspectionPoint: s.inspectionPoint,
       calibratedTool: s.calibratedTool,
+      elements: codesOf(s.elements),
       timerMinutes: numberOrNull(s.timerMinutes),
     })),
   };
@@ -175,6 +185,7 @@ export function toPreview(form: CardForm, base: CardVersionDto, subjectName: str
         calculator: s.calculator || null,
         inspectionPoint: s.inspectionPoint,
         calibratedTool: s.calibratedTool,
+        elements: codesOf(s.elements),
         timerMinutes: numberOrNull(s.timerMinutes),
         underRecheck: base.steps.find((b) => b.id === s.uid)?.underRecheck ?? false,
       };

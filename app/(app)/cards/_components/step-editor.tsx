@@ -1,6 +1,7 @@
 "use client";
 
 import { useState } from "react";
+import { ElementPicker } from "./element-picker";
 import { useFieldArray, useWatch, type Control, type UseFormRegister, type UseFormSetValue } from "react-hook-form";
 import { calculators, calculatorSlugs } from "@/lib/domain/calc";
 import { allUnits, parseNumber, unitLabel } from "@/lib/domain/calc/units";
@@ -309,6 +310,12 @@ export function StepEditor({ index, count, control, register, setValue, manuals,
             Taken with a calibrated tool (the cart asks which one)
           </label>
         ) : null}
+        <ElementPicker
+          id={`step-${n}-elements`}
+          value={step.elements}
+          onChange={(codes) => setValue(`steps.${index}.elements`, codes, { shouldDirty: true })}
+          problem={problems.find((p) => /element code/.test(p))}
+        />
       </div>
     </fieldset>
   );

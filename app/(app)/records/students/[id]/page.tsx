@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { studentCoverage } from "@/lib/server/standard";
+import { CoverageSection } from "./_components/coverage-section";
 import { notFound } from "next/navigation";
 import { Table } from "@/components/table";
 import { can } from "@/lib/domain/access/permissions";
@@ -21,6 +23,7 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
   if (!isUuid(id)) notFound();
   const record = await studentRecord({ actor: user, studentId: id }).catch(notFoundOnMissing);
   const zone = await schoolTimeZone();
+  const coverage = await studentCoverage({ actor: user, studentId: id }).catch(notFoundOnMissing);
   const own = user.id === id;
   return (
     <div className="flex flex-col gap-5">
@@ -52,6 +55,7 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
           </div>
         ))}
       </dl>
+      <CoverageSection coverage={coverage} zone={zone} />
       <section aria-label="Signed off by subject" className="flex flex-col gap-3">
         <h2>Signed off, by curriculum subject</h2>
         {record.subjects.map((s) => (

@@ -1,0 +1,21 @@
+// JSON shapes of the certification standard and a student's coverage of it.
+import type { CoverageStatus, ElementKind } from "@/lib/domain/standard/elements";
+
+export interface ElementDto {
+  code: string;
+  kind: ElementKind;
+  title: string;
+  section: string;
+  area: string;
+}
+
+export interface CoverageDto {
+  student: { id: string; name: string };
+  excerpt: boolean;
+  elements: (ElementDto & {
+    status: CoverageStatus;
+    runId: string | null;
+    run: { title: string; versionNumber: number; signedAt: string | null; instructorName: string | null; revisions: string[] } | null;
+  })[];
+  totals: Record<string, Record<ElementKind, Record<CoverageStatus, number>>>;
+}

@@ -1,0 +1,185 @@
+// The school's copy of the certification standard: importing its CSV, finding elements, and a
+// student's coverage from the card versions of their runs.
+import "server-only";
+import { and, asc, eq, ilike, inArray, or, sql } from "drizzle-orm";
+import { getDb } from "@/db";
+import { assignments, runs, signOffs, standardElements, taskCardVersions, users } from "@/db/schema";
+import type { CoverageDto, ElementDto } from "@/lib/contracts/standard";
+import type { Actor } from "@/lib/domain/access/permissions";
+import { AppError } from "@/lib/domain/errors";
+import { coverageOf, elementKinds, readStandardCsv, type CoverageStatus, type ElementKind, type StandardElement } from "@/lib/domain/standard/elements";
+import { recordAudit } from "@/lib/server/audit";
+import { readBodyText } from "@/lib/server/http";
+import { readsRecordOf } from "@/lib/server/runs/scope";
+
+const maxCsvBytes = 2 * 1024 * 1024;
+
+const toDto = (e: typeof standardElements.$inferSelect): ElementDto => ({
+  code: e.code,
+  kind: e.kind as ElementKind,
+  title: e.title,
+  section: e.section,
+  area: `${e.areaLetter}. ${e.areaTitle}`,
+});
+
+/** The CSV from the request: a text/csv body, or a multipart form's `file` part. */
+export async function csvFromRequest(request: Request): Promise<string> {
+  const type = (request.headers.get("content-type") ?? "").toLowerCase();
+  const declared = Number(request.headers.get("content-length") ?? 0);
+  if (declared > maxCsvBytes) throw new AppError("payload_too_large", "The file is over 2 MB: a standard's elements fit in far less.");
+  if (type.startsWith("text/csv") || type.startsWith("text/plain")) return readBodyText(request, maxCsvBytes);
+  if (type.startsWith("multipart/form-data")) {
+    const body = await readBodyText(request, maxCsvBytes + 64 * 1024);
+    const form = await new Response(body, { headers: { "content-type": request.headers.get("content-type")! } }).formData().catch(() => {
+      throw new AppError("bad_request", "The form could not be read.");
+    });
+    const file = form.get("file");
+    if (!file || typeof file === "string") throw new AppError("invalid", "Attach the CSV as the file.", { fields: { file: "Choose the CSV file." } });
+    return file.text();
+  }
+  throw new AppError("unsupported_media_type", "Send the standard as a CSV file (text/csv), or as a form with the file.");
+}
+
+/** Stores what the CSV holds; rows refused are listed with their line. Elements are never deleted. */
+export async function importStandard({ actor, csv }: { actor: Actor; csv: string }) {
+  const { elements, refused } = readStandardCsv(csv);
+  if (!elements.length) return { imported: 0, updated: 0, refused };
+  return getDb().transaction(async (tx) => {
+    const known = new Set(
+      (
+        await tx
+          .select({ code: standardElements.code })
+          .from(standardElements)
+          .where(
+            inArray(
+              standardElements.code,
+              elements.map((e) => e.code),
+            ),
+          )
+      ).map((r) => r.code),
+    );
+    for (let i = 0; i < elements.length; i += 500) {
+      const chunk = elements.slice(i, i + 500).map((e: StandardElement) => ({ ...e, excerpt: false }));
+      await tx
+        .insert(standardElements)
+        .values(chunk)
+        .onConflictDoUpdate({
+          target: standardElements.code,
+          set: {
+            section: sql`excluded.section`,
+            areaLetter: sql`excluded.area_letter`,
+            areaTitle: sql`excluded.area_title`,
+            kind: sql`excluded.kind`,
+            number: sql`excluded.number`,
+            title: sql`excluded.title`,
+            excerpt: false,
+            updatedAt: new Date(),
+          },
+        });
+    }
+    const updated = elements.filter((e) => known.has(e.code)).length;
+    const imported = elements.length - updated;
+    await recordAudit(tx, {
+      actorId: actor.id,
+      action: "standard.imported",
+      subjectType: "standard",
+      details: { imported, updated, refused: refused.length },
+    });
+    return { imported, updated, refused };
+  });
+}
+
+export async function listElements({ q, kind }: { q?: string; kind?: ElementKind } = {}): Promise<{ elements: ElementDto[]; excerpt: boolean }> {
+  const words = (q ?? "").trim();
+  const like = `%${words.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+  const rows = await getDb()
+    .select()
+    .from(standardElements)
+    .where(
+      and(
+        kind ? eq(standardElements.kind, kind) : undefined,
+        words
+          ? or(ilike(standardElements.code, `${words.replace(/[\\%_]/g, (c) => `\\${c}`)}%`), ilike(standardElements.title, like), ilike(standardElements.areaTitle, like))
+          : undefined,
+      ),
+    )
+    .orderBy(asc(standardElements.section), asc(standardElements.areaLetter), asc(standardElements.kind), asc(standardElements.number))
+    .limit(words ? 200 : 5000);
+  const [flag] = await getDb()
+    .select({ excerpt: sql<boolean>`coalesce(bool_and(${standardElements.excerpt}), false)` })
+    .from(standardElements);
+  return { elements: rows.map(toDto), excerpt: flag?.excerpt ?? false };
+}
+
+/** Codes the standard does not have, of those given: publishing a card that maps to them is refused. */
+export async function unknownElementCodes(codes: readonly string[]): Promise<string[]> {
+  const wanted = [...new Set(codes)];
+  if (!wanted.length) return [];
+  const rows = await getDb().select({ code: standardElements.code }).from(standardElements).where(inArray(standardElements.code, wanted));
+  const known = new Set(rows.map((r) => r.code));
+  return wanted.filter((c) => !known.has(c));
+}
+
+/** Every element's status for the student, with the run that demonstrated or practised it. */
+export async function studentCoverage({ actor, studentId }: { actor: Actor; studentId: string }): Promise<CoverageDto> {
+  const db = getDb();
+  const [student] = await db.select({ id: users.id, name: users.name, role: users.role }).from(users).where(eq(users.id, studentId));
+  if (!student || student.role !== "student" || !(await readsRecordOf(db, actor, studentId)))
+    throw new AppError("not_found", "That student was not found.");
+  const { elements, excerpt } = await listElements();
+  const rows = await db
+    .select({
+      runId: runs.id,
+      status: runs.status,
+      steps: taskCardVersions.steps,
+      title: taskCardVersions.title,
+      versionNumber: taskCardVersions.number,
+      signedAt: signOffs.signedAt,
+      revisions: signOffs.revisionsCited,
+      instructorName: users.name,
+      withdrawnAt: assignments.withdrawnAt,
+    })
+    .from(runs)
+    .innerJoin(assignments, eq(assignments.id, runs.assignmentId))
+    .innerJoin(taskCardVersions, eq(taskCardVersions.id, runs.versionId))
+    .leftJoin(signOffs, eq(signOffs.runId, runs.id))
+    .leftJoin(users, eq(users.id, signOffs.instructorId))
+    .where(eq(runs.studentId, studentId));
+  // A withdrawn run that was not signed off practised nothing the school counts.
+  const counted = rows.filter((r) => r.status === "signed_off" || !r.withdrawnAt);
+  const byRun = new Map(counted.map((r) => [r.runId, r]));
+  const statuses = coverageOf(
+    elements,
+    counted.map((r) => ({
+      runId: r.runId,
+      signedOff: r.status === "signed_off",
+      started: r.status !== "not_started",
+      codes: ((r.steps as { elements?: unknown }[]) ?? []).flatMap((s) => (Array.isArray(s.elements) ? (s.elements as string[]) : [])),
+      signedAt: r.signedAt?.toISOString() ?? null,
+    })),
+  );
+  const totals: CoverageDto["totals"] = {};
+  const out = elements.map((e, i) => {
+    const s = statuses[i]!;
+    const run = s.runId ? byRun.get(s.runId) : undefined;
+    const section = (totals[e.section] ??= Object.fromEntries(
+      elementKinds.map((k) => [k, { demonstrated: 0, practised: 0, missing: 0 } as Record<CoverageStatus, number>]),
+    ) as Record<ElementKind, Record<CoverageStatus, number>>);
+    section[e.kind][s.status]++;
+    return {
+      ...e,
+      status: s.status,
+      runId: s.runId,
+      run: run
+        ? {
+            title: run.title,
+            versionNumber: run.versionNumber,
+            signedAt: run.signedAt?.toISOString() ?? null,
+            instructorName: run.signedAt ? run.instructorName : null,
+            revisions: ((run.revisions ?? []) as { manualTitle: string; label: string }[]).map((r) => `${r.manualTitle} ${r.label}`),
+          }
+        : null,
+    };
+  });
+  return { student: { id: student.id, name: student.name }, excerpt, elements: out, totals };
+}
