@@ -736,6 +736,9 @@ export const standardElements = pgTable(
   },
   (t) => [
     check("standard_elements_kind", sql`${t.kind} in ('knowledge', 'risk', 'skill')`),
-    index("standard_elements_search_idx").using("gin", sql`to_tsvector('english', ${t.code} || ' ' || ${t.areaTitle} || ' ' || ${t.title})`),
+    index("standard_elements_search_idx").using(
+      "gin",
+      sql`to_tsvector('english', ${t.code} || ' ' || ${t.areaTitle} || ' ' || ${t.title})`,
+    ),
   ],
 );

@@ -7,7 +7,14 @@ import { assignments, runs, signOffs, standardElements, taskCardVersions, users 
 import type { CoverageDto, ElementDto } from "@/lib/contracts/standard";
 import type { Actor } from "@/lib/domain/access/permissions";
 import { AppError } from "@/lib/domain/errors";
-import { coverageOf, elementKinds, readStandardCsv, type CoverageStatus, type ElementKind, type StandardElement } from "@/lib/domain/standard/elements";
+import {
+  coverageOf,
+  elementKinds,
+  readStandardCsv,
+  type CoverageStatus,
+  type ElementKind,
+  type StandardElement,
+} from "@/lib/domain/standard/elements";
 import { recordAudit } from "@/lib/server/audit";
 import { readBodyText } from "@/lib/server/http";
 import { readsRecordOf } from "@/lib/server/runs/scope";
@@ -34,7 +41,8 @@ export async function csvFromRequest(request: Request): Promise<string> {
       throw new AppError("bad_request", "The form could not be read.");
     });
     const file = form.get("file");
-    if (!file || typeof file === "string") throw new AppError("invalid", "Attach the CSV as the file.", { fields: { file: "Choose the CSV file." } });
+    if (!file || typeof file === "string")
+      throw new AppError("invalid", "Attach the CSV as the file.", { fields: { file: "Choose the CSV file." } });
     return file.text();
   }
   throw new AppError("unsupported_media_type", "Send the standard as a CSV file (text/csv), or as a form with the file.");
@@ -89,7 +97,10 @@ export async function importStandard({ actor, csv }: { actor: Actor; csv: string
   });
 }
 
-export async function listElements({ q, kind }: { q?: string; kind?: ElementKind } = {}): Promise<{ elements: ElementDto[]; excerpt: boolean }> {
+export async function listElements({ q, kind }: { q?: string; kind?: ElementKind } = {}): Promise<{
+  elements: ElementDto[];
+  excerpt: boolean;
+}> {
   const words = (q ?? "").trim();
   const like = `%${words.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
   const rows = await getDb()
@@ -99,7 +110,11 @@ export async function listElements({ q, kind }: { q?: string; kind?: ElementKind
       and(
         kind ? eq(standardElements.kind, kind) : undefined,
         words
-          ? or(ilike(standardElements.code, `${words.replace(/[\\%_]/g, (c) => `\\${c}`)}%`), ilike(standardElements.title, like), ilike(standardElements.areaTitle, like))
+          ? or(
+              ilike(standardElements.code, `${words.replace(/[\\%_]/g, (c) => `\\${c}`)}%`),
+              ilike(standardElements.title, like),
+              ilike(standardElements.areaTitle, like),
+            )
           : undefined,
       ),
     )

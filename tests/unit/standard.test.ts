@@ -6,16 +6,25 @@ import { coverageOf, parseCsv, readElementCode, readStandardCsv } from "@/lib/do
 
 describe("element codes", () => {
   it("reads the standard's code form and nothing else", () => {
-    expect(readElementCode(" am.ii.a.s12 ")).toEqual({ code: "AM.II.A.S12", section: "Airframe", areaLetter: "A", kind: "skill", number: 12 });
+    expect(readElementCode(" am.ii.a.s12 ")).toEqual({
+      code: "AM.II.A.S12",
+      section: "Airframe",
+      areaLetter: "A",
+      kind: "skill",
+      number: 12,
+    });
     expect(readElementCode("AM.I.A.K1")?.kind).toBe("knowledge");
     expect(readElementCode("AM.III.O.R2")).toMatchObject({ section: "Powerplant", kind: "risk" });
-    for (const bad of ["AM.IV.A.K1", "AM.I.A.X1", "AM.I.A.K0", "AM.I.AA.K1", "PA.I.A.K1", "AM.I.A.K100", ""]) expect(readElementCode(bad)).toBeNull();
+    for (const bad of ["AM.IV.A.K1", "AM.I.A.X1", "AM.I.A.K0", "AM.I.AA.K1", "PA.I.A.K1", "AM.I.A.K100", ""])
+      expect(readElementCode(bad)).toBeNull();
   });
 });
 
 describe("the school's CSV", () => {
   it("parses quotes, doubled quotes, CRLF and a line break inside a quoted cell, keeping line numbers", () => {
-    const rows = parseCsv('\uFEFFcode,area,element\r\nAM.I.A.K1,"Area, one","Say ""why"""\r\n\r\nAM.I.A.K2,Two,"Two\nlines"\nAM.I.A.K3,Three,x');
+    const rows = parseCsv(
+      '\uFEFFcode,area,element\r\nAM.I.A.K1,"Area, one","Say ""why"""\r\n\r\nAM.I.A.K2,Two,"Two\nlines"\nAM.I.A.K3,Three,x',
+    );
     expect(rows.map((r) => r.line)).toEqual([1, 2, 4, 6]);
     expect(rows[1]!.cells).toEqual(["AM.I.A.K1", "Area, one", 'Say "why"']);
     expect(rows[2]!.cells[2]).toBe("Two\nlines");

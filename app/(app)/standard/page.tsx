@@ -16,8 +16,8 @@ export default async function StandardPage() {
       <h1>Certification standard</h1>
       {excerpt ? (
         <p role="note" className="rounded-md border-4 border-dashed border-deck bg-teal-pale px-4 py-3 font-semibold">
-          This is the demo&apos;s excerpt, not the standard: a few elements with codes and words from memory, to be verified against the current
-          FAA-S-ACS-1. Import the school&apos;s own copy below; it replaces the excerpt&apos;s words.
+          This is the demo&apos;s excerpt, not the standard: a few elements with codes and words from memory, to be verified against the
+          current FAA-S-ACS-1. Import the school&apos;s own copy below; it replaces the excerpt&apos;s words.
         </p>
       ) : null}
       <ImportForm />

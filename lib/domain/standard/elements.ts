@@ -86,7 +86,8 @@ export function readStandardCsv(text: string): { elements: StandardElement[]; re
   const rows = parseCsv(text);
   const refused: { line: number; reason: string }[] = [];
   const header = rows.shift();
-  if (!header) return { elements: [], refused: [{ line: 1, reason: "The file is empty: the first line names the columns code, area, element." }] };
+  if (!header)
+    return { elements: [], refused: [{ line: 1, reason: "The file is empty: the first line names the columns code, area, element." }] };
   const names = header.cells.map((c) => c.trim().toLowerCase());
   const column = (k: keyof typeof headerNames) => names.findIndex((n) => headerNames[k].includes(n));
   const at = { code: column("code"), area: column("area"), title: column("title") };
@@ -94,7 +95,10 @@ export function readStandardCsv(text: string): { elements: StandardElement[]; re
     .filter(([, i]) => i < 0)
     .map(([k]) => (k === "title" ? "element" : k));
   if (missing.length)
-    return { elements: [], refused: [{ line: header.line, reason: `The first line names the columns code, area, element; missing: ${missing.join(", ")}.` }] };
+    return {
+      elements: [],
+      refused: [{ line: header.line, reason: `The first line names the columns code, area, element; missing: ${missing.join(", ")}.` }],
+    };
   if (rows.length > maxStandardRows)
     return { elements: [], refused: [{ line: rows[maxStandardRows]!.line, reason: `At most ${maxStandardRows} elements in one file.` }] };
   const seen = new Map<string, number>();

@@ -140,7 +140,10 @@ export function cardProblems(card: CardContent): CardProblem[] {
     }
     const badCodes = step.elements.filter((c) => !elementCodePattern.test(c));
     if (badCodes.length)
-      out.push({ field: `steps.${n}.elements`, message: `Step ${n}: ${badCodes.join(", ")} ${badCodes.length === 1 ? "is not an element code" : "are not element codes"} (such as AM.I.A.K1).` });
+      out.push({
+        field: `steps.${n}.elements`,
+        message: `Step ${n}: ${badCodes.join(", ")} ${badCodes.length === 1 ? "is not an element code" : "are not element codes"} (such as AM.I.A.K1).`,
+      });
     if (step.calibratedTool && !step.measurement)
       out.push({
         field: `steps.${n}.calibratedTool`,

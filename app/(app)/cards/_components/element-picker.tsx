@@ -9,7 +9,17 @@ import { standardApi } from "@/lib/contracts/endpoints/standard";
  * The certification standard's elements a step shows, by code, with a search by code or words
  * that adds a code to the step. The codes stay typeable: a school may map before it imports.
  */
-export function ElementPicker({ id, value, onChange, problem }: { id: string; value: string; onChange: (codes: string) => void; problem?: string }) {
+export function ElementPicker({
+  id,
+  value,
+  onChange,
+  problem,
+}: {
+  id: string;
+  value: string;
+  onChange: (codes: string) => void;
+  problem?: string;
+}) {
   const [q, setQ] = useState("");
   const found = useQuery({
     queryKey: ["standard-elements", q],
@@ -26,7 +36,13 @@ export function ElementPicker({ id, value, onChange, problem }: { id: string; va
       <label htmlFor={id} className="label">
         Standard elements this step shows (codes, such as AM.II.C.S2)
       </label>
-      <input id={id} className="input font-mono" value={value} onChange={(e) => onChange(e.target.value)} aria-invalid={problem ? true : undefined} />
+      <input
+        id={id}
+        className="input font-mono"
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        aria-invalid={problem ? true : undefined}
+      />
       {problem ? <span className="field-todo">{problem}</span> : null}
       <details>
         <summary className="inline-flex min-h-11 cursor-pointer items-center font-semibold">Find an element by its words</summary>

@@ -48,8 +48,9 @@ export function ImportForm() {
     >
       <h2 id="import-title">Import the school&apos;s copy</h2>
       <p>
-        A CSV with the header <code>code,area,element</code> and one element a row, such as <code>AM.II.A.S1,Metallic Structures,Install solid rivets</code>.
-        Elements already known get the new words; none is deleted (cards and records point at them).
+        A CSV with the header <code>code,area,element</code> and one element a row, such as{" "}
+        <code>AM.II.A.S1,Metallic Structures,Install solid rivets</code>. Elements already known get the new words; none is deleted (cards
+        and records point at them).
       </p>
       <FormResult result={result} />
       <label className="field">

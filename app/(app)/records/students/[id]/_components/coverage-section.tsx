@@ -12,7 +12,9 @@ export function CoverageSection({ coverage, zone }: { coverage: CoverageDto; zon
     <section aria-labelledby="coverage" className="panel flex flex-col gap-3">
       <h2 id="coverage">Certification standard: coverage</h2>
       {coverage.excerpt ? (
-        <p className="hint">The standard here is the demo&apos;s excerpt (to be verified against the current FAA-S-ACS-1), not the whole standard.</p>
+        <p className="hint">
+          The standard here is the demo&apos;s excerpt (to be verified against the current FAA-S-ACS-1), not the whole standard.
+        </p>
       ) : null}
       <Table
         rows={Object.entries(coverage.totals)}
