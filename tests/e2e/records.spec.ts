@@ -56,3 +56,18 @@ test("an instructor opens a student's record, sees what was measured and signed,
   expect(at(edge, "Instructor")).toBe("Elena Brandt");
   expect(mine.every((l) => at(l, "Verdict") === "within limits")).toBe(true);
 });
+
+test("a student reads their coverage of the certification standard, marked as the demo's excerpt", async ({ page }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open("/sign-in?next=%2Frecords");
+  await signIn.signIn("student3@hangarleaf.test");
+  const coverage = page.getByRole("region", { name: "Certification standard: coverage" });
+  await expect(coverage).toContainText("demo's excerpt");
+  // The signed-off riveted splice demonstrates its mapped skills; the cable run in work practises its one.
+  const row = (code: string) => coverage.getByRole("row").filter({ hasText: code });
+  await expect(row("AM.II.A.S1")).toContainText("Demonstrated");
+  await expect(row("AM.II.A.S1")).toContainText(`${card} (version 1), signed off by Elena Brandt`);
+  await expect(row("AM.II.C.S1")).toContainText("Practised, not signed off");
+  await expect(row("AM.III.G.S1")).toContainText("Not yet");
+  await page.screenshot({ path: test.info().outputPath("coverage.png"), fullPage: true });
+});
