@@ -9,6 +9,7 @@ import type { Actor } from "@/lib/domain/access/permissions";
 import { AppError } from "@/lib/domain/errors";
 import {
   coverageOf,
+  sections,
   elementKinds,
   readStandardCsv,
   type CoverageStatus,
@@ -123,6 +124,15 @@ export async function listElements({ q, kind }: { q?: string; kind?: ElementKind
   const [flag] = await getDb()
     .select({ excerpt: sql<boolean>`coalesce(bool_and(${standardElements.excerpt}), false)` })
     .from(standardElements);
+  // The standard's own order: General, Airframe, Powerplant (I, II, III), not the alphabet's.
+  const order = Object.values(sections) as string[];
+  rows.sort(
+    (a, b) =>
+      order.indexOf(a.section) - order.indexOf(b.section) ||
+      a.areaLetter.localeCompare(b.areaLetter) ||
+      elementKinds.indexOf(a.kind as ElementKind) - elementKinds.indexOf(b.kind as ElementKind) ||
+      a.number - b.number,
+  );
   return { elements: rows.map(toDto), excerpt: flag?.excerpt ?? false };
 }
 
