@@ -742,3 +742,63 @@ export const standardElements = pgTable(
     ),
   ],
 );
+
+/** A class's session on the timetable: when, how long, which section of the standard it counts to. */
+export const classSessions = pgTable(
+  "class_sessions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    classId: uuid("class_id")
+      .notNull()
+      .references(() => classes.id, { onDelete: "restrict" }),
+    startsAt: timestamp("starts_at", { withTimezone: true }).notNull(),
+    minutes: integer("minutes").notNull(),
+    section: text("section").notNull(),
+    subject: text("subject").notNull(),
+    createdBy: uuid("created_by")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    /** The register is closed: attendance changes only by a correction with its reason. */
+    closedAt: timestamp("closed_at", { withTimezone: true }),
+    closedBy: uuid("closed_by").references(() => users.id, { onDelete: "restrict" }),
+  },
+  (t) => [
+    index("class_sessions_class_idx").on(t.classId, t.startsAt),
+    check("class_sessions_minutes", sql`${t.minutes} between 1 and 720`),
+    check("class_sessions_section", sql`${t.section} in ('General', 'Airframe', 'Powerplant')`),
+  ],
+);
+
+/**
+ * Attendance, one row per entry, never changed or removed (a trigger): the newest entry of a
+ * student in a session counts, and an entry after the register closed carries why.
+ */
+export const attendanceEntries = pgTable(
+  "attendance_entries",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    sessionId: uuid("session_id")
+      .notNull()
+      .references(() => classSessions.id, { onDelete: "restrict" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    status: text("status").notNull(),
+    minutes: integer("minutes").notNull(),
+    /** Make-up work for a session missed: what, and the run it was done in when there is one. */
+    makeup: text("makeup").notNull().default(""),
+    makeupRunId: uuid("makeup_run_id").references(() => runs.id, { onDelete: "restrict" }),
+    correctionReason: text("correction_reason").notNull().default(""),
+    recordedBy: uuid("recorded_by")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    recordedAt: timestamp("recorded_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    index("attendance_entries_session_idx").on(t.sessionId, t.userId, t.recordedAt),
+    index("attendance_entries_user_idx").on(t.userId),
+    check("attendance_entries_status", sql`${t.status} in ('present', 'late', 'absent', 'excused')`),
+    check("attendance_entries_minutes", sql`${t.minutes} between 0 and 720`),
+  ],
+);

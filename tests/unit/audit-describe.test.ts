@@ -299,6 +299,33 @@ const cases: Record<string, { entry: ReturnType<typeof entry>; summary: string; 
     summary: "Elena Brandt cleared a missing-tool hold on Jordan Pike's work: the tool was lost",
     details: [["Note", "Searched the hangar"]],
   },
+  "session.created": {
+    entry: entry("session.created", "class", id(20), { subject: "Riveting practice" }),
+    summary: "Elena Brandt planned a session for the class 'AMT Day Cohort 2027'",
+    details: [["Subject", "Riveting practice"]],
+  },
+  "session.closed": {
+    entry: entry("session.closed", "class", id(20), { subject: "Riveting practice" }),
+    summary: "Elena Brandt closed a session's register for the class 'AMT Day Cohort 2027'",
+    details: [["Subject", "Riveting practice"]],
+  },
+  "attendance.recorded": {
+    entry: entry("attendance.recorded", "class", id(20), { subject: "Riveting practice", entries: 3 }),
+    summary: "Elena Brandt took attendance for the class 'AMT Day Cohort 2027'",
+    details: [
+      ["Subject", "Riveting practice"],
+      ["Entries", "3"],
+    ],
+  },
+  "attendance.corrected": {
+    entry: entry("attendance.corrected", "class", id(20), { subject: "Riveting practice", entries: 1, reason: "Came back after lunch" }),
+    summary: "Elena Brandt corrected a closed register of the class 'AMT Day Cohort 2027'",
+    details: [
+      ["Subject", "Riveting practice"],
+      ["Entries", "1"],
+      ["Why", "Came back after lunch"],
+    ],
+  },
   "standard.imported": {
     entry: entry("standard.imported", "standard", null, { imported: 12, updated: 0, refused: 2 }, "Morgan Vale"),
     summary: "Morgan Vale imported the certification standard's elements",

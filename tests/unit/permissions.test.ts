@@ -28,6 +28,7 @@ const expected: Record<string, Role[]> = {
   "tools:lend": ["librarian", "admin"],
   "tools:clear-holds": ["instructor", "admin"],
   "standard:manage": ["admin"],
+  "attendance:take": ["instructor", "admin"],
 };
 
 describe("permissions", () => {

@@ -14,6 +14,7 @@ const kindLabels: Record<AuditKind, string> = {
   assignments: "Assignments",
   runs: "Buy-offs, returns and sign-offs",
   tools: "Tool room: loans, holds, calibrations",
+  attendance: "Attendance and the standard",
 };
 
 export default async function AuditPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {

@@ -10,6 +10,7 @@ import { sessionApi } from "@/lib/contracts/endpoints/session";
 import { settingsApi } from "@/lib/contracts/endpoints/settings";
 import { toolsApi } from "@/lib/contracts/endpoints/tools";
 import { standardApi } from "@/lib/contracts/endpoints/standard";
+import { attendanceApi } from "@/lib/contracts/endpoints/attendance";
 
 export const api = {
   session: sessionApi,
@@ -22,6 +23,7 @@ export const api = {
   runs: runsApi,
   tools: toolsApi,
   standard: standardApi,
+  attendance: attendanceApi,
 };
 
 export const allEndpoints: Endpoint[] = Object.values(api).flatMap((group) => Object.values(group) as Endpoint[]);

@@ -54,6 +54,8 @@ const rules = {
   "tools:lend": ["librarian", "admin"],
   /** Clear a missing-tool hold (found, or lost with a note): the instructors of the student's classes (lib/server/runs/scope.ts). */
   "tools:clear-holds": ["instructor", "admin"],
+  /** Keep the attendance registers of the classes one is staff of (admins: every class). */
+  "attendance:take": ["instructor", "admin"],
   /** Import the school's copy of the certification standard's elements. */
   "standard:manage": ["admin"],
   /** The link to the local outbox (the page itself is open while the fake SMTP server runs). */

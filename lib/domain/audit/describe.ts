@@ -336,6 +336,22 @@ const wordings: Record<string, Wording> = {
   }),
   "manual.restored": (_e, c) => ({ summary: `${c.actor} restored ${c.subject} to the library`, details: [] }),
 
+  "session.created": (e, c) => ({
+    summary: `${c.actor} planned a session for ${c.subject}`,
+    details: d("Subject", str(e.details.subject)),
+  }),
+  "session.closed": (e, c) => ({
+    summary: `${c.actor} closed a session's register for ${c.subject}`,
+    details: d("Subject", str(e.details.subject)),
+  }),
+  "attendance.recorded": (e, c) => ({
+    summary: `${c.actor} took attendance for ${c.subject}`,
+    details: [...d("Subject", str(e.details.subject)), ...d("Entries", num(e.details.entries))],
+  }),
+  "attendance.corrected": (e, c) => ({
+    summary: `${c.actor} corrected a closed register of ${c.subject}`,
+    details: [...d("Subject", str(e.details.subject)), ...d("Entries", num(e.details.entries)), ...d("Why", str(e.details.reason))],
+  }),
   "standard.imported": (e, c) => ({
     summary: `${c.actor} imported the certification standard's elements`,
     details: [

@@ -9,6 +9,7 @@ export const auditKinds = {
   assignments: ["assignment."],
   runs: ["run."],
   tools: ["tool.", "kit."],
+  attendance: ["session.", "attendance.", "standard."],
 } as const;
 export type AuditKind = keyof typeof auditKinds;
 
