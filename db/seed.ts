@@ -9,6 +9,7 @@ import { seedCards } from "./demo/seed-cards";
 import { seedRuns } from "./demo/seed-runs";
 import { seedLibrary } from "./demo/seed-library";
 import { seedTools } from "./demo/seed-tools";
+import { seedAttendance } from "./demo/seed-attendance";
 import { standardExcerptCsv } from "./demo/standard-excerpt";
 import { readStandardCsv } from "@/lib/domain/standard/elements";
 import { closeDb, getDb } from "./index";
@@ -100,6 +101,8 @@ async function main() {
   console.log(cardsAdded ? `seeded ${cardsAdded} demo task cards` : "demo task cards already present");
   const assignmentsAdded = await seedRuns(db);
   console.log(assignmentsAdded ? `seeded ${assignmentsAdded} demo assignments and their runs` : "demo assignments already present");
+  const sessionsAdded = await seedAttendance(db);
+  console.log(sessionsAdded ? `seeded ${sessionsAdded} demo class sessions with attendance` : "demo class sessions already present");
   const kitsAdded = await seedTools(db);
   console.log(kitsAdded ? `seeded the demo tool room (${kitsAdded} kits)` : "demo tool room already present");
   await (await getQueue()).stop({ graceful: false, wait: true });

@@ -9,6 +9,10 @@ import { getClassById } from "@/lib/server/classes";
 import { AddMembersForm, RemoveMemberButton } from "./_components/member-controls";
 import { isUuid } from "@/lib/server/http";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
+import { dateTimeIn } from "@/lib/domain/time";
+import { listSessions } from "@/lib/server/attendance";
+import { schoolTimeZone } from "@/lib/server/settings";
+import { PlanSessionForm } from "./_components/plan-session-form";
 
 export const metadata: Metadata = { title: "Class" };
 
@@ -18,6 +22,10 @@ export default async function ClassPage({ params }: { params: Promise<{ id: stri
   if (!isUuid(id)) notFound();
   const found = await getClassById({ actor: user, id }).catch(notFoundOnMissing);
   const manages = can(user, "classes:manage");
+  // Instructors who are staff of the class keep its registers (admins every class's).
+  const keeps = can(user, "classes:view-all") || (can(user, "attendance:take") && found.members.some((m) => m.id === user.id));
+  const sessions = keeps ? await listSessions({ actor: user, classId: found.id }) : null;
+  const zone = await schoolTimeZone();
   const memberIds = new Set(found.members.map((m) => m.id));
   const candidates = manages
     ? (await listUsers())
@@ -56,6 +64,34 @@ export default async function ClassPage({ params }: { params: Promise<{ id: stri
         )}
       </section>
       {manages ? <AddMembersForm classId={found.id} candidates={candidates} /> : null}
+      {sessions ? (
+        <section aria-labelledby="sessions" className="panel flex flex-col gap-3">
+          <h2 id="sessions">Sessions and attendance</h2>
+          <Table
+            rows={sessions}
+            rowKey={(s) => s.id}
+            empty="No session planned yet."
+            columns={[
+              {
+                header: "Session",
+                cell: (s) => (
+                  <Link href={`/classes/${found.id}/sessions/${s.id}`} className="inline-flex min-h-11 items-center font-semibold">
+                    {s.subject}
+                  </Link>
+                ),
+              },
+              { header: "When", cell: (s) => `${dateTimeIn(zone, s.startsAt)} · ${s.minutes} min` },
+              { header: "Section", cell: (s) => s.section },
+              {
+                header: "Register",
+                cell: (s) =>
+                  `${s.counts.present} present, ${s.counts.late} late, ${s.counts.absent} absent, ${s.counts.excused} excused${s.counts.unrecorded ? `, ${s.counts.unrecorded} not marked` : ""}${s.closedAt ? " · closed" : ""}`,
+              },
+            ]}
+          />
+        </section>
+      ) : null}
+      {sessions ? <PlanSessionForm classId={found.id} /> : null}
     </div>
   );
 }

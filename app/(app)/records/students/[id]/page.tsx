@@ -2,6 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { studentCoverage } from "@/lib/server/standard";
 import { CoverageSection } from "./_components/coverage-section";
+import { AttendanceSection } from "./_components/attendance-section";
+import { studentAttendance } from "@/lib/server/attendance";
 import { notFound } from "next/navigation";
 import { Table } from "@/components/table";
 import { can } from "@/lib/domain/access/permissions";
@@ -24,6 +26,7 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
   const record = await studentRecord({ actor: user, studentId: id }).catch(notFoundOnMissing);
   const zone = await schoolTimeZone();
   const coverage = await studentCoverage({ actor: user, studentId: id }).catch(notFoundOnMissing);
+  const attendance = await studentAttendance({ actor: user, studentId: id }).catch(notFoundOnMissing);
   const own = user.id === id;
   return (
     <div className="flex flex-col gap-5">
@@ -56,6 +59,7 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
         ))}
       </dl>
       <CoverageSection coverage={coverage} zone={zone} />
+      <AttendanceSection attendance={attendance} zone={zone} />
       <section aria-label="Signed off by subject" className="flex flex-col gap-3">
         <h2>Signed off, by curriculum subject</h2>
         {record.subjects.map((s) => (
