@@ -32,6 +32,9 @@ test("an instructor takes attendance, closes and corrects the register; the stud
   await page.getByRole("button", { name: "Save attendance" }).click();
   await expect(page.getByText("Attendance saved.")).toBeVisible();
   await page.screenshot({ path: test.info().outputPath("register.png"), fullPage: true });
+  // The message stays after the page refreshes behind it.
+  await page.waitForTimeout(1500);
+  await expect(page.getByText("Attendance saved.")).toBeVisible();
 
   await page.getByRole("button", { name: "Close the register…" }).click();
   await page.getByRole("alertdialog", { name: "Close the register" }).getByRole("button", { name: "Close it" }).click();

@@ -5,7 +5,7 @@ import { dateTimeIn } from "@/lib/domain/time";
 import { listKits, listTools } from "@/lib/server/tools/catalogue";
 import { lendingChoices, listCheckouts, listHolds } from "@/lib/server/tools/lending";
 import { schoolTimeZone } from "@/lib/server/settings";
-import { CountIn } from "./_components/count-in";
+import { OutNow } from "./_components/out-now";
 import { LendForm } from "./_components/lend-form";
 import { ToolNav } from "./_components/tool-nav";
 
@@ -35,29 +35,7 @@ export default async function ToolRoomPage() {
           {overdue.length ? <span className="text-danger"> · {overdue.length} past due</span> : null}
         </h2>
         <p className="hint">Past-due loans are mailed once to the student and their instructors.</p>
-        <Table
-          rows={out}
-          rowKey={(c) => c.id}
-          empty="Nothing is out."
-          columns={[
-            {
-              header: "Lent",
-              cell: (c) => (
-                <span>
-                  <strong className="font-mono">{c.kit?.number ?? c.tool?.number}</strong> {c.kit?.name ?? c.tool?.description}
-                </span>
-              ),
-            },
-            { header: "To", cell: (c) => [c.userName, c.teamNote].filter(Boolean).join(", with ") },
-            { header: "For", cell: (c) => (c.runTitle ? `Run: ${c.runTitle}` : "The day") },
-            {
-              header: "Due back",
-              cell: (c) =>
-                c.overdue ? <strong className="text-danger">{dateTimeIn(zone, c.dueAt)} · past due</strong> : dateTimeIn(zone, c.dueAt),
-            },
-            { header: "Count in", cell: (c) => <CountIn checkout={c} /> },
-          ]}
-        />
+        <OutNow out={out} dueText={Object.fromEntries(out.map((c) => [c.id, dateTimeIn(zone, c.dueAt)]))} />
       </section>
       <section aria-labelledby="holds" className="panel flex flex-col gap-3">
         <h2 id="holds">Missing tools: {holds.length} open</h2>

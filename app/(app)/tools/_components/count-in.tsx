@@ -11,7 +11,7 @@ import type { CheckoutDto } from "@/lib/contracts/tools";
  * Counting a loan back in: every tool it holds is ticked as back; untick what is not on the bench.
  * Anything missing opens a hold that keeps the student's run from being handed in.
  */
-export function CountIn({ checkout }: { checkout: CheckoutDto }) {
+export function CountIn({ checkout, onCounted }: { checkout: CheckoutDto; onCounted: (said: { ok: boolean; message: string }) => void }) {
   const router = useRouter();
   const [open, setOpen] = useState(false);
   const [back, setBack] = useState<Set<string>>(() => new Set(checkout.tools.map((t) => t.id)));
@@ -39,11 +39,12 @@ export function CountIn({ checkout }: { checkout: CheckoutDto }) {
             params: { id: checkout.id },
             body: { missingToolIds: missing.map((t) => t.id) },
           });
-          setResult({
+          const what = checkout.kit ? `Kit ${checkout.kit.number}` : (checkout.tool?.number ?? "The loan");
+          onCounted({
             ok: holds.length === 0,
             message: holds.length
-              ? `Counted in. ${holds.map((h) => h.tool.number).join(", ")} missing: a hold is open until an instructor clears it.`
-              : "Every tool is back.",
+              ? `${what} from ${checkout.userName} counted in. ${holds.map((h) => h.tool.number).join(", ")} missing: a hold is open until an instructor clears it.`
+              : `${what} from ${checkout.userName} counted in: every tool is back.`,
           });
           router.refresh();
         } catch (error) {

@@ -34,7 +34,8 @@ export default async function SessionPage({ params }: { params: Promise<{ id: st
             : "Register open."}
         </p>
       </div>
-      <RegisterForm key={session.roster.map((r) => r.current?.id ?? "").join()} session={session} />
+      {/* Not remounted on refresh: its message and choices stay, the history below each student updates. */}
+      <RegisterForm session={session} />
       {session.closedAt ? null : <CloseRegister sessionId={session.id} />}
     </div>
   );

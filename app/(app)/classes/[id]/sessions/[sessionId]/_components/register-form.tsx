@@ -83,7 +83,10 @@ export function RegisterForm({ session }: { session: SessionDetailDto }) {
                 <legend className="text-lg font-bold">{r.name}</legend>
                 <div className="flex flex-wrap gap-2">
                   {attendanceStatuses.map((s) => (
-                    <label key={s} className={`btn ${row.status === s ? "btn-primary" : "btn-secondary"} cursor-pointer`}>
+                    <label
+                      key={s}
+                      className={`btn ${row.status === s ? "btn-primary" : "btn-secondary"} cursor-pointer has-[:focus-visible]:outline-4 has-[:focus-visible]:outline-offset-2 has-[:focus-visible]:outline-[#f2b01e]`}
+                    >
                       <input
                         type="radio"
                         className="sr-only"
