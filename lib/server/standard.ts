@@ -122,7 +122,7 @@ export async function listElements({ q, kind }: { q?: string; kind?: ElementKind
     .orderBy(asc(standardElements.section), asc(standardElements.areaLetter), asc(standardElements.kind), asc(standardElements.number))
     .limit(words ? 200 : 5000);
   const [flag] = await getDb()
-    .select({ excerpt: sql<boolean>`coalesce(bool_and(${standardElements.excerpt}), false)` })
+    .select({ excerpt: sql<boolean>`coalesce(bool_or(${standardElements.excerpt}), false)` })
     .from(standardElements);
   // The standard's own order: General, Airframe, Powerplant (I, II, III), not the alphabet's.
   const order = Object.values(sections) as string[];

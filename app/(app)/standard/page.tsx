@@ -16,8 +16,8 @@ export default async function StandardPage() {
       <h1>Certification standard</h1>
       {excerpt ? (
         <p role="note" className="rounded-md border-4 border-dashed border-deck bg-teal-pale px-4 py-3 font-semibold">
-          This is the demo&apos;s excerpt, not the standard: a few elements with codes and words from memory, to be verified against the
-          current FAA-S-ACS-1. Import the school&apos;s own copy below; it replaces the excerpt&apos;s words.
+          Elements marked &quot;(excerpt; verify)&quot; are the demo&apos;s excerpt, not the standard: codes and words from memory, to be
+          verified against the current FAA-S-ACS-1. Import the school&apos;s own copy below; it replaces their words for the codes it has.
         </p>
       ) : null}
       <ImportForm />

@@ -14,7 +14,7 @@ export const standardApi = {
     }),
     answer: json<{ elements: ElementDto[]; excerpt: boolean }>(),
     who: "signed in",
-    doc: '`?q=` words or a code prefix, `?kind=` → 200 `{ "elements": [ { "code", "kind": "knowledge\\|risk\\|skill", "title", "section", "area" } ], "excerpt" }` in code order (up to 200 with `q`, all without); `excerpt` is true while the list is the demo\'s excerpt, not a school\'s import',
+    doc: '`?q=` words or a code prefix, `?kind=` → 200 `{ "elements": [ { "code", "kind": "knowledge\\|risk\\|skill", "title", "section", "area" } ], "excerpt" }` in code order (up to 200 with `q`, all without); `excerpt` is true while any element is still the demo\'s excerpt (not replaced by a school\'s import)',
   }),
   importStandard: endpoint({
     method: "POST",

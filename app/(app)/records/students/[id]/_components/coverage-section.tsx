@@ -13,7 +13,7 @@ export function CoverageSection({ coverage, zone }: { coverage: CoverageDto; zon
       <h2 id="coverage">Certification standard: coverage</h2>
       {coverage.excerpt ? (
         <p className="hint">
-          The standard here is the demo&apos;s excerpt (to be verified against the current FAA-S-ACS-1), not the whole standard.
+          The standard here includes the demo&apos;s excerpt (to be verified against the current FAA-S-ACS-1); it is not the whole standard.
         </p>
       ) : null}
       <Table
