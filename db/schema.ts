@@ -734,13 +734,7 @@ export const standardElements = pgTable(
     excerpt: boolean("excerpt").notNull().default(false),
     ...timestamps,
   },
-  (t) => [
-    check("standard_elements_kind", sql`${t.kind} in ('knowledge', 'risk', 'skill')`),
-    index("standard_elements_search_idx").using(
-      "gin",
-      sql`to_tsvector('english', ${t.code} || ' ' || ${t.areaTitle} || ' ' || ${t.title})`,
-    ),
-  ],
+  (t) => [check("standard_elements_kind", sql`${t.kind} in ('knowledge', 'risk', 'skill')`)],
 );
 
 /** A class's session on the timetable: when, how long, which section of the standard it counts to. */

@@ -16,6 +16,18 @@ import type { z } from "zod";
 import { recordAudit } from "@/lib/server/audit";
 import { readsRecordOf } from "@/lib/server/runs/scope";
 
+/** A session as lists show it, without the register's counts. */
+const sessionFields = (s: typeof classSessions.$inferSelect, className: string) => ({
+  id: s.id,
+  classId: s.classId,
+  className,
+  startsAt: s.startsAt.toISOString(),
+  minutes: s.minutes,
+  section: s.section,
+  subject: s.subject,
+  closedAt: s.closedAt?.toISOString() ?? null,
+});
+
 const sessionNotFound = () => new AppError("not_found", "That session was not found.");
 const recorder = alias(users, "attendance_recorder");
 
@@ -105,17 +117,7 @@ export async function listSessions({ actor, classId }: { actor: Actor; classId?:
     const counts = Object.fromEntries([...attendanceStatuses, "unrecorded"].map((k) => [k, 0])) as SessionDto["counts"];
     for (const e of current.values()) counts[e.status]++;
     counts.unrecorded = Math.max(0, (rosters.get(s.classId) ?? 0) - current.size);
-    return {
-      id: s.id,
-      classId: s.classId,
-      className,
-      startsAt: s.startsAt.toISOString(),
-      minutes: s.minutes,
-      section: s.section,
-      subject: s.subject,
-      closedAt: s.closedAt?.toISOString() ?? null,
-      counts,
-    };
+    return { ...sessionFields(s, className), counts };
   });
 }
 
@@ -254,16 +256,6 @@ export async function studentAttendance({ actor, studentId }: { actor: Actor; st
       rows.map((r) => r.s),
       bySession,
     ),
-    sessions: rows.map(({ s, className }) => ({
-      id: s.id,
-      classId: s.classId,
-      className,
-      startsAt: s.startsAt.toISOString(),
-      minutes: s.minutes,
-      section: s.section,
-      subject: s.subject,
-      closedAt: s.closedAt?.toISOString() ?? null,
-      entry: bySession.get(s.id) ?? null,
-    })),
+    sessions: rows.map(({ s, className }) => ({ ...sessionFields(s, className), entry: bySession.get(s.id) ?? null })),
   };
 }

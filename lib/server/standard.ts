@@ -103,7 +103,8 @@ export async function listElements({ q, kind }: { q?: string; kind?: ElementKind
   excerpt: boolean;
 }> {
   const words = (q ?? "").trim();
-  const like = `%${words.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+  // LIKE's own characters typed in the words match themselves.
+  const literal = words.replace(/[\\%_]/g, (c) => `\\${c}`);
   const rows = await getDb()
     .select()
     .from(standardElements)
@@ -112,9 +113,9 @@ export async function listElements({ q, kind }: { q?: string; kind?: ElementKind
         kind ? eq(standardElements.kind, kind) : undefined,
         words
           ? or(
-              ilike(standardElements.code, `${words.replace(/[\\%_]/g, (c) => `\\${c}`)}%`),
-              ilike(standardElements.title, like),
-              ilike(standardElements.areaTitle, like),
+              ilike(standardElements.code, `${literal}%`),
+              ilike(standardElements.title, `%${literal}%`),
+              ilike(standardElements.areaTitle, `%${literal}%`),
             )
           : undefined,
       ),

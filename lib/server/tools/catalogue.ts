@@ -40,8 +40,13 @@ async function openLoans(db: Db | Tx) {
   return { byTool, byKit };
 }
 
+/** A tool joins a kit of the tool room or none: 422 beside the field otherwise. */
+async function assertKit(db: Db | Tx, kitId: string | null | undefined) {
+  if (kitId && !(await db.select({ id: toolKits.id }).from(toolKits).where(eq(toolKits.id, kitId))).length)
+    throw new AppError("invalid", "That kit is not in the tool room.", { fields: { kitId: "Choose a kit of the tool room." } });
+}
+
 const toolNotFound = () => new AppError("not_found", "That tool was not found.");
-const kitNotFound = () => new AppError("not_found", "That kit was not found.");
 
 function duplicateNumber(error: unknown, what: string, number: string): never {
   if (databaseErrorCode(error) === "23505") throw new AppError("conflict", `The tool room already has a ${what} numbered ${number}.`);
@@ -49,7 +54,7 @@ function duplicateNumber(error: unknown, what: string, number: string): never {
 }
 
 /** Every tool, or the precision tools due within `dueWithin` days (past due included), by number. */
-export async function listTools({ dueWithin }: { dueWithin?: number } = {}): Promise<ToolDto[]> {
+export async function listTools({ dueWithin, id }: { dueWithin?: number; id?: string } = {}): Promise<ToolDto[]> {
   const db = getDb();
   const today = dayIn(await schoolTimeZone());
   const rows = await db
@@ -57,12 +62,15 @@ export async function listTools({ dueWithin }: { dueWithin?: number } = {}): Pro
     .from(tools)
     .leftJoin(toolKits, eq(toolKits.id, tools.kitId))
     .where(
-      dueWithin === undefined
-        ? undefined
-        : and(
-            eq(tools.calibrated, true),
-            sql`coalesce(${tools.calibrationDueOn}, '-infinity'::date) <= ${addDays(today, dueWithin)}::date`,
-          ),
+      and(
+        id ? eq(tools.id, id) : undefined,
+        dueWithin === undefined
+          ? undefined
+          : and(
+              eq(tools.calibrated, true),
+              sql`coalesce(${tools.calibrationDueOn}, '-infinity'::date) <= ${addDays(today, dueWithin)}::date`,
+            ),
+      ),
     )
     .orderBy(dueWithin === undefined ? asc(tools.number) : asc(tools.calibrationDueOn))
     .limit(5000);
@@ -84,7 +92,7 @@ export async function listTools({ dueWithin }: { dueWithin?: number } = {}): Pro
 }
 
 export async function getTool(id: string): Promise<ToolDto & { calibrations: CalibrationDto[] }> {
-  const [tool] = (await listTools()).filter((t) => t.id === id);
+  const [tool] = await listTools({ id });
   if (!tool) throw toolNotFound();
   const calibrations = await getDb()
     .select({ c: toolCalibrations, recordedByName: users.name })
@@ -137,8 +145,7 @@ export async function listKits(): Promise<KitDto[]> {
 export async function createTool({ actor, input }: { actor: Actor; input: z.output<typeof createToolSchema> }): Promise<{ id: string }> {
   try {
     return await getDb().transaction(async (tx) => {
-      if (input.kitId && !(await tx.select({ id: toolKits.id }).from(toolKits).where(eq(toolKits.id, input.kitId))).length)
-        throw new AppError("invalid", "That kit is not in the tool room.", { fields: { kitId: "Choose a kit of the tool room." } });
+      await assertKit(tx, input.kitId);
       const [row] = await tx
         .insert(tools)
         .values({
@@ -168,8 +175,7 @@ export async function updateTool({ actor, id, input }: { actor: Actor; id: strin
   return getDb().transaction(async (tx) => {
     const [tool] = await tx.select().from(tools).where(eq(tools.id, id)).for("update");
     if (!tool) throw toolNotFound();
-    if (input.kitId && !(await tx.select({ id: toolKits.id }).from(toolKits).where(eq(toolKits.id, input.kitId))).length)
-      throw new AppError("invalid", "That kit is not in the tool room.", { fields: { kitId: "Choose a kit of the tool room." } });
+    await assertKit(tx, input.kitId);
     const status = input.status ?? tool.status;
     await tx
       .update(tools)
@@ -209,12 +215,6 @@ export async function createKit({ actor, input }: { actor: Actor; input: z.outpu
   } catch (error) {
     duplicateNumber(error, "kit", input.number);
   }
-}
-
-export async function getKitOrThrow(db: Db | Tx, id: string) {
-  const [kit] = await db.select().from(toolKits).where(eq(toolKits.id, id));
-  if (!kit) throw kitNotFound();
-  return kit;
 }
 
 /**

@@ -9,6 +9,7 @@ import { alias } from "drizzle-orm/pg-core";
 import { getDb, type Db, type Tx } from "@/db";
 import { assignments, runs, taskCardVersions, toolCheckouts, toolHolds, toolKits, tools, users } from "@/db/schema";
 import type { CheckoutDto, RunToolsDto, ToolHoldDto } from "@/lib/contracts/tools";
+import { isUuid } from "@/lib/contracts/endpoint";
 import { can, type Actor } from "@/lib/domain/access/permissions";
 import { AppError } from "@/lib/domain/errors";
 import { dateTimeIn } from "@/lib/domain/time";
@@ -415,18 +416,8 @@ export async function checkReadingTools<
   if (!readings.length) return events;
   const needs = new Map(steps.map((s, i) => [s.id, { number: i + 1, calibrated: !!s.calibratedTool }]));
   const ids = [...new Set(readings.map((e) => e.payload.toolId).filter((v): v is string => typeof v === "string"))];
-  const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-  const found = ids.filter((id) => uuid.test(id)).length
-    ? await db
-        .select()
-        .from(tools)
-        .where(
-          inArray(
-            tools.id,
-            ids.filter((id) => uuid.test(id)),
-          ),
-        )
-    : [];
+  const named = ids.filter(isUuid).map((id) => id.toLowerCase());
+  const found = named.length ? await db.select().from(tools).where(inArray(tools.id, named)) : [];
   const byId = new Map(found.map((t) => [t.id, t]));
   const zone = await schoolTimeZone();
   return events.map((e) => {
