@@ -34,11 +34,15 @@ const timestamps = {
 
 /**
  * The school's own settings, one row (id "school"): the time zone its days and times are told in.
- * Stored times stay UTC; this is how screens, mails and "is it overdue" read them.
+ * Stored times stay UTC; this is how screens, mails and "is it overdue" read them. Also the hours
+ * the school plans per section of the standard.
  */
 export const schoolSettings = pgTable("school_settings", {
   id: text("id").primaryKey().default("school"),
   timeZone: text("time_zone").notNull().default("UTC"),
+  // Hours the school plans per section of the standard ({ "General": 400, … }); attendance is
+  // shown against them. A section left out has no plan.
+  plannedHours: jsonb("planned_hours").$type<Partial<Record<string, number>>>().notNull().default({}),
   ...timestamps,
 });
 

@@ -92,8 +92,13 @@ async function main() {
   console.log(missing.length ? `seeded ${missing.length} demo accounts` : "demo accounts already present");
   const revisionsAdded = await seedLibrary(db);
   console.log(revisionsAdded ? `queued ${revisionsAdded} demo manual revisions for ingest` : "demo manuals already present");
-  // The demo school keeps its hangar's clock; an admin changes it under School settings.
-  const zoned = await db.insert(schoolSettings).values({ id: "school", timeZone: "America/Chicago" }).onConflictDoNothing().returning();
+  // The demo school keeps its hangar's clock, and plans its own hours per section (invented figures,
+  // not a rule's minimums); an admin changes both under School settings.
+  const zoned = await db
+    .insert(schoolSettings)
+    .values({ id: "school", timeZone: "America/Chicago", plannedHours: { General: 420, Airframe: 760, Powerplant: 760 } })
+    .onConflictDoNothing()
+    .returning();
   console.log(zoned.length ? "set the demo school's time zone" : "school settings already present");
   const elementsAdded = await seedStandardExcerpt(db);
   console.log(elementsAdded ? `seeded the standard's demo excerpt (${elementsAdded} elements)` : "standard elements already present");

@@ -19,3 +19,20 @@ export interface CoverageDto {
   })[];
   totals: Record<string, Record<ElementKind, Record<CoverageStatus, number>>>;
 }
+
+export interface ClassCoverageDto {
+  class: { id: string; name: string };
+  excerpt: boolean;
+  kind: ElementKind;
+  elements: ElementDto[];
+  students: {
+    id: string;
+    name: string;
+    statuses: Record<string, CoverageStatus>;
+    demonstrated: number;
+    practised: number;
+    missing: number;
+  }[];
+  /** Codes no student of the class has demonstrated. */
+  gaps: string[];
+}

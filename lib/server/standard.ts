@@ -4,7 +4,7 @@ import "server-only";
 import { and, asc, eq, ilike, inArray, or, sql } from "drizzle-orm";
 import { getDb } from "@/db";
 import { assignments, runs, signOffs, standardElements, taskCardVersions, users } from "@/db/schema";
-import type { CoverageDto, ElementDto } from "@/lib/contracts/standard";
+import type { ClassCoverageDto, CoverageDto, ElementDto } from "@/lib/contracts/standard";
 import type { Actor } from "@/lib/domain/access/permissions";
 import { AppError } from "@/lib/domain/errors";
 import {
@@ -18,7 +18,7 @@ import {
 } from "@/lib/domain/standard/elements";
 import { recordAudit } from "@/lib/server/audit";
 import { readBodyText } from "@/lib/server/http";
-import { readsRecordOf } from "@/lib/server/runs/scope";
+import { activeStudentsOf, classOfStaff, readsRecordOf } from "@/lib/server/runs/scope";
 
 const maxCsvBytes = 2 * 1024 * 1024;
 
@@ -146,15 +146,14 @@ export async function unknownElementCodes(codes: readonly string[]): Promise<str
   return wanted.filter((c) => !known.has(c));
 }
 
-/** Every element's status for the student, with the run that demonstrated or practised it. */
-export async function studentCoverage({ actor, studentId }: { actor: Actor; studentId: string }): Promise<CoverageDto> {
-  const db = getDb();
-  const [student] = await db.select({ id: users.id, name: users.name, role: users.role }).from(users).where(eq(users.id, studentId));
-  if (!student || student.role !== "student" || !(await readsRecordOf(db, actor, studentId)))
-    throw new AppError("not_found", "That student was not found.");
-  const { elements, excerpt } = await listElements();
+type Db = ReturnType<typeof getDb>;
+
+/** Each student's runs as coverage reads them, with what the records name about each run. */
+async function coverageRunsOf(db: Db, studentIds: readonly string[]) {
+  if (!studentIds.length) return [];
   const rows = await db
     .select({
+      studentId: runs.studentId,
       runId: runs.id,
       status: runs.status,
       steps: taskCardVersions.steps,
@@ -170,20 +169,29 @@ export async function studentCoverage({ actor, studentId }: { actor: Actor; stud
     .innerJoin(taskCardVersions, eq(taskCardVersions.id, runs.versionId))
     .leftJoin(signOffs, eq(signOffs.runId, runs.id))
     .leftJoin(users, eq(users.id, signOffs.instructorId))
-    .where(eq(runs.studentId, studentId));
+    .where(inArray(runs.studentId, [...studentIds]));
   // A withdrawn run that was not signed off practised nothing the school counts.
-  const counted = rows.filter((r) => r.status === "signed_off" || !r.withdrawnAt);
+  return rows.filter((r) => r.status === "signed_off" || !r.withdrawnAt);
+}
+
+const forCoverage = (r: Awaited<ReturnType<typeof coverageRunsOf>>[number]) => ({
+  runId: r.runId,
+  signedOff: r.status === "signed_off",
+  started: r.status !== "not_started",
+  codes: ((r.steps as { elements?: unknown }[]) ?? []).flatMap((s) => (Array.isArray(s.elements) ? (s.elements as string[]) : [])),
+  signedAt: r.signedAt?.toISOString() ?? null,
+});
+
+/** Every element's status for the student, with the run that demonstrated or practised it. */
+export async function studentCoverage({ actor, studentId }: { actor: Actor; studentId: string }): Promise<CoverageDto> {
+  const db = getDb();
+  const [student] = await db.select({ id: users.id, name: users.name, role: users.role }).from(users).where(eq(users.id, studentId));
+  if (!student || student.role !== "student" || !(await readsRecordOf(db, actor, studentId)))
+    throw new AppError("not_found", "That student was not found.");
+  const { elements, excerpt } = await listElements();
+  const counted = await coverageRunsOf(db, [studentId]);
   const byRun = new Map(counted.map((r) => [r.runId, r]));
-  const statuses = coverageOf(
-    elements,
-    counted.map((r) => ({
-      runId: r.runId,
-      signedOff: r.status === "signed_off",
-      started: r.status !== "not_started",
-      codes: ((r.steps as { elements?: unknown }[]) ?? []).flatMap((s) => (Array.isArray(s.elements) ? (s.elements as string[]) : [])),
-      signedAt: r.signedAt?.toISOString() ?? null,
-    })),
-  );
+  const statuses = coverageOf(elements, counted.map(forCoverage));
   const totals: CoverageDto["totals"] = {};
   const out = elements.map((e, i) => {
     const s = statuses[i]!;
@@ -208,4 +216,44 @@ export async function studentCoverage({ actor, studentId }: { actor: Actor; stud
     };
   });
   return { student: { id: student.id, name: student.name }, excerpt, elements: out, totals };
+}
+
+/**
+ * A class as a grid: each active student against the standard's elements (skill elements unless
+ * another kind is asked for), and the elements no student has demonstrated yet: the gaps.
+ */
+export async function classCoverage({
+  actor,
+  classId,
+  kind = "skill",
+  section,
+}: {
+  actor: Actor;
+  classId: string;
+  kind?: ElementKind;
+  section?: string;
+}): Promise<ClassCoverageDto> {
+  const db = getDb();
+  const klass = await classOfStaff(db, actor, classId);
+  const students = await activeStudentsOf(db, classId);
+  const { elements: all, excerpt } = await listElements({ kind });
+  const elements = section ? all.filter((e) => e.section === section) : all;
+  const counted = await coverageRunsOf(
+    db,
+    students.map((s) => s.id),
+  );
+  const rows = students.map((s) => {
+    const statuses = coverageOf(elements, counted.filter((r) => r.studentId === s.id).map(forCoverage));
+    const count = (status: CoverageStatus) => statuses.filter((x) => x.status === status).length;
+    return {
+      id: s.id,
+      name: s.name,
+      statuses: Object.fromEntries(statuses.map((x) => [x.code, x.status])) as Record<string, CoverageStatus>,
+      demonstrated: count("demonstrated"),
+      practised: count("practised"),
+      missing: count("missing"),
+    };
+  });
+  const gaps = elements.filter((e) => !rows.some((r) => r.statuses[e.code] === "demonstrated")).map((e) => e.code);
+  return { class: klass, excerpt, kind, elements, students: rows, gaps };
 }

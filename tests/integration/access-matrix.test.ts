@@ -351,6 +351,13 @@ export const accessMatrix: Row[] = [
   },
   {
     method: "GET",
+    route: "/api/records/students/[id]/readiness",
+    path: (i) => `/api/records/students/${i.studentId}/readiness`,
+    expect: only({ student: 200, instructor: 200, admin: 200 }),
+    cross: { otherInstructor: 404, otherStudent: 404 },
+  },
+  {
+    method: "GET",
     route: "/api/records/students/[id]/attendance",
     path: (i) => `/api/records/students/${i.studentId}/attendance`,
     expect: only({ student: 200, instructor: 200, admin: 200 }),
@@ -390,6 +397,13 @@ export const accessMatrix: Row[] = [
     method: "GET",
     route: "/api/records/classes/[id]",
     path: (i) => `/api/records/classes/${i.dayClassId}`,
+    expect: only({ instructor: 200, admin: 200 }),
+    cross: { otherInstructor: 404 },
+  },
+  {
+    method: "GET",
+    route: "/api/records/classes/[id]/coverage",
+    path: (i) => `/api/records/classes/${i.dayClassId}/coverage`,
     expect: only({ instructor: 200, admin: 200 }),
     cross: { otherInstructor: 404 },
   },

@@ -8,7 +8,8 @@ import { getDb } from "@/db";
 import { classes, classMembers, curriculumSubjects } from "@/db/schema";
 import type { CardDto } from "@/lib/contracts/cards";
 import type { WorkItemDto } from "@/lib/contracts/runs";
-import type { CoverageDto, ElementDto } from "@/lib/contracts/standard";
+import type { ClassCoverageDto, CoverageDto, ElementDto } from "@/lib/contracts/standard";
+import type { Readiness } from "@/lib/domain/standard/readiness";
 import { call, demo, makeAccount, signIn } from "../support/http";
 import { uniqueTitle } from "../support/library";
 
@@ -31,6 +32,7 @@ let admin: string;
 let teacher: Person;
 let learner: Person;
 let stranger: Person;
+let classId: string;
 const word = `rivetry${randomUUID().slice(0, 6)}`;
 const csv = [
   "code,area,element",
@@ -49,6 +51,7 @@ beforeAll(async () => {
     .insert(classes)
     .values({ name: uniqueTitle("Standard class") })
     .returning({ id: classes.id });
+  classId = row!.id;
   await getDb()
     .insert(classMembers)
     .values([teacher, learner].map((p) => ({ classId: row!.id, userId: p.id })));
@@ -187,5 +190,52 @@ describe("the certification standard", () => {
     expect((await call("GET", `/api/records/students/${learner.id}/coverage`, { cookie: stranger.cookie })).status).toBe(404);
     const otherStudent = await person("student");
     expect((await call("GET", `/api/records/students/${learner.id}/coverage`, { cookie: otherStudent.cookie })).status).toBe(404);
+  });
+
+  it("puts the class in a grid with its gaps, and a readiness report per student as JSON, CSV and PDF", async () => {
+    // After the sign-off above, the learner has demonstrated AM.II.Y.S1; AM.II.X.S1 is on the signed-off
+    // card too. A second, new student of the class has nothing: every element is a gap only if nobody shows it.
+    const newcomer = await person("student");
+    await getDb().insert(classMembers).values({ classId, userId: newcomer.id });
+    const grid = await body<ClassCoverageDto>(
+      await call("GET", `/api/records/classes/${classId}/coverage?section=Airframe`, { cookie: teacher.cookie }),
+      200,
+    );
+    expect(grid.kind).toBe("skill");
+    expect(grid.elements.every((e) => e.kind === "skill" && e.section === "Airframe")).toBe(true);
+    const row = (id: string) => grid.students.find((s) => s.id === id)!;
+    expect(row(learner.id).statuses["AM.II.Y.S1"]).toBe("demonstrated");
+    expect(row(newcomer.id).statuses["AM.II.Y.S1"]).toBe("missing");
+    expect(row(newcomer.id).demonstrated).toBe(0);
+    expect(grid.gaps).not.toContain("AM.II.Y.S1");
+    expect(grid.gaps).toEqual(grid.elements.filter((e) => row(learner.id).statuses[e.code] !== "demonstrated").map((e) => e.code));
+    expect((await call("GET", `/api/records/classes/${classId}/coverage`, { cookie: stranger.cookie })).status).toBe(404);
+    expect((await call("GET", `/api/records/classes/${classId}/coverage`, { cookie: learner.cookie })).status).toBe(403);
+
+    const readiness = await body<Readiness>(
+      await call("GET", `/api/records/students/${newcomer.id}/readiness`, { cookie: teacher.cookie }),
+      200,
+    );
+    expect(readiness.ready).toBe(false);
+    const airframe = readiness.sections.find((s) => s.section === "Airframe")!;
+    expect(airframe.remaining.map((e) => e.code)).toContain("AM.II.Y.S1");
+    expect(readiness.remaining).toBe(readiness.sections.reduce((n, s) => n + s.remaining.length, 0));
+    const mine = await body<Readiness>(await call("GET", `/api/records/students/${learner.id}/readiness`, { cookie: learner.cookie }), 200);
+    expect(mine.sections.find((s) => s.section === "Airframe")!.remaining.map((e) => e.code)).not.toContain("AM.II.Y.S1");
+
+    const csvReport = await call("GET", `/api/records/students/${newcomer.id}/readiness?format=csv`, { cookie: teacher.cookie });
+    expect(csvReport.status).toBe(200);
+    expect(csvReport.headers.get("content-type")).toMatch(/^text\/csv/);
+    const lines = (await csvReport.text()).trimEnd().split("\r\n");
+    expect(lines[0]).toBe("Student,Section,Code,Kind,Area of operation,Element,Status,Practised in");
+    expect(lines).toHaveLength(readiness.remaining + 1);
+    expect(lines.some((l) => l.includes(",AM.II.Y.S1,Skill,Y. Practice Controls,Rig a practice cable,Not yet,"))).toBe(true);
+    const pdf = await call("GET", `/api/records/students/${newcomer.id}/readiness?format=pdf`, { cookie: newcomer.cookie });
+    expect(pdf.status).toBe(200);
+    expect(pdf.headers.get("content-type")).toBe("application/pdf");
+    expect(new TextDecoder().decode((await pdf.arrayBuffer()).slice(0, 5))).toBe("%PDF-");
+    // Another student and another class's instructor: not found.
+    expect((await call("GET", `/api/records/students/${newcomer.id}/readiness`, { cookie: learner.cookie })).status).toBe(404);
+    expect((await call("GET", `/api/records/students/${newcomer.id}/readiness?format=csv`, { cookie: stranger.cookie })).status).toBe(404);
   });
 });

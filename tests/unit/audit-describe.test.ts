@@ -340,6 +340,7 @@ const cases: Record<string, { entry: ReturnType<typeof entry>; summary: string; 
     summary: "Morgan Vale set the school's time zone to America/Chicago",
     details: [["Time zone", "America/Chicago"]],
   },
+
   "run.bought_off": {
     entry: entry("run.bought_off", "run", id(60), { stepId: id(71) }),
     summary: "Elena Brandt bought off step 2 of Jonas Weber's run of 'Wheel bearing inspection' (version 3)",
@@ -404,6 +405,15 @@ describe("the audit log in words", () => {
       for (const line of out.details) expect(`${line.label} ${line.value}`).not.toMatch(looksLikeJson);
     });
   }
+
+  it("words a change of the planned hours (null drops a section's plan)", () => {
+    const out = describeAuditEvent(
+      entry("settings.updated", "settings", null, { plannedHours: { General: 400, Airframe: null } }, "Morgan Vale"),
+      names,
+    );
+    expect(out.summary).toBe("Morgan Vale changed the school's planned hours");
+    expect(out.details.map((l) => [l.label, l.value])).toEqual([["Planned hours", "General 400, Airframe no plan"]]);
+  });
 
   it("still reads as a sentence when the records could not be named", () => {
     expect(describeAuditEvent(cases["run.bought_off"]!.entry, noNames).summary).toBe(

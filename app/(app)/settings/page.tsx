@@ -2,13 +2,14 @@ import type { Metadata } from "next";
 import { requirePageUser } from "@/app/_adapters/session";
 import { dateTimeIn, zoneLabel } from "@/lib/domain/time";
 import { getSchoolSettings } from "@/lib/server/settings";
+import { PlannedHoursForm } from "./_components/planned-hours-form";
 import { SettingsForm } from "./_components/settings-form";
 
 export const metadata: Metadata = { title: "School settings" };
 
 export default async function SettingsPage() {
   await requirePageUser("settings:manage", "/settings");
-  const { timeZone } = await getSchoolSettings();
+  const { timeZone, plannedHours } = await getSchoolSettings();
   return (
     <div className="flex max-w-3xl flex-col gap-5">
       <h1>School settings</h1>
@@ -22,6 +23,15 @@ export default async function SettingsPage() {
           Now: {dateTimeIn(timeZone, new Date())} {zoneLabel(timeZone)} ({timeZone})
         </p>
         <SettingsForm timeZone={timeZone} />
+      </section>
+      <section className="panel flex flex-col gap-3" aria-labelledby="hours-heading">
+        <h2 id="hours-heading">Planned hours per section</h2>
+        <p>
+          The hours of instruction the school plans for each section of the certification standard. Each student&apos;s record shows the
+          hours attended against them, and the readiness report counts a section as done once they are attended. The school&apos;s approved
+          curriculum and the current rule set these figures; leave a box empty for a section the school does not plan.
+        </p>
+        <PlannedHoursForm plannedHours={plannedHours} />
       </section>
     </div>
   );

@@ -4,6 +4,6 @@ import { getSchoolSettings, updateSchoolSettings } from "@/lib/server/settings";
 
 export const GET = handle(api.settings.get, async () => ({ settings: await getSchoolSettings() }));
 
-export const PUT = handle(api.settings.update, async ({ actor, body: { timeZone } }) => ({
-  settings: await updateSchoolSettings({ actor, timeZone }),
+export const PUT = handle(api.settings.update, async ({ actor, body: { timeZone, plannedHours } }) => ({
+  settings: await updateSchoolSettings({ actor, timeZone, plannedHours }),
 }));

@@ -362,9 +362,20 @@ const wordings: Record<string, Wording> = {
   }),
   "settings.updated": (e, c) => {
     const zone = str(e.details.timeZone);
+    const planned =
+      e.details.plannedHours && typeof e.details.plannedHours === "object" ? (e.details.plannedHours as Record<string, unknown>) : null;
+    const hours = planned
+      ? Object.entries(planned)
+          .map(([section, h]) => `${section} ${num(h) ?? "no plan"}`)
+          .join(", ")
+      : null;
     return {
-      summary: zone ? `${c.actor} set the school's time zone to ${zone}` : `${c.actor} changed the school's settings`,
-      details: d("Time zone", zone),
+      summary: zone
+        ? `${c.actor} set the school's time zone to ${zone}`
+        : hours
+          ? `${c.actor} changed the school's planned hours`
+          : `${c.actor} changed the school's settings`,
+      details: [...d("Time zone", zone), ...d("Planned hours", hours)],
     };
   },
 

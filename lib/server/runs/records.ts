@@ -1,9 +1,9 @@
 import "server-only";
-import { and, asc, eq, ne } from "drizzle-orm";
+import { asc, eq } from "drizzle-orm";
 import { PDFDocument } from "pdf-lib";
 import { getDb } from "@/db";
-import { classes, classMembers, curriculumSubjects, runs, signOffs, taskCardVersions, users } from "@/db/schema";
-import { can, type Actor } from "@/lib/domain/access/permissions";
+import { curriculumSubjects, runs, signOffs, taskCardVersions, users } from "@/db/schema";
+import type { Actor } from "@/lib/domain/access/permissions";
 import type { ClassRecordDto, SignOffDto, StudentRecordDto } from "@/lib/contracts/runs";
 import { AppError } from "@/lib/domain/errors";
 import { CardWriter, embedCardFonts, grey, markdownToPlain } from "@/lib/server/pdf/card-pdf";
@@ -13,7 +13,7 @@ import { dayIn } from "@/lib/domain/time";
 import { schoolTimeZone } from "@/lib/server/settings";
 import { stepSchema } from "@/lib/domain/validation/cards";
 import { foldStoredRuns, listRunsOfStudent } from "@/lib/server/runs/queries";
-import { readsRecordOf } from "@/lib/server/runs/scope";
+import { activeStudentsOf, classOfStaff, readsRecordOf } from "@/lib/server/runs/scope";
 
 const noSubject = "No subject";
 
@@ -125,23 +125,8 @@ export async function studentRecordPdf(record: StudentRecordDto, printedAt = new
 /** A class at a glance: each student's signed-off and assigned cards per subject. */
 export async function classRecord({ actor, classId }: { actor: Actor; classId: string }): Promise<ClassRecordDto> {
   const db = getDb();
-  const [klass] = await db.select({ id: classes.id, name: classes.name }).from(classes).where(eq(classes.id, classId));
-  const member =
-    klass &&
-    (can(actor, "classes:view-all") ||
-      (
-        await db
-          .select()
-          .from(classMembers)
-          .where(and(eq(classMembers.classId, classId), eq(classMembers.userId, actor.id)))
-      ).length > 0);
-  if (!klass || !member || !can(actor, "records:view-all")) throw new AppError("not_found", "That class was not found.");
-  const students = await db
-    .select({ id: users.id, name: users.name })
-    .from(classMembers)
-    .innerJoin(users, eq(users.id, classMembers.userId))
-    .where(and(eq(classMembers.classId, classId), eq(users.role, "student"), ne(users.status, "deactivated")))
-    .orderBy(asc(users.name));
+  const klass = await classOfStaff(db, actor, classId);
+  const students = await activeStudentsOf(db, classId);
   const result: ClassRecordDto["students"] = [];
   const subjects = new Set<string>();
   for (const s of students) {

@@ -1,8 +1,9 @@
 import "server-only";
-import { sql, type SQL } from "drizzle-orm";
+import { and, asc, eq, ne, sql, type SQL } from "drizzle-orm";
 import type { Db, Tx } from "@/db";
-import { assignments, runs } from "@/db/schema";
+import { assignments, classes, classMembers, runs, users } from "@/db/schema";
 import { can, type Actor } from "@/lib/domain/access/permissions";
+import { AppError } from "@/lib/domain/errors";
 
 // Whose work an instructor may review, buy off, sign off and read records of: the students of the
 // classes they are staff of, and the runs of assignments they made themselves. An admin reaches
@@ -56,4 +57,31 @@ export async function assignableStudents(db: Db | Tx, actor: Actor, studentIds: 
         )})`,
   );
   return new Set(result.rows.map((r) => r.id));
+}
+
+/** The class, when the actor reads its records: an instructor who is its staff, or an admin. 404 otherwise. */
+export async function classOfStaff(db: Db | Tx, actor: Actor, classId: string): Promise<{ id: string; name: string }> {
+  const [klass] = await db.select({ id: classes.id, name: classes.name }).from(classes).where(eq(classes.id, classId));
+  const member =
+    klass &&
+    can(actor, "records:view-all") &&
+    (can(actor, "classes:view-all") ||
+      (
+        await db
+          .select({ id: classMembers.userId })
+          .from(classMembers)
+          .where(and(eq(classMembers.classId, classId), eq(classMembers.userId, actor.id)))
+      ).length > 0);
+  if (!klass || !member) throw new AppError("not_found", "That class was not found.");
+  return klass;
+}
+
+/** The class's students who are not deactivated, by name. */
+export function activeStudentsOf(db: Db | Tx, classId: string) {
+  return db
+    .select({ id: users.id, name: users.name })
+    .from(classMembers)
+    .innerJoin(users, eq(users.id, classMembers.userId))
+    .where(and(eq(classMembers.classId, classId), eq(users.role, "student"), ne(users.status, "deactivated")))
+    .orderBy(asc(users.name));
 }

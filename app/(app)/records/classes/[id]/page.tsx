@@ -1,7 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { BarFigure } from "@/components/bar-figure";
 import { Table } from "@/components/table";
+import { classCoverage } from "@/lib/server/standard";
+import { ClassCoverageSection } from "./_components/class-coverage";
 import { requirePageUser } from "@/app/_adapters/session";
 import { isUuid } from "@/lib/server/http";
 import { classRecord } from "@/lib/server/runs/records";
@@ -14,11 +17,11 @@ export default async function ClassRecordPage({ params }: { params: Promise<{ id
   const user = await requirePageUser("records:view-all", `/records/classes/${id}`);
   if (!isUuid(id)) notFound();
   const record = await classRecord({ actor: user, classId: id }).catch(notFoundOnMissing);
+  const coverage = await classCoverage({ actor: user, classId: id }).catch(notFoundOnMissing);
   const totals = record.subjects.map((subject) => {
     const cells = record.students.map((s) => s.bySubject[subject] ?? { signedOff: 0, assigned: 0 });
     return { subject, signedOff: cells.reduce((n, c) => n + c.signedOff, 0), assigned: cells.reduce((n, c) => n + c.assigned, 0) };
   });
-  const barWidth = 520;
   return (
     <div className="flex flex-col gap-5">
       <nav aria-label="Breadcrumb">
@@ -30,33 +33,25 @@ export default async function ClassRecordPage({ params }: { params: Promise<{ id
       <section aria-label="Progress by subject" className="panel overflow-x-auto">
         <h2>Signed off of assigned, by subject</h2>
         {totals.length ? (
-          <svg
-            role="img"
-            aria-label="Bar chart: task cards signed off of those assigned, per subject"
-            width={barWidth + 330}
-            height={totals.length * 44 + 10}
-            className="max-w-full"
-          >
-            {totals.map((t, i) => {
-              const share = t.assigned ? t.signedOff / t.assigned : 0;
-              return (
-                <g key={t.subject} transform={`translate(0, ${i * 44 + 6})`}>
-                  <text x={0} y={22} fontSize={15} fill="#0d1726">
-                    {t.subject.length > 28 ? `${t.subject.slice(0, 27)}…` : t.subject}
-                  </text>
-                  <rect x={230} y={4} width={barWidth} height={28} fill="#e3f0f1" stroke="#3a4657" />
-                  <rect x={230} y={4} width={Math.round(barWidth * share)} height={28} fill="#1d6a35" />
-                  <text x={240 + barWidth} y={24} fontSize={15} fontWeight={700} fill="#0d1726">
-                    {t.signedOff}/{t.assigned}
-                  </text>
-                </g>
-              );
-            })}
-          </svg>
+          <BarFigure
+            title="Subject"
+            summary={`Task cards signed off of those assigned, per subject: ${totals.map((t) => `${t.subject} ${t.signedOff} of ${t.assigned}`).join("; ")}.`}
+            stacked
+            rows={totals.map((t) => ({
+              label: t.subject,
+              values: { signedOff: t.signedOff, open: t.assigned - t.signedOff },
+              note: `${t.signedOff}/${t.assigned}`,
+            }))}
+            series={[
+              { key: "signedOff", label: "Signed off", colour: "#1d6a35" },
+              { key: "open", label: "Assigned, not signed off", colour: "#e3f0f1" },
+            ]}
+          />
         ) : (
           <p className="hint">Nothing assigned to this class yet.</p>
         )}
       </section>
+      <ClassCoverageSection coverage={coverage} />
       <section aria-label="Students" className="panel overflow-x-auto">
         <h2>Students</h2>
         <Table

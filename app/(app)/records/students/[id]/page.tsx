@@ -12,7 +12,8 @@ import { isUuid } from "@/lib/server/http";
 import { studentRecord } from "@/lib/server/runs/records";
 import { measuredValueLine } from "@/lib/domain/runs/measured";
 import { recordHours, revisionsLine, signedAtText } from "@/lib/domain/runs/record-csv";
-import { schoolTimeZone } from "@/lib/server/settings";
+import { getSchoolSettings } from "@/lib/server/settings";
+import { readinessOf } from "@/lib/domain/standard/readiness";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
 export const metadata: Metadata = { title: "Training record" };
@@ -24,9 +25,10 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
   const user = await requirePageUser("records:view", `/records/students/${id}`);
   if (!isUuid(id)) notFound();
   const record = await studentRecord({ actor: user, studentId: id }).catch(notFoundOnMissing);
-  const zone = await schoolTimeZone();
+  const { timeZone: zone, plannedHours } = await getSchoolSettings();
   const coverage = await studentCoverage({ actor: user, studentId: id }).catch(notFoundOnMissing);
   const attendance = await studentAttendance({ actor: user, studentId: id }).catch(notFoundOnMissing);
+  const readiness = readinessOf(coverage, attendance.minutesBySection, plannedHours);
   const own = user.id === id;
   return (
     <div className="flex flex-col gap-5">
@@ -58,8 +60,8 @@ export default async function StudentRecordPage({ params }: { params: Promise<{ 
           </div>
         ))}
       </dl>
-      <CoverageSection coverage={coverage} zone={zone} />
-      <AttendanceSection attendance={attendance} zone={zone} />
+      <CoverageSection coverage={coverage} readiness={readiness} zone={zone} />
+      <AttendanceSection attendance={attendance} plannedHours={plannedHours} zone={zone} />
       <section aria-label="Signed off by subject" className="flex flex-col gap-3">
         <h2>Signed off, by curriculum subject</h2>
         {record.subjects.map((s) => (

@@ -1,3 +1,4 @@
+import { BarFigure } from "@/components/bar-figure";
 import { Table } from "@/components/table";
 import type { StudentAttendanceDto } from "@/lib/contracts/attendance";
 import { attendanceWords, sectionNames } from "@/lib/domain/attendance";
@@ -6,8 +7,17 @@ import { dateTimeIn } from "@/lib/domain/time";
 const hours = (minutes: number) => `${(minutes / 60).toFixed(1)} h`;
 
 /** Hours attended per section, then each session with the entry that counts (a correction says so). */
-export function AttendanceSection({ attendance, zone }: { attendance: StudentAttendanceDto; zone: string }) {
+export function AttendanceSection({
+  attendance,
+  plannedHours,
+  zone,
+}: {
+  attendance: StudentAttendanceDto;
+  plannedHours: Partial<Record<string, number>>;
+  zone: string;
+}) {
   if (!attendance.sessions.length) return null;
+  const planned = sectionNames.filter((s) => plannedHours[s] !== undefined);
   return (
     <section aria-labelledby="attendance" className="panel flex flex-col gap-3">
       <h2 id="attendance">Attendance and hours</h2>
@@ -15,10 +25,29 @@ export function AttendanceSection({ attendance, zone }: { attendance: StudentAtt
         {sectionNames.map((s) => (
           <div key={s}>
             <dt className="text-ink-soft">{s}</dt>
-            <dd className="text-2xl font-bold">{hours(attendance.minutesBySection[s])}</dd>
+            <dd className="text-2xl font-bold">
+              {hours(attendance.minutesBySection[s])}
+              {plannedHours[s] !== undefined ? (
+                <span className="text-base font-normal text-ink-soft"> of {plannedHours[s]} h planned</span>
+              ) : null}
+            </dd>
           </div>
         ))}
       </dl>
+      {planned.length ? (
+        <BarFigure
+          title="Section"
+          summary={`Hours attended against the school's planned hours: ${planned.map((s) => `${s} ${hours(attendance.minutesBySection[s])} of ${plannedHours[s]} h`).join("; ")}.`}
+          rows={planned.map((s) => ({
+            label: s,
+            values: { attended: Math.round(attendance.minutesBySection[s] / 6) / 10, planned: plannedHours[s]! },
+          }))}
+          series={[
+            { key: "attended", label: "Attended", colour: "#0a5660", unit: " h" },
+            { key: "planned", label: "Planned by the school", colour: "#c9ccd1", unit: " h" },
+          ]}
+        />
+      ) : null}
       <Table
         rows={attendance.sessions}
         rowKey={(s) => s.id}

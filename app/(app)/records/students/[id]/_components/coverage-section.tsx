@@ -1,4 +1,6 @@
+import { BarFigure } from "@/components/bar-figure";
 import { Table } from "@/components/table";
+import type { Readiness } from "@/lib/domain/standard/readiness";
 import type { CoverageDto } from "@/lib/contracts/standard";
 import { dateTimeIn } from "@/lib/domain/time";
 
@@ -6,8 +8,9 @@ const statusWords = { demonstrated: "Demonstrated", practised: "Practised, not s
 const kindWords = { knowledge: "Knowledge", risk: "Risk management", skill: "Skill" } as const;
 
 /** The standard's elements against the student's runs: totals per section, then each element. */
-export function CoverageSection({ coverage, zone }: { coverage: CoverageDto; zone: string }) {
+export function CoverageSection({ coverage, readiness, zone }: { coverage: CoverageDto; readiness: Readiness; zone: string }) {
   if (!coverage.elements.length) return null;
+  const bySection = Object.entries(coverage.totals);
   return (
     <section aria-labelledby="coverage" className="panel flex flex-col gap-3">
       <h2 id="coverage">Certification standard: coverage</h2>
@@ -16,8 +19,43 @@ export function CoverageSection({ coverage, zone }: { coverage: CoverageDto; zon
           The standard here includes the demo&apos;s excerpt (to be verified against the current FAA-S-ACS-1); it is not the whole standard.
         </p>
       ) : null}
+      <div className={readiness.ready ? "notice-ok" : "notice-todo"}>
+        <p>
+          {readiness.ready
+            ? "Every skill element is demonstrated and every planned hour attended."
+            : `Before the oral and practical test: ${readiness.remaining} element${readiness.remaining === 1 ? "" : "s"} still to demonstrate.`}
+        </p>
+        <div className="mt-2 flex flex-wrap gap-3">
+          <a
+            className="btn btn-secondary"
+            href={`/api/records/students/${coverage.student.id}/readiness?format=pdf`}
+            target="_blank"
+            rel="noreferrer"
+          >
+            Readiness report (PDF)
+          </a>
+          <a className="btn btn-secondary" href={`/api/records/students/${coverage.student.id}/readiness?format=csv`}>
+            Readiness report (CSV)
+          </a>
+        </div>
+      </div>
+      <BarFigure
+        title="Section"
+        summary={`Skill elements per section: ${bySection.map(([s, t]) => `${s} ${t.skill.demonstrated} demonstrated, ${t.skill.practised} practised, ${t.skill.missing} not yet`).join("; ")}.`}
+        stacked
+        rows={bySection.map(([section, t]) => ({
+          label: section,
+          values: { demonstrated: t.skill.demonstrated, practised: t.skill.practised, missing: t.skill.missing },
+          note: `${t.skill.demonstrated}/${t.skill.demonstrated + t.skill.practised + t.skill.missing}`,
+        }))}
+        series={[
+          { key: "demonstrated", label: "Demonstrated", colour: "#1d6a35" },
+          { key: "practised", label: "Practised, not signed off", colour: "#f2b01e" },
+          { key: "missing", label: "Not yet", colour: "#ffffff" },
+        ]}
+      />
       <Table
-        rows={Object.entries(coverage.totals)}
+        rows={bySection}
         rowKey={([section]) => section}
         columns={[
           { header: "Section", cell: ([section]) => section },

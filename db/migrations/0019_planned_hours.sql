@@ -1,0 +1,1 @@
+ALTER TABLE "school_settings" ADD COLUMN "planned_hours" jsonb DEFAULT '{}'::jsonb NOT NULL;
