@@ -26,6 +26,7 @@ export interface BarRow {
  */
 export function BarFigure({
   title,
+  rowHeader,
   summary,
   rows,
   series,
@@ -33,6 +34,8 @@ export function BarFigure({
   max,
 }: {
   title: string;
+  /** What each row is ("Subject", "Student"): the table's first column. */
+  rowHeader: string;
   summary: string;
   rows: readonly BarRow[];
   series: readonly BarSeries[];
@@ -55,9 +58,9 @@ export function BarFigure({
             <YAxis
               type="category"
               dataKey="label"
-              width={200}
+              width={250}
               tick={{ fill: "#0d1726", fontSize: 15 }}
-              tickFormatter={(v: string) => (v.length > 26 ? `${v.slice(0, 25)}…` : v)}
+              tickFormatter={(v: string) => (v.length > 32 ? `${v.slice(0, 31)}…` : v)}
             />
             <Tooltip
               formatter={(value, name) => {
@@ -66,7 +69,8 @@ export function BarFigure({
               }}
               contentStyle={{ fontSize: 15, border: "2px solid #3a4657" }}
             />
-            <Legend wrapperStyle={{ fontSize: 15, color: "#0d1726" }} />
+            {/* Legend words in ink: a pale series' own colour would be unreadable as text. */}
+            <Legend wrapperStyle={{ fontSize: 15 }} formatter={(value: string) => <span style={{ color: "#0d1726" }}>{value}</span>} />
             {series.map((s, i) => (
               <Bar
                 key={s.key}
@@ -91,7 +95,7 @@ export function BarFigure({
         <table className={tableClassName}>
           <thead>
             <tr>
-              <th scope="col">{title}</th>
+              <th scope="col">{rowHeader}</th>
               {series.map((s) => (
                 <th key={s.key} scope="col">
                   {s.label}

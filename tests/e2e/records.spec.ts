@@ -3,6 +3,7 @@
 // its limit and verdict and who signed it off, then downloads the CSV and finds the same in its
 // columns. The demo seed signs off Riley Amsel's riveted splice patch (db/demo/seed-runs.ts), with a
 // reading inside the limits on each measured step.
+import { readFile } from "node:fs/promises";
 import { expect, test } from "@playwright/test";
 import { RecordsPage } from "./support/pages/records";
 import { SignInPage } from "./support/pages/sign-in";
@@ -17,6 +18,12 @@ test("an instructor opens a student's record, sees what was measured and signed,
   const records = new RecordsPage(page);
   await expect(page.getByRole("heading", { level: 1, name: "Records" })).toBeVisible();
   await records.openClass("AMT Day Cohort 2027");
+  // The class's progress is a chart (labelled with its figures) and the standard's grid with its gaps.
+  await expect(page.getByRole("img", { name: /^Task cards signed off of those assigned, per subject/ })).toBeVisible();
+  const grid = page.getByRole("region", { name: "Certification standard: skill elements" });
+  await expect(grid).toContainText("Not yet demonstrated by anyone in the class");
+  await expect(grid.getByRole("table", { name: "Airframe" }).getByRole("row").filter({ hasText: student })).toContainText("Shown");
+  await page.screenshot({ path: test.info().outputPath("class-progress.png"), fullPage: true });
   await records.openStudent(student);
   await expect(records.recordHeading(student)).toBeVisible();
 
@@ -69,5 +76,18 @@ test("a student reads their coverage of the certification standard, marked as th
   await expect(row("AM.II.A.S1")).toContainText(`${card} (version 1), signed off by Elena Brandt`);
   await expect(row("AM.II.C.S1")).toContainText("Practised, not signed off");
   await expect(row("AM.III.G.S1")).toContainText("Not yet");
+  // The chart says its figures to a screen reader; the same figures open as a table.
+  await expect(coverage.getByRole("img", { name: /^Skill elements per section: / })).toBeVisible();
+  await coverage.getByText("The figures as a table").click();
+  await expect(coverage.getByRole("row", { name: /^Airframe \d/ }).first()).toBeVisible();
+  // What remains before the practical test, as a CSV.
+  const [download] = await Promise.all([
+    page.waitForEvent("download"),
+    coverage.getByRole("link", { name: "Readiness report (CSV)" }).click(),
+  ]);
+  const text = await readFile((await download.path())!, "utf8");
+  expect(text.split("\r\n")[0]).toBe("Student,Section,Code,Kind,Area of operation,Element,Status,Practised in");
+  expect(text).toMatch(/Riley Amsel,Powerplant,AM\.III\.G\.S1,Skill,.*,Not yet,/);
+  expect(text).not.toMatch(/,AM\.II\.A\.S1,/);
   await page.screenshot({ path: test.info().outputPath("coverage.png"), fullPage: true });
 });

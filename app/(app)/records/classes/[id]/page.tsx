@@ -31,10 +31,11 @@ export default async function ClassRecordPage({ params }: { params: Promise<{ id
       </nav>
       <h1>{record.class.name}: progress</h1>
       <section aria-label="Progress by subject" className="panel overflow-x-auto">
-        <h2>Signed off of assigned, by subject</h2>
+        <h2>Progress by subject</h2>
         {totals.length ? (
           <BarFigure
-            title="Subject"
+            title="Signed off of assigned"
+            rowHeader="Subject"
             summary={`Task cards signed off of those assigned, per subject: ${totals.map((t) => `${t.subject} ${t.signedOff} of ${t.assigned}`).join("; ")}.`}
             stacked
             rows={totals.map((t) => ({

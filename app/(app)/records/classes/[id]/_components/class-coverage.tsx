@@ -27,7 +27,8 @@ export function ClassCoverageSection({ coverage }: { coverage: ClassCoverageDto 
         </p>
       ) : null}
       <BarFigure
-        title="Student"
+        title="Skill elements per student"
+        rowHeader="Student"
         summary={`Skill elements per student, of ${total}: ${coverage.students.map((s) => `${s.name} ${s.demonstrated} demonstrated, ${s.practised} practised`).join("; ")}.`}
         stacked
         max={total}

@@ -36,7 +36,8 @@ export function AttendanceSection({
       </dl>
       {planned.length ? (
         <BarFigure
-          title="Section"
+          title="Hours attended against the plan"
+          rowHeader="Section"
           summary={`Hours attended against the school's planned hours: ${planned.map((s) => `${s} ${hours(attendance.minutesBySection[s])} of ${plannedHours[s]} h`).join("; ")}.`}
           rows={planned.map((s) => ({
             label: s,

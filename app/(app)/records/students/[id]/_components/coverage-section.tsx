@@ -40,7 +40,8 @@ export function CoverageSection({ coverage, readiness, zone }: { coverage: Cover
         </div>
       </div>
       <BarFigure
-        title="Section"
+        title="Skill elements per section"
+        rowHeader="Section"
         summary={`Skill elements per section: ${bySection.map(([s, t]) => `${s} ${t.skill.demonstrated} demonstrated, ${t.skill.practised} practised, ${t.skill.missing} not yet`).join("; ")}.`}
         stacked
         rows={bySection.map(([section, t]) => ({
