@@ -800,3 +800,193 @@ export const attendanceEntries = pgTable(
     check("attendance_entries_minutes", sql`${t.minutes} between 0 and 720`),
   ],
 );
+
+/**
+ * The school's fleet: aircraft, engines, propellers and components the work is done on. The
+ * identifier is the registration or the school's own number; assets are never deleted (runs and
+ * findings name them), only put out of service.
+ */
+export const assets = pgTable(
+  "assets",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    identifier: text("identifier").notNull(),
+    kind: text("kind").notNull(),
+    model: text("model").notNull(),
+    serial: text("serial").notNull().default(""),
+    status: text("status").notNull().default("instructional"),
+    statusReason: text("status_reason").notNull().default(""),
+    location: text("location").notNull().default(""),
+    /** Wingspan (or the widest dimension) in metres, checked against a place's width; null when not known. */
+    spanMetres: real("span_metres"),
+    ...timestamps,
+  },
+  (t) => [
+    uniqueIndex("assets_identifier_key").on(sql`lower(${t.identifier})`),
+    check("assets_kind", sql`${t.kind} in ('aircraft', 'engine', 'propeller', 'component')`),
+    check("assets_status", sql`${t.status} in ('airworthy', 'instructional', 'ground_run', 'out_of_service')`),
+  ],
+);
+
+/**
+ * What is installed on what (an engine on an airframe, a propeller on an engine), one row per
+ * installation: the removal closes it. The run that did either is named when it came from a
+ * signed-off run. Rows are never deleted; a trigger lets only the removal be written once.
+ */
+export const assetInstallations = pgTable(
+  "asset_installations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    assetId: uuid("asset_id")
+      .notNull()
+      .references(() => assets.id, { onDelete: "restrict" }),
+    parentId: uuid("parent_id")
+      .notNull()
+      .references(() => assets.id, { onDelete: "restrict" }),
+    position: text("position").notNull().default(""),
+    installedAt: timestamp("installed_at", { withTimezone: true }).notNull().defaultNow(),
+    installedBy: uuid("installed_by").references(() => users.id, { onDelete: "restrict" }),
+    installedRunId: uuid("installed_run_id").references(() => runs.id, { onDelete: "restrict" }),
+    removedAt: timestamp("removed_at", { withTimezone: true }),
+    removedBy: uuid("removed_by").references(() => users.id, { onDelete: "restrict" }),
+    removedRunId: uuid("removed_run_id").references(() => runs.id, { onDelete: "restrict" }),
+  },
+  (t) => [
+    // An asset is on one thing at a time.
+    uniqueIndex("asset_installations_current_key")
+      .on(t.assetId)
+      .where(sql`${t.removedAt} is null`),
+    index("asset_installations_parent_idx").on(t.parentId),
+    check("asset_installations_not_self", sql`${t.assetId} <> ${t.parentId}`),
+  ],
+);
+
+/** The assets a run worked on, named at the cart; and the installation change the run makes, applied at sign-off. */
+export const runAssets = pgTable(
+  "run_assets",
+  {
+    runId: uuid("run_id")
+      .notNull()
+      .references(() => runs.id, { onDelete: "restrict" }),
+    assetId: uuid("asset_id")
+      .notNull()
+      .references(() => assets.id, { onDelete: "restrict" }),
+    namedBy: uuid("named_by")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    namedAt: timestamp("named_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.runId, t.assetId] }), index("run_assets_asset_idx").on(t.assetId)],
+);
+
+export const runAssetChanges = pgTable(
+  "run_asset_changes",
+  {
+    runId: uuid("run_id")
+      .primaryKey()
+      .references(() => runs.id, { onDelete: "restrict" }),
+    action: text("action").notNull(),
+    assetId: uuid("asset_id")
+      .notNull()
+      .references(() => assets.id, { onDelete: "restrict" }),
+    parentId: uuid("parent_id")
+      .notNull()
+      .references(() => assets.id, { onDelete: "restrict" }),
+    position: text("position").notNull().default(""),
+    /** Set when the sign-off wrote it on the assets. */
+    appliedAt: timestamp("applied_at", { withTimezone: true }),
+    ...timestamps,
+  },
+  (t) => [check("run_asset_changes_action", sql`${t.action} in ('install', 'remove')`)],
+);
+
+/** Places in the hangar: bays, engine stands, the NDT room, tie-downs; each takes some kinds of asset. */
+export const places = pgTable(
+  "places",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    name: text("name").notNull(),
+    kind: text("kind").notNull(),
+    takes: text("takes")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
+    /** Widest span (metres) the place takes; null when any span fits. */
+    maxSpanMetres: real("max_span_metres"),
+    ...timestamps,
+  },
+  (t) => [
+    uniqueIndex("places_name_key").on(sql`lower(${t.name})`),
+    check("places_kind", sql`${t.kind} in ('bay', 'engine_stand', 'ndt_room', 'tie_down')`),
+  ],
+);
+
+/**
+ * An asset at a place for a time: a class's session on it, or a move in or out. Overlaps are
+ * refused by the server under row locks of the asset and the place. A cancelled booking stays.
+ */
+export const bookings = pgTable(
+  "bookings",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    assetId: uuid("asset_id")
+      .notNull()
+      .references(() => assets.id, { onDelete: "restrict" }),
+    placeId: uuid("place_id")
+      .notNull()
+      .references(() => places.id, { onDelete: "restrict" }),
+    classId: uuid("class_id").references(() => classes.id, { onDelete: "restrict" }),
+    purpose: text("purpose").notNull().default("session"),
+    note: text("note").notNull().default(""),
+    startsAt: timestamp("starts_at", { withTimezone: true }).notNull(),
+    endsAt: timestamp("ends_at", { withTimezone: true }).notNull(),
+    createdBy: uuid("created_by")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    cancelledAt: timestamp("cancelled_at", { withTimezone: true }),
+    cancelledBy: uuid("cancelled_by").references(() => users.id, { onDelete: "restrict" }),
+    ...timestamps,
+  },
+  (t) => [
+    index("bookings_asset_idx").on(t.assetId, t.startsAt),
+    index("bookings_place_idx").on(t.placeId, t.startsAt),
+    check("bookings_purpose", sql`${t.purpose} in ('session', 'move_in', 'move_out')`),
+    check("bookings_order", sql`${t.endsAt} > ${t.startsAt}`),
+  ],
+);
+
+/**
+ * What a student (or instructor) found on an asset: a crack, a leak, a worn part. Filed at the cart
+ * (its id made there, so a re-send is a no-op), decided and closed by an instructor.
+ */
+export const findings = pgTable(
+  "findings",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    assetId: uuid("asset_id")
+      .notNull()
+      .references(() => assets.id, { onDelete: "restrict" }),
+    runId: uuid("run_id").references(() => runs.id, { onDelete: "restrict" }),
+    stepId: uuid("step_id"),
+    text: text("text").notNull(),
+    photoKey: text("photo_key"),
+    reportedBy: uuid("reported_by")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    /** When it was found, on the cart's clock held to the receipt window; and when the server got it. */
+    foundAt: timestamp("found_at", { withTimezone: true }).notNull(),
+    receivedAt: timestamp("received_at", { withTimezone: true }).notNull().defaultNow(),
+    decision: text("decision"),
+    decisionNote: text("decision_note").notNull().default(""),
+    newAssignmentId: uuid("new_assignment_id").references(() => assignments.id, { onDelete: "restrict" }),
+    closedBy: uuid("closed_by").references(() => users.id, { onDelete: "restrict" }),
+    closedAt: timestamp("closed_at", { withTimezone: true }),
+  },
+  (t) => [
+    index("findings_asset_idx").on(t.assetId, t.closedAt),
+    index("findings_open_idx")
+      .on(t.receivedAt)
+      .where(sql`${t.closedAt} is null`),
+    check("findings_decision", sql`${t.decision} is null or ${t.decision} in ('fixed_in_run', 'new_card', 'deferred', 'out_of_service')`),
+  ],
+);
