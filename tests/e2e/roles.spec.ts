@@ -6,13 +6,13 @@ const roles = [
   {
     email: "student@hangarleaf.test",
     role: "Student",
-    nav: ["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Records"],
+    nav: ["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Fleet", "Records"],
   },
-  { email: "librarian@hangarleaf.test", role: "Librarian", nav: ["Home", "Search", "Library", "Task cards", "Calculators", "Tool room"] },
+  { email: "librarian@hangarleaf.test", role: "Librarian", nav: ["Home", "Search", "Library", "Task cards", "Calculators", "Fleet", "Tool room"] },
   {
     email: "instructor@hangarleaf.test",
     role: "Instructor",
-    nav: ["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records"],
+    nav: ["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Fleet", "Classes", "Records"],
   },
   {
     email: "admin@hangarleaf.test",
@@ -24,6 +24,7 @@ const roles = [
       "Task cards",
       "Review",
       "Calculators",
+      "Fleet",
       "Classes",
       "Records",
       "Tool room",

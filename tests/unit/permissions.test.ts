@@ -29,6 +29,11 @@ const expected: Record<string, Role[]> = {
   "tools:clear-holds": ["instructor", "admin"],
   "standard:manage": ["admin"],
   "attendance:take": ["instructor", "admin"],
+  "fleet:view": ["student", "instructor", "librarian", "admin"],
+  "fleet:manage": ["admin"],
+  "hangar:book": ["instructor", "admin"],
+  "findings:file": ["student", "instructor", "admin"],
+  "findings:decide": ["instructor", "admin"],
 };
 
 describe("permissions", () => {
@@ -67,9 +72,9 @@ describe("permissions", () => {
 
   it("gives each role its own navigation", () => {
     const labels = (role: Role, outbox = false) => navigationFor(actor(role), { outbox }).map((n) => n.label);
-    expect(labels("student")).toEqual(["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Records"]);
-    expect(labels("librarian")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators", "Tool room"]);
-    expect(labels("instructor")).toEqual(["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Classes", "Records"]);
+    expect(labels("student")).toEqual(["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Fleet", "Records"]);
+    expect(labels("librarian")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators", "Fleet", "Tool room"]);
+    expect(labels("instructor")).toEqual(["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Fleet", "Classes", "Records"]);
     expect(labels("admin")).toEqual([
       "Home",
       "Search",
@@ -77,6 +82,7 @@ describe("permissions", () => {
       "Task cards",
       "Review",
       "Calculators",
+      "Fleet",
       "Classes",
       "Records",
       "Tool room",

@@ -58,6 +58,16 @@ const rules = {
   "attendance:take": ["instructor", "admin"],
   /** Import the school's copy of the certification standard's elements. */
   "standard:manage": ["admin"],
+  /** The fleet, its findings and the hangar plan: everyone signed in reads them. */
+  "fleet:view": ["student", "instructor", "librarian", "admin"],
+  /** Add assets and places, correct their details and status. */
+  "fleet:manage": ["admin"],
+  /** Book an asset at a place (for the classes one teaches), move or cancel one's bookings and those of one's classes. */
+  "hangar:book": ["instructor", "admin"],
+  /** Write up what was found on an asset (students on their own runs). */
+  "findings:file": ["student", "instructor", "admin"],
+  /** Decide and close a finding: instructors of the run's student (lib/server/runs/scope.ts), admins. */
+  "findings:decide": ["instructor", "admin"],
   /** The link to the local outbox (the page itself is open while the fake SMTP server runs). */
   "outbox:view": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
@@ -101,6 +111,7 @@ const navigation: { item: NavItem; permission?: Permission; onlyWithOutbox?: boo
   { item: { href: "/cart", label: "My work" }, permission: "runs:do" },
   { item: { href: "/review", label: "Review" }, permission: "runs:review" },
   { item: { href: "/calculators", label: "Calculators" } },
+  { item: { href: "/fleet", label: "Fleet" }, permission: "fleet:view" },
   { item: { href: "/classes", label: "Classes" }, permission: "classes:view" },
   { item: { href: "/records", label: "Records" }, permission: "records:view" },
   { item: { href: "/tools", label: "Tool room" }, permission: "tools:lend" },

@@ -150,3 +150,33 @@ export function toolsOverdueMail(input: {
     ),
   };
 }
+
+export function bookingChangedMail(input: {
+  to: string;
+  name: string;
+  changedBy: string;
+  asset: string;
+  className: string;
+  purpose: string;
+  before: string;
+  after: string | null;
+  reason: string;
+  link: string;
+}): MailMessage {
+  const what = `${input.purpose} with ${input.asset}${input.className ? ` for ${input.className}` : ""}`;
+  return {
+    to: input.to,
+    subject: input.after ? `Booking moved: ${input.asset}` : `Booking cancelled: ${input.asset}`,
+    ...withLink(
+      [
+        `Hello ${input.name},`,
+        input.after
+          ? `${input.changedBy} changed the booking: ${what}. It was ${input.before}; it is now ${input.after}.`
+          : `${input.changedBy} cancelled the booking: ${what}, ${input.before}.${input.reason ? ` Why: ${input.reason}` : ""}`,
+        "Check the cards assigned for that session and tell the students where to go.",
+      ],
+      { label: "Open the hangar plan", href: input.link },
+      [],
+    ),
+  };
+}
