@@ -8,7 +8,11 @@ const roles = [
     role: "Student",
     nav: ["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Fleet", "Records"],
   },
-  { email: "librarian@hangarleaf.test", role: "Librarian", nav: ["Home", "Search", "Library", "Task cards", "Calculators", "Fleet", "Tool room"] },
+  {
+    email: "librarian@hangarleaf.test",
+    role: "Librarian",
+    nav: ["Home", "Search", "Library", "Task cards", "Calculators", "Fleet", "Tool room"],
+  },
   {
     email: "instructor@hangarleaf.test",
     role: "Instructor",

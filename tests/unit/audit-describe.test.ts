@@ -244,6 +244,79 @@ const cases: Record<string, { entry: ReturnType<typeof entry>; summary: string; 
     entry: entry("manual.restored", "manual", id(10), {}, "Avery Lund"),
     summary: "Avery Lund restored 'HT-20 Trainer Maintenance Manual' to the library",
   },
+  "asset.created": {
+    entry: entry("asset.created", "asset", id(80), { identifier: "N-HL01", kind: "aircraft", model: "HT-20" }, "Morgan Vale"),
+    summary: "Morgan Vale added N-HL01 to the fleet",
+    details: [
+      ["Kind", "aircraft"],
+      ["Model", "HT-20"],
+    ],
+  },
+  "asset.updated": {
+    entry: entry("asset.updated", "asset", id(80), { identifier: "N-HL01" }, "Morgan Vale"),
+    summary: "Morgan Vale changed the details of N-HL01",
+  },
+  "asset.status_changed": {
+    entry: entry("asset.status_changed", "asset", id(80), {
+      identifier: "N-HL01",
+      from: "instructional",
+      to: "out_of_service",
+      reason: "Cracked rib",
+    }),
+    summary: "Elena Brandt set N-HL01 to out of service",
+    details: [["Why", "Cracked rib"]],
+  },
+  "asset.installed": {
+    entry: entry("asset.installed", "asset", id(81), { identifier: "E-101", parent: "N-HL01" }),
+    summary: "Elena Brandt recorded E-101 installed on N-HL01 (from a signed-off run)",
+  },
+  "asset.removed": {
+    entry: entry("asset.removed", "asset", id(81), { identifier: "E-101", parent: "N-HL01" }),
+    summary: "Elena Brandt recorded E-101 removed from N-HL01 (from a signed-off run)",
+  },
+  "place.created": {
+    entry: entry("place.created", "place", id(82), { name: "Bay 1" }, "Morgan Vale"),
+    summary: "Morgan Vale added Bay 1 to the hangar plan",
+  },
+  "booking.created": {
+    entry: entry("booking.created", "booking", id(83), {
+      asset: "N-HL01",
+      place: "Bay 1",
+      startsAt: "2026-12-07T14:00:00Z",
+      endsAt: "2026-12-07T18:00:00Z",
+    }),
+    summary: "Elena Brandt booked N-HL01 in Bay 1",
+    details: [
+      ["From", "2026-12-07T14:00:00Z"],
+      ["To", "2026-12-07T18:00:00Z"],
+    ],
+  },
+  "booking.changed": {
+    entry: entry("booking.changed", "booking", id(83), { asset: "N-HL01", from: "Bay 1 morning", to: "Bay 2 morning" }),
+    summary: "Elena Brandt moved the booking of N-HL01",
+    details: [
+      ["Was", "Bay 1 morning"],
+      ["Now", "Bay 2 morning"],
+    ],
+  },
+  "booking.cancelled": {
+    entry: entry("booking.cancelled", "booking", id(83), { asset: "N-HL01", from: "Bay 1 morning", reason: "Snow" }),
+    summary: "Elena Brandt cancelled the booking of N-HL01",
+    details: [
+      ["Was", "Bay 1 morning"],
+      ["Why", "Snow"],
+    ],
+  },
+  "finding.filed": {
+    entry: entry("finding.filed", "finding", id(84), { asset: "N-HL01", text: "Crack at the rib" }, "Sam Whitlock"),
+    summary: "Sam Whitlock wrote up a finding on N-HL01",
+    details: [["Found", "Crack at the rib"]],
+  },
+  "finding.closed": {
+    entry: entry("finding.closed", "finding", id(84), { asset: "N-HL01", decision: "deferred", note: "Until the next term" }),
+    summary: "Elena Brandt closed a finding on N-HL01: deferred",
+    details: [["Note", "Until the next term"]],
+  },
   "tool.created": {
     entry: entry("tool.created", "tool", id(40), { number: "TW-2" }, "Avery Lund"),
     summary: "Avery Lund added the tool TW-2 to the tool room",

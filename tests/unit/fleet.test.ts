@@ -26,7 +26,14 @@ describe("bookings", () => {
   const bay = { name: "Bay 1", takes: ["aircraft"], maxSpanMetres: 12 };
   const at = (h: number) => new Date(Date.UTC(2026, 11, 7, h)).toISOString();
   const booking = { assetId: "a1", placeId: "p1", startsAt: at(8), endsAt: at(12) };
-  const other = (o: Partial<typeof booking>) => ({ ...booking, id: "b2", assetIdentifier: "N-HL02", placeName: "Bay 2", className: "Evening Cohort", ...o });
+  const other = (o: Partial<typeof booking>) => ({
+    ...booking,
+    id: "b2",
+    assetIdentifier: "N-HL02",
+    placeName: "Bay 2",
+    className: "Evening Cohort",
+    ...o,
+  });
 
   it("refuses an overlap of one asset or one place, and names who holds it", () => {
     expect(bookingProblem(booking, asset, bay, [other({ placeId: "p2" })])).toMatch(/N-HL01 is already booked in Bay 2 for Evening Cohort/);
@@ -51,7 +58,9 @@ describe("installation changes", () => {
   const airframe = { id: "a1", identifier: "N-HL01", kind: "aircraft" as const };
   it("installs only what is free and fits, removes only from where it is", () => {
     expect(installationProblem({ action: "install" }, engine, airframe, null)).toBeNull();
-    expect(installationProblem({ action: "install" }, engine, airframe, { parentId: "a2", parentIdentifier: "N-HL02" })).toMatch(/still on N-HL02/);
+    expect(installationProblem({ action: "install" }, engine, airframe, { parentId: "a2", parentIdentifier: "N-HL02" })).toMatch(
+      /still on N-HL02/,
+    );
     expect(installationProblem({ action: "install" }, airframe, engine, null)).toMatch(/does not go on/);
     expect(installationProblem({ action: "remove" }, engine, airframe, { parentId: "a1", parentIdentifier: "N-HL01" })).toBeNull();
     expect(installationProblem({ action: "remove" }, engine, airframe, null)).toMatch(/not installed on N-HL01/);

@@ -74,7 +74,17 @@ describe("permissions", () => {
     const labels = (role: Role, outbox = false) => navigationFor(actor(role), { outbox }).map((n) => n.label);
     expect(labels("student")).toEqual(["Home", "Search", "Library", "Task cards", "My work", "Calculators", "Fleet", "Records"]);
     expect(labels("librarian")).toEqual(["Home", "Search", "Library", "Task cards", "Calculators", "Fleet", "Tool room"]);
-    expect(labels("instructor")).toEqual(["Home", "Search", "Library", "Task cards", "Review", "Calculators", "Fleet", "Classes", "Records"]);
+    expect(labels("instructor")).toEqual([
+      "Home",
+      "Search",
+      "Library",
+      "Task cards",
+      "Review",
+      "Calculators",
+      "Fleet",
+      "Classes",
+      "Records",
+    ]);
     expect(labels("admin")).toEqual([
       "Home",
       "Search",

@@ -11,6 +11,7 @@ import { settingsApi } from "@/lib/contracts/endpoints/settings";
 import { toolsApi } from "@/lib/contracts/endpoints/tools";
 import { standardApi } from "@/lib/contracts/endpoints/standard";
 import { attendanceApi } from "@/lib/contracts/endpoints/attendance";
+import { fleetApi } from "@/lib/contracts/endpoints/fleet";
 
 export const api = {
   session: sessionApi,
@@ -24,6 +25,7 @@ export const api = {
   tools: toolsApi,
   standard: standardApi,
   attendance: attendanceApi,
+  fleet: fleetApi,
 };
 
 export const allEndpoints: Endpoint[] = Object.values(api).flatMap((group) => Object.values(group) as Endpoint[]);

@@ -1,6 +1,7 @@
 // The audit log in plain words: who did what to which record, and the details as "label: value"
 // lines. Pure: the read query resolves the ids an entry keeps into names (lib/server/audit.ts), this
 // only words them. An action nobody wrote words for yet still reads as a sentence, never as its code.
+import { assetStatusWords, findingDecisionWords } from "@/lib/domain/fleet/fleet";
 import { roleLabels, type Role } from "@/lib/domain/access/permissions";
 import { formatBytes } from "@/lib/domain/library/format";
 
@@ -379,6 +380,44 @@ const wordings: Record<string, Wording> = {
     };
   },
 
+  "asset.created": (e, c) => ({
+    summary: `${c.actor} added ${str(e.details.identifier) ?? "an asset"} to the fleet`,
+    details: [...d("Kind", str(e.details.kind)), ...d("Model", str(e.details.model))],
+  }),
+  "asset.updated": (e, c) => ({ summary: `${c.actor} changed the details of ${str(e.details.identifier) ?? "an asset"}`, details: [] }),
+  "asset.status_changed": (e, c) => ({
+    summary: `${c.actor} set ${str(e.details.identifier) ?? "an asset"} to ${(assetStatusWords as Record<string, string>)[str(e.details.to) ?? ""]?.toLowerCase() ?? "another status"}`,
+    details: d("Why", str(e.details.reason)),
+  }),
+  "asset.installed": (e, c) => ({
+    summary: `${c.actor} recorded ${str(e.details.identifier) ?? "an asset"} installed on ${str(e.details.parent) ?? "another asset"} (from a signed-off run)`,
+    details: [],
+  }),
+  "asset.removed": (e, c) => ({
+    summary: `${c.actor} recorded ${str(e.details.identifier) ?? "an asset"} removed from ${str(e.details.parent) ?? "another asset"} (from a signed-off run)`,
+    details: [],
+  }),
+  "place.created": (e, c) => ({ summary: `${c.actor} added ${str(e.details.name) ?? "a place"} to the hangar plan`, details: [] }),
+  "booking.created": (e, c) => ({
+    summary: `${c.actor} booked ${str(e.details.asset) ?? "an asset"} in ${str(e.details.place) ?? "a place"}`,
+    details: [...d("From", str(e.details.startsAt)), ...d("To", str(e.details.endsAt))],
+  }),
+  "booking.changed": (e, c) => ({
+    summary: `${c.actor} moved the booking of ${str(e.details.asset) ?? "an asset"}`,
+    details: [...d("Was", str(e.details.from)), ...d("Now", str(e.details.to))],
+  }),
+  "booking.cancelled": (e, c) => ({
+    summary: `${c.actor} cancelled the booking of ${str(e.details.asset) ?? "an asset"}`,
+    details: [...d("Was", str(e.details.from)), ...d("Why", str(e.details.reason))],
+  }),
+  "finding.filed": (e, c) => ({
+    summary: `${c.actor} wrote up a finding on ${str(e.details.asset) ?? "an asset"}`,
+    details: d("Found", str(e.details.text)),
+  }),
+  "finding.closed": (e, c) => ({
+    summary: `${c.actor} closed a finding on ${str(e.details.asset) ?? "an asset"}: ${(findingDecisionWords as Record<string, string>)[str(e.details.decision) ?? ""]?.toLowerCase() ?? "decided"}`,
+    details: d("Note", str(e.details.note)),
+  }),
   "tool.created": (e, c) => ({ summary: `${c.actor} added ${toolWords(e, "tool")} to the tool room`, details: [] }),
   "tool.changed": (e, c) => ({ summary: `${c.actor} changed the details of ${toolWords(e, "tool")}`, details: [] }),
   "tool.out_of_service": (e, c) => ({

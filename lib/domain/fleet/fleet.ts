@@ -11,14 +11,24 @@ export type BookingPurpose = (typeof bookingPurposes)[number];
 export const findingDecisions = ["fixed_in_run", "new_card", "deferred", "out_of_service"] as const;
 export type FindingDecision = (typeof findingDecisions)[number];
 
-export const assetKindWords: Record<AssetKind, string> = { aircraft: "Aircraft", engine: "Engine", propeller: "Propeller", component: "Component" };
+export const assetKindWords: Record<AssetKind, string> = {
+  aircraft: "Aircraft",
+  engine: "Engine",
+  propeller: "Propeller",
+  component: "Component",
+};
 export const assetStatusWords: Record<AssetStatus, string> = {
   airworthy: "Airworthy",
   instructional: "Instructional only",
   ground_run: "Ground-run only",
   out_of_service: "Out of service",
 };
-export const placeKindWords: Record<PlaceKind, string> = { bay: "Bay", engine_stand: "Engine stand", ndt_room: "NDT room", tie_down: "Tie-down" };
+export const placeKindWords: Record<PlaceKind, string> = {
+  bay: "Bay",
+  engine_stand: "Engine stand",
+  ndt_room: "NDT room",
+  tie_down: "Tie-down",
+};
 export const bookingPurposeWords: Record<BookingPurpose, string> = { session: "Class session", move_in: "Move in", move_out: "Move out" };
 export const findingDecisionWords: Record<FindingDecision, string> = {
   fixed_in_run: "Fixed in this run",
@@ -47,7 +57,10 @@ const sameModel = (a: string, b: string) => a.trim().replace(/\s+/g, " ").toLowe
  * when one matches the asset's model and, where a serial range is given, the asset's serial
  * number (its last digits) falls inside it. A serial that is not a number matches no range.
  */
-export function appliesTo(applicability: readonly string[], asset: { model: string; serial: string }): { applies: boolean; general: boolean } {
+export function appliesTo(
+  applicability: readonly string[],
+  asset: { model: string; serial: string },
+): { applies: boolean; general: boolean } {
   if (!applicability.length) return { applies: true, general: true };
   // The serial's last run of digits: "HT20-1107" is 1107.
   const serial = /(\d+)\D*$/.exec(asset.serial.trim());
@@ -64,7 +77,8 @@ export interface Span {
   startsAt: string;
   endsAt: string;
 }
-export const overlaps = (a: Span, b: Span) => Date.parse(a.startsAt) < Date.parse(b.endsAt) && Date.parse(b.startsAt) < Date.parse(a.endsAt);
+export const overlaps = (a: Span, b: Span) =>
+  Date.parse(a.startsAt) < Date.parse(b.endsAt) && Date.parse(b.startsAt) < Date.parse(a.endsAt);
 
 export interface BookingForCheck extends Span {
   id?: string;
@@ -120,6 +134,7 @@ export function installationProblem(
     if (current) return `${asset.identifier} is still on ${current.parentIdentifier}: record its removal first.`;
     return null;
   }
-  if (!current || current.parentId !== parent.id) return `${asset.identifier} is not installed on ${parent.identifier}${current ? ` (it is on ${current.parentIdentifier})` : ""}.`;
+  if (!current || current.parentId !== parent.id)
+    return `${asset.identifier} is not installed on ${parent.identifier}${current ? ` (it is on ${current.parentIdentifier})` : ""}.`;
   return null;
 }

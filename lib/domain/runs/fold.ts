@@ -25,6 +25,10 @@ export const runEventTypes = [
   "run.returned",
   "run.moved",
   "run.signed_off",
+  // What the run works on (the aircraft picked at the cart) and what was found on it: kept in their
+  // own tables (lib/server/fleet), sent with the run's events so offline carts file them once.
+  "asset.named",
+  "finding.filed",
 ] as const;
 export type RunEventType = (typeof runEventTypes)[number];
 
@@ -253,6 +257,7 @@ export function foldRun(events: readonly RunEvent[], steps: readonly CardStepFor
       continue;
     }
     const isInstructor = instructors.has(e.userId);
+    if (e.type === "asset.named" || e.type === "finding.filed") continue; // they change no step
     if (e.type === "run.submitted") {
       // A hand-in made before the instructor's return (an offline cart's, sent late) is not a new one.
       if (lateAfter?.moment === "return") {

@@ -83,7 +83,10 @@ export const updateBookingSchema = z
     reason: z.string().trim().max(300, "Use at most 300 characters.").optional().default(""),
   })
   .strict()
-  .refine((b) => !b.cancel || b.reason.length > 0, { message: "Say why it is cancelled: the instructors affected are told.", path: ["reason"] });
+  .refine((b) => !b.cancel || b.reason.length > 0, {
+    message: "Say why it is cancelled: the instructors affected are told.",
+    path: ["reason"],
+  });
 
 export const bookingListQuerySchema = z.object({
   from: z.iso.datetime({ offset: true }).optional().catch(undefined),

@@ -5,24 +5,14 @@ import { and, asc, desc, eq, ilike, inArray, isNull, or, sql } from "drizzle-orm
 import { alias } from "drizzle-orm/pg-core";
 import type { z } from "zod";
 import { getDb, type Db, type Tx } from "@/db";
-import {
-  assetInstallations,
-  assets,
-  findings,
-  manuals,
-  runAssetChanges,
-  runAssets,
-  runs,
-  taskCardVersions,
-  users,
-} from "@/db/schema";
+import { assetInstallations, assets, findings, manuals, runAssetChanges, runAssets, runs, taskCardVersions, users } from "@/db/schema";
 import type { AssetDetailDto, AssetDto, InstallationDto } from "@/lib/contracts/fleet";
 import type { Actor } from "@/lib/domain/access/permissions";
 import { AppError, databaseErrorCode } from "@/lib/domain/errors";
 import { appliesTo, installationProblem, type AssetKind, type AssetStatus } from "@/lib/domain/fleet/fleet";
 import type { createAssetSchema, runAssetsSchema, updateAssetSchema } from "@/lib/domain/validation/fleet";
 import { recordAudit } from "@/lib/server/audit";
-import { listFindings } from "@/lib/server/fleet/findings";
+import { listFindings, openFindingsOn } from "@/lib/server/fleet/findings";
 import { listBookings } from "@/lib/server/fleet/bookings";
 import { loadRun } from "@/lib/server/runs/queries";
 
@@ -61,7 +51,9 @@ export async function listAssets({ q, kind }: { q?: string; kind?: AssetKind } =
     .where(
       and(
         kind ? eq(assets.kind, kind) : undefined,
-        words ? or(ilike(assets.identifier, `%${words}%`), ilike(assets.model, `%${words}%`), ilike(assets.serial, `%${words}%`)) : undefined,
+        words
+          ? or(ilike(assets.identifier, `%${words}%`), ilike(assets.model, `%${words}%`), ilike(assets.serial, `%${words}%`))
+          : undefined,
       ),
     )
     .orderBy(asc(assets.kind), asc(assets.identifier))
@@ -155,7 +147,13 @@ export async function getAsset({ actor, id }: { actor: Actor; id: string }): Pro
     documentsFor(db, a),
     listFindings({ actor, assetId: id }),
     db
-      .select({ id: assets.id, identifier: assets.identifier, kind: assets.kind, model: assets.model, position: assetInstallations.position })
+      .select({
+        id: assets.id,
+        identifier: assets.identifier,
+        kind: assets.kind,
+        model: assets.model,
+        position: assetInstallations.position,
+      })
       .from(assetInstallations)
       .innerJoin(assets, eq(assets.id, assetInstallations.assetId))
       .where(and(eq(assetInstallations.parentId, id), isNull(assetInstallations.removedAt)))
@@ -250,7 +248,14 @@ export async function takeOutOfService(tx: Tx, actor: Actor, id: string, reason:
 /** The assets named on a run and the installation change it makes (applied when it is signed off). */
 export async function runAssetsOf(db: Db | Tx, runId: string) {
   const named = await db
-    .select({ id: assets.id, identifier: assets.identifier, kind: assets.kind, model: assets.model, status: assets.status, statusReason: assets.statusReason })
+    .select({
+      id: assets.id,
+      identifier: assets.identifier,
+      kind: assets.kind,
+      model: assets.model,
+      status: assets.status,
+      statusReason: assets.statusReason,
+    })
     .from(runAssets)
     .innerJoin(assets, eq(assets.id, runAssets.assetId))
     .where(eq(runAssets.runId, runId))
@@ -334,4 +339,23 @@ export async function applyRunAssetChange(tx: Tx, actor: Actor, runId: string, a
     subjectId: change.assetId,
     details: { identifier: a.identifier, parent: p.identifier, runId },
   });
+}
+
+/** What the cart and the review screen read of a run's assets: named, the change, their open findings. */
+export async function runAssetsView({ actor, runId }: { actor: Actor; runId: string }) {
+  const db = getDb();
+  await loadRun(db, actor, runId);
+  const named = await runAssetsOf(db, runId);
+  return {
+    ...named,
+    openFindings: await openFindingsOn(
+      db,
+      named.assets.map((a) => a.id),
+    ),
+  };
+}
+
+export async function nameRunAssets({ actor, runId, input }: { actor: Actor; runId: string; input: z.output<typeof runAssetsSchema> }) {
+  await getDb().transaction((tx) => setRunAssets(tx, { actor, runId, input }));
+  return runAssetsView({ actor, runId });
 }

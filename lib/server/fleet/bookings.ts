@@ -30,18 +30,31 @@ const bookingNotFound = () => new AppError("not_found", "That booking was not fo
 
 export async function listPlaces(): Promise<PlaceDto[]> {
   const rows = await getDb().select().from(places).orderBy(asc(places.kind), asc(places.name));
-  return rows.map((p) => ({ id: p.id, name: p.name, kind: p.kind as PlaceKind, takes: p.takes as AssetKind[], maxSpanMetres: p.maxSpanMetres }));
+  return rows.map((p) => ({
+    id: p.id,
+    name: p.name,
+    kind: p.kind as PlaceKind,
+    takes: p.takes as AssetKind[],
+    maxSpanMetres: p.maxSpanMetres,
+  }));
 }
 
 export async function createPlace({ actor, input }: { actor: Actor; input: z.output<typeof createPlaceSchema> }) {
   try {
     return await getDb().transaction(async (tx) => {
       const [row] = await tx.insert(places).values(input).returning({ id: places.id });
-      await recordAudit(tx, { actorId: actor.id, action: "place.created", subjectType: "place", subjectId: row!.id, details: { name: input.name } });
+      await recordAudit(tx, {
+        actorId: actor.id,
+        action: "place.created",
+        subjectType: "place",
+        subjectId: row!.id,
+        details: { name: input.name },
+      });
       return { id: row!.id };
     });
   } catch (error) {
-    if (databaseErrorCode(error) === "23505") throw new AppError("conflict", `${input.name} is already a place.`, { fields: { name: "Already a place." } });
+    if (databaseErrorCode(error) === "23505")
+      throw new AppError("conflict", `${input.name} is already a place.`, { fields: { name: "Already a place." } });
     throw error;
   }
 }
@@ -93,7 +106,8 @@ function bookingQuery(db: Db | Tx) {
 export async function listBookings({ from, to, assetId }: { from?: string; to?: string; assetId?: string } = {}): Promise<BookingDto[]> {
   const start = from ? new Date(from) : new Date(Date.now() - 86_400_000);
   const end = to ? new Date(to) : new Date(start.getTime() + 8 * 86_400_000);
-  if (end.getTime() - start.getTime() > 93 * 86_400_000) throw new AppError("invalid", "Ask for at most three months of bookings at a time.");
+  if (end.getTime() - start.getTime() > 93 * 86_400_000)
+    throw new AppError("invalid", "Ask for at most three months of bookings at a time.");
   const rows = await bookingQuery(getDb())
     .where(
       and(
@@ -241,7 +255,14 @@ async function mailBookingChange(db: Db, actor: Actor, before: BookingDto, after
     .select({ email: users.email, name: users.name })
     .from(classMembers)
     .innerJoin(users, eq(users.id, classMembers.userId))
-    .where(and(eq(classMembers.classId, before.classId), inArray(users.role, ["instructor", "admin"]), eq(users.status, "active"), ne(users.id, actor.id)));
+    .where(
+      and(
+        eq(classMembers.classId, before.classId),
+        inArray(users.role, ["instructor", "admin"]),
+        eq(users.status, "active"),
+        ne(users.id, actor.id),
+      ),
+    );
   if (!staff.length) return;
   const [me] = await db.select({ name: users.name }).from(users).where(eq(users.id, actor.id));
   const zone = await schoolTimeZone();

@@ -111,7 +111,8 @@ export async function fileFinding(
   if (input.id) {
     const [known] = await findingQuery(tx).where(eq(findings.id, input.id));
     if (known) {
-      if (known.f.reportedBy !== actor.id) throw new AppError("conflict", "That finding id is already used. Each finding needs its own id.");
+      if (known.f.reportedBy !== actor.id)
+        throw new AppError("conflict", "That finding id is already used. Each finding needs its own id.");
       return { finding: toDto(known), created: false };
     }
   }
@@ -121,7 +122,10 @@ export async function fileFinding(
     const run = await loadRun(tx, actor, input.runId);
     if (run.studentId !== actor.id && !(await reviewsRun(tx, actor, run))) throw new AppError("not_found", "That run was not found.");
     if (input.stepId) {
-      const [version] = await tx.select({ steps: taskCardVersions.steps }).from(taskCardVersions).where(eq(taskCardVersions.id, run.versionId));
+      const [version] = await tx
+        .select({ steps: taskCardVersions.steps })
+        .from(taskCardVersions)
+        .where(eq(taskCardVersions.id, run.versionId));
       if (!((version?.steps ?? []) as { id: string }[]).some((s) => s.id === input.stepId))
         throw new AppError("invalid", "That step is not on the run's card.", { fields: { stepId: "Not on this card." } });
     }
@@ -187,7 +191,13 @@ export async function decideFinding({ actor, id, input }: { actor: Actor; id: st
     if (input.decision === "out_of_service") await takeOutOfService(tx, actor, row.assetId, input.note);
     await tx
       .update(findings)
-      .set({ decision: input.decision, decisionNote: input.note, newAssignmentId: input.newAssignmentId, closedAt: new Date(), closedBy: actor.id })
+      .set({
+        decision: input.decision,
+        decisionNote: input.note,
+        newAssignmentId: input.newAssignmentId,
+        closedAt: new Date(),
+        closedBy: actor.id,
+      })
       .where(eq(findings.id, id));
     const [asset] = await tx.select({ identifier: assets.identifier }).from(assets).where(eq(assets.id, row.assetId));
     await recordAudit(tx, {

@@ -13,6 +13,7 @@ import { loadRun, stepsOnly, foldStored } from "@/lib/server/runs/queries";
 import { assertNotWithdrawn } from "@/lib/server/runs/assign";
 import { noticeBuyOffCall } from "@/lib/server/runs/buy-offs";
 import { checkReadingTools, handInHeld, holdsOnRun } from "@/lib/server/tools/lending";
+import { applyFleetEvents } from "@/lib/server/fleet/run-events";
 
 export const signedOffConflict = () =>
   new AppError("conflict", "This run is signed off. Its record cannot change; ask your instructor to assign the card again.");
@@ -95,6 +96,7 @@ export async function appendEvents({
             serverTime,
           })),
         );
+        await applyFleetEvents(tx, actor, runId, checked, serverTime);
       }
       if (!fresh.length) return { result: { stored: 0, duplicates: events.length, status: run.status }, called: null };
       const { events: all, state } = await foldStored(tx, runId, steps!);

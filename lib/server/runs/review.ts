@@ -1,5 +1,6 @@
 // The instructor's side: buy-off of an inspection point, return for rework, sign-off.
 import "server-only";
+import { applyRunAssetChange } from "@/lib/server/fleet/assets";
 import { eq } from "drizzle-orm";
 import { getDb, type Tx } from "@/db";
 import { runEvents, runs, signOffs } from "@/db/schema";
@@ -149,6 +150,8 @@ export async function signOffRun({ actor, runId, comment, password }: { actor: A
       const revisionsCited = revisionsCitedBy(version);
       await tx.insert(signOffs).values({ runId, instructorId: actor.id, versionId: version.id, revisionsCited, actualMinutes, comment });
       await tx.update(runs).set({ status: "signed_off" }).where(eq(runs.id, runId));
+      // An engine removed or installed in this run is written on the assets now, naming the run.
+      await applyRunAssetChange(tx, actor, runId, new Date());
       await recordAudit(tx, {
         actorId: actor.id,
         action: "run.signed_off",
