@@ -5,7 +5,7 @@ import { and, asc, desc, eq, ilike, inArray, isNull, or, sql } from "drizzle-orm
 import { alias } from "drizzle-orm/pg-core";
 import type { z } from "zod";
 import { getDb, type Db, type Tx } from "@/db";
-import { assetInstallations, assets, findings, manuals, runAssetChanges, runAssets, runs, taskCardVersions, users } from "@/db/schema";
+import { assetInstallations, assets, manuals, runAssetChanges, runAssets, runs, taskCardVersions, users } from "@/db/schema";
 import type { AssetDetailDto, AssetDto, InstallationDto } from "@/lib/contracts/fleet";
 import type { Actor } from "@/lib/domain/access/permissions";
 import { AppError, databaseErrorCode } from "@/lib/domain/errors";
