@@ -882,8 +882,9 @@ export const runAssets = pgTable(
 export const runAssetChanges = pgTable(
   "run_asset_changes",
   {
+    id: uuid("id").primaryKey().defaultRandom(),
     runId: uuid("run_id")
-      .primaryKey()
+      .notNull()
       .references(() => runs.id, { onDelete: "restrict" }),
     action: text("action").notNull(),
     assetId: uuid("asset_id")
@@ -897,7 +898,10 @@ export const runAssetChanges = pgTable(
     appliedAt: timestamp("applied_at", { withTimezone: true }),
     ...timestamps,
   },
-  (t) => [check("run_asset_changes_action", sql`${t.action} in ('install', 'remove')`)],
+  (t) => [
+    uniqueIndex("run_asset_changes_key").on(t.runId, t.assetId, t.action),
+    check("run_asset_changes_action", sql`${t.action} in ('install', 'remove')`),
+  ],
 );
 
 /** Places in the hangar: bays, engine stands, the NDT room, tie-downs; each takes some kinds of asset. */

@@ -8,6 +8,7 @@ import { getQueue } from "@/lib/server/jobs";
 import { seedCards } from "./demo/seed-cards";
 import { seedRuns } from "./demo/seed-runs";
 import { seedLibrary } from "./demo/seed-library";
+import { seedFleet } from "./demo/seed-fleet";
 import { seedTools } from "./demo/seed-tools";
 import { seedAttendance } from "./demo/seed-attendance";
 import { standardExcerptCsv } from "./demo/standard-excerpt";
@@ -110,6 +111,8 @@ async function main() {
   console.log(sessionsAdded ? `seeded ${sessionsAdded} demo class sessions with attendance` : "demo class sessions already present");
   const kitsAdded = await seedTools(db);
   console.log(kitsAdded ? `seeded the demo tool room (${kitsAdded} kits)` : "demo tool room already present");
+  const assetsAdded = await seedFleet(db);
+  console.log(assetsAdded ? `seeded the demo fleet (${assetsAdded} assets) and hangar plan` : "demo fleet already present");
   await (await getQueue()).stop({ graceful: false, wait: true });
   await closeDb();
 }

@@ -57,6 +57,15 @@ const demoAssignments: DemoAssignment[] = [
     note: "Hangar 1, trainer HL-TR2",
     progress: {},
   },
+  {
+    // The fleet's demo engine change: E-401 off HL-TR3, E-402 on, recorded from this signed-off run (seed-fleet.ts).
+    card: "Turbine engine removal and installation on the stand",
+    by: "instructor2@hangarleaf.test",
+    students: ["student4@hangarleaf.test"],
+    dueInDays: -3,
+    note: "Bay 3, HL-TR3: engine change",
+    progress: { "student4@hangarleaf.test": "signed_off" },
+  },
 ];
 
 const day = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);

@@ -76,7 +76,8 @@ CREATE TABLE "places" (
 );
 --> statement-breakpoint
 CREATE TABLE "run_asset_changes" (
-	"run_id" uuid PRIMARY KEY NOT NULL,
+	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
+	"run_id" uuid NOT NULL,
 	"action" text NOT NULL,
 	"asset_id" uuid NOT NULL,
 	"parent_id" uuid NOT NULL,
@@ -125,6 +126,7 @@ CREATE INDEX "bookings_place_idx" ON "bookings" USING btree ("place_id","starts_
 CREATE INDEX "findings_asset_idx" ON "findings" USING btree ("asset_id","closed_at");--> statement-breakpoint
 CREATE INDEX "findings_open_idx" ON "findings" USING btree ("received_at") WHERE "findings"."closed_at" is null;--> statement-breakpoint
 CREATE UNIQUE INDEX "places_name_key" ON "places" USING btree (lower("name"));--> statement-breakpoint
+CREATE UNIQUE INDEX "run_asset_changes_key" ON "run_asset_changes" USING btree ("run_id","asset_id","action");--> statement-breakpoint
 CREATE INDEX "run_assets_asset_idx" ON "run_assets" USING btree ("asset_id");--> statement-breakpoint
 -- An installation is the asset's history: only its removal is written, once; nothing is deleted.
 CREATE FUNCTION hl_asset_installations_history() RETURNS trigger LANGUAGE plpgsql AS $$

@@ -21,7 +21,7 @@ const findingFields = `{ "id", "assetId", "assetIdentifier", "runId", "runTitle"
 
 export interface RunAssetsDto {
   assets: { id: string; identifier: string; kind: string; model: string; status: string; statusReason: string }[];
-  change: { action: string; assetId: string; parentId: string; position: string; appliedAt: Date | null } | null;
+  changes: { action: string; assetId: string; parentId: string; position: string; appliedAt: Date | null }[];
   openFindings: FindingDto[];
 }
 
@@ -151,7 +151,7 @@ export const fleetApi = {
     params: { id: uuidSegment("That run") },
     answer: json<RunAssetsDto>(),
     who: "the run's student, its reviewers",
-    doc: `200 \`{ "assets": [ { "id", "identifier", "kind", "model", "status", "statusReason" } ], "change": { "action": "install\\|remove", "assetId", "parentId", "position", "appliedAt" } \\| null, "openFindings" }\``,
+    doc: `200 \`{ "assets": [ { "id", "identifier", "kind", "model", "status", "statusReason" } ], "changes": [ { "action": "install\\|remove", "assetId", "parentId", "position", "appliedAt" } ], "openFindings" }\``,
   }),
   setRunAssets: endpoint({
     method: "PUT",
@@ -161,6 +161,6 @@ export const fleetApi = {
     body: { kind: "json", schema: runAssetsSchema },
     answer: json<RunAssetsDto>(),
     who: "the run's student, its reviewers",
-    doc: `\`{ "assetIds": [ … ], "change"?: { "action": "install\\|remove", "assetId", "parentId", "position"? } }\` → 200: the assets the run works on (replacing those named) and the installation it makes or undoes, written on the assets when the run is signed off (naming the run and the instructor; the sign-off is refused with 409 if the assets moved since). 422 an asset not in the fleet or a change that cannot be (an engine still on another airframe); 409 once signed off. The cart also names them offline with an \`asset.named\` run event \`{ "assetIds" }\``,
+    doc: `\`{ "assetIds": [ … ], "changes"?: [ { "action": "install\\|remove", "assetId", "parentId", "position"? } ] }\` → 200: the assets the run works on (replacing those named) and the installations it makes or undoes (an engine change: the old one removed, the new one installed), written on the assets when the run is signed off (naming the run and the instructor; the sign-off is refused with 409 if the assets moved since). 422 an asset not in the fleet or a change that cannot be (an engine still on another airframe); 409 once signed off. The cart also names them offline with an \`asset.named\` run event \`{ "assetIds" }\``,
   }),
 };

@@ -119,14 +119,17 @@ export const decideFindingSchema = z
 
 export const runAssetsSchema = z.object({
   assetIds: z.array(z.uuid("An asset id is a UUID.")).max(10, "Name at most 10 assets on one run."),
-  change: z
-    .object({
-      action: z.enum(["install", "remove"], { error: "The change installs or removes." }),
-      assetId: z.uuid("Choose what is installed or removed."),
-      parentId: z.uuid("Choose what it goes on or comes off."),
-      position: optionalText(40),
-    })
-    .nullable()
+  /** Installations the run makes or undoes, written on the assets when it is signed off (removals first). */
+  changes: z
+    .array(
+      z.object({
+        action: z.enum(["install", "remove"], { error: "A change installs or removes." }),
+        assetId: z.uuid("Choose what is installed or removed."),
+        parentId: z.uuid("Choose what it goes on or comes off."),
+        position: optionalText(40),
+      }),
+    )
+    .max(6, "At most 6 installation changes on one run.")
     .optional()
-    .default(null),
+    .default([]),
 });

@@ -245,7 +245,7 @@ export async function takeOutOfService(tx: Tx, actor: Actor, id: string, reason:
   });
 }
 
-/** The assets named on a run and the installation change it makes (applied when it is signed off). */
+/** The assets named on a run and the installation changes it makes (applied when it is signed off). */
 export async function runAssetsOf(db: Db | Tx, runId: string) {
   const named = await db
     .select({
@@ -260,13 +260,28 @@ export async function runAssetsOf(db: Db | Tx, runId: string) {
     .innerJoin(assets, eq(assets.id, runAssets.assetId))
     .where(eq(runAssets.runId, runId))
     .orderBy(asc(assets.identifier));
-  const [change] = await db.select().from(runAssetChanges).where(eq(runAssetChanges.runId, runId));
-  return { assets: named, change: change ?? null };
+  const changes = await db
+    .select({
+      action: runAssetChanges.action,
+      assetId: runAssetChanges.assetId,
+      parentId: runAssetChanges.parentId,
+      position: runAssetChanges.position,
+      appliedAt: runAssetChanges.appliedAt,
+    })
+    .from(runAssetChanges)
+    .where(eq(runAssetChanges.runId, runId))
+    .orderBy(asc(runAssetChanges.createdAt));
+  return { assets: named, changes };
 }
 
+type Change = { action: "install" | "remove"; assetId: string; parentId: string; position: string };
+/** Removals before installations: an engine change takes the old one off before the new one goes on. */
+const inOrder = <C extends { action: string }>(changes: readonly C[]) =>
+  [...changes].sort((a, b) => (a.action === b.action ? 0 : a.action === "remove" ? -1 : 1));
+
 /**
- * Names the assets a run works on (replacing what was named) and the change it makes. The student
- * of the run or a reviewer; not once it is signed off. A change is checked now against where the
+ * Names the assets a run works on (replacing what was named) and the changes it makes. The student
+ * of the run or a reviewer; not once it is signed off. Changes are checked now against where the
  * assets are, and again at sign-off.
  */
 export async function setRunAssets(
@@ -275,70 +290,89 @@ export async function setRunAssets(
 ) {
   const run = await loadRun(db, actor, runId);
   if (run.status === "signed_off") throw new AppError("conflict", "This run is signed off: what it worked on is part of the record.");
-  const ids = [...new Set([...input.assetIds, ...(input.change ? [input.change.assetId, input.change.parentId] : [])])];
-  const known = ids.length ? await db.select().from(assets).where(inArray(assets.id, ids)) : [];
-  const missing = ids.filter((id) => !known.some((k) => k.id === id));
-  if (missing.length) throw new AppError("invalid", "An asset named is not in the fleet.", { fields: { assetIds: "Not in the fleet." } });
-  if (input.change) {
-    const problem = await changeProblem(db, input.change);
-    if (problem) throw new AppError("invalid", problem, { fields: { change: problem } });
-  }
+  const ids = [...new Set([...input.assetIds, ...input.changes.flatMap((c) => [c.assetId, c.parentId])])];
+  const known = ids.length ? await db.select({ id: assets.id }).from(assets).where(inArray(assets.id, ids)) : [];
+  if (ids.some((id) => !known.some((k) => k.id === id)))
+    throw new AppError("invalid", "An asset named is not in the fleet.", { fields: { assetIds: "Not in the fleet." } });
+  const problem = await changesProblem(db, input.changes);
+  if (problem) throw new AppError("invalid", problem, { fields: { changes: problem } });
   await db.delete(runAssets).where(eq(runAssets.runId, runId));
   if (ids.length) await db.insert(runAssets).values(ids.map((assetId) => ({ runId, assetId, namedBy: actor.id })));
   await db.delete(runAssetChanges).where(and(eq(runAssetChanges.runId, runId), isNull(runAssetChanges.appliedAt)));
-  if (input.change) await db.insert(runAssetChanges).values({ runId, ...input.change });
+  if (input.changes.length) await db.insert(runAssetChanges).values(inOrder(input.changes).map((c) => ({ runId, ...c })));
   return runAssetsOf(db, runId);
 }
 
-async function changeProblem(db: Db | Tx, change: { action: "install" | "remove"; assetId: string; parentId: string }) {
-  const [asset, parent] = await Promise.all([assetRow(db, change.assetId), assetRow(db, change.parentId)]);
-  const [current] = await db
-    .select({ parentId: assetInstallations.parentId, parentIdentifier: parents.identifier })
-    .from(assetInstallations)
-    .innerJoin(parents, eq(parents.id, assetInstallations.parentId))
-    .where(and(eq(assetInstallations.assetId, change.assetId), isNull(assetInstallations.removedAt)));
-  return installationProblem(
-    change,
-    { ...asset, kind: asset.kind as AssetKind },
-    { ...parent, kind: parent.kind as AssetKind },
-    current ?? null,
-  );
+/** The first change that cannot be, in order, each seeing the ones before it done. */
+async function changesProblem(db: Db | Tx, changes: readonly Change[]): Promise<string | null> {
+  const freed = new Set<string>();
+  const placed = new Map<string, { parentId: string; parentIdentifier: string }>();
+  for (const change of inOrder(changes)) {
+    const [asset, parent] = await Promise.all([assetRow(db, change.assetId), assetRow(db, change.parentId)]);
+    const [stored] = await db
+      .select({ parentId: assetInstallations.parentId, parentIdentifier: parents.identifier })
+      .from(assetInstallations)
+      .innerJoin(parents, eq(parents.id, assetInstallations.parentId))
+      .where(and(eq(assetInstallations.assetId, change.assetId), isNull(assetInstallations.removedAt)));
+    const current = placed.get(change.assetId) ?? (freed.has(change.assetId) ? null : (stored ?? null));
+    const problem = installationProblem(
+      change,
+      { ...asset, kind: asset.kind as AssetKind },
+      { ...parent, kind: parent.kind as AssetKind },
+      current,
+    );
+    if (problem) return problem;
+    if (change.action === "remove") freed.add(change.assetId);
+    else placed.set(change.assetId, { parentId: parent.id, parentIdentifier: parent.identifier });
+  }
+  return null;
 }
 
 /**
- * At sign-off, in its transaction: the run's installation change is written on the assets, naming
+ * At sign-off, in its transaction: the run's installation changes are written on the assets, naming
  * the run and the instructor. Refused (and the sign-off with it) when the assets have moved since.
  */
 export async function applyRunAssetChange(tx: Tx, actor: Actor, runId: string, at: Date) {
-  const [change] = await tx.select().from(runAssetChanges).where(eq(runAssetChanges.runId, runId)).for("update");
-  if (!change || change.appliedAt) return;
-  await assetRow(tx, change.assetId, { lock: true });
-  const problem = await changeProblem(tx, { ...change, action: change.action as "install" | "remove" });
-  if (problem) throw new AppError("conflict", `The run's change cannot be recorded: ${problem} Correct what the run names, then sign off.`);
-  if (change.action === "install") {
-    await tx.insert(assetInstallations).values({
-      assetId: change.assetId,
-      parentId: change.parentId,
-      position: change.position,
-      installedAt: at,
-      installedBy: actor.id,
-      installedRunId: runId,
+  const pending = await tx
+    .select()
+    .from(runAssetChanges)
+    .where(and(eq(runAssetChanges.runId, runId), isNull(runAssetChanges.appliedAt)))
+    .for("update");
+  if (!pending.length) return;
+  const changes = inOrder(pending.map((c) => ({ ...c, action: c.action as "install" | "remove" })));
+  for (const id of [...new Set(changes.map((c) => c.assetId))].sort()) await assetRow(tx, id, { lock: true });
+  const problem = await changesProblem(tx, changes);
+  if (problem)
+    throw new AppError(
+      "conflict",
+      `The run's installation change cannot be recorded: ${problem} Correct what the run names, then sign off.`,
+    );
+  for (const change of changes) {
+    if (change.action === "install") {
+      await tx.insert(assetInstallations).values({
+        assetId: change.assetId,
+        parentId: change.parentId,
+        position: change.position,
+        installedAt: at,
+        installedBy: actor.id,
+        installedRunId: runId,
+      });
+    } else {
+      await tx
+        .update(assetInstallations)
+        .set({ removedAt: at, removedBy: actor.id, removedRunId: runId })
+        .where(and(eq(assetInstallations.assetId, change.assetId), isNull(assetInstallations.removedAt)));
+    }
+    await tx.update(runAssetChanges).set({ appliedAt: at }).where(eq(runAssetChanges.id, change.id));
+    const [a, p] = await Promise.all([assetRow(tx, change.assetId), assetRow(tx, change.parentId)]);
+    await recordAudit(tx, {
+      actorId: actor.id,
+      action: change.action === "install" ? "asset.installed" : "asset.removed",
+      subjectType: "asset",
+      subjectId: change.assetId,
+      details: { identifier: a.identifier, parent: p.identifier, runId },
     });
-  } else {
-    await tx
-      .update(assetInstallations)
-      .set({ removedAt: at, removedBy: actor.id, removedRunId: runId })
-      .where(and(eq(assetInstallations.assetId, change.assetId), isNull(assetInstallations.removedAt)));
   }
-  await tx.update(runAssetChanges).set({ appliedAt: at }).where(eq(runAssetChanges.runId, runId));
-  const [a, p] = await Promise.all([assetRow(tx, change.assetId), assetRow(tx, change.parentId)]);
-  await recordAudit(tx, {
-    actorId: actor.id,
-    action: change.action === "install" ? "asset.installed" : "asset.removed",
-    subjectType: "asset",
-    subjectId: change.assetId,
-    details: { identifier: a.identifier, parent: p.identifier, runId },
-  });
 }
 
 /** What the cart and the review screen read of a run's assets: named, the change, their open findings. */
