@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { appliesTo, bookingProblem, installationProblem, readApplicability } from "@/lib/domain/fleet/fleet";
+import { appliesTo, bookingProblem, installationProblem, readApplicability, weekOf } from "@/lib/domain/fleet/fleet";
 
 describe("effectivity", () => {
   it("reads a model with a serial range, either dash", () => {
@@ -65,5 +65,21 @@ describe("installation changes", () => {
     expect(installationProblem({ action: "remove" }, engine, airframe, { parentId: "a1", parentIdentifier: "N-HL01" })).toBeNull();
     expect(installationProblem({ action: "remove" }, engine, airframe, null)).toMatch(/not installed on N-HL01/);
     expect(installationProblem({ action: "install" }, engine, engine, null)).toMatch(/itself/);
+  });
+});
+
+describe("the hangar week", () => {
+  it("runs Monday to Sunday around any day of it", () => {
+    expect(weekOf("2026-12-03")).toEqual([
+      "2026-11-30",
+      "2026-12-01",
+      "2026-12-02",
+      "2026-12-03",
+      "2026-12-04",
+      "2026-12-05",
+      "2026-12-06",
+    ]);
+    expect(weekOf("2026-12-06")[0]).toBe("2026-11-30");
+    expect(weekOf("2026-11-30")[6]).toBe("2026-12-06");
   });
 });

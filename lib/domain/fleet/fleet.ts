@@ -138,3 +138,10 @@ export function installationProblem(
     return `${asset.identifier} is not installed on ${parent.identifier}${current ? ` (it is on ${current.parentIdentifier})` : ""}.`;
   return null;
 }
+
+/** The seven days (Monday first) of the week holding `day` (YYYY-MM-DD), as calendar days. */
+export function weekOf(day: string): string[] {
+  const d = new Date(`${day}T12:00:00Z`);
+  const monday = d.getTime() - ((d.getUTCDay() + 6) % 7) * 86_400_000;
+  return Array.from({ length: 7 }, (_, i) => new Date(monday + i * 86_400_000).toISOString().slice(0, 10));
+}
