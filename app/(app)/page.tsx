@@ -9,6 +9,8 @@ import { ToolHolds } from "@/components/tool-holds";
 import { dateTimeIn } from "@/lib/domain/time";
 import { schoolTimeZone } from "@/lib/server/settings";
 import { listHolds } from "@/lib/server/tools/lending";
+import { listFindings } from "@/lib/server/fleet/findings";
+import { FindingsPanel } from "./fleet/_components/findings-panel";
 
 const roleIntro: Record<Role, string> = {
   student: "The task cards your instructors assign are under My work; it also opens on the cart without a network.",
@@ -28,6 +30,8 @@ export default async function HomePage() {
   const buyOffs = can(user, "runs:review") ? await countBuyOffCalls({ actor: user }) : null;
   // Missing tools hold hand-ins: instructors clear them here, students see their own.
   const holds = can(user, "tools:clear-holds") || can(user, "runs:do") ? await listHolds({ actor: user }) : [];
+  // Findings written up on the fleet wait for an instructor's decision.
+  const findings = can(user, "findings:decide") ? await listFindings({ actor: user, open: true, mine: true }) : [];
   const zone = await schoolTimeZone();
   const open = work?.filter((w) => w.status !== "signed_off" && w.status !== "submitted") ?? [];
   return (
@@ -89,6 +93,20 @@ export default async function HomePage() {
             holds={holds}
             canClear={can(user, "tools:clear-holds")}
             openedAt={Object.fromEntries(holds.map((h) => [h.id, dateTimeIn(zone, h.openedAt)]))}
+          />
+        </section>
+      ) : null}
+      {findings.length ? (
+        <section aria-labelledby="open-findings" className="panel flex flex-col gap-3">
+          <h2 id="open-findings">
+            {findings.length === 1
+              ? "A finding on the fleet waits for your decision"
+              : `${findings.length} findings on the fleet wait for your decision`}
+          </h2>
+          <FindingsPanel
+            findings={findings}
+            decide
+            zoneTimes={Object.fromEntries(findings.map((f) => [f.id, dateTimeIn(zone, f.foundAt)]))}
           />
         </section>
       ) : null}
