@@ -3,6 +3,7 @@
 import MiniSearch from "minisearch";
 import { useEffect, useMemo, useState } from "react";
 import type { CartData } from "@/lib/client/cart/store";
+import { CartAircraft } from "@/components/cart/cart-aircraft";
 import { StatusBadge } from "@/components/status-badge";
 import type { WorkItemDto } from "@/lib/contracts/runs";
 import { dateTimeIn, zoneLabel } from "@/lib/domain/time";
@@ -35,6 +36,7 @@ export function WorkList({
   ];
   return (
     <div className="flex flex-col gap-6">
+      <CartAircraft data={data} />
       <OfflineSearch data={data} items={items} />
       {groups.map((g) => (
         <section key={g.title} aria-label={g.title} className="flex flex-col gap-2">

@@ -7,6 +7,7 @@
 import { useState } from "react";
 import type { CartData } from "@/lib/client/cart/store";
 import { HandIn } from "./hand-in";
+import { RunAircraft } from "./run-aircraft";
 import { RunHeader } from "./run-header";
 import { RunMissing } from "./run-missing";
 import { useStepKeys } from "./step-keys";
@@ -37,6 +38,16 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
   return (
     <article className="flex flex-col gap-5 pb-28" aria-label={`Run of ${version.title}`}>
       <RunHeader detail={detail} status={state.status} returned={returned} />
+
+      <RunAircraft
+        data={data}
+        events={[...detail.events, ...pending]}
+        act={act}
+        stepId={mode === "one" ? (shown[0]?.id ?? null) : null}
+        stepNumber={mode === "one" && shown[0] ? steps.indexOf(shown[0]) + 1 : null}
+        locked={state.status === "signed_off"}
+        online={online}
+      />
 
       <StepModeToggle mode={mode} onMode={setMode} done={steps.filter((s) => state.steps[s.id]?.checked).length} total={steps.length} />
 

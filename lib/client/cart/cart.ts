@@ -9,6 +9,7 @@ import {
   lastUser,
   rememberUser,
   signOutPending,
+  type CartAsset,
   type CartData,
   type CartUser,
 } from "@/lib/client/cart/store";
@@ -71,6 +72,10 @@ export async function refreshWork(data: CartData): Promise<WorkItemDto[]> {
   if (!response.ok) throw new Error(`my work answered ${response.status}`);
   const { work, timeZone } = (await response.json()) as { work: WorkItemDto[]; timeZone?: string };
   await data.saveWork(work, timeZone);
+  // The fleet too, so the aircraft pick and its out-of-service warning work offline.
+  await fetch("/api/assets", { cache: "no-store" })
+    .then(async (r) => (r.ok ? data.saveFleet(((await r.json()) as { assets: CartAsset[] }).assets) : undefined))
+    .catch(() => undefined);
   for (const item of work.filter((w) => activeStatuses.has(w.status))) {
     await refreshRun(data, item.runId).catch(() => undefined);
   }

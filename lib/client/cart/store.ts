@@ -87,6 +87,16 @@ export async function forgetUser(userId: string): Promise<void> {
   });
 }
 
+export interface CartAsset {
+  id: string;
+  identifier: string;
+  kind: string;
+  model: string;
+  status: string;
+  statusReason: string;
+  openFindingCount: number;
+}
+
 export interface RefusedItem {
   id: string;
   runId: string;
@@ -131,6 +141,16 @@ export function cartData(userId: string) {
     savePacket: (runId: string, blob: Blob) => set(`packet:${runId}`, blob, store),
     wholeFile: (revisionId: string) => get<Blob>(`file:${revisionId}`, store),
     saveWholeFile: (revisionId: string, blob: Blob) => set(`file:${revisionId}`, blob, store),
+    /** The fleet as last fetched (identifier, model, status): the aircraft pick and its warnings work offline. */
+    fleet: async () => (await get<CartAsset[]>("fleet", store)) ?? [],
+    saveFleet: (assets: CartAsset[]) => set("fleet", assets, store),
+    /** The aircraft this cart is at, picked once on the cart's page; runs offer it first. */
+    aircraft: () => get<string>("aircraft", store),
+    saveAircraft: async (assetId: string | null) => {
+      if (assetId) await set("aircraft", assetId, store);
+      else await del("aircraft", store);
+      changed();
+    },
     /** Server time minus the cart's clock, from the last answer: events are stamped on the school's clock. */
     clockOffset: async () => (await get<number>("clock-offset", store)) ?? 0,
     saveClockOffset: (ms: number) => set("clock-offset", ms, store),

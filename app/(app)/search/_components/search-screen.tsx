@@ -53,6 +53,8 @@ export function SearchScreen({ manuals }: { manuals: { id: string; title: string
     model: url.get("model") ?? "",
     ata: url.get("ata") ?? "",
   }));
+  // Opened from a cart at an aircraft (?for=HL-TR1&model=HT-20): scoped to its model, and saying so.
+  const [scopedFor] = useState(() => url.get("for"));
   const debounced = useDebounced(input, 250);
   const search = useSearch(debounced);
   const [active, setActive] = useState(-1);
@@ -98,6 +100,16 @@ export function SearchScreen({ manuals }: { manuals: { id: string; title: string
 
   return (
     <div className="flex flex-col gap-4" onKeyDown={onKeyDown}>
+      {scopedFor && input.model ? (
+        <p className="notice-todo flex flex-wrap items-center gap-3" role="status">
+          <span className="mr-auto">
+            Showing what applies to {scopedFor} (model {input.model}), and general documents are left out.
+          </span>
+          <button type="button" className="btn btn-secondary" onClick={() => setInput((i) => ({ ...i, model: "" }))}>
+            Search everything
+          </button>
+        </p>
+      ) : null}
       <div className="panel flex flex-col gap-3">
         <label htmlFor="search-q" className="label text-lg">
           What are you looking for?
