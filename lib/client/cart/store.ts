@@ -143,7 +143,10 @@ export function cartData(userId: string) {
     saveWholeFile: (revisionId: string, blob: Blob) => set(`file:${revisionId}`, blob, store),
     /** The fleet as last fetched (identifier, model, status): the aircraft pick and its warnings work offline. */
     fleet: async () => (await get<CartAsset[]>("fleet", store)) ?? [],
-    saveFleet: (assets: CartAsset[]) => set("fleet", assets, store),
+    saveFleet: async (assets: CartAsset[]) => {
+      await set("fleet", assets, store);
+      changed();
+    },
     /** The aircraft this cart is at, picked once on the cart's page; runs offer it first. */
     aircraft: () => get<string>("aircraft", store),
     saveAircraft: async (assetId: string | null) => {
