@@ -38,6 +38,8 @@ describe("bookings", () => {
   it("refuses an overlap of one asset or one place, and names who holds it", () => {
     expect(bookingProblem(booking, asset, bay, [other({ placeId: "p2" })])).toMatch(/N-HL01 is already booked in Bay 2 for Evening Cohort/);
     expect(bookingProblem(booking, asset, bay, [other({ assetId: "a2" })])).toMatch(/Bay 1 already holds N-HL02 for Evening Cohort/);
+    // Told on the school's clock.
+    expect(bookingProblem(booking, asset, bay, [other({ placeId: "p2" })], "America/Chicago")).toMatch(/2026-12-07 02:00 to 06:00 CST\.$/);
     // Back to back is not an overlap; another asset in another place is nothing to do with it.
     expect(bookingProblem(booking, asset, bay, [other({ startsAt: at(12), endsAt: at(14) })])).toBeNull();
     expect(bookingProblem(booking, asset, bay, [other({ assetId: "a2", placeId: "p2" })])).toBeNull();

@@ -1,5 +1,7 @@
 // The school's fleet and hangar (pure): what the words are, what applies to an asset (effectivity),
 // when a booking cannot stand, and what an installation change may do.
+import { clockIn, dateTimeIn, zoneLabel } from "@/lib/domain/time";
+
 export const assetKinds = ["aircraft", "engine", "propeller", "component"] as const;
 export type AssetKind = (typeof assetKinds)[number];
 export const assetStatuses = ["airworthy", "instructional", "ground_run", "out_of_service"] as const;
@@ -95,13 +97,15 @@ export function bookingProblem(
   asset: { identifier: string; kind: AssetKind; spanMetres: number | null; status: AssetStatus },
   place: { name: string; takes: readonly string[]; maxSpanMetres: number | null },
   others: readonly (BookingForCheck & { assetIdentifier: string; placeName: string; className: string | null })[],
+  /** The school's zone: the reason tells times on its clock. */
+  zone = "UTC",
 ): string | null {
   if (Date.parse(booking.endsAt) <= Date.parse(booking.startsAt)) return "The booking ends before it starts.";
   if (place.takes.length && !place.takes.includes(asset.kind))
     return `${place.name} does not take ${/^[aeiou]/.test(asset.kind) ? "an" : "a"} ${asset.kind}: it takes ${place.takes.join(", ")}.`;
   if (place.maxSpanMetres !== null && asset.spanMetres !== null && asset.spanMetres > place.maxSpanMetres)
     return `${asset.identifier} spans ${asset.spanMetres} m; ${place.name} takes at most ${place.maxSpanMetres} m.`;
-  const when = (b: Span) => `${b.startsAt.slice(0, 16).replace("T", " ")} to ${b.endsAt.slice(0, 16).replace("T", " ")} UTC`;
+  const when = (b: Span) => `${dateTimeIn(zone, b.startsAt)} to ${clockIn(zone, b.endsAt)} ${zoneLabel(zone, new Date(b.startsAt))}`;
   for (const o of others) {
     if (o.id && o.id === booking.id) continue;
     if (!overlaps(booking, o)) continue;

@@ -151,6 +151,7 @@ async function checkBooking(tx: Tx, booking: { id?: string; assetId: string; pla
     { identifier: asset.identifier, kind: asset.kind as AssetKind, spanMetres: asset.spanMetres, status: asset.status as AssetStatus },
     { name: place.name, takes: place.takes, maxSpanMetres: place.maxSpanMetres },
     others.map(toDto),
+    await schoolTimeZone(),
   );
   if (problem) {
     // Overlaps are conflicts with what is already booked; a place that cannot take the asset is a bad request.
