@@ -495,6 +495,8 @@ export const assignments = pgTable(
     withdrawnAt: timestamp("withdrawn_at", { withTimezone: true }),
     withdrawnBy: uuid("withdrawn_by").references(() => users.id, { onDelete: "set null" }),
     withdrawReason: text("withdraw_reason").notNull().default(""),
+    /** The hangar booking the card is done in: its asset is named on each run. */
+    bookingId: uuid("booking_id").references((): AnyPgColumn => bookings.id, { onDelete: "restrict" }),
     ...timestamps,
   },
   (t) => [index("assignments_version_idx").on(t.versionId)],

@@ -154,15 +154,13 @@ export async function seedFleet(db: Db): Promise<number> {
         installedBy: change.instructorId,
         installedRunId: change.runId,
       });
-      await tx
-        .insert(runAssets)
-        .values(
-          ["HL-TR3", "E-401", "E-402"].map((id) => ({
-            runId: change.runId,
-            assetId: asset.get(id)!,
-            namedBy: people.get("student4@hangarleaf.test")!,
-          })),
-        );
+      await tx.insert(runAssets).values(
+        ["HL-TR3", "E-401", "E-402"].map((id) => ({
+          runId: change.runId,
+          assetId: asset.get(id)!,
+          namedBy: people.get("student4@hangarleaf.test")!,
+        })),
+      );
       await tx.insert(runAssetChanges).values([
         {
           runId: change.runId,

@@ -321,3 +321,49 @@ describe("an engine change from a signed-off run", () => {
     expect((await put([])).status).toBe(409);
   });
 });
+
+describe("an assignment done in a booking", () => {
+  it("names the booked asset on each run, and refuses a booking that is cancelled", async () => {
+    const t = tag();
+    const aircraft = await makeAsset({ identifier: `B-${t}`, kind: "aircraft", model: "TX-1" });
+    const place = await makePlace({ name: `Booking bay ${t}`, kind: "bay", takes: ["aircraft"] });
+    const start = new Date(Date.UTC(2027, 3, 5, 14)).toISOString();
+    const end = new Date(Date.UTC(2027, 3, 5, 18)).toISOString();
+    const { booking } = await body<{ booking: BookingDto }>(
+      await call("POST", "/api/bookings", {
+        cookie: teacher.cookie,
+        json: { assetId: aircraft, placeId: place, classId, startsAt: start, endsAt: end },
+      }),
+      201,
+    );
+    const [subject] = await getDb().select().from(curriculumSubjects).limit(1);
+    const content = {
+      title: uniqueTitle("Booked card"),
+      ataChapter: "05",
+      subjectId: subject!.id,
+      steps: [{ id: randomUUID(), text: "Look." }],
+    };
+    const { card } = await body<{ card: CardDto }>(await call("POST", "/api/cards", { cookie: teacher.cookie, json: { content } }), 201);
+    await body(await call("POST", `/api/cards/${card.id}/publish`, { cookie: teacher.cookie }), 200);
+    await body(
+      await call("POST", "/api/assignments", {
+        cookie: teacher.cookie,
+        json: { cardId: card.id, studentIds: [learner.id], bookingId: booking.id },
+      }),
+      201,
+    );
+    const { work } = await body<{ work: WorkItemDto[] }>(await call("GET", "/api/my-work", { cookie: learner.cookie }), 200);
+    const runId = work.find((w) => w.cardId === card.id)!.runId;
+    const named = await body<{ assets: { id: string }[] }>(await call("GET", `/api/runs/${runId}/assets`, { cookie: learner.cookie }), 200);
+    expect(named.assets.map((a) => a.id)).toEqual([aircraft]);
+    await body(
+      await call("PATCH", `/api/bookings/${booking.id}`, { cookie: teacher.cookie, json: { cancel: true, reason: "Moved to next week" } }),
+      200,
+    );
+    const refused = await call("POST", "/api/assignments", {
+      cookie: teacher.cookie,
+      json: { cardId: card.id, studentIds: [learner.id], bookingId: booking.id, confirmDuplicates: true },
+    });
+    expect(refused.status).toBe(422);
+  });
+});

@@ -49,7 +49,7 @@ export const runsApi = {
     answer: json<{ assignment: { id: string; runs: number } }>(),
     status: 201,
     who: "instructor, admin",
-    doc: `\`{ "cardId", "versionNumber"?, "classId"?, "studentIds"?, "dueOn"?, "note"?, "confirmDuplicates"? }\` → 201 \`{ "assignment": { "id", "runs" } }\`: one run per active student of the class (an instructor's own classes only) and per student named; the newest published version unless \`versionNumber\` names another. 409 naming the students who already have the card open, unless \`confirmDuplicates\` is true. 422 naming the field: no class or students, someone who is not an active student, no published version, archived card, a due date in the past`,
+    doc: `\`{ "cardId", "versionNumber"?, "classId"?, "studentIds"?, "dueOn"?, "note"?, "bookingId"?, "confirmDuplicates"? }\` → 201 \`{ "assignment": { "id", "runs" } }\`: one run per active student of the class (an instructor's own classes only) and per student named; with \`bookingId\` (a hangar booking not cancelled, 422 otherwise) the booked asset is named on each run; the newest published version unless \`versionNumber\` names another. 409 naming the students who already have the card open, unless \`confirmDuplicates\` is true. 422 naming the field: no class or students, someone who is not an active student, no published version, archived card, a due date in the past`,
   }),
   myWork: endpoint({
     method: "GET",

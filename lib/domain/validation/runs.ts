@@ -74,6 +74,8 @@ export const createAssignmentSchema = z
       .refine(noNul, "A NUL character cannot be stored.")
       .optional()
       .default(""),
+    /** The hangar booking the card is done in (its asset is named on each run). */
+    bookingId: z.uuid("Choose a booking.").nullable().optional().default(null),
     /** Assign even to students who already have this card open (otherwise 409 names them). */
     confirmDuplicates: z.boolean().optional().default(false),
   })

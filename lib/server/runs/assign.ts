@@ -2,7 +2,7 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, isNull, ne, sql } from "drizzle-orm";
 import { getDb, type Db, type Tx } from "@/db";
-import { assignments, classes, classMembers, runs, taskCards, taskCardVersions, users } from "@/db/schema";
+import { assignments, bookings, classes, classMembers, runAssets, runs, taskCards, taskCardVersions, users } from "@/db/schema";
 import { recordAudit } from "@/lib/server/audit";
 import { can, type Actor } from "@/lib/domain/access/permissions";
 import type { AssignmentDetailDto, AssignmentDto } from "@/lib/contracts/runs";
@@ -20,6 +20,8 @@ export interface AssignInput {
   studentIds: string[];
   dueOn: string | null;
   note: string;
+  /** The hangar booking it is done in (its asset is named on each run). */
+  bookingId?: string | null;
   confirmDuplicates?: boolean;
 }
 
@@ -40,6 +42,16 @@ export async function createAssignment({ actor, input }: { actor: Actor; input: 
     if (!version)
       throw new AppError("invalid", `Version ${input.versionNumber} of that card is not published.`, {
         fields: { versionNumber: "Not a published version." },
+      });
+    const [booking] = input.bookingId
+      ? await tx
+          .select({ id: bookings.id, assetId: bookings.assetId })
+          .from(bookings)
+          .where(and(eq(bookings.id, input.bookingId), isNull(bookings.cancelledAt)))
+      : [];
+    if (input.bookingId && !booking)
+      throw new AppError("invalid", "That booking was not found or is cancelled.", {
+        fields: { bookingId: "Choose a booking in the hangar plan." },
       });
 
     const studentIds = new Set<string>();
@@ -119,6 +131,7 @@ export async function createAssignment({ actor, input }: { actor: Actor; input: 
         dueOn: input.dueOn,
         note: input.note,
         assignedBy: actor.id,
+        bookingId: booking?.id ?? null,
       })
       .returning({ id: assignments.id });
     const made = await tx
@@ -126,6 +139,12 @@ export async function createAssignment({ actor, input }: { actor: Actor; input: 
       .values([...studentIds].map((studentId) => ({ assignmentId: assignment!.id, studentId, versionId: version.id })))
       .onConflictDoNothing()
       .returning({ id: runs.id });
+    // Done in a booking: the booked asset is what each run works on, named once for everyone.
+    if (booking && made.length)
+      await tx
+        .insert(runAssets)
+        .values(made.map((r) => ({ runId: r.id, assetId: booking.assetId, namedBy: actor.id })))
+        .onConflictDoNothing();
     await recordAudit(tx, {
       actorId: actor.id,
       action: "assignment.created",
