@@ -12,10 +12,12 @@ interface Props {
   versions: number[];
   classes: { id: string; name: string }[];
   students: { id: string; name: string; className: string }[];
+  /** Hangar bookings of the coming weeks the card can be done in ("Mon 08:00 HL-TR1 in Bay 1, Day Cohort"). */
+  bookings?: { id: string; label: string }[];
 }
 
 /** To a whole class, or to chosen students; a due date and a place (aircraft, station) are optional. */
-export function AssignForm({ cardId, today, versions, classes, students }: Props) {
+export function AssignForm({ cardId, today, versions, classes, students, bookings = [] }: Props) {
   const router = useRouter();
   const [classId, setClassId] = useState(classes[0]?.id ?? "");
   const [chosen, setChosen] = useState<Set<string>>(new Set());
@@ -23,6 +25,7 @@ export function AssignForm({ cardId, today, versions, classes, students }: Props
   const [versionNumber, setVersion] = useState(versions.at(-1)!);
   const [dueOn, setDueOn] = useState("");
   const [note, setNote] = useState("");
+  const [bookingId, setBookingId] = useState("");
   const [busy, setBusy] = useState(false);
   const [result, setResult] = useState<{ ok: boolean; text: string; fields?: Record<string, string> } | null>(null);
   // Set when the server named students who already have the card open: the next submit assigns anyway.
@@ -50,6 +53,7 @@ export function AssignForm({ cardId, today, versions, classes, students }: Props
           studentIds: to === "students" ? [...chosen] : [],
           dueOn,
           note,
+          bookingId: bookingId || null,
           confirmDuplicates,
         },
       });
@@ -167,6 +171,22 @@ export function AssignForm({ cardId, today, versions, classes, students }: Props
           </label>
           <input id="assign-note" className="input" value={note} maxLength={300} onChange={(e) => setNote(e.target.value)} />
         </div>
+        {bookings.length ? (
+          <div className="field">
+            <label htmlFor="assign-booking" className="label">
+              Done in a hangar booking (optional)
+            </label>
+            <select id="assign-booking" className="input" value={bookingId} onChange={(e) => setBookingId(e.target.value)}>
+              <option value="">No booking</option>
+              {bookings.map((b) => (
+                <option key={b.id} value={b.id}>
+                  {b.label}
+                </option>
+              ))}
+            </select>
+            <span className="hint">The booked aircraft is named on each student&apos;s run.</span>
+          </div>
+        ) : null}
       </div>
       <p className="font-semibold" aria-live="polite">
         {giving}

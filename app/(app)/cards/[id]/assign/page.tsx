@@ -9,7 +9,8 @@ import { isUuid } from "@/lib/server/http";
 import { listAssignments } from "@/lib/server/runs/assign";
 import { AssignForm } from "../../_components/assign-form";
 import { AssignmentActions } from "../../_components/assignment-actions";
-import { dayIn } from "@/lib/domain/time";
+import { dateTimeIn, dayIn } from "@/lib/domain/time";
+import { listBookings } from "@/lib/server/fleet/bookings";
 import { schoolTimeZone } from "@/lib/server/settings";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
@@ -32,7 +33,9 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
     ).values(),
   ];
   const assignments = await listAssignments({ actor: user, cardId: id });
-  const today = dayIn(await schoolTimeZone());
+  const zone = await schoolTimeZone();
+  const today = dayIn(zone);
+  const bookings = await listBookings({ from: new Date().toISOString(), to: new Date(Date.now() + 21 * 86_400_000).toISOString() });
   const published = card.versions.filter((v) => v.status === "published").map((v) => v.number);
   return (
     <div className="flex flex-col gap-5">
@@ -53,6 +56,10 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
           versions={published}
           classes={classes.map((c) => ({ id: c.id, name: c.name }))}
           students={students}
+          bookings={bookings.map((b) => ({
+            id: b.id,
+            label: `${dateTimeIn(zone, b.startsAt)} · ${b.assetIdentifier} in ${b.placeName}${b.className ? ` · ${b.className}` : ""}`,
+          }))}
         />
       )}
       <section aria-label="Assignments of this card" className="panel overflow-x-auto">
