@@ -284,3 +284,9 @@ async function mailBookingChange(db: Db, actor: Actor, before: BookingDto, after
       }),
     );
 }
+
+/** Bookings from now over the coming days: what an assignment can be done in. */
+export function upcomingBookings(days = 21) {
+  const now = Date.now();
+  return listBookings({ from: new Date(now).toISOString(), to: new Date(now + days * 86_400_000).toISOString() });
+}

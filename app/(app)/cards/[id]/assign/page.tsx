@@ -10,7 +10,7 @@ import { listAssignments } from "@/lib/server/runs/assign";
 import { AssignForm } from "../../_components/assign-form";
 import { AssignmentActions } from "../../_components/assignment-actions";
 import { dateTimeIn, dayIn } from "@/lib/domain/time";
-import { listBookings } from "@/lib/server/fleet/bookings";
+import { upcomingBookings } from "@/lib/server/fleet/bookings";
 import { schoolTimeZone } from "@/lib/server/settings";
 import { notFoundOnMissing } from "@/app/_adapters/not-found";
 
@@ -35,7 +35,7 @@ export default async function AssignPage({ params }: { params: Promise<{ id: str
   const assignments = await listAssignments({ actor: user, cardId: id });
   const zone = await schoolTimeZone();
   const today = dayIn(zone);
-  const bookings = await listBookings({ from: new Date().toISOString(), to: new Date(Date.now() + 21 * 86_400_000).toISOString() });
+  const bookings = await upcomingBookings();
   const published = card.versions.filter((v) => v.status === "published").map((v) => v.number);
   return (
     <div className="flex flex-col gap-5">
