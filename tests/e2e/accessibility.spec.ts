@@ -110,7 +110,14 @@ test("the cart, review and records pages have no serious accessibility violation
   expect(await seriousViolations(staff), "review a run").toEqual([]);
   await staff.goto("/records");
   await staff.getByRole("link", { name: /AMT Day Cohort 2027/ }).click();
-  await expect(staff.getByRole("img", { name: /Bar chart/ })).toBeVisible();
+  await expect(staff.getByRole("img", { name: /^Task cards signed off of those assigned/ })).toBeVisible();
   expect(await seriousViolations(staff), "class record").toEqual([]);
+  await staff.goto("/fleet");
+  await staff.getByRole("link", { name: "HL-TR3" }).click();
+  await expect(staff.getByRole("heading", { level: 1, name: "HL-TR3" })).toBeVisible();
+  expect(await seriousViolations(staff), "an asset's page").toEqual([]);
+  await staff.goto("/hangar");
+  await expect(staff.getByRole("heading", { level: 1, name: /^Hangar plan/ })).toBeVisible();
+  expect(await seriousViolations(staff), "the hangar plan").toEqual([]);
   await staff.close();
 });
