@@ -52,8 +52,14 @@ export function CartAircraft({ data }: { data: CartData }) {
           >
             Search what applies to {chosen.identifier}
           </a>
+          <a
+            className="btn btn-secondary"
+            href={`/cards?model=${encodeURIComponent(chosen.model)}&for=${encodeURIComponent(chosen.identifier)}`}
+          >
+            Its task cards
+          </a>
           <a className="btn btn-secondary" href={`/fleet/${chosen.id}`}>
-            Its manuals, cards and findings
+            Its manuals and findings
           </a>
         </div>
       ) : null}

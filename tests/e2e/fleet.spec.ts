@@ -63,6 +63,16 @@ test("a student picks the aircraft at the cart and files a finding offline, stor
   const mine = findings.filter((f) => f.text === finding);
   expect(mine).toHaveLength(1);
   expect(mine[0]).toMatchObject({ stepNumber: 1, reportedByName: "Sam Whitlock" });
+
+  // A part the run installs is named once here and written on the aircraft at sign-off.
+  await panel.getByText(/This run removes or installs a part/).click();
+  await panel.getByLabel("The run").selectOption("install");
+  await panel.getByLabel("Part").selectOption({ label: "E-401 · Engine TF-400" });
+  await panel.getByRole("button", { name: "Add to the run" }).click();
+  await expect(panel.getByRole("status").last()).toContainText("written on the aircraft's record when your instructor signs the run off");
+  await expect(panel).toContainText("Installs E-401 on HL-TR2 (recorded at sign-off)");
+  const named = (await (await student.get(`/api/runs/${runner.runId()}/assets`)).json()) as { changes: { action: string }[] };
+  expect(named.changes.map((c) => c.action)).toEqual(["install"]);
   await context.close();
 });
 

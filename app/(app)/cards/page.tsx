@@ -8,8 +8,10 @@ import { CardsTable } from "./_components/cards-table";
 
 export const metadata: Metadata = { title: "Task cards" };
 
-export default async function CardsPage() {
+export default async function CardsPage({ searchParams }: { searchParams: Promise<{ model?: string; for?: string }> }) {
   const user = await requirePageUser("cards:view", "/cards");
+  // Opened from a cart at an aircraft (?model=HT-20&for=HL-TR1): the list starts scoped to its model.
+  const scope = await searchParams;
   const author = can(user, "cards:author");
   const [cards, subjects] = await Promise.all([listCards({ actor: user }), listSubjects()]);
   return (
@@ -32,7 +34,13 @@ export default async function CardsPage() {
           ? "Cards are built from manual pages. A published version never changes; editing makes a new draft version."
           : "Published task cards. Each cites the manual pages it follows."}
       </p>
-      <CardsTable initialCards={cards} subjects={subjects} author={author} />
+      <CardsTable
+        initialCards={cards}
+        subjects={subjects}
+        author={author}
+        initialModel={typeof scope.model === "string" ? scope.model.slice(0, 60) : ""}
+        scopedFor={typeof scope.for === "string" ? scope.for.slice(0, 30) : null}
+      />
     </div>
   );
 }

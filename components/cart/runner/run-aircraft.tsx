@@ -4,6 +4,7 @@ import { useEffect, useState } from "react";
 import type { CartAsset, CartData } from "@/lib/client/cart/store";
 import type { RunEvent } from "@/lib/domain/runs/fold";
 import { assetKindWords, type AssetKind } from "@/lib/domain/fleet/fleet";
+import { RunChange } from "./run-change";
 import type { Act } from "./use-run";
 
 /**
@@ -14,6 +15,7 @@ import type { Act } from "./use-run";
  */
 export function RunAircraft({
   data,
+  runId,
   events,
   act,
   stepId,
@@ -22,6 +24,7 @@ export function RunAircraft({
   online,
 }: {
   data: CartData;
+  runId: string;
   events: readonly RunEvent[];
   act: Act;
   stepId: string | null;
@@ -112,6 +115,9 @@ export function RunAircraft({
         <p className="notice-ok" role="status">
           {message}
         </p>
+      ) : null}
+      {named && named.kind === "aircraft" ? (
+        <RunChange runId={runId} aircraft={named} fleet={fleet} online={online} locked={locked} />
       ) : null}
       {named && !writing ? (
         <button type="button" className="btn btn-secondary self-start" onClick={() => setWriting(true)}>

@@ -41,6 +41,7 @@ export function Runner({ data, runId, online }: { data: CartData; runId: string;
 
       <RunAircraft
         data={data}
+        runId={runId}
         events={[...detail.events, ...pending]}
         act={act}
         stepId={mode === "one" ? (shown[0]?.id ?? null) : null}

@@ -23,16 +23,21 @@ export function CardsTable({
   initialCards,
   subjects,
   author,
+  initialModel = "",
+  scopedFor = null,
 }: {
   initialCards: CardSummaryDto[];
   subjects: SubjectDto[];
   author: boolean;
+  initialModel?: string;
+  /** The aircraft the list was opened for; it says so while the model filter holds. */
+  scopedFor?: string | null;
 }) {
   const [status, setStatus] = useState<CardListStatus | "">("");
   const { data: cards = [], isFetching, error } = useCardList(status, initialCards);
   const [sorting, setSorting] = useState<SortingState>([{ id: "title", desc: false }]);
   const [filters, setFilters] = useState<ColumnFiltersState>([]);
-  const [model, setModel] = useState("");
+  const [model, setModel] = useState(initialModel);
 
   const columns = useMemo(
     () => [
@@ -94,6 +99,16 @@ export function CardsTable({
 
   return (
     <div className="flex flex-col gap-4">
+      {scopedFor && model ? (
+        <p className="notice-todo flex flex-wrap items-center gap-3" role="status">
+          <span className="mr-auto">
+            Showing the cards that apply to {scopedFor} (model {model}).
+          </span>
+          <button type="button" className="btn btn-secondary" onClick={() => setModel("")}>
+            Show every card
+          </button>
+        </p>
+      ) : null}
       <div className="panel grid gap-3 sm:grid-cols-2 lg:grid-cols-5" role="search" aria-label="Filter task cards">
         <label className="field lg:col-span-2">
           <span className="label">Title</span>
